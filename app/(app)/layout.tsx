@@ -1,0 +1,22 @@
+import { redirect } from "next/navigation";
+import { AppHeader } from "@/components/layout/app-header";
+import { DatabaseDown } from "@/components/system/database-down";
+import { getActor } from "@/lib/auth/session";
+import { pingDatabase } from "@/lib/db";
+
+export const dynamic = "force-dynamic";
+
+// Pages below still check their own role; this layout only frames them.
+export default async function AppLayout({ children }: { children: React.ReactNode }) {
+  if (!(await pingDatabase())) return <DatabaseDown />;
+  const actor = await getActor();
+  if (!actor) redirect("/signin");
+  return (
+    <>
+      <AppHeader groupName={actor.group.name} role={actor.role} userName={actor.user.name} />
+      <div id="main" className="mx-auto max-w-5xl px-4 py-6">
+        {children}
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,26 @@
+import type { Metadata, Viewport } from "next";
+import "@fontsource/source-sans-3/400.css";
+import "@fontsource/source-sans-3/600.css";
+import "@fontsource/source-sans-3/700.css";
+import "./globals.css";
+import { Providers } from "@/components/system/providers";
+
+export const metadata: Metadata = {
+  title: { default: "Cantrove", template: "%s · Cantrove" },
+  description: "Run can drives for community-built solar air heaters: drop points, hauls, sorting, and a fair share of cans for every heater.",
+};
+
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#fbf7f0" };
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en">
+      <body className="min-h-dvh">
+        <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-paper focus:p-2">
+          Skip to content
+        </a>
+        <Providers>{children}</Providers>
+      </body>
+    </html>
+  );
+}

@@ -1,0 +1,39 @@
+import Link from "next/link";
+import { Brand } from "./brand";
+import { SignOutButton } from "@/components/auth/sign-out-button";
+import { ROLE_LABEL, type Role } from "@/lib/auth/roles";
+
+const NAV: Record<Role, { href: string; label: string }[]> = {
+  organiser: [
+    { href: "/dashboard", label: "Dashboard" },
+    { href: "/mail", label: "Sent mail" },
+  ],
+  volunteer: [{ href: "/log", label: "Log" }],
+  builder: [
+    { href: "/units", label: "My units" },
+    { href: "/plan", label: "Planner" },
+  ],
+};
+
+export function AppHeader({ groupName, role, userName }: { groupName: string; role: Role; userName: string }) {
+  return (
+    <header className="no-print border-b border-paper-edge bg-paper">
+      <div className="mx-auto flex max-w-5xl flex-wrap items-center justify-between gap-3 px-4 py-3">
+        <Brand />
+        <div className="text-sm text-ink-soft">
+          <span className="font-semibold text-ink">{groupName}</span> · {ROLE_LABEL[role]} · {userName}
+        </div>
+      </div>
+      <nav aria-label="Group" className="mx-auto flex max-w-5xl flex-wrap items-center gap-4 px-4 pb-3 font-semibold">
+        {NAV[role].map((item) => (
+          <Link key={item.href} href={item.href}>
+            {item.label}
+          </Link>
+        ))}
+        <span className="ml-auto">
+          <SignOutButton />
+        </span>
+      </nav>
+    </header>
+  );
+}

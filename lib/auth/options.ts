@@ -1,0 +1,54 @@
+import "server-only";
+import type { NextAuthOptions } from "next-auth";
+import CredentialsProvider from "next-auth/providers/credentials";
+import bcrypt from "bcryptjs";
+import { z } from "zod";
+import { findUserForSignIn, loadActor } from "./queries";
+
+const credentialsSchema = z.object({
+  email: z.string().trim().toLowerCase().email(),
+  password: z.string().min(1).max(200),
+});
+
+// A fixed hash to compare against when the e-mail is unknown, so a miss takes
+// as long as a wrong password and the answer reveals nothing.
+const DUMMY_HASH = "$2b$10$eDGPikBjhIdaG5/0Hm2lf.chudChbRF3XkJe.NfaBSqTxb5A/WfHK";
+
+export const authOptions: NextAuthOptions = {
+  session: { strategy: "jwt", maxAge: 30 * 24 * 60 * 60 },
+  pages: { signIn: "/signin" },
+  providers: [
+    CredentialsProvider({
+      name: "E-mail and password",
+      credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
+      async authorize(raw) {
+        const parsed = credentialsSchema.safeParse(raw);
+        if (!parsed.success) return null;
+        const user = await findUserForSignIn(parsed.data.email);
+        const ok = await bcrypt.compare(parsed.data.password, user?.password_hash ?? DUMMY_HASH);
+        if (!user || !user.password_hash || !ok) return null;
+        const actor = await loadActor(user.id);
+        return { id: user.id, email: user.email, name: user.name, groupId: actor?.group.id ?? null };
+      },
+    }),
+  ],
+  callbacks: {
+    async jwt({ token, user, trigger, session }) {
+      if (user) {
+        token.userId = user.id;
+        token.groupId = (user as { groupId?: string | null }).groupId ?? null;
+      }
+      if (trigger === "update" && session && typeof session.groupId === "string") {
+        // Switching groups: only to a group the person really belongs to.
+        const actor = await loadActor(String(token.userId), session.groupId);
+        if (actor) token.groupId = actor.group.id;
+      }
+      return token;
+    },
+    async session({ session, token }) {
+      session.userId = String(token.userId ?? "");
+      session.groupId = (token.groupId as string | null) ?? null;
+      return session;
+    },
+  },
+};

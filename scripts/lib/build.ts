@@ -1,0 +1,48 @@
+import { createHash } from "node:crypto";
+import { existsSync, readFileSync, readdirSync, statSync, writeFileSync } from "node:fs";
+import path from "node:path";
+import { spawnSync } from "node:child_process";
+
+// The build is redone only when something that goes into it changed: a hash
+// of the sources and configs is kept next to the build.
+const INPUTS = ["app", "components", "lib", "hooks", "public", "types", "instrumentation.ts", "proxy.ts", "next.config.mjs",
+  "tailwind.config.ts", "postcss.config.mjs", "tsconfig.json", "package-lock.json", "knexfile.ts"];
+const STAMP = ".next/cantrove-build-hash";
+
+function walk(root: string, file: string, hash: ReturnType<typeof createHash>): void {
+  const full = path.join(root, file);
+  if (!existsSync(full)) return;
+  const stat = statSync(full);
+  if (stat.isDirectory()) {
+    for (const entry of readdirSync(full).sort()) walk(root, path.join(file, entry), hash);
+  } else {
+    hash.update(file);
+    hash.update(readFileSync(full));
+  }
+}
+
+export function sourceHash(root: string): string {
+  const hash = createHash("sha256");
+  for (const input of INPUTS) walk(root, input, hash);
+  for (const [k, v] of Object.entries(process.env).sort()) if (k.startsWith("NEXT_PUBLIC_")) hash.update(`${k}=${v}`);
+  return hash.digest("hex");
+}
+
+export function buildIfStale(root: string, env: NodeJS.ProcessEnv, log: (s: string) => void = console.log): boolean {
+  const wanted = sourceHash(root);
+  const stampFile = path.join(root, STAMP);
+  if (existsSync(path.join(root, ".next/BUILD_ID")) && existsSync(stampFile) && readFileSync(stampFile, "utf8") === wanted) {
+    log("Build is up to date.");
+    return false;
+  }
+  log("Building the app (next build)…");
+  const result = spawnSync(path.join(root, "node_modules/.bin/next"), ["build"], {
+    cwd: root,
+    env: { ...env, NEXT_TELEMETRY_DISABLED: "1" },
+    stdio: "inherit",
+  });
+  if (result.status !== 0) throw new Error(`next build failed (exit ${result.status})`);
+  // next build may rewrite tsconfig.json once, so stamp what is there now.
+  writeFileSync(stampFile, sourceHash(root));
+  return true;
+}

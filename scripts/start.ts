@@ -1,0 +1,88 @@
+import { spawn, type ChildProcess } from "node:child_process";
+import path from "node:path";
+import { startStack, type Stack } from "./lib/stack";
+import { buildIfStale } from "./lib/build";
+import { waitForHealthy } from "./lib/wait";
+import { DEMO_PASSWORD, DEMO_PEOPLE } from "../db/seeds/data/scenario";
+
+// `npm start`: the database, the local fakes, migrations, the demo seed (once),
+// a build when the sources changed, and the production server. SIGINT or
+// SIGTERM stops all of it, the database included.
+const root = path.resolve(import.meta.dirname, "..");
+const port = Number(process.env.PORT ?? 3000);
+const num = (name: string, fallback: number) => Number(process.env[name] ?? fallback);
+
+let stack: Stack | null = null;
+let server: ChildProcess | null = null;
+let stopping = false;
+
+async function shutdown(code: number): Promise<never> {
+  if (stopping) return new Promise(() => undefined);
+  stopping = true;
+  console.log("\nStopping Cantrove…");
+  if (server && server.exitCode === null) {
+    const exited = new Promise((resolve) => server!.once("exit", resolve));
+    server.kill("SIGTERM");
+    await Promise.race([exited, new Promise((r) => setTimeout(r, 8_000))]);
+    if (server.exitCode === null) server.kill("SIGKILL");
+  }
+  try {
+    await stack?.stop();
+  } catch (error) {
+    console.error("Could not stop PostgreSQL cleanly:", (error as Error).message);
+  }
+  console.log("Stopped.");
+  process.exit(code);
+}
+
+process.on("SIGINT", () => void shutdown(0));
+process.on("SIGTERM", () => void shutdown(0));
+
+async function main() {
+  const started = Date.now();
+  stack = await startStack({
+    root,
+    stateDir: path.join(root, ".cantrove"),
+    pgDataDir: path.join(root, ".pgdata"),
+    pgPort: num("PGPORT", 54329),
+    databaseName: process.env.PGDATABASE ?? "cantrove",
+    databaseUrl: process.env.DATABASE_URL,
+    smtpPort: num("SMTP_PORT", 2525),
+    mailApiPort: num("MAIL_API_PORT", 8025),
+    uploadPort: num("UPLOAD_PORT", 8026),
+    appPort: port,
+    seed: "demo",
+  });
+  if (stopping) return;
+  const env: NodeJS.ProcessEnv = { ...process.env, ...stack.env, NODE_ENV: "production" };
+  buildIfStale(root, env);
+  if (stopping) return;
+  const child = spawn(path.join(root, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
+    cwd: root,
+    env,
+    stdio: ["ignore", "inherit", "inherit"],
+  });
+  server = child;
+  child.once("exit", (code) => {
+    if (!stopping) {
+      console.error(`The app server stopped unexpectedly (exit ${code}).`);
+      void shutdown(1);
+    }
+  });
+  await waitForHealthy(`http://127.0.0.1:${port}/api/health`, 60_000);
+  const seconds = ((Date.now() - started) / 1000).toFixed(1);
+  console.log(`
+Cantrove is running at http://127.0.0.1:${port}  (ready in ${seconds} s)
+
+Demo accounts (password: ${DEMO_PASSWORD})
+${DEMO_PEOPLE.map((p) => `  ${p.email.padEnd(28)} ${p.role.padEnd(10)} ${p.group === "demo" ? "Larkhollow Warm Rooms Circle" : "Brindle Quay Fixers"}`).join("\n")}
+
+Sent mail is captured locally: sign in as the organiser and open "Sent mail".
+Press Ctrl+C to stop everything (the database too).
+`);
+}
+
+main().catch(async (error) => {
+  console.error(`Cantrove could not start: ${(error as Error).message}`);
+  await shutdown(1);
+});

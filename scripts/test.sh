@@ -1,0 +1,13 @@
+#!/usr/bin/env bash
+# `npm test`: installs what is missing (npm packages, Debian's chromium and
+# postgresql), then runs every test against a throwaway stack.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+bash scripts/ensure-deps.sh
+if [ ! -x /usr/bin/chromium ]; then
+  echo "Installing Debian's chromium for the browser tests…"
+  export DEBIAN_FRONTEND=noninteractive
+  apt-get update -qq && apt-get install -y -qq chromium >/dev/null
+fi
+export NEXT_TELEMETRY_DISABLED=1
+exec node --import tsx scripts/test.ts "$@"

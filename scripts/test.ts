@@ -1,0 +1,99 @@
+import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { mkdirSync, mkdtempSync, readFileSync, rmSync, chmodSync } from "node:fs";
+import path from "node:path";
+import { startStack, type Stack } from "./lib/stack";
+import { buildIfStale } from "./lib/build";
+import { waitForHealthy } from "./lib/wait";
+
+// `npm test`: a throwaway PostgreSQL and fakes on their own ports, the built
+// app, then vitest (unit, hooks, integration, e2e). Ends with "N passed, N failed".
+const root = path.resolve(import.meta.dirname, "..");
+// CANTROVE_TEST_PORT_BASE moves every port at once, so two checkouts can test side by side.
+const base = Number(process.env.CANTROVE_TEST_PORT_BASE ?? 0);
+const ports = { pg: 54339 + base, smtp: 2535 + base, mailApi: 8035 + base, upload: 8036 + base, app: 3100 + base };
+const runDir = (() => {
+  mkdirSync(path.join(root, ".pgtest"), { recursive: true });
+  const dir = mkdtempSync(path.join(root, ".pgtest", "run-"));
+  chmodSync(dir, 0o755);
+  return dir;
+})();
+
+let stack: Stack | null = null;
+let server: ChildProcess | null = null;
+
+async function cleanup() {
+  if (server && server.exitCode === null) {
+    const exited = new Promise((r) => server!.once("exit", r));
+    server.kill("SIGTERM");
+    await Promise.race([exited, new Promise((r) => setTimeout(r, 5_000))]);
+  }
+  await stack?.stop().catch((e) => console.error("stop failed:", e));
+  rmSync(runDir, { recursive: true, force: true });
+}
+
+function summary(): { passed: number; failed: number } {
+  try {
+    const report = JSON.parse(readFileSync(path.join(root, ".test-results/vitest.json"), "utf8"));
+    return { passed: report.numPassedTests ?? 0, failed: (report.numFailedTests ?? 0) + (report.numRuntimeErrors ?? 0) };
+  } catch {
+    return { passed: 0, failed: 1 };
+  }
+}
+
+async function main(): Promise<number> {
+  const started = Date.now();
+  stack = await startStack({
+    root,
+    stateDir: path.join(runDir, "state"),
+    pgDataDir: path.join(runDir, "pgdata"),
+    pgPort: ports.pg,
+    databaseName: "cantrove_test",
+    smtpPort: ports.smtp,
+    mailApiPort: ports.mailApi,
+    uploadPort: ports.upload,
+    appPort: ports.app,
+    seed: "demo",
+    log: (line) => console.log(`[stack] ${line}`),
+  });
+  const env: NodeJS.ProcessEnv = { ...process.env, ...stack.env, NODE_ENV: "production", MAIL_RETRY_MS: "2000" };
+  buildIfStale(root, env, (line) => console.log(`[build] ${line}`));
+  server = spawn(path.join(root, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(ports.app)], {
+    cwd: root,
+    env,
+    stdio: ["ignore", "ignore", "inherit"],
+  });
+  await waitForHealthy(`http://127.0.0.1:${ports.app}/api/health`, 60_000);
+  console.log(`[stack] ready in ${((Date.now() - started) / 1000).toFixed(1)} s`);
+
+  mkdirSync(path.join(root, ".test-results"), { recursive: true });
+  const result = spawnSync(
+    path.join(root, "node_modules/.bin/vitest"),
+    ["run", "--reporter=default", "--reporter=json", "--outputFile.json=.test-results/vitest.json", ...process.argv.slice(2)],
+    {
+      cwd: root,
+      stdio: "inherit",
+      env: {
+        ...env,
+        NODE_ENV: "test" as const,
+        CANTROVE_APP_URL: `http://127.0.0.1:${ports.app}`,
+        CANTROVE_RUN_DIR: runDir,
+        CANTROVE_TEST_PORTS: JSON.stringify(ports),
+      },
+    },
+  );
+  const { passed, failed } = summary();
+  console.log(`\nTotal time ${((Date.now() - started) / 1000).toFixed(0)} s`);
+  console.log(`${passed} passed, ${failed} failed`);
+  return result.status === 0 && failed === 0 ? 0 : 1;
+}
+
+let code = 1;
+try {
+  code = await main();
+} catch (error) {
+  console.error(`The test run could not start: ${(error as Error).stack ?? error}`);
+  console.log("0 passed, 1 failed");
+} finally {
+  await cleanup();
+}
+process.exit(code);
