@@ -1,4 +1,4 @@
-import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { spawn, type ChildProcess } from "node:child_process";
 import { mkdirSync, mkdtempSync, readFileSync, rmSync, chmodSync } from "node:fs";
 import path from "node:path";
 import { startStack, type Stack } from "./lib/stack";
@@ -66,7 +66,9 @@ async function main(): Promise<number> {
   console.log(`[stack] ready in ${((Date.now() - started) / 1000).toFixed(1)} s`);
 
   mkdirSync(path.join(root, ".test-results"), { recursive: true });
-  const result = spawnSync(
+  // Asynchronous on purpose: the mail and upload fakes live in this process
+  // and must keep answering while vitest runs.
+  const vitest = spawn(
     path.join(root, "node_modules/.bin/vitest"),
     ["run", "--reporter=default", "--reporter=json", "--outputFile.json=.test-results/vitest.json", ...process.argv.slice(2)],
     {
@@ -81,10 +83,11 @@ async function main(): Promise<number> {
       },
     },
   );
+  const status = await new Promise<number | null>((resolve) => vitest.once("exit", (code) => resolve(code)));
   const { passed, failed } = summary();
   console.log(`\nTotal time ${((Date.now() - started) / 1000).toFixed(0)} s`);
   console.log(`${passed} passed, ${failed} failed`);
-  return result.status === 0 && failed === 0 ? 0 : 1;
+  return status === 0 && failed === 0 ? 0 : 1;
 }
 
 let code = 1;

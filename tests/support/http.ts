@@ -26,6 +26,7 @@ export class ApiClient {
     const res = await fetch(this.baseUrl + path, {
       method,
       redirect: "manual",
+      signal: AbortSignal.timeout(15_000),
       headers: {
         cookie: this.cookieHeader(),
         ...(body !== undefined && typeof body !== "string" ? { "content-type": "application/json" } : {}),
