@@ -77,3 +77,8 @@ export async function updateMembership(groupId: string, userId: string, change: 
     else await trx("memberships").where({ group_id: groupId, user_id: userId }).update({ role: change.role });
   });
 }
+
+export async function findUserEmail(userId: string): Promise<string | null> {
+  const row = await db("users").select("email").where({ id: userId }).first();
+  return row?.email ?? null;
+}
