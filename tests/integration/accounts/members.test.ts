@@ -47,7 +47,7 @@ describe("members", () => {
     // …but then the remaining one cannot.
     expect((await helper.person.json("PATCH", `/api/members/${helper.userId}`, { role: "volunteer" })).status).toBe(409);
 
-    const removed = await addMember(client, "builder");
+    const removed = await addMember(helper.person, "builder");
     expect((await helper.person.json("DELETE", `/api/members/${removed.userId}`)).status).toBe(200);
     expect(await testDb()("memberships").where({ group_id: groupId, user_id: removed.userId }).first()).toBeUndefined();
     expect((await removed.person.json("GET", "/api/me")).status).toBe(401);
