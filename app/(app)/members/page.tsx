@@ -7,6 +7,9 @@ import { requirePageRole } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Members" };
 
+// No loading.tsx here on purpose: the role check must answer before any
+// streaming starts, so a volunteer gets a real redirect, not a shell first.
+// The lists below show their own skeletons while they load.
 export default async function MembersPage() {
   const actor = await requirePageRole("/members", "organiser");
   return (
