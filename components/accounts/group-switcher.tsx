@@ -31,7 +31,7 @@ export function GroupSwitcher() {
   return (
     <span className="flex items-center gap-2 text-sm">
       <label htmlFor="group-switcher" className="text-ink-soft">
-        Group
+        Active group
       </label>
       <select
         id="group-switcher"
