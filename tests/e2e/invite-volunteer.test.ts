@@ -60,7 +60,7 @@ describe("an organiser invites a volunteer", () => {
 
     // Back on the organiser's page the invitation has left the open list.
     await membersPage.open(organiser.page);
-    await organiser.page.getByRole("list", { name: "Members" }).getByText("Rowan Newcomer").waitFor();
+    await organiser.page.getByRole("list", { name: "Members" }).getByText("Rowan Newcomer", { exact: true }).waitFor();
     expect(await membersPage.openInvitations(organiser.page).getByText(email).count()).toBe(0);
 
     // With the content security policy on, nothing was blocked.
