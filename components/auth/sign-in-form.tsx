@@ -1,15 +1,20 @@
 "use client";
 
 import { signIn } from "next-auth/react";
+import Link from "next/link";
 import { useRouter, useSearchParams } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
+import { Notice } from "@/components/ui/notice";
 import { ROLE_HOME, type Role } from "@/lib/auth/roles";
+
+const NO_MATCH = "That e-mail and password do not match an account. Check both and try again.";
 
 export function SignInForm() {
   const router = useRouter();
-  const next = useSearchParams().get("next");
+  const params = useSearchParams();
+  const next = params.get("next");
   const [error, setError] = useState<string | null>(null);
   const [pending, setPending] = useState(false);
 
@@ -25,11 +30,9 @@ export function SignInForm() {
     });
     if (!result || result.error) {
       setPending(false);
-      setError(
-        result?.status === 429 || result?.error?.includes("wait")
-          ? result.error
-          : "That e-mail and password do not match an account. Check both and try again.",
-      );
+      // "CredentialsSignin" is the generic miss; anything else is our own
+      // message (sign-in paused after too many failures).
+      setError(result?.error && result.error !== "CredentialsSignin" ? result.error : NO_MATCH);
       return;
     }
     const me = await fetch("/api/me").then((r) => (r.ok ? r.json() : null));
@@ -40,12 +43,21 @@ export function SignInForm() {
 
   return (
     <form onSubmit={onSubmit} className="flex flex-col gap-2" noValidate>
+      {params.get("joined") ? (
+        <Notice tone="good" title="You're in the group">
+          Your account is ready. Sign in with the password you just chose.
+        </Notice>
+      ) : null}
       <FormError message={error} />
-      <Field id="email" name="email" type="email" label="E-mail" autoComplete="email" required />
+      <Field id="email" name="email" type="email" label="E-mail" autoComplete="email" required defaultValue={params.get("email") ?? undefined} />
       <Field id="password" name="password" type="password" label="Password" autoComplete="current-password" required />
       <Button type="submit" disabled={pending}>
         {pending ? "Signing in…" : "Sign in"}
       </Button>
+      <p className="mt-2 flex flex-wrap justify-between gap-2 text-sm">
+        <Link href="/forgot">Forgot your password?</Link>
+        <Link href="/signup">Start a new group</Link>
+      </p>
     </form>
   );
 }

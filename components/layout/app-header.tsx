@@ -1,11 +1,13 @@
 import Link from "next/link";
 import { Brand } from "./brand";
 import { SignOutButton } from "@/components/auth/sign-out-button";
+import { GroupSwitcher } from "@/components/accounts/group-switcher";
 import { ROLE_LABEL, type Role } from "@/lib/auth/roles";
 
 const NAV: Record<Role, { href: string; label: string }[]> = {
   organiser: [
     { href: "/dashboard", label: "Dashboard" },
+    { href: "/members", label: "Members" },
     { href: "/mail", label: "Sent mail" },
   ],
   volunteer: [{ href: "/log", label: "Log" }],
@@ -30,7 +32,8 @@ export function AppHeader({ groupName, role, userName }: { groupName: string; ro
             {item.label}
           </Link>
         ))}
-        <span className="ml-auto">
+        <span className="ml-auto flex flex-wrap items-center gap-3">
+          <GroupSwitcher />
           <SignOutButton />
         </span>
       </nav>

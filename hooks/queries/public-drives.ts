@@ -1,5 +1,5 @@
 import { queryOptions } from "@tanstack/react-query";
-import { apiFetch } from "@/lib/api/client";
+import { fetchJson } from "@/lib/api/client";
 
 export interface PublicDrive {
   slug: string;
@@ -13,7 +13,7 @@ export const publicDriveQueries = {
   list: () =>
     queryOptions({
       queryKey: [...publicDriveQueries.all(), "list"] as const,
-      queryFn: ({ signal }) => apiFetch<PublicDrive[]>("/api/public/drives", { signal }),
+      queryFn: ({ signal }) => fetchJson<PublicDrive[]>("/api/public/drives", { signal }),
       staleTime: 30_000,
     }),
 };

@@ -1,5 +1,5 @@
-// The one fetch wrapper for client components: JSON in, JSON out, and the
-// API's error JSON turned into an ApiError the UI can show next to fields.
+// The one fetch wrapper of the browser side: JSON in, JSON out, and the API's
+// error JSON turned into an ApiError the UI can show (message + field errors).
 export class ApiError extends Error {
   constructor(
     readonly status: number,
@@ -12,38 +12,35 @@ export class ApiError extends Error {
   }
 }
 
-export async function apiFetch<T>(
-  path: string,
-  init: { method?: string; body?: unknown; headers?: Record<string, string>; signal?: AbortSignal } = {},
-): Promise<T> {
+export async function fetchJson<T>(path: string, init: { method?: string; body?: unknown; signal?: AbortSignal } = {}): Promise<T> {
   let res: Response;
   try {
     res = await fetch(path, {
-      method: init.method ?? (init.body === undefined ? "GET" : "POST"),
-      headers: { ...(init.body === undefined ? {} : { "content-type": "application/json" }), ...init.headers },
+      method: init.method ?? "GET",
+      headers: init.body === undefined ? { accept: "application/json" } : { accept: "application/json", "content-type": "application/json" },
       body: init.body === undefined ? undefined : JSON.stringify(init.body),
       signal: init.signal,
       credentials: "same-origin",
     });
   } catch (error) {
     if ((error as Error).name === "AbortError") throw error;
-    throw new ApiError(0, "network", "Can't reach Cantrove. Check your connection and try again.");
+    throw new ApiError(0, "network", "We could not reach Cantrove. Check your connection and try again.");
   }
   const text = await res.text();
-  let data: unknown = null;
+  let body: unknown = null;
   try {
-    data = text ? JSON.parse(text) : null;
+    body = text ? JSON.parse(text) : null;
   } catch {
-    data = null;
+    body = null;
   }
   if (!res.ok) {
-    const err = (data as { error?: { code?: string; message?: string; fields?: Record<string, string> } } | null)?.error;
+    const error = (body as { error?: { code?: string; message?: string; fields?: Record<string, string> } } | null)?.error;
     throw new ApiError(
       res.status,
-      err?.code ?? "http_error",
-      err?.message ?? `The server answered ${res.status}. Try again in a moment.`,
-      err?.fields ?? {},
+      error?.code ?? "http_error",
+      error?.message ?? `The server answered ${res.status}. Try again in a moment.`,
+      error?.fields ?? {},
     );
   }
-  return data as T;
+  return body as T;
 }

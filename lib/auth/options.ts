@@ -4,6 +4,8 @@ import CredentialsProvider from "next-auth/providers/credentials";
 import bcrypt from "bcryptjs";
 import { z } from "zod";
 import { findUserForSignIn, loadActor } from "./queries";
+import { clearSignInFailures, guardSignIn, recordSignInFailure } from "@/lib/accounts/sign-in-limits";
+import { clientAddress } from "@/lib/accounts/throttle";
 
 const credentialsSchema = z.object({
   email: z.string().trim().toLowerCase().email(),
@@ -21,12 +23,24 @@ export const authOptions: NextAuthOptions = {
     CredentialsProvider({
       name: "E-mail and password",
       credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
-      async authorize(raw) {
+      // Throwing sends the message to the form as `error`; returning null is the
+      // generic "does not match", the same for unknown e-mails and wrong passwords.
+      async authorize(raw, req) {
+        const client = clientAddress(req?.headers?.["x-forwarded-for"]);
+        const email = String(raw?.email ?? "").trim().toLowerCase().slice(0, 254);
+        await guardSignIn(email, client);
         const parsed = credentialsSchema.safeParse(raw);
-        if (!parsed.success) return null;
+        if (!parsed.success) {
+          await recordSignInFailure(email, client);
+          return null;
+        }
         const user = await findUserForSignIn(parsed.data.email);
         const ok = await bcrypt.compare(parsed.data.password, user?.password_hash ?? DUMMY_HASH);
-        if (!user || !user.password_hash || !ok) return null;
+        if (!user || !user.password_hash || !ok) {
+          await recordSignInFailure(email, client);
+          return null;
+        }
+        await clearSignInFailures(email);
         const actor = await loadActor(user.id);
         return { id: user.id, email: user.email, name: user.name, groupId: actor?.group.id ?? null };
       },

@@ -11,7 +11,8 @@ import type { Role } from "./roles";
 export async function getActor(): Promise<Actor | null> {
   const session = await getServerSession(authOptions);
   if (!session?.userId) return null;
-  return loadActor(session.userId, session.groupId);
+  // Removed from the active group but still in another: carry on in that one.
+  return (await loadActor(session.userId, session.groupId)) ?? (session.groupId ? loadActor(session.userId) : null);
 }
 
 export async function requireUser(): Promise<Actor> {

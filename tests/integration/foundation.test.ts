@@ -32,6 +32,15 @@ describe("/api/me", () => {
     expect(res.body.user.email).toBe(email);
     expect(res.body.group.slug).toBe(slug);
     expect(res.body.role).toBe(role);
+    // The group and role come from the database, not from what the client sent.
+    const membership = await testDb()("memberships as m")
+      .join("users as u", "u.id", "m.user_id")
+      .join("groups as g", "g.id", "m.group_id")
+      .where("u.email", email)
+      .select("g.id", "g.name", "m.role")
+      .first();
+    expect(res.body.group).toMatchObject({ id: membership.id, name: membership.name });
+    expect(membership.role).toBe(role);
   });
 
   it("refuses a wrong password with 401 and no session", async () => {

@@ -1,0 +1,32 @@
+import type { Metadata } from "next";
+import { Card } from "@/components/ui/card";
+import { InviteForm } from "@/components/accounts/invite-form";
+import { InvitationList } from "@/components/accounts/invitation-list";
+import { MemberList } from "@/components/accounts/member-list";
+import { requirePageRole } from "@/lib/auth/session";
+
+export const metadata: Metadata = { title: "Members" };
+
+// No loading.tsx here on purpose: the role check must answer before any
+// streaming starts, so a volunteer gets a real redirect, not a shell first.
+// The lists below show their own skeletons while they load.
+export default async function MembersPage() {
+  const actor = await requirePageRole("/members", "organiser");
+  return (
+    <main className="flex flex-col gap-6">
+      <h1 className="text-3xl">People in {actor.group.name}</h1>
+      <div className="grid gap-6 md:grid-cols-[1fr_1.4fr]">
+        <Card title="Invite someone">
+          <InviteForm />
+        </Card>
+        <Card title="Open invitations">
+          <InvitationList />
+        </Card>
+      </div>
+      <Card title="Members">
+        <p className="mb-3 text-sm text-ink-faint">A group always keeps at least one organiser.</p>
+        <MemberList currentUserId={actor.user.id} />
+      </Card>
+    </main>
+  );
+}

@@ -1,0 +1,20 @@
+import { NextResponse } from "next/server";
+import { getServerSession } from "next-auth";
+import { parseJson, route } from "@/lib/api/handler";
+import { authOptions } from "@/lib/auth/options";
+import { acceptInvitationInputSchema } from "@/lib/accounts/schemas";
+import { acceptInvitation } from "@/lib/accounts/invitations";
+
+export const dynamic = "force-dynamic";
+
+// Open to anyone holding the link: the token is the credential. Someone who
+// already has an account must also be signed in as the invited address.
+export const POST = route(async (request) => {
+  const input = await parseJson(request, acceptInvitationInputSchema);
+  const session = await getServerSession(authOptions);
+  const result = await acceptInvitation(input, session?.userId || null);
+  return NextResponse.json(
+    { group: { id: result.groupId }, role: result.role, email: result.email, newAccount: result.newAccount },
+    { status: 201 },
+  );
+});

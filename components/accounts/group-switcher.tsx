@@ -1,0 +1,51 @@
+"use client";
+
+import { useQuery, useQueryClient } from "@tanstack/react-query";
+import { useSession } from "next-auth/react";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { ROLE_HOME, ROLE_LABEL } from "@/lib/auth/roles";
+import { myGroupsQuery } from "@/hooks/queries/members";
+
+/** Shown only to people in more than one group; switching lands on that group's home for their role there. */
+export function GroupSwitcher() {
+  const { data } = useQuery(myGroupsQuery());
+  const { update } = useSession();
+  const router = useRouter();
+  const client = useQueryClient();
+  const [pending, setPending] = useState(false);
+  if (!data || data.length < 2) return null;
+  const active = data.find((g) => g.active);
+
+  async function onChange(groupId: string) {
+    const target = data!.find((g) => g.id === groupId);
+    if (!target) return;
+    setPending(true);
+    await update({ groupId });
+    await client.invalidateQueries();
+    router.push(ROLE_HOME[target.role]);
+    router.refresh();
+    setPending(false);
+  }
+
+  return (
+    <span className="flex items-center gap-2 text-sm">
+      <label htmlFor="group-switcher" className="text-ink-soft">
+        Active group
+      </label>
+      <select
+        id="group-switcher"
+        value={active?.id}
+        disabled={pending}
+        onChange={(e) => onChange(e.target.value)}
+        className="min-h-9 max-w-[14rem] rounded-lg border-2 border-ink/40 bg-white px-2 py-1"
+      >
+        {data.map((g) => (
+          <option key={g.id} value={g.id}>
+            {g.name} ({ROLE_LABEL[g.role].toLowerCase()})
+          </option>
+        ))}
+      </select>
+    </span>
+  );
+}

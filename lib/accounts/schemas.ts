@@ -1,0 +1,59 @@
+import { z } from "zod";
+import { ROLES } from "@/lib/auth/roles";
+
+// Shared by the forms and the route handlers.
+export const emailSchema = z
+  .string({ message: "Enter an e-mail address." })
+  .trim()
+  .toLowerCase()
+  .max(254, "That e-mail address is too long.")
+  .email("Enter an e-mail address like name@example.org.");
+
+export const passwordSchema = z
+  .string({ message: "Choose a password." })
+  .min(10, "Use at least 10 characters.")
+  .max(200, "Use at most 200 characters.");
+
+export const personNameSchema = z
+  .string({ message: "Enter your name." })
+  .trim()
+  .min(1, "Enter your name.")
+  .max(120, "Use at most 120 characters.");
+
+export const roleSchema = z.enum(ROLES, { message: "Choose organiser, volunteer or builder." });
+
+export const signUpInputSchema = z.object({
+  name: personNameSchema,
+  email: emailSchema,
+  password: passwordSchema,
+  groupName: z
+    .string({ message: "Name your group." })
+    .trim()
+    .min(3, "Use at least 3 characters.")
+    .max(120, "Use at most 120 characters."),
+});
+export type SignUpInput = z.infer<typeof signUpInputSchema>;
+
+export const invitationInputSchema = z.object({ email: emailSchema, role: roleSchema });
+export type InvitationInput = z.infer<typeof invitationInputSchema>;
+
+export const tokenSchema = z.string({ message: "The link is incomplete." }).regex(/^[A-Za-z0-9_-]{32,64}$/, "The link is incomplete.");
+
+/** Accepting: a new person sends name and password; someone already signed in sends only the token. */
+export const acceptInvitationInputSchema = z.object({
+  token: tokenSchema,
+  name: personNameSchema.optional(),
+  password: passwordSchema.optional(),
+});
+export type AcceptInvitationInput = z.infer<typeof acceptInvitationInputSchema>;
+
+export const memberRoleInputSchema = z.object({ role: roleSchema });
+
+export const resetRequestInputSchema = z.object({ email: emailSchema });
+export const resetConfirmInputSchema = z.object({ token: tokenSchema, password: passwordSchema });
+
+export const switchGroupInputSchema = z.object({ groupId: z.string().uuid("Choose one of your groups.") });
+
+/** The one answer to a reset request, known address or not. */
+export const RESET_ANSWER =
+  "If that address has a Cantrove account, a link to choose a new password is on its way. It works once, for an hour.";
