@@ -42,7 +42,9 @@ export function buildIfStale(root: string, env: NodeJS.ProcessEnv, log: (s: stri
     stdio: "inherit",
   });
   if (result.status !== 0) throw new Error(`next build failed (exit ${result.status})`);
-  // next build may rewrite tsconfig.json once, so stamp what is there now.
-  writeFileSync(stampFile, sourceHash(root));
+  // Stamp what was hashed before the build: a file edited during the build
+  // then counts as not built. (next build rewrites tsconfig.json only once;
+  // the rewritten file is committed.)
+  writeFileSync(stampFile, wanted);
   return true;
 }
