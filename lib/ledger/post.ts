@@ -1,6 +1,4 @@
-import "server-only";
 import type { Knex } from "knex";
-import { db } from "@/lib/db";
 import { AppError, conflict, notFound } from "@/lib/api/errors";
 import type { RejectReason, Stage } from "./schemas";
 
@@ -53,6 +51,8 @@ export interface MovementSpec {
 }
 
 /** Runs `fn` in the caller's transaction when there is one, else in a new one. */
+// (No "server-only" here or in write*.ts/reverse.ts: the demo seed runs these in
+// plain Node with its own transaction. record.ts is the server's entry point.)
 export function inTx<T>(conn: Knex | Trx, fn: (trx: Trx) => Promise<T>): Promise<T> {
   return (conn as Trx).isTransaction ? fn(conn as Trx) : conn.transaction(fn);
 }
@@ -241,5 +241,3 @@ export async function bumpDropPoint(
     [v.hauls, v.bags, v.good_cans, v.rejected_cans, dropPointId],
   );
 }
-
-export { db };
