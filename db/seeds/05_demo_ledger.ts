@@ -35,8 +35,11 @@ export async function seed(knex: Knex): Promise<void> {
     await recordProcessing(volunteer, harvest, { from: "washed", to: "opened", quantity: 280, occurredAt: at(6) }, trx);
     await recordProcessing(volunteer, harvest, { from: "opened", to: "punched", quantity: 120, occurredAt: at(8) }, trx);
     const panel = await unit("Harvest workshop test panel");
+    // The panel is installed now; replay its build as it happened, then put its state back.
+    await trx("heater_units").where({ id: panel }).update({ state: "planned" });
     await recordClaim(builder, panel, 81, trx);
     await recordBuiltIn(builder, panel, 81, trx);
+    await trx("heater_units").where({ id: panel }).update({ state: "installed" });
 
     // Winter drive (running): hauls over the last days, one sort, some processing, a claim.
     const winter = await drive("larkhollow-winter-2026");
