@@ -146,3 +146,14 @@ export async function listMyEntries(groupId: string, userId: string, limit = 15)
     undone: r.reversed_by !== null,
   }));
 }
+
+/** 404 unless the drive belongs to the group; handlers call it before reading the body. */
+export async function assertOwnDrive(groupId: string, driveId: string): Promise<void> {
+  const row = await db("drives").select("id").where({ id: driveId, group_id: groupId }).first();
+  if (!row) throw notFound("That drive");
+}
+
+export async function assertOwnHeater(groupId: string, heaterUnitId: string): Promise<void> {
+  const row = await db("heater_units").select("id").where({ id: heaterUnitId, group_id: groupId }).first();
+  if (!row) throw notFound("That heater unit");
+}
