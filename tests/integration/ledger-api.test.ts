@@ -82,7 +82,7 @@ describe("sorts, processing, claims and undo", () => {
     // More than the unclaimed cans: 409 with what is left.
     const greedy = await bld.json<{ error: { message: string } }>("POST", `/api/heaters/${g.heaterIds[1]}/claims`, { quantity: s.unclaimed + 1 });
     expect(greedy.status).toBe(409);
-    expect(greedy.body.error.message).toMatch(new RegExp(`${s.unclaimed} unclaimed`));
+    expect(greedy.body.error.message).toMatch(new RegExp(`only ${s.unclaimed} left`));
 
     // Undo the wash: a new line, history keeps both.
     const undo = await vol.json<{ movementId: string }>("POST", `/api/movements/${wash.body.movementId}/reversal`);
