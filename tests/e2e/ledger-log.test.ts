@@ -123,7 +123,7 @@ describe("volunteer logging on a phone", () => {
     await expectStage(page, "washed", 30);
 
     const db = testDb();
-    const kinds = await db("movements").where({ drive_id: g.driveId }).select("kind").count({ n: "*" }).groupBy("kind");
+    const kinds = (await db("movements").where({ drive_id: g.driveId }).select("kind").count({ n: "*" }).groupBy("kind")) as { kind: string; n: string }[];
     expect(Object.fromEntries(kinds.map((k) => [k.kind, Number(k.n)]))).toEqual({ haul: 1, sort: 1, processing: 1 });
     const stock = await apiStock(g);
     expect(stock.stages).toMatchObject({ hauled: 0, good: 70, washed: 30 });
