@@ -21,7 +21,7 @@ export function GoodCansChart({ daily, target }: { daily: DailyPoint[]; target: 
             <YAxis tick={{ fontSize: 12 }} domain={[0, Math.ceil(top * 1.05)]} width={48} />
             <Tooltip />
             <Bar dataKey="goodCans" name="Good cans that day" fill="#2f6a4a" />
-            <Line dataKey="cumulative" name="Good cans in total" stroke="#a8431a" strokeWidth={3} dot={false} type="monotone" />
+            <Line dataKey="cumulative" name="Good cans in total" stroke="#a8431a" strokeWidth={3} dot={false} type="linear" />
             <ReferenceLine y={target} stroke="#1f1b16" strokeDasharray="6 4" label={{ value: `target ${target}`, position: "insideTopLeft", fontSize: 12 }} />
           </ComposedChart>
         </ResponsiveContainer>
@@ -44,10 +44,10 @@ export function YieldChart({ points }: { points: YieldPoint[] }) {
     <figure>
       <div className="h-64 w-full" role="img" aria-label="Yield per drop point: the share of counted cans that were good">
         <ResponsiveContainer width="100%" height="100%">
-          <BarChart data={sorted} layout="vertical" margin={{ top: 5, right: 20, bottom: 5, left: 10 }}>
+          <BarChart data={sorted} margin={{ top: 5, right: 10, bottom: 5, left: 0 }}>
             <CartesianGrid stroke="#e2d5bf" strokeDasharray="3 3" />
-            <XAxis type="number" domain={[0, 100]} unit=" %" tick={{ fontSize: 12 }} />
-            <YAxis type="category" dataKey="name" width={120} tick={{ fontSize: 12 }} />
+            <XAxis dataKey="name" tick={{ fontSize: 11 }} interval={0} height={48} tickFormatter={(n: string) => (n.length > 16 ? `${n.slice(0, 15)}…` : n)} />
+            <YAxis domain={[0, 100]} unit=" %" tick={{ fontSize: 12 }} width={52} />
             <Tooltip formatter={(v) => `${v} %`} />
             <Bar dataKey="yieldPercent" name="Yield" fill="#2f6a4a" />
           </BarChart>
