@@ -91,7 +91,9 @@ export function LedgerTable({ drives, people, initialDriveId }: { drives: LogDri
             <caption className="sr-only">Ledger lines, newest first</caption>
             <thead className="border-b-2 border-ink/30">
               <tr>
-                {["When", "Entry", "Drive", "Drop point / unit", "From → to", "Cans", "Reason", "By"].map((h) => <th key={h} scope="col" className="px-2 py-2">{h}</th>)}
+                {["When", "Entry", "Drive", "Drop point / unit", "From → to", "Cans", "Reason", "By"].map((h) => (
+                  <th key={h} scope="col" className={`px-2 py-2 ${h === "Drive" && f.driveId ? "hidden" : ""}`}>{h}</th>
+                ))}
               </tr>
             </thead>
             <tbody className="divide-y divide-paper-edge">
@@ -99,7 +101,7 @@ export function LedgerTable({ drives, people, initialDriveId }: { drives: LogDri
                 <tr key={r.id} className={r.reversesId ? "bg-paper-deep" : ""}>
                   <td className="px-2 py-1 whitespace-nowrap">{new Date(r.occurredAt).toLocaleString()}</td>
                   <td className="px-2 py-1">{r.kind}{r.reversesId ? ` (undoes line ${r.reversesId})` : ""}</td>
-                  <td className="px-2 py-1">{r.drive}</td>
+                  <td className={`px-2 py-1 ${f.driveId ? "hidden" : ""}`}>{r.drive}</td>
                   <td className="px-2 py-1">{r.dropPoint ?? r.heaterUnit ?? "—"}</td>
                   <td className="px-2 py-1">{r.from ?? "·"} → {r.to ?? "·"}</td>
                   <td className="px-2 py-1 tabular-nums">{r.isEstimate ? "≈" : ""}{r.quantity}</td>
