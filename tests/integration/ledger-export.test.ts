@@ -30,3 +30,19 @@ describe("ledger table and CSV export", () => {
     expect((await vol.get(`/api/ledger/export?driveId=${g.driveId}`)).status).toBe(403);
   });
 });
+
+describe("rejects taken to recycling", () => {
+  it("moves rejected cans to recycled, keeps weight and money, and refuses more than are waiting", async () => {
+    const vol = await g.client("volunteer");
+    const before = (await vol.json<{ rejectedOnHand: number; stages: { recycled: number } }>("GET", `/api/drives/${g.driveId}/stock`)).body;
+    expect(before.rejectedOnHand).toBe(2);
+    const ok = await vol.json<{ movementId: string; weightKg: number; moneyReceived: number }>("POST", `/api/drives/${g.driveId}/recycling`, { quantity: 1, weightKg: 0.015, moneyReceived: 0.02 });
+    expect(ok.status).toBe(201);
+    expect(ok.body).toMatchObject({ weightKg: 0.015, moneyReceived: 0.02 });
+    const more = await vol.json<{ error: { message: string } }>("POST", `/api/drives/${g.driveId}/recycling`, { quantity: 2 });
+    expect(more.status).toBe(409);
+    expect(more.body.error.message).toMatch(/only 1 left/);
+    const after = (await vol.json<{ rejectedOnHand: number; stages: { recycled: number }; rejected: { dented: number } }>("GET", `/api/drives/${g.driveId}/stock`)).body;
+    expect(after).toMatchObject({ rejectedOnHand: 1, stages: { recycled: 1 }, rejected: { dented: 2 } });
+  });
+});

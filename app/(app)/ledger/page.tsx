@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { Card, EmptyState } from "@/components/ui/card";
 import { GoodCansChart, YieldChart } from "@/components/ledger/ledger-charts";
 import { LedgerTable } from "@/components/ledger/ledger-table";
+import { RecyclingForm } from "@/components/ledger/recycling-form";
 import { requirePageRole } from "@/lib/auth/session";
 import { driveTarget } from "@/lib/drives/progress";
 import { driveGoodDaily, dropPointTallies } from "@/lib/ledger/balances";
@@ -54,6 +55,9 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
           <YieldChart points={yieldPoints} />
         </Card>
       </div>
+      <Card title="Rejects taken to recycling">
+        <RecyclingForm driveId={drive.id} />
+      </Card>
       <Card title="Every line">
         <LedgerTable drives={drives} people={people} initialDriveId={drive.id} />
       </Card>
