@@ -7,6 +7,8 @@ import { ROLE_LABEL, type Role } from "@/lib/auth/roles";
 const NAV: Record<Role, { href: string; label: string }[]> = {
   organiser: [
     { href: "/dashboard", label: "Dashboard" },
+    { href: "/ledger", label: "Ledger" },
+    { href: "/log", label: "Log" },
     { href: "/members", label: "Members" },
     { href: "/mail", label: "Sent mail" },
   ],
