@@ -176,3 +176,8 @@ export async function moveHeaterState(
 function isUuid(id: string): boolean {
   return /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id);
 }
+
+export async function groupLatitude(groupId: string): Promise<number | null> {
+  const row = await db("groups").select("workshop_lat").where({ id: groupId }).first();
+  return row?.workshop_lat ?? null;
+}
