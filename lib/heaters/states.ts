@@ -6,13 +6,9 @@
  * slip; an installed heater stays installed unless an organiser steps it back.
  */
 import type { Role } from "@/lib/auth/roles";
-import { HEATER_STATES, type HeaterState } from "./unit-schemas";
+import { HEATER_STATES, stateIndexOf as stateIndex, type HeaterState } from "./unit-schemas";
 
 export type StateMove = { ok: true } | { ok: false; reason: string };
-
-export function stateIndex(state: HeaterState): number {
-  return HEATER_STATES.indexOf(state);
-}
 
 export function checkStateMove(from: HeaterState, to: HeaterState, role: Role): StateMove {
   if (role !== "builder" && role !== "organiser") return { ok: false, reason: "Only builders and organisers move a unit." };

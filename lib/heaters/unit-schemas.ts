@@ -35,3 +35,7 @@ export const heaterStateInputSchema = z.object(
   { error: "Send the new state" },
 );
 export type HeaterStateInput = z.infer<typeof heaterStateInputSchema>;
+
+export function stateIndexOf(state: HeaterState): number {
+  return HEATER_STATES.indexOf(state);
+}
