@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { parseJson, route } from "@/lib/api/handler";
 import { requireRole } from "@/lib/auth/session";
-import { moveHeaterState } from "@/lib/heaters/queries";
+import { getHeaterUnit, moveHeaterState } from "@/lib/heaters/queries";
 import { checkStateMove } from "@/lib/heaters/states";
 import { heaterStateInputSchema } from "@/lib/heaters/unit-schemas";
 
@@ -14,6 +14,8 @@ type Context = { params: Promise<{ id: string }> };
 export const POST = route(async (request: Request, { params }: Context) => {
   const actor = await requireRole("builder", "organiser");
   const { id } = await params;
+  // Another group's unit is 404 before anything about the body is said.
+  await getHeaterUnit(actor.group.id, id);
   const { state } = await parseJson(request, heaterStateInputSchema);
   const unit = await moveHeaterState(actor.group.id, id, state, (from) => checkStateMove(from, state, actor.role));
   return NextResponse.json(unit);
