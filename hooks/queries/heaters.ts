@@ -25,3 +25,17 @@ export function createHeater(input: HeaterCreateInput) {
 export function moveHeater(id: string, state: HeaterState) {
   return fetchJson<SavedHeater>(`/api/heaters/${id}/state`, { body: { state } });
 }
+
+export type ClaimAction = "claims" | "releases" | "built-in";
+
+/** A ledger movement for the unit; a fresh Idempotency-Key per submit so a retried request never doubles. */
+export function postClaimAction(id: string, action: ClaimAction, quantity: number, key: string) {
+  return fetchJson<{ movementId: string; claimed: number; builtIn: number }>(`/api/heaters/${id}/${action}`, {
+    body: { quantity },
+    headers: { "Idempotency-Key": key },
+  });
+}
+
+export function moveClaimsTo(id: string, toHeaterId: string, quantity: number, key: string) {
+  return fetchJson<unknown>(`/api/heaters/${id}/claim-moves`, { body: { toHeaterId, quantity }, headers: { "Idempotency-Key": key } });
+}

@@ -1,6 +1,7 @@
 import "server-only";
 import { db } from "@/lib/db";
-import { driveTarget, type DriveTarget } from "@/lib/drives/progress";
+import { countGoodCans, driveTarget, heatersCovered, type DriveTarget } from "@/lib/drives/progress";
+import { driveYieldInputs } from "@/lib/ledger/balances";
 
 export interface DriveWithTarget {
   id: string;
@@ -9,6 +10,10 @@ export interface DriveWithTarget {
   sparePercent: number;
   unitCans: number[];
   target: DriveTarget;
+  /** Counted good cans of the drive, every stage from good to built in. */
+  goodCans: number;
+  /** Heaters whose cans the good cans cover, in planning order. */
+  covered: number;
 }
 
 /**
@@ -29,8 +34,12 @@ export async function listDriveTargets(groupId: string, driveId?: string): Promi
     .where({ group_id: groupId })
     .whereNotNull("drive_id")
     .orderBy([{ column: "created_at" }, { column: "name" }]);
-  return drives.map((d: { id: string; name: string; slug: string; sparePercent: number }) => {
-    const unitCans = units.filter((u: { driveId: string }) => u.driveId === d.id).map((u: { cans: number }) => u.cans);
-    return { ...d, unitCans, target: driveTarget(unitCans, d.sparePercent) };
-  });
+  return Promise.all(
+    drives.map(async (d: { id: string; name: string; slug: string; sparePercent: number }) => {
+      const unitCans = units.filter((u: { driveId: string }) => u.driveId === d.id).map((u: { cans: number }) => u.cans);
+      // The drive id comes from the group-scoped query above.
+      const goodCans = countGoodCans((await driveYieldInputs(d.id)).stages);
+      return { ...d, unitCans, target: driveTarget(unitCans, d.sparePercent), goodCans, covered: heatersCovered(unitCans, goodCans) };
+    }),
+  );
 }

@@ -39,3 +39,17 @@ export type HeaterStateInput = z.infer<typeof heaterStateInputSchema>;
 export function stateIndexOf(state: HeaterState): number {
   return HEATER_STATES.indexOf(state);
 }
+
+/** An organiser moves claimed cans from one unit to another of the same drive. */
+export const claimMoveInputSchema = z.object(
+  {
+    toHeaterId: z.uuid({ error: "Choose the unit that takes the cans" }),
+    quantity: z
+      .number({ error: "Enter the number of cans" })
+      .int({ error: "Whole cans only" })
+      .min(1, { error: "Move at least 1 can" })
+      .max(1_000_000, { error: "That is more cans than one move holds" }),
+  },
+  { error: "Send the unit that takes the cans and how many" },
+);
+export type ClaimMoveInput = z.infer<typeof claimMoveInputSchema>;

@@ -2,17 +2,23 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { Card, EmptyState } from "@/components/ui/card";
 import { ButtonLink } from "@/components/ui/button";
+import { DriveProgressLine } from "@/components/heaters/drive-progress-line";
 import { StateBadge } from "@/components/heaters/state-badge";
 import { requirePageRole } from "@/lib/auth/session";
 import { listDriveTargets } from "@/lib/heaters/drive-targets";
 import { formatNumber } from "@/lib/heaters/format";
 import { listHeaterUnits } from "@/lib/heaters/queries";
+import { heaterClaims } from "@/lib/ledger/balances";
 
 export const metadata: Metadata = { title: "Heater units" };
 
 export default async function UnitsPage() {
   const actor = await requirePageRole("/units", "builder", "organiser");
-  const [units, drives] = await Promise.all([listHeaterUnits(actor.group.id), listDriveTargets(actor.group.id)]);
+  const [units, drives, claims] = await Promise.all([
+    listHeaterUnits(actor.group.id),
+    listDriveTargets(actor.group.id),
+    heaterClaims(actor.group.id),
+  ]);
   return (
     <main className="flex flex-col gap-6">
       <div className="flex flex-wrap items-center justify-between gap-3">
@@ -28,10 +34,9 @@ export default async function UnitsPage() {
         .filter((d) => d.unitCans.length > 0)
         .map((d) => (
           <Card key={d.id} title={d.name}>
-            <p className="mb-3 text-ink-soft" data-testid={`drive-target-${d.slug}`}>
-              Target <strong className="text-ink">{formatNumber(d.target.cans)} cans</strong>: {formatNumber(d.target.heaterCans)} for{" "}
-              {d.target.heaters} {d.target.heaters === 1 ? "heater" : "heaters"} + {formatNumber(d.target.spare)} spare ({formatNumber(d.sparePercent, 1)} %).
-            </p>
+            <div className="mb-3">
+              <DriveProgressLine drive={d} />
+            </div>
             <ul className="divide-y divide-paper-edge">
               {units
                 .filter((u) => u.driveId === d.id)
@@ -42,7 +47,8 @@ export default async function UnitsPage() {
                     </Link>
                     <span className="flex flex-wrap items-center gap-3 text-ink-soft">
                       <span>
-                        {u.columns} × {u.rows} = {formatNumber(u.cans)} cans
+                        {u.columns} × {u.rows} = {formatNumber(u.cans)} cans · {formatNumber(claims[u.id]?.claimed ?? 0)} claimed ·{" "}
+                        {formatNumber(claims[u.id]?.builtIn ?? 0)} built in
                       </span>
                       <StateBadge state={u.state} />
                     </span>

@@ -33,7 +33,7 @@ afterAll(async () => {
 
 async function driveTargetText(client: ApiClient): Promise<number> {
   const html = (await (await client.get("/units")).text()).replace(/<!-- -->/g, "");
-  const m = new RegExp(`data-testid="drive-target-${f.demoDriveSlug}"[^>]*>Target <strong[^>]*>([\\d,]+) cans`).exec(html);
+  const m = new RegExp(`data-testid="drive-target-${f.demoDriveSlug}"[\\s\\S]*?Target <strong[^>]*>([\\d,]+) cans`).exec(html);
   if (!m) throw new Error("drive target not found on /units");
   return Number(m[1].replace(/,/g, ""));
 }

@@ -5,14 +5,17 @@ import { Card } from "@/components/ui/card";
 import { ButtonLink } from "@/components/ui/button";
 import { GridFigures } from "@/components/heaters/grid-figures";
 import { GridPreview } from "@/components/heaters/grid-preview";
+import { ClaimsPanel } from "@/components/heaters/claims-panel";
+import { DriveProgressLine } from "@/components/heaters/drive-progress-line";
 import { StateBadge } from "@/components/heaters/state-badge";
 import { StateMover } from "@/components/heaters/state-mover";
 import { AppError } from "@/lib/api/errors";
 import { requirePageRole } from "@/lib/auth/session";
 import { computeCanGrid } from "@/lib/heaters/can-grid";
 import { listDriveTargets } from "@/lib/heaters/drive-targets";
-import { formatLength, formatNumber } from "@/lib/heaters/format";
-import { getHeaterUnit, planOf } from "@/lib/heaters/queries";
+import { formatLength } from "@/lib/heaters/format";
+import { getHeaterUnit, listHeaterUnits, planOf } from "@/lib/heaters/queries";
+import { driveStock, heaterClaims } from "@/lib/ledger/balances";
 import { resolveCanGridInput } from "@/lib/heaters/schemas";
 import { allowedMoves } from "@/lib/heaters/states";
 
@@ -30,6 +33,9 @@ export default async function UnitPage({ params }: Props) {
   const plan = planOf(unit);
   const grid = computeCanGrid(plan);
   const [drive] = unit.driveId ? await listDriveTargets(actor.group.id, unit.driveId) : [];
+  const [claims, stock, siblings] = unit.driveId
+    ? await Promise.all([heaterClaims(actor.group.id, unit.driveId), driveStock(actor.group.id, unit.driveId), listHeaterUnits(actor.group.id, unit.driveId)])
+    : [null, null, []];
   return (
     <main className="flex flex-col gap-5">
       <p>
@@ -58,10 +64,28 @@ export default async function UnitPage({ params }: Props) {
 
       {drive ? (
         <Card title="The drive">
-          <p data-testid="unit-drive-target">
-            {drive.name}: target <strong>{formatNumber(drive.target.cans)} cans</strong> for {drive.target.heaters} heaters (
-            {formatNumber(drive.target.heaterCans)} + {formatNumber(drive.target.spare)} spare).
-          </p>
+          <p className="mb-1 font-semibold">{drive.name}</p>
+          <DriveProgressLine drive={drive} />
+        </Card>
+      ) : null}
+
+      {claims && stock ? (
+        <Card title="Cans for this unit">
+          <ClaimsPanel
+            v={{
+              unitId: unit.id,
+              cans: unit.cans,
+              rows: unit.rows,
+              claimed: claims[unit.id]?.claimed ?? 0,
+              builtIn: claims[unit.id]?.builtIn ?? 0,
+              driveUnclaimed: stock.unclaimed,
+              drivePunched: stock.stages.punched,
+              installed: unit.state === "installed",
+              isOrganiser: actor.role === "organiser",
+              otherUnits: siblings.filter((u) => u.id !== unit.id && u.state !== "installed").map((u) => ({ id: u.id, name: u.name })),
+            }}
+          />
+          <p className="mt-3 text-sm text-ink-faint">Cut and punched cans are sharp: handle them with gloves.</p>
         </Card>
       ) : null}
 
