@@ -37,3 +37,12 @@ export const rows: AuthzRow[] = [
     expect: { anonymous: 401, volunteer: 403, builder: 422, organiser: 422, otherOrganiser: 404 },
   },
 ];
+
+rows.push({
+  route: "app/api/heaters/[id]/claim-moves/route.ts",
+  method: "POST",
+  path: (f) => `/api/heaters/${f.demoHeaterId}/claim-moves`,
+  body: () => ({ quantity: -1 }),
+  expect: { anonymous: 401, volunteer: 403, builder: 403, organiser: 422, otherOrganiser: 404 },
+  note: "only organisers move claims between units",
+});
