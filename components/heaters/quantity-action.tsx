@@ -40,7 +40,7 @@ export function QuantityAction({
       router.refresh();
     },
   });
-  const fieldError = action.error instanceof ApiError ? action.error.fields.quantity : undefined;
+  const fieldError = action.error instanceof ApiError ? action.error.fields?.quantity : undefined;
   return (
     <form
       className="flex flex-col gap-1"

@@ -27,7 +27,7 @@ export function SavePlan({ input, drives, planLabel, disabled }: { input: CanGri
       router.push(`/units/${unit.id}`);
     },
   });
-  const fields = save.error instanceof ApiError ? save.error.fields : {};
+  const fields = save.error instanceof ApiError ? (save.error.fields ?? {}) : {};
   if (drives.length === 0) {
     return <p className="text-ink-soft">Your group has no drive yet. An organiser sets one up first; then save the plan to it.</p>;
   }

@@ -6,6 +6,9 @@ import { ROLE_LABEL, type Role } from "@/lib/auth/roles";
 const NAV: Record<Role, { href: string; label: string }[]> = {
   organiser: [
     { href: "/dashboard", label: "Dashboard" },
+    { href: "/ledger", label: "Ledger" },
+    { href: "/log", label: "Log" },
+    { href: "/units", label: "Heater units" },
     { href: "/mail", label: "Sent mail" },
   ],
   volunteer: [{ href: "/log", label: "Log" }],

@@ -19,11 +19,11 @@ export const heatersQuery = () =>
   queryOptions({ queryKey: heaterKeys.all, queryFn: () => fetchJson<SavedHeater[]>("/api/heaters") });
 
 export function createHeater(input: HeaterCreateInput) {
-  return fetchJson<SavedHeater>("/api/heaters", { body: input });
+  return fetchJson<SavedHeater>("/api/heaters", { method: "POST", json: input });
 }
 
 export function moveHeater(id: string, state: HeaterState) {
-  return fetchJson<SavedHeater>(`/api/heaters/${id}/state`, { body: { state } });
+  return fetchJson<SavedHeater>(`/api/heaters/${id}/state`, { method: "POST", json: { state } });
 }
 
 export type ClaimAction = "claims" | "releases" | "built-in";
@@ -31,11 +31,12 @@ export type ClaimAction = "claims" | "releases" | "built-in";
 /** A ledger movement for the unit; a fresh Idempotency-Key per submit so a retried request never doubles. */
 export function postClaimAction(id: string, action: ClaimAction, quantity: number, key: string) {
   return fetchJson<{ movementId: string; claimed: number; builtIn: number }>(`/api/heaters/${id}/${action}`, {
-    body: { quantity },
+    method: "POST",
+    json: { quantity },
     headers: { "Idempotency-Key": key },
   });
 }
 
 export function moveClaimsTo(id: string, toHeaterId: string, quantity: number, key: string) {
-  return fetchJson<unknown>(`/api/heaters/${id}/claim-moves`, { body: { toHeaterId, quantity }, headers: { "Idempotency-Key": key } });
+  return fetchJson<unknown>(`/api/heaters/${id}/claim-moves`, { method: "POST", json: { toHeaterId, quantity }, headers: { "Idempotency-Key": key } });
 }

@@ -1,40 +1,37 @@
-/**
- * The one fetch wrapper of the browser side: sends JSON, and turns the API's
- * error JSON into an ApiError that forms can show (message and field errors).
- */
+// The one fetch wrapper for client components: the API's error JSON becomes
+// a thrown ApiError the UI can show (message, and fields next to inputs).
 export class ApiError extends Error {
   constructor(
     readonly status: number,
     readonly code: string,
     message: string,
-    readonly fields: Record<string, string> = {},
+    readonly fields?: Record<string, string>,
   ) {
     super(message);
     this.name = "ApiError";
   }
 }
 
-export async function fetchJson<T>(path: string, init: { method?: string; body?: unknown; headers?: Record<string, string> } = {}): Promise<T> {
-  let res: Response;
-  try {
-    res = await fetch(path, {
-      method: init.method ?? (init.body === undefined ? "GET" : "POST"),
-      headers: { ...(init.body === undefined ? {} : { "content-type": "application/json" }), ...init.headers },
-      body: init.body === undefined ? undefined : JSON.stringify(init.body),
-    });
-  } catch {
-    throw new ApiError(0, "network", "We could not reach Cantrove. Check your connection and try again.");
-  }
+export async function fetchJson<T>(url: string, init: RequestInit & { json?: unknown } = {}): Promise<T> {
+  const { json, headers, ...rest } = init;
+  const res = await fetch(url, {
+    ...rest,
+    headers: { ...(json !== undefined ? { "content-type": "application/json" } : {}), ...(headers as Record<string, string>) },
+    body: json !== undefined ? JSON.stringify(json) : rest.body,
+  });
   const text = await res.text();
-  let data: unknown = null;
-  try {
-    data = text ? JSON.parse(text) : null;
-  } catch {
-    data = null;
-  }
+  const body = text ? safeParse(text) : null;
   if (!res.ok) {
-    const error = (data as { error?: { code?: string; message?: string; fields?: Record<string, string> } } | null)?.error;
-    throw new ApiError(res.status, error?.code ?? "http_" + res.status, error?.message ?? `The server answered ${res.status}. Try again.`, error?.fields);
+    const e = (body as { error?: { code?: string; message?: string; fields?: Record<string, string> } } | null)?.error;
+    throw new ApiError(res.status, e?.code ?? "http_error", e?.message ?? `The server answered ${res.status}.`, e?.fields);
   }
-  return data as T;
+  return body as T;
+}
+
+function safeParse(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return { error: { code: "bad_response", message: "The server sent something unexpected. Try again." } };
+  }
 }
