@@ -11,7 +11,7 @@ export function DriveProgressLine({ drive }: { drive: DriveWithTarget }) {
         {target.heaters === 1 ? "heater" : "heaters"} + {formatNumber(target.spare)} spare ({formatNumber(drive.sparePercent, 1)} %).
       </p>
       <p className="font-semibold text-moss-deep" data-testid={`drive-covered-${drive.slug}`}>
-        {formatNumber(drive.goodCans)} good cans: good cans for {drive.covered} of {target.heaters} heaters.
+        Good cans for {drive.covered} of {target.heaters} {target.heaters === 1 ? "heater" : "heaters"} ({formatNumber(drive.goodCans)} counted).
       </p>
     </div>
   );
