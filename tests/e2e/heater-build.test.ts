@@ -59,6 +59,8 @@ describe("a builder plans, saves, claims, builds and prints a heater unit", () =
     expect(after.heaterCans).toBe(before.heaterCans + 132);
     expect(after.heaters).toBe(before.heaters + 1);
     expect(after.cans).toBe(after.heaterCans + Math.ceil(after.heaterCans * 0.05));
+    const covered = await page.getByTestId(`drive-covered-${f.demoDriveSlug}`).innerText();
+    expect(covered).toMatch(new RegExp(`^Good cans for \\d+ of ${after.heaters} heaters \\([\\d,]+ counted\\)\\.$`));
 
     // Claim the unit's cans, then record one column (12 cans) built in.
     await page.goto(unitUrl);
