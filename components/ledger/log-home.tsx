@@ -16,9 +16,9 @@ export interface LogDrive {
 }
 
 const TABS = [
-  { id: "haul", label: "Haul" },
-  { id: "sort", label: "Sort" },
-  { id: "process", label: "Process" },
+  { id: "haul", label: "Log a haul" },
+  { id: "sort", label: "Log a sort" },
+  { id: "process", label: "Log processing" },
 ] as const;
 
 export function LogHome({ drives, initialDriveId, initialDropPointId }: { drives: LogDrive[]; initialDriveId: string; initialDropPointId?: string }) {
@@ -56,7 +56,7 @@ export function LogHome({ drives, initialDriveId, initialDropPointId }: { drives
             onClick={() => setTab(t.id)}
             className={`min-h-12 rounded-lg border-2 font-semibold focus-visible:outline-3 focus-visible:outline-ember ${tab === t.id ? "border-ember bg-ember text-white" : "border-ink/30 bg-white"}`}
           >
-            Log a {t.label.toLowerCase()}
+            {t.label}
           </button>
         ))}
       </div>

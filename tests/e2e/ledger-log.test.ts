@@ -37,7 +37,7 @@ async function logSort(page: Page, good: number, rejects: Record<string, number>
 }
 
 async function logProcessing(page: Page, step: string, quantity: number) {
-  await page.getByRole("tab", { name: "Log a process" }).click();
+  await page.getByRole("tab", { name: "Log processing" }).click();
   await page.getByRole("radio", { name: step }).check({ force: true });
   await page.getByLabel("Cans in this batch", { exact: true }).fill(String(quantity));
   await page.getByRole("button", { name: "Record processing" }).click();
