@@ -30,12 +30,15 @@ export function QuantityAction({
 }) {
   const router = useRouter();
   const queryClient = useQueryClient();
-  const [text, setText] = useState(String(initial));
+  // Untouched, the field follows the server's suggestion as balances change.
+  const [typed, setTyped] = useState<string | null>(null);
+  const text = typed ?? String(initial);
   const [done, setDone] = useState<string | null>(null);
   const action = useMutation({
     mutationFn: (quantity: number) => run(quantity, crypto.randomUUID()),
     onSuccess: async (_data, quantity) => {
       setDone(`${submitLabel}: ${quantity} cans recorded.`);
+      setTyped(null);
       await queryClient.invalidateQueries({ queryKey: heaterKeys.all });
       router.refresh();
     },
@@ -52,7 +55,7 @@ export function QuantityAction({
       }}
     >
       {children}
-      <Field id={id} label={label} hint={hint} inputMode="numeric" value={text} error={fieldError} onChange={(e) => setText(e.target.value)} />
+      <Field id={id} label={label} hint={hint} inputMode="numeric" value={text} error={fieldError} onChange={(e) => setTyped(e.target.value)} />
       <FormError message={action.error && !fieldError ? action.error.message : null} />
       {done ? (
         <p role="status" className="text-sm font-semibold text-moss-deep">
