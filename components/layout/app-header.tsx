@@ -9,6 +9,7 @@ const NAV: Record<Role, { href: string; label: string }[]> = {
     { href: "/dashboard", label: "Dashboard" },
     { href: "/ledger", label: "Ledger" },
     { href: "/log", label: "Log" },
+    { href: "/units", label: "Heater units" },
     { href: "/members", label: "Members" },
     { href: "/mail", label: "Sent mail" },
   ],

@@ -1,9 +1,183 @@
 import "server-only";
+import type { Knex } from "knex";
 import { db } from "@/lib/db";
+import { notFound, AppError } from "@/lib/api/errors";
+import { computeCanGrid } from "./can-grid";
+import type { CanGridInput, LengthUnit } from "./schemas";
+import type { HeaterState } from "./unit-schemas";
 
+// Every query takes the acting group and filters by it in SQL: another
+// group's unit is simply not found.
+
+export interface HeaterUnitRow {
+  id: string;
+  name: string;
+  driveId: string | null;
+  driveName: string | null;
+  driveSlug: string | null;
+  builderName: string | null;
+  unit: LengthUnit;
+  coverage: "chamber" | "full";
+  glazingWidth: number;
+  glazingHeight: number;
+  manifoldHeight: number | null;
+  canDiameter: number | null;
+  canLength: number | null;
+  edgeClearance: number | null;
+  holesPerCan: number;
+  frameAllowanceWidth: number | null;
+  frameAllowanceHeight: number | null;
+  columns: number;
+  rows: number;
+  cans: number;
+  state: HeaterState;
+  notes: string;
+  createdAt: string;
+  stateChangedAt: string;
+}
+
+function unitColumns(q: Knex.QueryBuilder) {
+  return q
+    .leftJoin("drives as d", function () {
+      this.on("d.id", "=", "h.drive_id").andOn("d.group_id", "=", "h.group_id");
+    })
+    .leftJoin("users as u", "u.id", "h.builder_id")
+    .select(
+      "h.id",
+      "h.name",
+      "h.drive_id as driveId",
+      "d.name as driveName",
+      "d.slug as driveSlug",
+      "u.name as builderName",
+      "h.unit",
+      "h.coverage",
+      "h.glazing_width as glazingWidth",
+      "h.glazing_height as glazingHeight",
+      "h.manifold_height as manifoldHeight",
+      "h.can_diameter as canDiameter",
+      "h.can_length as canLength",
+      "h.edge_clearance as edgeClearance",
+      "h.holes_per_can as holesPerCan",
+      "h.frame_allowance_width as frameAllowanceWidth",
+      "h.frame_allowance_height as frameAllowanceHeight",
+      "h.columns",
+      "h.rows",
+      "h.cans",
+      "h.state",
+      "h.notes",
+      "h.created_at as createdAt",
+      "h.state_changed_at as stateChangedAt",
+    );
+}
+
+export async function listHeaterUnits(groupId: string, driveId?: string): Promise<HeaterUnitRow[]> {
+  return unitColumns(db("heater_units as h"))
+    .where("h.group_id", groupId)
+    .modify((q) => {
+      if (driveId) q.andWhere("h.drive_id", driveId);
+    })
+    .orderBy([{ column: "h.created_at" }, { column: "h.name" }]);
+}
+
+/** Kept for callers of the first version of this module. */
 export async function listHeaterUnitsSummary(groupId: string) {
-  return db("heater_units")
-    .select("id", "name", "cans", "columns", "rows", "state", "drive_id as driveId")
+  return listHeaterUnits(groupId);
+}
+
+export async function getHeaterUnit(groupId: string, id: string): Promise<HeaterUnitRow> {
+  if (!isUuid(id)) throw notFound("That heater unit");
+  const row = await unitColumns(db("heater_units as h")).where({ "h.group_id": groupId, "h.id": id }).first();
+  if (!row) throw notFound("That heater unit");
+  return row;
+}
+
+/** The plan as the can-grid computation takes it, nulls left to the defaults. */
+export function planOf(u: HeaterUnitRow): CanGridInput {
+  const opt = (v: number | null) => (v === null ? undefined : v);
+  return {
+    glazingWidth: u.glazingWidth,
+    glazingHeight: u.glazingHeight,
+    unit: u.unit,
+    coverage: u.coverage,
+    manifoldHeight: opt(u.manifoldHeight),
+    canDiameter: opt(u.canDiameter),
+    canLength: opt(u.canLength),
+    edgeClearance: opt(u.edgeClearance),
+    holesPerCan: u.holesPerCan,
+    frameAllowanceWidth: opt(u.frameAllowanceWidth),
+    frameAllowanceHeight: opt(u.frameAllowanceHeight),
+  };
+}
+
+export async function listGroupDrives(groupId: string) {
+  return db("drives")
+    .select("id", "name", "slug", db.raw("spare_percent::float as \"sparePercent\""))
     .where({ group_id: groupId })
-    .orderBy("created_at");
+    .orderBy([{ column: "starts_on", order: "desc" }, { column: "name" }]);
+}
+
+export async function createHeaterUnit(
+  actor: { groupId: string; userId: string },
+  input: { name: string; driveId: string; notes?: string; plan: Required<CanGridInput> },
+) {
+  const drive = await db("drives").select("id").where({ id: input.driveId, group_id: actor.groupId }).first();
+  if (!drive) {
+    throw new AppError("not_found", "That drive was not found in your group.", {
+      fields: { driveId: "Choose one of your group's drives" },
+    });
+  }
+  // The counts are computed here, never taken from the client.
+  const grid = computeCanGrid(input.plan);
+  const p = input.plan;
+  const [row] = await db("heater_units")
+    .insert({
+      group_id: actor.groupId,
+      drive_id: drive.id,
+      builder_id: actor.userId,
+      name: input.name,
+      unit: p.unit,
+      coverage: p.coverage,
+      glazing_width: p.glazingWidth,
+      glazing_height: p.glazingHeight,
+      manifold_height: p.manifoldHeight,
+      can_diameter: p.canDiameter,
+      can_length: p.canLength,
+      edge_clearance: p.edgeClearance,
+      holes_per_can: p.holesPerCan,
+      frame_allowance_width: p.frameAllowanceWidth,
+      frame_allowance_height: p.frameAllowanceHeight,
+      columns: grid.columns,
+      rows: grid.rows,
+      cans: grid.cans,
+      notes: input.notes ?? "",
+    })
+    .returning(["id"]);
+  return getHeaterUnit(actor.groupId, row.id);
+}
+
+/** Moves the state under a row lock so two people moving it at once cannot skip the rule. */
+export async function moveHeaterState(
+  groupId: string,
+  id: string,
+  to: HeaterState,
+  check: (from: HeaterState) => { ok: true } | { ok: false; reason: string },
+) {
+  if (!isUuid(id)) throw notFound("That heater unit");
+  await db.transaction(async (trx) => {
+    const row = await trx("heater_units").select("state").where({ id, group_id: groupId }).forUpdate().first();
+    if (!row) throw notFound("That heater unit");
+    const verdict = check(row.state);
+    if (!verdict.ok) throw new AppError("conflict", verdict.reason, { details: { state: row.state } });
+    await trx("heater_units").where({ id, group_id: groupId }).update({ state: to, state_changed_at: trx.fn.now() });
+  });
+  return getHeaterUnit(groupId, id);
+}
+
+function isUuid(id: string): boolean {
+  return /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id);
+}
+
+export async function groupLatitude(groupId: string): Promise<number | null> {
+  const row = await db("groups").select("workshop_lat").where({ id: groupId }).first();
+  return row?.workshop_lat ?? null;
 }

@@ -1,36 +1,62 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { Card, EmptyState } from "@/components/ui/card";
 import { ButtonLink } from "@/components/ui/button";
+import { DriveProgressLine } from "@/components/heaters/drive-progress-line";
+import { StateBadge } from "@/components/heaters/state-badge";
 import { requirePageRole } from "@/lib/auth/session";
-import { listHeaterUnitsSummary } from "@/lib/heaters/queries";
+import { listDriveTargets } from "@/lib/heaters/drive-targets";
+import { formatNumber } from "@/lib/heaters/format";
+import { listHeaterUnits } from "@/lib/heaters/queries";
+import { heaterClaims } from "@/lib/ledger/balances";
 
-export const metadata: Metadata = { title: "My heater units" };
+export const metadata: Metadata = { title: "Heater units" };
 
 export default async function UnitsPage() {
   const actor = await requirePageRole("/units", "builder", "organiser");
-  const units = await listHeaterUnitsSummary(actor.group.id);
+  const [units, drives, claims] = await Promise.all([
+    listHeaterUnits(actor.group.id),
+    listDriveTargets(actor.group.id),
+    heaterClaims(actor.group.id),
+  ]);
   return (
     <main className="flex flex-col gap-6">
       <div className="flex flex-wrap items-center justify-between gap-3">
         <h1 className="text-3xl">Heater units</h1>
         <ButtonLink href="/plan">Plan a unit</ButtonLink>
       </div>
-      <Card>
-        {units.length === 0 ? (
+      {units.length === 0 ? (
+        <Card>
           <EmptyState title="No heater units yet">Plan one from its glazing sheet to see how many cans it needs.</EmptyState>
-        ) : (
-          <ul className="divide-y divide-paper-edge">
-            {units.map((u) => (
-              <li key={u.id} className="flex flex-wrap justify-between gap-2 py-3">
-                <span className="font-semibold">{u.name}</span>
-                <span className="text-ink-faint">
-                  {u.columns} × {u.rows} = {u.cans} cans · {u.state}
-                </span>
-              </li>
-            ))}
-          </ul>
-        )}
-      </Card>
+        </Card>
+      ) : null}
+      {drives
+        .filter((d) => d.unitCans.length > 0)
+        .map((d) => (
+          <Card key={d.id} title={d.name}>
+            <div className="mb-3">
+              <DriveProgressLine drive={d} />
+            </div>
+            <ul className="divide-y divide-paper-edge">
+              {units
+                .filter((u) => u.driveId === d.id)
+                .map((u) => (
+                  <li key={u.id} className="flex flex-wrap items-center justify-between gap-2 py-3">
+                    <Link href={`/units/${u.id}`} className="font-semibold">
+                      {u.name}
+                    </Link>
+                    <span className="flex flex-wrap items-center gap-3 text-ink-soft">
+                      <span>
+                        {u.columns} × {u.rows} = {formatNumber(u.cans)} cans · {formatNumber(claims[u.id]?.claimed ?? 0)} claimed ·{" "}
+                        {formatNumber(claims[u.id]?.builtIn ?? 0)} built in
+                      </span>
+                      <StateBadge state={u.state} />
+                    </span>
+                  </li>
+                ))}
+            </ul>
+          </Card>
+        ))}
     </main>
   );
 }

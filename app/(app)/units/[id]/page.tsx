@@ -1,0 +1,104 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { Card } from "@/components/ui/card";
+import { ButtonLink } from "@/components/ui/button";
+import { GridFigures } from "@/components/heaters/grid-figures";
+import { GridPreview } from "@/components/heaters/grid-preview";
+import { ClaimsPanel } from "@/components/heaters/claims-panel";
+import { DriveProgressLine } from "@/components/heaters/drive-progress-line";
+import { StateBadge } from "@/components/heaters/state-badge";
+import { StateMover } from "@/components/heaters/state-mover";
+import { AppError } from "@/lib/api/errors";
+import { requirePageRole } from "@/lib/auth/session";
+import { computeCanGrid } from "@/lib/heaters/can-grid";
+import { listDriveTargets } from "@/lib/heaters/drive-targets";
+import { formatLength } from "@/lib/heaters/format";
+import { getHeaterUnit, listHeaterUnits, planOf } from "@/lib/heaters/queries";
+import { driveStock, heaterClaims } from "@/lib/ledger/balances";
+import { resolveCanGridInput } from "@/lib/heaters/schemas";
+import { allowedMoves } from "@/lib/heaters/states";
+
+export const metadata: Metadata = { title: "Heater unit" };
+
+type Props = { params: Promise<{ id: string }> };
+
+export default async function UnitPage({ params }: Props) {
+  const { id } = await params;
+  const actor = await requirePageRole(`/units/${id}`, "builder", "organiser");
+  const unit = await getHeaterUnit(actor.group.id, id).catch((e) => {
+    if (e instanceof AppError && e.code === "not_found") notFound();
+    throw e;
+  });
+  const plan = planOf(unit);
+  const grid = computeCanGrid(plan);
+  const [drive] = unit.driveId ? await listDriveTargets(actor.group.id, unit.driveId) : [];
+  const [claims, stock, siblings] = unit.driveId
+    ? await Promise.all([heaterClaims(actor.group.id, unit.driveId), driveStock(actor.group.id, unit.driveId), listHeaterUnits(actor.group.id, unit.driveId)])
+    : [null, null, []];
+  return (
+    <main className="flex flex-col gap-5">
+      <p>
+        <Link href="/units">← All heater units</Link>
+      </p>
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <div>
+          <h1 className="text-3xl">{unit.name}</h1>
+          <p className="mt-1 flex flex-wrap items-center gap-2 text-ink-soft">
+            <StateBadge state={unit.state} />
+            {unit.driveName ? <span>Counted against {unit.driveName}</span> : <span>Not counted against a drive</span>}
+            {unit.builderName ? <span>· planned by {unit.builderName}</span> : null}
+          </p>
+        </div>
+        <ButtonLink href={`/units/${unit.id}/sheet`} variant="secondary">
+          Build sheet
+        </ButtonLink>
+      </div>
+
+      <Card title="State">
+        <StateMover id={unit.id} state={unit.state} moves={allowedMoves(unit.state, actor.role)} />
+        <p className="mt-2 text-sm text-ink-faint">
+          Units move forward: planned → gathering cans → being built → on the wall. Only an organiser can step one back.
+        </p>
+      </Card>
+
+      {drive ? (
+        <Card title="The drive">
+          <p className="mb-1 font-semibold">{drive.name}</p>
+          <DriveProgressLine drive={drive} />
+        </Card>
+      ) : null}
+
+      {claims && stock ? (
+        <Card title="Cans for this unit">
+          <ClaimsPanel
+            v={{
+              unitId: unit.id,
+              cans: unit.cans,
+              rows: unit.rows,
+              claimed: claims[unit.id]?.claimed ?? 0,
+              builtIn: claims[unit.id]?.builtIn ?? 0,
+              driveUnclaimed: stock.unclaimed,
+              drivePunched: stock.stages.punched,
+              installed: unit.state === "installed",
+              isOrganiser: actor.role === "organiser",
+              otherUnits: siblings.filter((u) => u.id !== unit.id && u.state !== "installed").map((u) => ({ id: u.id, name: u.name })),
+            }}
+          />
+          <p className="mt-3 text-sm text-ink-faint">Cut and punched cans are sharp: handle them with gloves.</p>
+        </Card>
+      ) : null}
+
+      <Card title="Can grid">
+        <p className="mb-3 text-ink-soft">
+          Glazing {formatLength(unit.glazingWidth, unit.unit)} × {formatLength(unit.glazingHeight, unit.unit)}, covering{" "}
+          {unit.coverage === "full" ? "the chamber and both manifolds" : "the can chamber only"}.
+        </p>
+        <div className="grid gap-4 md:grid-cols-[1fr_18rem]">
+          <GridFigures grid={grid} />
+          <GridPreview plan={resolveCanGridInput(plan)} grid={grid} title={`${unit.name}: ${grid.columns} by ${grid.rows} cans`} />
+        </div>
+      </Card>
+    </main>
+  );
+}

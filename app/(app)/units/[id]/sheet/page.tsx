@@ -1,0 +1,81 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { GridFigures } from "@/components/heaters/grid-figures";
+import { GridPreview } from "@/components/heaters/grid-preview";
+import { MaterialsTable } from "@/components/heaters/materials-table";
+import { PrintButton } from "@/components/heaters/print-button";
+import { AppError } from "@/lib/api/errors";
+import { requirePageRole } from "@/lib/auth/session";
+import { buildSteps } from "@/lib/heaters/build-steps";
+import { computeCanGrid } from "@/lib/heaters/can-grid";
+import { formatLength } from "@/lib/heaters/format";
+import { computeMaterials } from "@/lib/heaters/materials";
+import { getHeaterUnit, planOf } from "@/lib/heaters/queries";
+import { resolveCanGridInput } from "@/lib/heaters/schemas";
+import { HEATER_STATE_LABEL } from "@/lib/heaters/unit-schemas";
+
+export const metadata: Metadata = { title: "Build sheet" };
+
+type Props = { params: Promise<{ id: string }> };
+
+export default async function BuildSheetPage({ params }: Props) {
+  const { id } = await params;
+  const actor = await requirePageRole(`/units/${id}/sheet`, "builder", "organiser");
+  const unit = await getHeaterUnit(actor.group.id, id).catch((e) => {
+    if (e instanceof AppError && e.code === "not_found") notFound();
+    throw e;
+  });
+  const plan = planOf(unit);
+  const resolved = resolveCanGridInput(plan);
+  const grid = computeCanGrid(plan);
+  const materials = computeMaterials(plan);
+  const steps = buildSteps({ ...grid, holesPerCan: resolved.holesPerCan });
+  return (
+    <main className="build-sheet flex flex-col gap-5 print:gap-3">
+      <div className="no-print flex flex-wrap items-center justify-between gap-3">
+        <Link href={`/units/${unit.id}`}>← Back to the unit</Link>
+        <PrintButton />
+      </div>
+      <header>
+        <h1 className="text-3xl">Build sheet: {unit.name}</h1>
+        <p className="text-ink-soft">
+          {actor.group.name}
+          {unit.driveName ? ` · ${unit.driveName}` : ""} · {HEATER_STATE_LABEL[unit.state]} · glazing {formatLength(unit.glazingWidth, unit.unit)} ×{" "}
+          {formatLength(unit.glazingHeight, unit.unit)} ({unit.coverage === "full" ? "chamber and manifolds" : "chamber only"})
+        </p>
+      </header>
+
+      <section className="break-inside-avoid">
+        <h2 className="mb-2 text-xl">Can grid</h2>
+        <div className="grid gap-4 md:grid-cols-[1fr_14rem] print:grid-cols-[1fr_12rem]">
+          <GridFigures grid={grid} />
+          <GridPreview plan={resolved} grid={grid} title={`${grid.columns} by ${grid.rows} cans`} />
+        </div>
+      </section>
+
+      <section className="break-inside-avoid">
+        <h2 className="mb-2 text-xl">Materials</h2>
+        <MaterialsTable list={materials} />
+      </section>
+
+      <section>
+        <h2 className="mb-2 text-xl">Build steps</h2>
+        <ol className="flex list-decimal flex-col gap-3 pl-6">
+          {steps.map((s) => (
+            <li key={s.title} className="break-inside-avoid">
+              <p className="font-bold">{s.title}</p>
+              <p>{s.text}</p>
+              {s.caution ? (
+                <p className="mt-1 border-l-4 border-sun bg-sun-soft px-3 py-1 font-semibold">Caution: {s.caution}</p>
+              ) : null}
+            </li>
+          ))}
+        </ol>
+      </section>
+      <p className="text-sm text-ink-faint">
+        The heat figures of the planner are estimates. Local building codes and licensed trades have the last word on wiring and wall openings.
+      </p>
+    </main>
+  );
+}

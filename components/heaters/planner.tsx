@@ -1,0 +1,116 @@
+"use client";
+
+import { useState } from "react";
+import { Card } from "@/components/ui/card";
+import { Notice } from "@/components/ui/notice";
+import type { FieldErrors } from "@/lib/api/errors";
+import { areaToM2 } from "@/lib/heaters/format";
+import { resolveCanGridInput, type LengthUnit } from "@/lib/heaters/schemas";
+import { GlazingComparison } from "./glazing-comparison";
+import { GlazingOptionsFields } from "./glazing-options-fields";
+import { GridFigures } from "./grid-figures";
+import { GridPreview } from "./grid-preview";
+import { HeatPanel } from "./heat-panel";
+import { MaterialsPanel } from "./materials-panel";
+import { convertText, evaluate, INITIAL_OPTIONS, INITIAL_SETTINGS, SETTING_FIELDS, type PlanSettings } from "./plan-form-state";
+import { PlanSettingsFields } from "./plan-settings-fields";
+import { SavePlan, type DriveChoice } from "./save-plan";
+
+/**
+ * The heater planner. Everything is computed in the browser with the same
+ * pure functions the API uses, so the page and /api/plan/* always agree.
+ */
+export function Planner({ drives, canSave, latitude, today }: { drives: DriveChoice[] | null; canSave: boolean; latitude: number; today: string }) {
+  const [settings, setSettings] = useState<PlanSettings>(INITIAL_SETTINGS);
+  const [options, setOptions] = useState(INITIAL_OPTIONS);
+  const [selected, setSelected] = useState(0);
+  const chosen = Math.min(selected, options.length - 1);
+  const results = options.map((o) => evaluate(settings, o));
+  const current = results[chosen];
+  const settingErrors: FieldErrors = {};
+  for (const r of results) if (!r.ok) for (const [k, v] of Object.entries(r.errors)) if (!k.startsWith("glazing")) settingErrors[k] ??= v;
+  const label = options[chosen].label || `Sheet ${chosen + 1}`;
+
+  function setUnit(unit: LengthUnit) {
+    if (unit === settings.unit) return;
+    const next = { ...settings, unit };
+    for (const key of SETTING_FIELDS) next[key] = convertText(settings[key], settings.unit, unit);
+    setSettings(next);
+    setOptions(options.map((o) => ({ ...o, width: convertText(o.width, settings.unit, unit), height: convertText(o.height, settings.unit, unit) })));
+  }
+
+  return (
+    <div className="flex flex-col gap-5">
+      <Card title="1. Glazing sheets">
+        <fieldset className="mb-3 flex flex-wrap items-center gap-4">
+          <legend className="mb-1 font-semibold">Measure in</legend>
+          {(["in", "mm"] as const).map((u) => (
+            <label key={u} className="flex min-h-11 items-center gap-2">
+              <input type="radio" name="unit" value={u} checked={settings.unit === u} onChange={() => setUnit(u)} className="h-5 w-5" />
+              {u === "in" ? "Inches" : "Millimetres"}
+            </label>
+          ))}
+        </fieldset>
+        <GlazingOptionsFields
+          options={options}
+          errors={results.map((r) => (r.ok ? {} : r.errors))}
+          unit={settings.unit}
+          selected={chosen}
+          onChange={setOptions}
+          onSelect={setSelected}
+        />
+      </Card>
+
+      <Card title="2. Cans, manifolds and frame">
+        <PlanSettingsFields settings={settings} errors={settingErrors} onChange={setSettings} />
+      </Card>
+
+      <Card title={`3. The can grid for ${label}`}>
+        {current.ok ? (
+          <div className="grid gap-4 md:grid-cols-[1fr_18rem]">
+            <div aria-live="polite">
+              <GridFigures grid={current.grid} />
+            </div>
+            <GridPreview plan={resolveCanGridInput(current.input)} grid={current.grid} title={`${label}: ${current.grid.columns} by ${current.grid.rows} cans`} />
+          </div>
+        ) : (
+          <p className="text-ink-soft">Fix the highlighted fields above to see the grid; nothing you typed is lost.</p>
+        )}
+      </Card>
+
+      <Card title="4. Compare the sheets">
+        <GlazingComparison
+          options={results.flatMap((r, i) => (r.ok ? [{ label: options[i].label || `Sheet ${i + 1}`, input: r.input }] : []))}
+        />
+      </Card>
+
+      {current.ok ? (
+        <>
+          <Card title="5. Heat estimate">
+            <HeatPanel apertureAreaM2={areaToM2(current.grid.apertureArea, current.grid.unit)} latitude={latitude} today={today} />
+          </Card>
+          <Card title="6. Materials and cost">
+            <MaterialsPanel input={current.input} />
+          </Card>
+        </>
+      ) : null}
+
+      <Card title="7. Save as a heater unit">
+        {canSave && drives ? (
+          <SavePlan input={current.input} drives={drives} planLabel={label} disabled={!current.ok} />
+        ) : (
+          <p className="text-ink-soft">
+            Builders and organisers of a group can save this plan as a heater unit of a drive. <a href="/signin?next=/plan">Sign in</a> to save it;
+            the planner itself works without an account.
+          </p>
+        )}
+      </Card>
+
+      <Notice tone="caution" title="Before you build">
+        Cut cans and punched holes are sharp: wear gloves. Wear eye and hearing protection when grinding or punching. Use adhesives and
+        high-temperature paint with good ventilation. Fit an over-temperature switch and a backdraft damper. Mains wiring is for a licensed
+        electrician, and a wall opening must follow your local building code.
+      </Notice>
+    </div>
+  );
+}

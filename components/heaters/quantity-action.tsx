@@ -1,0 +1,70 @@
+"use client";
+
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useRouter } from "next/navigation";
+import { useState, type ReactNode } from "react";
+import { Button } from "@/components/ui/button";
+import { Field, FormError } from "@/components/ui/field";
+import { ApiError } from "@/lib/api/fetch-json";
+import { heaterKeys } from "@/hooks/queries/heaters";
+
+/** A small form: how many cans, one button; the server's 409 or 422 shows next to it. */
+export function QuantityAction({
+  id,
+  label,
+  hint,
+  initial,
+  submitLabel,
+  variant = "primary",
+  run,
+  children,
+}: {
+  id: string;
+  label: string;
+  hint?: ReactNode;
+  initial: number;
+  submitLabel: string;
+  variant?: "primary" | "secondary";
+  run: (quantity: number, key: string) => Promise<unknown>;
+  children?: ReactNode;
+}) {
+  const router = useRouter();
+  const queryClient = useQueryClient();
+  // Untouched, the field follows the server's suggestion as balances change.
+  const [typed, setTyped] = useState<string | null>(null);
+  const text = typed ?? String(initial);
+  const [done, setDone] = useState<string | null>(null);
+  const action = useMutation({
+    mutationFn: (quantity: number) => run(quantity, crypto.randomUUID()),
+    onSuccess: async (_data, quantity) => {
+      setDone(`${submitLabel}: ${quantity} cans recorded.`);
+      setTyped(null);
+      await queryClient.invalidateQueries({ queryKey: heaterKeys.all });
+      router.refresh();
+    },
+  });
+  const fieldError = action.error instanceof ApiError ? action.error.fields?.quantity : undefined;
+  return (
+    <form
+      className="flex flex-col gap-1"
+      noValidate
+      onSubmit={(e) => {
+        e.preventDefault();
+        setDone(null);
+        action.mutate(Number(text));
+      }}
+    >
+      {children}
+      <Field id={id} label={label} hint={hint} inputMode="numeric" value={text} error={fieldError} onChange={(e) => setTyped(e.target.value)} />
+      <FormError message={action.error && !fieldError ? action.error.message : null} />
+      {done ? (
+        <p role="status" className="text-sm font-semibold text-moss-deep">
+          {done}
+        </p>
+      ) : null}
+      <Button type="submit" variant={variant} disabled={action.isPending} className="self-start">
+        {action.isPending ? "Saving…" : submitLabel}
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,69 @@
+"use client";
+
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { Field, FormError } from "@/components/ui/field";
+import { ApiError } from "@/lib/api/fetch-json";
+import type { CanGridInput } from "@/lib/heaters/schemas";
+import { createHeater, heaterKeys } from "@/hooks/queries/heaters";
+
+export interface DriveChoice {
+  id: string;
+  name: string;
+}
+
+/** Saves the chosen plan as a heater unit counted against one of the group's drives. */
+export function SavePlan({ input, drives, planLabel, disabled }: { input: CanGridInput; drives: DriveChoice[]; planLabel: string; disabled: boolean }) {
+  const router = useRouter();
+  const queryClient = useQueryClient();
+  const [name, setName] = useState("");
+  const [driveId, setDriveId] = useState(drives[0]?.id ?? "");
+  const save = useMutation({
+    mutationFn: () => createHeater({ name, driveId, plan: input }),
+    onSuccess: async (unit) => {
+      await queryClient.invalidateQueries({ queryKey: heaterKeys.all });
+      router.push(`/units/${unit.id}`);
+    },
+  });
+  const fields = save.error instanceof ApiError ? (save.error.fields ?? {}) : {};
+  if (drives.length === 0) {
+    return <p className="text-ink-soft">Your group has no drive yet. An organiser sets one up first; then save the plan to it.</p>;
+  }
+  return (
+    <form
+      className="flex flex-col gap-2"
+      noValidate
+      onSubmit={(e) => {
+        e.preventDefault();
+        save.mutate();
+      }}
+    >
+      <FormError message={save.error ? (Object.keys(fields).length ? "Some fields need another look." : save.error.message) : null} />
+      <p className="text-ink-soft">Saves {planLabel} with the settings above.</p>
+      <Field id="unit-name" label="Unit name" hint="The room or building it will warm" value={name} error={fields.name} onChange={(e) => setName(e.target.value)} required />
+      <div className="flex flex-col gap-1">
+        <label htmlFor="unit-drive" className="font-semibold">Count it against the drive</label>
+        <select
+          id="unit-drive"
+          value={driveId}
+          onChange={(e) => setDriveId(e.target.value)}
+          aria-describedby="unit-drive-error"
+          className="min-h-11 rounded-lg border-2 border-ink/40 bg-white px-3"
+        >
+          {drives.map((d) => (
+            <option key={d.id} value={d.id}>{d.name}</option>
+          ))}
+        </select>
+        <p id="unit-drive-error" aria-live="polite" className="text-sm font-semibold text-alarm">{fields.driveId ?? ""}</p>
+      </div>
+      {Object.entries(fields)
+        .filter(([k]) => k.startsWith("plan."))
+        .map(([k, v]) => (
+          <p key={k} className="text-sm font-semibold text-alarm">{v}</p>
+        ))}
+      <Button type="submit" disabled={disabled || save.isPending}>{save.isPending ? "Saving…" : "Save as a heater unit"}</Button>
+    </form>
+  );
+}

@@ -1,0 +1,102 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser, Page } from "playwright-core";
+import { launchBrowser, newPage, signInAs } from "@/tests/support/browser";
+import { DEMO } from "@/tests/support/env";
+import { demoFixture, type DemoFixture } from "@/tests/support/fixtures";
+import { closeTestDb } from "@/tests/support/db";
+import { pdfText } from "@/tests/support/pdf-text";
+
+// A builder's journey: plan a unit from a 30 × 60 in sheet, save it to the
+// demo drive, see the drive's target grow, claim cans, record part of the
+// build, and print the build sheet.
+let browser: Browser;
+let page: Page;
+let f: DemoFixture;
+
+beforeAll(async () => {
+  f = await demoFixture();
+  browser = await launchBrowser();
+  ({ page } = await newPage(browser));
+});
+afterAll(async () => {
+  await browser?.close();
+  await closeTestDb();
+});
+
+/** Page object for the drive's line on /units: "Target X cans: Y for N heaters + S spare". */
+async function driveTarget(): Promise<{ cans: number; heaterCans: number; heaters: number }> {
+  await page.goto("/units");
+  const text = await page.getByTestId(`drive-target-${f.demoDriveSlug}`).innerText();
+  const m = /Target ([\d,]+) cans: ([\d,]+) for (\d+) heaters?/.exec(text);
+  if (!m) throw new Error(`unexpected target line: ${text}`);
+  const n = (s: string) => Number(s.replace(/,/g, ""));
+  return { cans: n(m[1]), heaterCans: n(m[2]), heaters: n(m[3]) };
+}
+
+const figure = (id: string) => page.locator(`[data-figure="${id}"]`).first().innerText();
+
+describe("a builder plans, saves, claims, builds and prints a heater unit", () => {
+  it("works end to end", async () => {
+    await signInAs(page, DEMO.builder);
+    const before = await driveTarget();
+
+    await page.goto("/plan");
+    await page.locator("#sheet-1-width").fill("30");
+    await page.locator("#sheet-1-height").fill("60");
+    // Common practice, no published source: 11 × 12 = 132 cans and 528 holes.
+    expect(await figure("cans")).toBe("132");
+    expect(await figure("holes")).toBe("528");
+    const name = `Journey unit ${Date.now()}`;
+    await page.getByLabel("Unit name").fill(name);
+    await page.getByLabel("Count it against the drive").selectOption({ value: f.demoDriveId });
+    await page.getByRole("button", { name: "Save as a heater unit" }).click();
+    await page.waitForURL(/\/units\/[0-9a-f-]{36}$/, { timeout: 20_000 });
+    const unitUrl = new URL(page.url()).pathname;
+    await expect(page.getByRole("heading", { name }).isVisible()).resolves.toBe(true);
+
+    // Target = Σ unit cans + ⌈5 %⌉ spare (PRODUCT.md computation 2).
+    const after = await driveTarget();
+    expect(after.heaterCans).toBe(before.heaterCans + 132);
+    expect(after.heaters).toBe(before.heaters + 1);
+    expect(after.cans).toBe(after.heaterCans + Math.ceil(after.heaterCans * 0.05));
+    const covered = await page.getByTestId(`drive-covered-${f.demoDriveSlug}`).innerText();
+    expect(covered).toMatch(new RegExp(`^Good cans for \\d+ of ${after.heaters} heaters \\([\\d,]+ counted\\)\\.$`));
+
+    // Claim the unit's cans, then record one column (12 cans) built in.
+    await page.goto(unitUrl);
+    await page.getByLabel("Claim cans").fill("132");
+    await page.getByRole("button", { name: "Claim", exact: true }).click();
+    await page.getByRole("status").filter({ hasText: "Claim: 132 cans recorded" }).waitFor();
+    await page.waitForFunction(() => document.querySelector('[data-figure="claimed"]')?.textContent === "132");
+    await page.getByLabel("Record cans built in").fill("12");
+    await page.getByRole("button", { name: "Record built in" }).click();
+    await page.waitForFunction(() => document.querySelector('[data-figure="built-in"]')?.textContent === "12 of 132");
+    expect(await figure("claimed")).toBe("120");
+    expect(await page.locator("[data-state]").first().getAttribute("data-state")).toBe("building");
+
+    // The build sheet, printed to PDF by the browser.
+    await page.goto(`${unitUrl}/sheet`);
+    await page.getByRole("heading", { name: `Build sheet: ${name}` }).waitFor();
+    const screenText = await page.locator("main").innerText();
+    expect(screenText).toContain("528");
+    const pdf = await page.pdf({ format: "A4", printBackground: true });
+    expect(Buffer.from(pdf.subarray(0, 5)).toString()).toBe("%PDF-");
+    const text = (await pdfText(new Uint8Array(pdf))).replace(/\s+/g, " ");
+    expect(text).toContain(`Build sheet: ${name}`);
+    for (const count of ["132", "528", "11", "12"]) expect(text).toContain(count);
+    expect(text).toContain("Punch 4 holes in each can bottom — 528 holes in all");
+    expect(text).not.toContain("Print this sheet");
+    for (const caution of [
+      "gloves",
+      "eye protection and hearing protection",
+      "well-ventilated",
+      "high-temperature matt black paint",
+      "over-temperature switch",
+      "backdraft damper",
+      "licensed electrician",
+      "local building code",
+    ]) {
+      expect(text).toContain(caution);
+    }
+  });
+});
