@@ -9,7 +9,7 @@ export const membersPage = {
   async invite(page: Page, email: string, role: "organiser" | "volunteer" | "builder") {
     await page.getByLabel("Their e-mail").fill(email);
     await page.getByLabel("Role", { exact: true }).selectOption(role);
-    await page.getByRole("button", { name: "Send invitation" }).click();
+    await page.getByRole("button", { name: "Send invitation", exact: true }).click();
     await page.getByText(`Invitation sent to ${email}`).waitFor();
   },
   openInvitations(page: Page) {
