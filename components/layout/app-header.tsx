@@ -6,6 +6,7 @@ import { ROLE_LABEL, type Role } from "@/lib/auth/roles";
 const NAV: Record<Role, { href: string; label: string }[]> = {
   organiser: [
     { href: "/dashboard", label: "Dashboard" },
+    { href: "/organise/drives", label: "Drives" },
     { href: "/mail", label: "Sent mail" },
   ],
   volunteer: [{ href: "/log", label: "Log" }],

@@ -87,7 +87,7 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
               <div className="mt-2 flex gap-2 overflow-x-auto">
                 {p.photos.map((url) => (
                   // eslint-disable-next-line @next/next/no-img-element
-                  <img key={url} src={url} alt={`Photo of the bin at ${p.name}`} className="h-28 w-auto rounded-lg border border-paper-edge" loading="lazy" />
+                  <img key={url} src={url} alt={`Photo of the bin at ${p.name}`} className="h-28 w-auto rounded-lg border border-paper-edge" />
                 ))}
               </div>
             ) : null}
