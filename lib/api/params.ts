@@ -1,0 +1,12 @@
+import { notFound } from "./errors";
+
+export type IdContext = { params: Promise<{ id: string }> };
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** The route's `[id]`; anything that is not a UUID cannot name a record, so it is 404. */
+export async function uuidParam(ctx: IdContext, what = "That record"): Promise<string> {
+  const { id } = await ctx.params;
+  if (!UUID.test(id)) throw notFound(what);
+  return id.toLowerCase();
+}

@@ -1,0 +1,29 @@
+import "server-only";
+import type { Knex } from "knex";
+import { db } from "@/lib/db";
+import type { Actor } from "@/lib/auth/queries";
+import * as w from "./write";
+import * as c from "./write-claims";
+import { reverseMovement as reverse } from "./reverse";
+import type { HaulInput, ProcessingInput, RecyclingInput, SortInput } from "./schemas";
+
+// The server's entry points for writing the ledger. Each runs in its own
+// transaction, or in the caller's (`conn`), e.g. the Idempotency-Key helper's.
+// Overdraws throw AppError("conflict", "… only N left …"), i.e. 409.
+
+type Conn = Knex | Knex.Transaction;
+
+export const recordHaul = (actor: Actor, driveId: string, input: HaulInput, conn: Conn = db) => w.recordHaul(actor, driveId, input, conn);
+export const recordSort = (actor: Actor, driveId: string, input: SortInput, conn: Conn = db) => w.recordSort(actor, driveId, input, conn);
+export const recordProcessing = (actor: Actor, driveId: string, input: ProcessingInput, conn: Conn = db) =>
+  w.recordProcessing(actor, driveId, input, conn);
+export const recordRecycling = (actor: Actor, driveId: string, input: RecyclingInput, conn: Conn = db) =>
+  w.recordRecycling(actor, driveId, input, conn);
+export const recordClaim = (actor: Actor, heaterUnitId: string, quantity: number, conn: Conn = db, note?: string) =>
+  c.recordClaim(actor, heaterUnitId, quantity, conn, note);
+export const releaseClaim = (actor: Actor, heaterUnitId: string, quantity: number, conn: Conn = db, note?: string) =>
+  c.releaseClaim(actor, heaterUnitId, quantity, conn, note);
+export const recordBuiltIn = (actor: Actor, heaterUnitId: string, quantity: number, conn: Conn = db, note?: string) =>
+  c.recordBuiltIn(actor, heaterUnitId, quantity, conn, note);
+export const reverseMovement = (actor: Actor, movementId: string, conn: Conn = db) => reverse(actor, movementId, conn);
+export { drivesHolesPerCan } from "./write";
