@@ -19,7 +19,8 @@ export const GET = route(async (_req, ctx: Ctx) => {
 
 export const PUT = route(async (req, ctx: Ctx) => {
   const actor = await requireRole("organiser");
-  const { id } = await ctx.params;
+  const drive = await findDrive(actor.group.id, (await ctx.params).id);
+  if (!drive) throw notFound("That drive");
   const input = await parseJson(req, driveInput);
-  return NextResponse.json(await updateDrive(actor.group.id, id, input));
+  return NextResponse.json(await updateDrive(actor.group.id, drive.id, input));
 });

@@ -20,7 +20,8 @@ export const GET = route(async (_req, ctx: Ctx) => {
 
 export const POST = route(async (req, ctx: Ctx) => {
   const actor = await requireRole("organiser");
-  const { id } = await ctx.params;
+  const drive = await findDrive(actor.group.id, (await ctx.params).id);
+  if (!drive) throw notFound("That drive");
   const input = await parseJson(req, dropPointInput);
-  return NextResponse.json(await createDropPoint(actor.group.id, id, input), { status: 201 });
+  return NextResponse.json(await createDropPoint(actor.group.id, drive.id, input), { status: 201 });
 });
