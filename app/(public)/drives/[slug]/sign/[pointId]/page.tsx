@@ -53,7 +53,7 @@ export default async function SignPage({ params, searchParams }: { params: Promi
             <ul className="list-disc pl-6">{NOT_WANTED.map((w) => <li key={w}>{w}</li>)}</ul>
           </div>
         </div>
-        <div className="flex items-center gap-6">
+        <div className="flex flex-col items-start gap-6 sm:flex-row sm:items-center print:flex-row print:items-center">
           <div className="h-44 w-44 shrink-0" role="img" aria-label={`QR code linking to ${url}`} dangerouslySetInnerHTML={{ __html: qr }} />
           <p className="text-lg">
             Scan for the map of all drop points, how far the drive has come, and to tell us when this bin is full.
