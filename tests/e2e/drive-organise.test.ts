@@ -13,8 +13,10 @@ afterAll(async () => {
 });
 
 async function clickMap(page: Page, dx: number, dy: number) {
-  const box = (await page.locator(".leaflet-container").first().boundingBox())!;
-  await page.mouse.click(box.x + box.width / 2 + dx, box.y + box.height / 2 + dy);
+  const map = page.locator(".leaflet-container").first();
+  await map.scrollIntoViewIfNeeded();
+  const box = (await map.boundingBox())!;
+  await map.click({ position: { x: box.width / 2 + dx, y: box.height / 2 + dy } });
 }
 
 describe("organiser sets up a drive; the public uses it", () => {
@@ -39,6 +41,10 @@ describe("organiser sets up a drive; the public uses it", () => {
 
     for (const [name, dx, dy] of [["Lantern Street bakery", -60, -30], ["Harbour chandlery", 70, 40]] as const) {
       await clickMap(org.page, dx, dy);
+      await org.page.getByRole("heading", { name: "New drop point" }).waitFor({ timeout: 10_000 }).catch(async (e) => {
+        await org.page.screenshot({ path: "/tmp/drive-organise-failure.png", fullPage: true });
+        throw e;
+      });
       const form = org.page.getByRole("form", { name: "Add drop point" });
       await form.getByLabel("Name", { exact: true }).fill(name);
       await form.getByLabel("Opening hours").fill("Daily 8:00–18:00");
