@@ -112,7 +112,10 @@ export async function listPledges(groupId: string, driveId: string) {
 export async function listFillReports(groupId: string, driveId: string, limit = 30) {
   return db("fill_reports as f")
     .join("drop_points as p", "p.id", "f.drop_point_id")
-    .select("f.id", "f.level", "f.note", "f.alerted", "f.created_at as createdAt", "p.name as dropPointName")
+    .leftJoin("files as fi", function () {
+      this.on("fi.id", "=", "f.photo_file_id").andOn("fi.group_id", "=", "f.group_id");
+    })
+    .select("f.id", "f.level", "f.note", "f.alerted", "f.created_at as createdAt", "p.name as dropPointName", "fi.url as photoUrl")
     .where({ "f.group_id": groupId, "p.drive_id": driveId })
     .orderBy("f.created_at", "desc")
     .limit(limit);

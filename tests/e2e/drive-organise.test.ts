@@ -3,6 +3,13 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { launchBrowser, newPage, PHONE, signInAs } from "@/tests/support/browser";
 import { DEMO } from "@/tests/support/env";
 import { mailTo, waitForMail } from "@/tests/support/mail";
+import { PNG } from "pngjs";
+
+function pngOf(size: number): Buffer {
+  const png = new PNG({ width: size, height: size });
+  png.data.fill(180);
+  return PNG.sync.write(png);
+}
 
 let browser: Browser;
 beforeAll(async () => {
@@ -52,6 +59,16 @@ describe("organiser sets up a drive; the public uses it", () => {
       await form.getByRole("button", { name: "Add drop point" }).click();
       await org.page.getByRole("list", { name: "Drop points of this drive" }).getByText(name).waitFor();
     }
+
+    // A photo of the first bin: a wrong type is refused with a message, a picture uploads with progress.
+    await org.page.getByRole("link", { name: "Lantern Street bakery", exact: true }).click();
+    await org.page.waitForURL(/\/organise\/drop-points\//);
+    const picker = org.page.getByLabel("Add a photo of the bin");
+    await picker.setInputFiles({ name: "notes.txt", mimeType: "text/plain", buffer: Buffer.from("not a photo") });
+    await org.page.getByText("“notes.txt” is not a picture").waitFor();
+    await picker.setInputFiles({ name: "bin.png", mimeType: "image/png", buffer: pngOf(64) });
+    await org.page.getByText("Photo added.").waitFor({ timeout: 30_000 });
+    await org.page.getByRole("img", { name: "Photo of the bin at Lantern Street bakery" }).waitFor();
     await org.context.close();
 
     const { context, page } = await newPage(browser, PHONE);
@@ -70,15 +87,18 @@ describe("organiser sets up a drive; the public uses it", () => {
     const confirmation = await waitForMail(donor);
     expect(confirmation.text).toContain("Harbour chandlery");
 
-    const report = async () => {
+    await page.getByRole("img", { name: "Photo of the bin at Lantern Street bakery" }).waitFor();
+    const report = async (withPhoto: boolean) => {
       await page.getByRole("button", { name: "Report how full the bin at Lantern Street bakery is" }).click();
       await page.getByLabel("Full — no room left").check();
+      if (withPhoto) await page.getByLabel("Photo of the bin (optional)").setInputFiles({ name: "full.png", mimeType: "image/png", buffer: pngOf(32) });
       await page.getByRole("button", { name: "Send report" }).click();
-      await page.getByText("Thanks — the organisers can see your report.").waitFor();
+      await page.getByText("Thanks — the organisers can see your report.").waitFor({ timeout: 30_000 });
+      if (withPhoto) await page.getByText("Your photo is attached.").waitFor();
       await page.getByRole("button", { name: "Close" }).click();
     };
-    await report();
-    await report();
+    await report(true);
+    await report(false);
     const alerts = async () => (await mailTo(DEMO.organiser)).filter((m) => m.subject === "Bin filling up: Lantern Street bakery");
     await expect.poll(alerts, { timeout: 10_000 }).toHaveLength(1);
     await new Promise((r) => setTimeout(r, 1500));

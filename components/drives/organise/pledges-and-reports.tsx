@@ -3,7 +3,7 @@ import { Card, EmptyState } from "@/components/ui/card";
 import { LEVEL_LABEL } from "@/lib/drives/fill";
 
 interface Pledge { id: string; name: string | null; email: string | null; bags: number; bringOn: string; dropPointName: string }
-interface Report { id: string; level: number; note: string; alerted: boolean; createdAt: Date; dropPointName: string }
+interface Report { id: string; level: number; note: string; alerted: boolean; createdAt: Date; dropPointName: string; photoUrl: string | null }
 
 export function PledgesAndReports({ pledges, reports, points, slug }: { pledges: Pledge[]; reports: Report[]; points: { id: string; name: string }[]; slug: string }) {
   const when = (d: Date) => new Date(d).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
@@ -32,6 +32,7 @@ export function PledgesAndReports({ pledges, reports, points, slug }: { pledges:
               <li key={r.id} className="py-2">
                 <strong>{r.dropPointName}</strong>: {LEVEL_LABEL[r.level] ?? `${r.level}%`} {r.alerted ? <span className="font-semibold text-alarm">· alert sent</span> : null}
                 <span className="block text-sm text-ink-soft">{when(r.createdAt)} UTC{r.note ? ` · “${r.note}”` : ""}</span>
+                {r.photoUrl ? <a href={r.photoUrl}>See the photo</a> : null}
               </li>
             ))}
           </ul>

@@ -7,15 +7,30 @@ import { FormError } from "@/components/ui/field";
 import { apiFetch } from "@/lib/api/client";
 import { FILL_LEVELS } from "@/lib/drives/schemas";
 import { LEVEL_LABEL } from "@/lib/drives/fill";
+import { photoProblem, useUploadThing } from "@/lib/uploads/react";
 
 export function FillReportForm({ slug, point, onDone }: { slug: string; point: { id: string; name: string }; onDone: () => void }) {
   const [level, setLevel] = useState<number | null>(null);
   const [note, setNote] = useState("");
   const [error, setError] = useState<string | null>(null);
+  const [photo, setPhoto] = useState<File | null>(null);
+  const [progress, setProgress] = useState<number | null>(null);
+  const [photoNote, setPhotoNote] = useState<string | null>(null);
   const queryClient = useQueryClient();
+  const { startUpload } = useUploadThing("fillReportPhoto", { uploadProgressGranularity: "fine", onUploadProgress: setProgress });
   const mutation = useMutation({
-    mutationFn: (body: { level: number; note: string }) =>
-      apiFetch<{ id: string; alerted: boolean }>(`/api/public/drives/${slug}/drop-points/${point.id}/fill-reports`, { method: "POST", body }),
+    mutationFn: async (body: { level: number; note: string }) => {
+      const report = await apiFetch<{ id: string; alerted: boolean }>(`/api/public/drives/${slug}/drop-points/${point.id}/fill-reports`, { method: "POST", body });
+      if (photo) {
+        setProgress(0);
+        // The report counts even if the photo fails; say so instead of failing it.
+        await startUpload([photo], { fillReportId: report.id })
+          .then(() => setPhotoNote("Your photo is attached."))
+          .catch((e: Error) => setPhotoNote(`The report is in, but the photo was not saved: ${e.message}`))
+          .finally(() => setProgress(null));
+      }
+      return report;
+    },
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ["public-drive", slug, "drop-points"] }),
   });
 
@@ -23,6 +38,7 @@ export function FillReportForm({ slug, point, onDone }: { slug: string; point: {
     return (
       <div role="status" className="flex flex-col gap-2">
         <p className="font-semibold text-moss-deep">Thanks — the organisers can see your report.</p>
+        {photoNote ? <p>{photoNote}</p> : null}
         <Button variant="secondary" onClick={onDone}>Close</Button>
       </div>
     );
@@ -53,6 +69,27 @@ export function FillReportForm({ slug, point, onDone }: { slug: string; point: {
       </fieldset>
       <label htmlFor={`note-${point.id}`} className="font-semibold">Anything else? (optional)</label>
       <textarea id={`note-${point.id}`} value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} rows={2} className="rounded-lg border-2 border-ink/40 bg-white px-3 py-2" />
+      <label htmlFor={`photo-${point.id}`} className="font-semibold">Photo of the bin (optional)</label>
+      <p id={`photo-hint-${point.id}`} className="text-sm text-ink-faint">A picture, at most 4 MB.</p>
+      <input
+        id={`photo-${point.id}`}
+        type="file"
+        accept="image/*"
+        aria-describedby={`photo-hint-${point.id}`}
+        className="min-h-11"
+        onChange={(e) => {
+          const file = e.target.files?.[0] ?? null;
+          const problem = file ? photoProblem(file) : null;
+          setError(problem);
+          if (problem) e.target.value = "";
+          setPhoto(problem ? null : file);
+        }}
+      />
+      {progress !== null ? (
+        <div role="progressbar" aria-label="Photo upload progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(progress)} className="h-3 overflow-hidden rounded-full bg-white">
+          <div className="h-full bg-ember" style={{ width: `${progress}%` }} />
+        </div>
+      ) : null}
       <FormError message={error ?? mutation.error?.message} />
       <div className="flex flex-wrap gap-2">
         <Button type="submit" disabled={mutation.isPending}>{mutation.isPending ? "Sending…" : "Send report"}</Button>

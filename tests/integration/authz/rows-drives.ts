@@ -78,3 +78,12 @@ export const rows: AuthzRow[] = [
     note: "anyone at the bin may report; the invalid body writes nothing",
   },
 ];
+
+rows.push({
+  route: "app/api/uploadthing/route.ts",
+  method: "POST",
+  path: () => "/api/uploadthing?actionType=upload&slug=fillReportPhoto",
+  body: () => ({ files: [{ name: "a.png", size: 10, type: "image/png", lastModified: 0 }], input: { fillReportId: "00000000-0000-4000-8000-000000000000" } }),
+  expect: { anonymous: [400, 404], volunteer: [400, 404], builder: [400, 404], organiser: [400, 404], otherOrganiser: [400, 404] },
+  note: "a fill report photo only attaches to a report made in the last 15 minutes; this one does not exist",
+});

@@ -90,3 +90,23 @@ describe("this bin is full", () => {
     expect(await testDb()("fill_reports").where({ drop_point_id: g.dropPointIds[0] }).first()).toBeUndefined();
   });
 });
+
+describe("fill report photos", () => {
+  const start = (fillReportId: string, file = { name: "full.png", size: 2000, type: "image/png", lastModified: 0 }) =>
+    anon.request("POST", "/api/uploadthing?actionType=upload&slug=fillReportPhoto", { files: [file], input: { fillReportId } });
+
+  it("lets anyone start a photo upload for a fresh report, but not an old one or a non-image", async () => {
+    const g = await freshGroup("fill-photo");
+    const report = await anon.json<{ id: string }>("POST", `/api/public/drives/${g.driveSlug}/drop-points/${g.dropPointIds[0]}/fill-reports`, { level: 100 });
+    const fresh = await start(report.body.id);
+    expect(fresh.status).toBe(200);
+    await fresh.text();
+    const pdf = await start(report.body.id, { name: "x.pdf", size: 2000, type: "application/pdf", lastModified: 0 });
+    expect(pdf.status).toBe(400);
+    await pdf.text();
+    await testDb()("fill_reports").where({ id: report.body.id }).update({ created_at: testDb().raw("now() - interval '1 hour'") });
+    const stale = await start(report.body.id);
+    expect([400, 404]).toContain(stale.status);
+    expect(await stale.text()).toMatch(/cannot take a photo/);
+  });
+});
