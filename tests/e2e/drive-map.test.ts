@@ -31,10 +31,10 @@ describe("public drive map", () => {
     }
     expect(tileResponses.every((s) => s === 200 || s === 304)).toBe(true);
     const winter = DEMO_DROP_POINTS.filter((p) => p.drive === "winter");
-    await expect.poll(() => page.locator(".leaflet-marker-icon").count()).toBe(winter.length);
+    await expect.poll(() => page.locator(".leaflet-marker-icon").count(), { timeout: 15_000 }).toBe(winter.length);
     const titles = await page.locator(".leaflet-marker-icon").evaluateAll((els) => els.map((e) => e.getAttribute("title")));
     expect(titles.sort()).toEqual(winter.map((p) => p.name).sort());
-    await expect.poll(() => page.getByTestId("drop-point").count()).toBe(winter.length);
+    await expect.poll(() => page.getByTestId("drop-point").count(), { timeout: 15_000 }).toBe(winter.length);
     // Nothing wider than the phone's screen.
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(375);
     await page.getByText("Map: Larkhollow demo town data").first().waitFor();

@@ -73,8 +73,9 @@ describe("organiser sets up a drive; the public uses it", () => {
 
     const { context, page } = await newPage(browser, PHONE);
     await page.goto(`/drives/${slug}`);
-    await expect.poll(() => page.locator(".leaflet-marker-icon").count()).toBe(2);
-    await expect.poll(() => page.getByTestId("drop-point").count()).toBe(2);
+    await page.waitForSelector("img.leaflet-tile-loaded");
+    await expect.poll(() => page.locator(".leaflet-marker-icon").count(), { timeout: 15_000 }).toBe(2);
+    await expect.poll(() => page.getByTestId("drop-point").count(), { timeout: 15_000 }).toBe(2);
     expect(await page.content()).not.toContain("555 0177");
 
     const donor = `donor-${tag}@example.test`;
