@@ -64,8 +64,9 @@ export function DropPointForm({
       <FormError message={general ?? (Object.keys(errors).length ? "Some fields need another look." : null)} />
       <Field id="dp-name" label="Name" value={values.name} onChange={text("name")} error={errors.name} />
       <Field id="dp-address" label="Address" value={values.address} onChange={text("address")} error={errors.address} />
+      <p className="text-sm text-ink-faint">Place it by clicking the map or dragging the pin, or type the coordinates.</p>
       <div className="grid grid-cols-2 gap-2">
-        <Field id="dp-lat" label="Latitude" inputMode="decimal" hint="Click the map, drag the pin, or type." value={values.lat} onChange={text("lat")} error={errors.lat} />
+        <Field id="dp-lat" label="Latitude" inputMode="decimal" value={values.lat} onChange={text("lat")} error={errors.lat} />
         <Field id="dp-lng" label="Longitude" inputMode="decimal" value={values.lng} onChange={text("lng")} error={errors.lng} />
       </div>
       <Field id="dp-hours" label="Opening hours" placeholder="Mon–Sat 9:00–17:00" value={values.hours} onChange={text("hours")} error={errors.hours} />
