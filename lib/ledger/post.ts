@@ -150,7 +150,9 @@ export async function postMovement(trx: Trx, m: MovementSpec, lines: LineSpec[])
     );
   }
   await applyCounted(trx, m, lines, isoDay(occurredAt));
-  await checkUnclaimed(trx, m.driveId);
+  const driveDelta = (stage: Stage) => deltas.get(keyOf({ dropPointId: null, heaterUnitId: null, stage }))?.delta ?? 0;
+  const unclaimedDelta = driveDelta("good") + driveDelta("washed") + driveDelta("opened") + driveDelta("punched") - driveDelta("claimed");
+  await checkUnclaimed(trx, m.driveId, unclaimedDelta);
   return { movementId: movement.id, lineIds };
 }
 
@@ -170,7 +172,7 @@ async function checkDebits(trx: Trx, driveId: string, debits: (Key & { delta: nu
 }
 
 /** Claims reserve processed cans; no write may leave more claimed than there are. */
-async function checkUnclaimed(trx: Trx, driveId: string): Promise<void> {
+async function checkUnclaimed(trx: Trx, driveId: string, change: number): Promise<void> {
   const rows = await trx("stage_balances")
     .select("stage", "quantity")
     .where({ drive_id: driveId })
@@ -184,8 +186,8 @@ async function checkUnclaimed(trx: Trx, driveId: string): Promise<void> {
     else processed += Number(r.quantity);
   }
   if (processed - claimed < 0) {
-    const before = rows.length ? processed - claimed : 0;
-    throw conflict(`Not enough unclaimed cans: that would leave ${before} unclaimed. Release a claim first, or claim fewer.`, {
+    const before = processed - claimed - change;
+    throw conflict(`Not enough unclaimed cans: only ${before} left unclaimed. Release a claim first, or claim fewer.`, {
       available: Math.max(0, before),
     });
   }

@@ -157,3 +157,22 @@ export async function assertOwnHeater(groupId: string, heaterUnitId: string): Pr
   const row = await db("heater_units").select("id").where({ id: heaterUnitId, group_id: groupId }).first();
   if (!row) throw notFound("That heater unit");
 }
+
+/** Drives with their active drop points, for the volunteer's forms; current drives first. */
+export async function listLogDrives(groupId: string) {
+  const drives = await db("drives").select("id", "name", "ends_on").where({ group_id: groupId }).orderBy([{ column: "ends_on", order: "desc" }, { column: "name" }]);
+  const points = await db("drop_points").select("id", "name", "drive_id").where({ group_id: groupId, active: true }).orderBy("name");
+  return drives.map((d) => ({ id: d.id as string, name: d.name as string, dropPoints: points.filter((p) => p.drive_id === d.id).map((p) => ({ id: p.id as string, name: p.name as string })) }));
+}
+
+export async function listGroupPeople(groupId: string) {
+  return db("memberships as m").join("users as u", "u.id", "m.user_id").select("u.id", "u.name").where("m.group_id", groupId).orderBy("u.name") as Promise<{ id: string; name: string }[]>;
+}
+
+/** What the organiser's charts need about one drive: its start, spare and the cans of its units. */
+export async function driveChartBasics(groupId: string, driveId: string) {
+  const drive = await db("drives").select("id", "name", db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`), "spare_percent").where({ id: driveId, group_id: groupId }).first();
+  if (!drive) throw notFound("That drive");
+  const units = await db("heater_units").select("cans").where({ drive_id: driveId, group_id: groupId }).orderBy("created_at");
+  return { name: drive.name as string, startsOn: drive.startsOn as string, sparePercent: Number(drive.spare_percent), unitCans: units.map((u) => Number(u.cans)) };
+}

@@ -82,18 +82,24 @@ describe("sorts, processing, claims and undo", () => {
     // More than the unclaimed cans: 409 with what is left.
     const greedy = await bld.json<{ error: { message: string } }>("POST", `/api/heaters/${g.heaterIds[1]}/claims`, { quantity: s.unclaimed + 1 });
     expect(greedy.status).toBe(409);
-    expect(greedy.body.error.message).toMatch(new RegExp(`${s.unclaimed} unclaimed`));
+    expect(greedy.body.error.message).toMatch(new RegExp(`only ${s.unclaimed} left`));
 
-    // Undo the wash: a new line, history keeps both.
-    const undo = await vol.json<{ movementId: string }>("POST", `/api/movements/${wash.body.movementId}/reversal`);
-    expect(undo.status).toBe(201);
+    // Undo a wash: a new line, history keeps both. (Undoing the first wash
+    // would need 150 washed cans, but 100 have moved on: that is a 409.)
     expect((await vol.json("POST", `/api/movements/${wash.body.movementId}/reversal`)).status).toBe(409);
+    const wash2 = await vol.json<{ movementId: string }>("POST", `/api/drives/${g.driveId}/processing`, { from: "good", to: "washed", quantity: 20 });
+    const mid = await stock();
+    const undo = await vol.json<{ movementId: string }>("POST", `/api/movements/${wash2.body.movementId}/reversal`);
+    expect(undo.status).toBe(201);
+    expect(undo.body.movementId).not.toBe(wash2.body.movementId);
+    expect((await vol.json("POST", `/api/movements/${wash2.body.movementId}/reversal`)).status).toBe(409);
     const after = await stock();
-    expect(after.stages.washed).toBe(s.stages.washed - 150);
-    expect(after.stages.good).toBe(s.stages.good + 150);
+    expect(after.stages.washed).toBe(mid.stages.washed - 20);
+    expect(after.stages.good).toBe(mid.stages.good + 20);
     const lines = await testDb()("ledger_lines").where({ drive_id: g.driveId, from_stage: "washed", to_stage: "good" });
     expect(lines).toHaveLength(1);
     expect(lines[0].reverses_id).not.toBeNull();
+    expect(lines[0].quantity).toBe(20);
 
     // A sorted haul cannot be undone before its sort; another volunteer cannot undo it at all.
     expect((await vol.json("POST", `/api/movements/${haul.movementId}/reversal`)).status).toBe(409);

@@ -1,0 +1,66 @@
+import type { Metadata } from "next";
+import { Card, EmptyState } from "@/components/ui/card";
+import { GoodCansChart, YieldChart } from "@/components/ledger/ledger-charts";
+import { LedgerTable } from "@/components/ledger/ledger-table";
+import { RecyclingForm } from "@/components/ledger/recycling-form";
+import { requirePageRole } from "@/lib/auth/session";
+import { driveTarget } from "@/lib/drives/progress";
+import { driveGoodDaily, dropPointTallies } from "@/lib/ledger/balances";
+import { driveChartBasics, listGroupPeople, listLogDrives } from "@/lib/ledger/queries";
+
+export const metadata: Metadata = { title: "Ledger" };
+
+export default async function LedgerPage({ searchParams }: { searchParams: Promise<{ drive?: string }> }) {
+  const actor = await requirePageRole("/ledger", "organiser");
+  const { drive: wanted } = await searchParams;
+  const [drives, people] = await Promise.all([listLogDrives(actor.group.id), listGroupPeople(actor.group.id)]);
+  const drive = drives.find((d) => d.id === wanted) ?? drives[0];
+  if (!drive) {
+    return (
+      <main className="flex flex-col gap-4">
+        <h1 className="text-3xl">Ledger</h1>
+        <EmptyState title="No drives yet">Set up a drive; every can logged for it shows here.</EmptyState>
+      </main>
+    );
+  }
+  const basics = await driveChartBasics(actor.group.id, drive.id);
+  const [daily, tallies] = await Promise.all([driveGoodDaily(drive.id, basics.startsOn), dropPointTallies(drive.id)]);
+  const target = driveTarget(basics.unitCans, basics.sparePercent);
+  let running = 0;
+  const dailyPoints = daily.map((d) => ({ ...d, cumulative: (running += d.goodCans) }));
+  const names = new Map(drive.dropPoints.map((p) => [p.id, p.name]));
+  const yieldPoints = Object.entries(tallies).map(([id, t]) => {
+    const counted = t.goodCans + t.rejectedCans;
+    return { name: names.get(id) ?? "Drop point", counted, yieldPercent: counted ? Math.round((t.goodCans / counted) * 1000) / 10 : 0 };
+  });
+
+  return (
+    <main className="flex flex-col gap-5">
+      <h1 className="text-3xl">Ledger</h1>
+      <nav aria-label="Drive" className="flex flex-wrap gap-3">
+        {drives.map((d) => (
+          <a key={d.id} href={`/ledger?drive=${d.id}`} aria-current={d.id === drive.id ? "page" : undefined} className={d.id === drive.id ? "font-bold text-ink" : ""}>
+            {d.name}
+          </a>
+        ))}
+      </nav>
+      <div className="grid gap-5 lg:grid-cols-2">
+        <Card title={`Good cans per day · ${drive.name}`}>
+          <GoodCansChart daily={dailyPoints} target={target.cans} />
+          <p className="mt-2 text-sm text-ink-soft">
+            Target {target.cans} cans: {target.heaterCans} for {target.heaters} heater units plus {target.spare} spare.
+          </p>
+        </Card>
+        <Card title="Yield per drop point">
+          <YieldChart points={yieldPoints} />
+        </Card>
+      </div>
+      <Card title="Rejects taken to recycling">
+        <RecyclingForm driveId={drive.id} />
+      </Card>
+      <Card title="Every line">
+        <LedgerTable drives={drives} people={people} initialDriveId={drive.id} />
+      </Card>
+    </main>
+  );
+}
