@@ -5,7 +5,7 @@ import { useRouter } from "next/navigation";
 import { useState, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
-import { ApiError } from "@/lib/api/fetch-json";
+import { ApiError } from "@/lib/api/client";
 import { heaterKeys } from "@/hooks/queries/heaters";
 
 /** A small form: how many cans, one button; the server's 409 or 422 shows next to it. */

@@ -5,7 +5,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
-import { ApiError } from "@/lib/api/fetch-json";
+import { ApiError } from "@/lib/api/client";
 import type { CanGridInput } from "@/lib/heaters/schemas";
 import { createHeater, heaterKeys } from "@/hooks/queries/heaters";
 

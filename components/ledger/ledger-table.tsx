@@ -4,7 +4,7 @@ import { useMemo, useState } from "react";
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { buttonClass } from "@/components/ui/button";
 import { EmptyState, Skeleton } from "@/components/ui/card";
-import { fetchJson } from "@/lib/api/fetch-json";
+import { fetchJson } from "@/lib/api/client";
 import { ledgerKeys } from "@/hooks/queries/ledger";
 import { STAGES } from "@/lib/ledger/schemas";
 import type { LogDrive } from "./log-home";

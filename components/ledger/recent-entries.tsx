@@ -5,7 +5,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { Button } from "@/components/ui/button";
 import { Card, EmptyState, Skeleton } from "@/components/ui/card";
 import { FormError } from "@/components/ui/field";
-import { fetchJson } from "@/lib/api/fetch-json";
+import { fetchJson } from "@/lib/api/client";
 import { ledgerKeys, myEntriesQuery, type MyEntry } from "@/hooks/queries/ledger";
 
 function describe(e: MyEntry): string {

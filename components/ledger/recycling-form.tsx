@@ -5,7 +5,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import { fetchJson } from "@/lib/api/fetch-json";
+import { fetchJson } from "@/lib/api/client";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { recyclingInputSchema } from "@/lib/ledger/schemas";
 import { ledgerKeys, stockQuery } from "@/hooks/queries/ledger";

@@ -1,5 +1,5 @@
 import { queryOptions } from "@tanstack/react-query";
-import { fetchJson } from "@/lib/api/fetch-json";
+import { fetchJson } from "@/lib/api/client";
 import type { HeaterCreateInput, HeaterState } from "@/lib/heaters/unit-schemas";
 
 // Keys and calls for heater units; mutations invalidate through `heaterKeys`.

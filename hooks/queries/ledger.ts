@@ -1,5 +1,5 @@
 import { queryOptions } from "@tanstack/react-query";
-import { fetchJson } from "@/lib/api/fetch-json";
+import { fetchJson } from "@/lib/api/client";
 import type { DriveStock } from "@/lib/ledger/schemas";
 
 export interface OpenHaul {

@@ -12,13 +12,27 @@ export class ApiError extends Error {
   }
 }
 
-export async function fetchJson<T>(path: string, init: { method?: string; body?: unknown; signal?: AbortSignal } = {}): Promise<T> {
+export interface FetchJsonInit {
+  method?: string;
+  /** Sent as JSON. (`json` is the same, kept for callers that name it so.) */
+  body?: unknown;
+  json?: unknown;
+  headers?: Record<string, string>;
+  signal?: AbortSignal;
+}
+
+export async function fetchJson<T>(path: string, init: FetchJsonInit = {}): Promise<T> {
+  const payload = init.json !== undefined ? init.json : init.body;
   let res: Response;
   try {
     res = await fetch(path, {
       method: init.method ?? "GET",
-      headers: init.body === undefined ? { accept: "application/json" } : { accept: "application/json", "content-type": "application/json" },
-      body: init.body === undefined ? undefined : JSON.stringify(init.body),
+      headers: {
+        accept: "application/json",
+        ...(payload === undefined ? {} : { "content-type": "application/json" }),
+        ...init.headers,
+      },
+      body: payload === undefined ? undefined : JSON.stringify(payload),
       signal: init.signal,
       credentials: "same-origin",
     });
@@ -43,4 +57,9 @@ export async function fetchJson<T>(path: string, init: { method?: string; body?:
     );
   }
   return body as T;
+}
+
+/** Field errors from a failed mutation, or an empty object. */
+export function fieldErrors(error: unknown): Record<string, string> {
+  return error instanceof ApiError ? error.fields : {};
 }
