@@ -6,9 +6,13 @@ import { ROLE_LABEL, type Role } from "@/lib/auth/roles";
 const NAV: Record<Role, { href: string; label: string }[]> = {
   organiser: [
     { href: "/dashboard", label: "Dashboard" },
+    { href: "/runs", label: "Pickup runs" },
     { href: "/mail", label: "Sent mail" },
   ],
-  volunteer: [{ href: "/log", label: "Log" }],
+  volunteer: [
+    { href: "/log", label: "Log" },
+    { href: "/runs", label: "My runs" },
+  ],
   builder: [
     { href: "/units", label: "My units" },
     { href: "/plan", label: "Planner" },

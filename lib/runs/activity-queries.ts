@@ -1,5 +1,6 @@
 import "server-only";
 import { db } from "@/lib/db";
+import { AppError } from "@/lib/api/errors";
 import type { HaulSample } from "./suggest";
 import { RECENT_HAULS } from "./suggest";
 
@@ -56,4 +57,16 @@ export async function latestFillReports(
     .orderBy([{ column: "drop_point_id" }, { column: "created_at", order: "desc" }]);
   for (const r of rows) out.set(r.drop_point_id, { fraction: Number(r.fraction), at: new Date(r.at) });
   return out;
+}
+
+/** 422 unless the haul exists in the group and was taken at this drive's drop point. */
+export async function assertHaulAtStop(groupId: string, driveId: string, dropPointId: string, haulId: string) {
+  const haul = (await tableExists("hauls"))
+    ? await db("hauls").select("id").where({ id: haulId, group_id: groupId, drive_id: driveId, drop_point_id: dropPointId }).first()
+    : null;
+  if (!haul) {
+    throw new AppError("invalid_input", "That haul was not logged at this stop.", {
+      fields: { haulId: "Log the haul at this drop point first" },
+    });
+  }
 }

@@ -1,0 +1,101 @@
+"use client";
+
+import { useMutation } from "@tanstack/react-query";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { Field, FormError } from "@/components/ui/field";
+import { ApiError, fetchJson } from "@/lib/api/fetch-json";
+
+function newKey(): string {
+  // randomUUID needs a secure context; plain-HTTP previews get a random key of the same strength.
+  if (typeof crypto.randomUUID === "function") return crypto.randomUUID();
+  return Array.from(crypto.getRandomValues(new Uint8Array(16)), (b) => b.toString(16).padStart(2, "0")).join("");
+}
+
+interface Props {
+  runId: string;
+  driveId: string;
+  stopId: string;
+  dropPointId: string;
+  dropPointName: string;
+  onDone: (run: unknown) => void;
+}
+
+/** Log a haul at this stop (a ledger movement, then the stop points at it), or skip it with a reason. */
+export function StopActions({ runId, driveId, stopId, dropPointId, dropPointName, onDone }: Props) {
+  const [mode, setMode] = useState<"idle" | "log" | "skip">("idle");
+  const [bags, setBags] = useState("");
+  const [weight, setWeight] = useState("");
+  const [reason, setReason] = useState("");
+  const [fields, setFields] = useState<Record<string, string>>({});
+  // One key per attempt at this stop: a retry after a dropped connection never logs the haul twice.
+  const [haulKey] = useState(newKey);
+
+  const log = useMutation({
+    mutationFn: async () => {
+      const body: Record<string, unknown> = { dropPointId, bags: bags.trim() === "" ? undefined : Number(bags) };
+      if (weight.trim() !== "") body.weightKg = Number(weight);
+      const haul = await fetchJson<{ id: string }>(`/api/drives/${driveId}/hauls`, { body, headers: { "Idempotency-Key": haulKey } });
+      return fetchJson(`/api/runs/${runId}/stops/${stopId}/log`, { body: { haulId: haul.id } });
+    },
+    onSuccess: onDone,
+    onError: (e) => setFields(e instanceof ApiError ? e.fields : {}),
+  });
+  const skip = useMutation({
+    mutationFn: () => fetchJson(`/api/runs/${runId}/stops/${stopId}/skip`, { body: { reason } }),
+    onSuccess: onDone,
+    onError: (e) => setFields(e instanceof ApiError ? e.fields : {}),
+  });
+
+  if (mode === "idle") {
+    return (
+      <div className="flex flex-wrap gap-2">
+        <Button type="button" onClick={() => setMode("log")}>Log the haul here</Button>
+        <Button type="button" variant="secondary" onClick={() => setMode("skip")}>Skip with a reason</Button>
+      </div>
+    );
+  }
+  if (mode === "log") {
+    return (
+      <form
+        className="flex flex-col gap-2"
+        aria-label={`Log the haul at ${dropPointName}`}
+        noValidate
+        onSubmit={(e) => {
+          e.preventDefault();
+          setFields({});
+          log.mutate();
+        }}
+      >
+        <div className="grid grid-cols-2 gap-3">
+          <Field id={`bags-${stopId}`} label="Bags" type="number" min={0} inputMode="numeric" value={bags} onChange={(e) => setBags(e.target.value)} error={fields.bags} />
+          <Field id={`weight-${stopId}`} label="Weight, kg (optional)" type="number" min={0} step="0.1" inputMode="decimal" value={weight} onChange={(e) => setWeight(e.target.value)} error={fields.weightKg} />
+        </div>
+        <FormError message={log.isError ? log.error.message : null} />
+        <div className="flex flex-wrap gap-2">
+          <Button type="submit" disabled={log.isPending}>{log.isPending ? "Saving…" : "Save the haul"}</Button>
+          <Button type="button" variant="quiet" onClick={() => setMode("idle")}>Cancel</Button>
+        </div>
+      </form>
+    );
+  }
+  return (
+    <form
+      className="flex flex-col gap-2"
+      aria-label={`Skip ${dropPointName}`}
+      noValidate
+      onSubmit={(e) => {
+        e.preventDefault();
+        setFields({});
+        skip.mutate();
+      }}
+    >
+      <Field id={`reason-${stopId}`} label="Why skip this stop?" hint="For example: closed, bin already emptied, no parking." value={reason} onChange={(e) => setReason(e.target.value)} error={fields.reason} />
+      <FormError message={skip.isError ? skip.error.message : null} />
+      <div className="flex flex-wrap gap-2">
+        <Button type="submit" variant="secondary" disabled={skip.isPending}>{skip.isPending ? "Saving…" : "Skip this stop"}</Button>
+        <Button type="button" variant="quiet" onClick={() => setMode("idle")}>Cancel</Button>
+      </div>
+    </form>
+  );
+}
