@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { route } from "@/lib/api/handler";
-import { uuidParam } from "@/lib/api/params";
+import { uuidValue } from "@/lib/api/params";
 import { requireRole } from "@/lib/auth/session";
 import { getRun } from "@/lib/runs/queries";
 
@@ -8,6 +8,6 @@ export const dynamic = "force-dynamic";
 
 export const GET = route(async (_request, ctx: { params: Promise<{ id: string }> }) => {
   const actor = await requireRole("organiser", "volunteer");
-  const id = uuidParam((await ctx.params).id, "That pickup run");
+  const id = uuidValue((await ctx.params).id, "That pickup run");
   return NextResponse.json(await getRun(actor, id));
 });

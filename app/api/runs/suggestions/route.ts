@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { route } from "@/lib/api/handler";
-import { uuidParam } from "@/lib/api/params";
+import { uuidValue } from "@/lib/api/params";
 import { requireRole } from "@/lib/auth/session";
 import { suggestedStops } from "@/lib/runs/planner-queries";
 
@@ -9,6 +9,6 @@ export const dynamic = "force-dynamic";
 /** The drive's drop points ranked for the next run: `?driveId=…`. */
 export const GET = route(async (request) => {
   const actor = await requireRole("organiser");
-  const driveId = uuidParam(new URL(request.url).searchParams.get("driveId") ?? undefined, "That drive");
+  const driveId = uuidValue(new URL(request.url).searchParams.get("driveId"), "That drive");
   return NextResponse.json(await suggestedStops(actor.group.id, driveId));
 });

@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { parseJson, route } from "@/lib/api/handler";
-import { uuidParam } from "@/lib/api/params";
+import { uuidValue } from "@/lib/api/params";
 import { requireRole } from "@/lib/auth/session";
 import { db } from "@/lib/db";
 import { getRun, resolveStop } from "@/lib/runs/queries";
@@ -15,8 +15,8 @@ export const dynamic = "force-dynamic";
 export const POST = route(async (request, ctx: { params: Promise<{ id: string; stopId: string }> }) => {
   const actor = await requireRole("organiser", "volunteer");
   const params = await ctx.params;
-  const runId = uuidParam(params.id, "That pickup run");
-  const stopId = uuidParam(params.stopId, "That stop");
+  const runId = uuidValue(params.id, "That pickup run");
+  const stopId = uuidValue(params.stopId, "That stop");
   const run = await getRun(actor, runId);
   const input = await parseJson(request, logStopInputSchema);
   const stop = run.stopList.find((s) => s.id === stopId);

@@ -1,0 +1,17 @@
+import { route } from "@/lib/api/handler";
+import { parseBody, withIdempotency } from "@/lib/api/idempotency";
+import { uuidParam, type IdContext } from "@/lib/api/params";
+import { requireRole } from "@/lib/auth/session";
+import { processingInputSchema } from "@/lib/ledger/schemas";
+import { recordProcessing } from "@/lib/ledger/record";
+
+export const dynamic = "force-dynamic";
+
+export const POST = route(async (req: Request, ctx: IdContext) => {
+  const actor = await requireRole("volunteer", "organiser");
+  const driveId = await uuidParam(ctx, "That drive");
+  return withIdempotency(req, actor, async (trx, raw) => {
+    const input = parseBody(raw, processingInputSchema);
+    return { status: 201, body: await recordProcessing(actor, driveId, input, trx) };
+  });
+});

@@ -1,0 +1,14 @@
+import { route } from "@/lib/api/handler";
+import { withIdempotency } from "@/lib/api/idempotency";
+import { uuidParam, type IdContext } from "@/lib/api/params";
+import { requireUser } from "@/lib/auth/session";
+import { reverseMovement } from "@/lib/ledger/record";
+
+export const dynamic = "force-dynamic";
+
+// Any signed-in member may ask; reverseMovement allows the author or an organiser.
+export const POST = route(async (req: Request, ctx: IdContext) => {
+  const actor = await requireUser();
+  const movementId = await uuidParam(ctx, "That entry");
+  return withIdempotency(req, actor, async (trx) => ({ status: 201, body: await reverseMovement(actor, movementId, trx) }));
+});

@@ -1,0 +1,148 @@
+import "server-only";
+import { db } from "@/lib/db";
+import { notFound } from "@/lib/api/errors";
+import { heaterClaims } from "./balances";
+import type { LedgerFilter } from "./schemas";
+
+export async function listHauls(groupId: string, driveId: string, opts: { open?: boolean } = {}) {
+  const drive = await db("drives").select("id").where({ id: driveId, group_id: groupId }).first();
+  if (!drive) throw notFound("That drive");
+  const rows = await db("hauls as h")
+    .join("drop_points as p", "p.id", "h.drop_point_id")
+    .select("h.id", "h.movement_id", "h.drop_point_id", "p.name as drop_point_name", "h.bags", "h.weight_kg", "h.estimated_cans", "h.estimate_method", "h.estimate_counted_hauls", "h.hauled_at", "h.sort_id")
+    .where({ "h.group_id": groupId, "h.drive_id": driveId })
+    .whereNull("h.reversed_at")
+    .modify((q) => {
+      if (opts.open) q.whereNull("h.sort_id");
+    })
+    .orderBy("h.hauled_at", "desc")
+    .limit(200);
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any
+  return rows.map((r: any) => ({
+    id: r.id as string,
+    movementId: r.movement_id as string,
+    dropPointId: r.drop_point_id as string,
+    dropPointName: r.drop_point_name as string,
+    bags: r.bags as number,
+    weightKg: r.weight_kg === null ? null : Number(r.weight_kg),
+    estimatedCans: r.estimated_cans as number,
+    estimate: { method: r.estimate_method as string, countedHauls: r.estimate_counted_hauls as number },
+    hauledAt: new Date(r.hauled_at).toISOString(),
+    sorted: r.sort_id !== null,
+  }));
+}
+
+export async function listHeatersWithClaims(groupId: string) {
+  const [units, claims] = await Promise.all([
+    db("heater_units").select("id", "name", "drive_id", "cans", "state").where({ group_id: groupId }).orderBy("created_at"),
+    heaterClaims(groupId),
+  ]);
+  return units.map((u) => ({
+    id: u.id as string,
+    name: u.name as string,
+    driveId: u.drive_id as string | null,
+    cans: u.cans as number,
+    claimed: claims[u.id]?.claimed ?? 0,
+    builtIn: claims[u.id]?.builtIn ?? 0,
+    state: u.state as string,
+  }));
+}
+
+export async function publicDriveId(slug: string): Promise<string> {
+  const drive = await db("drives").select("id").where({ slug, is_public: true }).first();
+  if (!drive) throw notFound("That drive");
+  return drive.id;
+}
+
+export interface LedgerRow {
+  id: string;
+  movementId: string;
+  kind: string;
+  occurredAt: string;
+  recordedAt: string;
+  person: string;
+  personId: string;
+  drive: string;
+  driveId: string;
+  dropPoint: string | null;
+  heaterUnit: string | null;
+  from: string | null;
+  to: string | null;
+  quantity: number;
+  reason: string | null;
+  isEstimate: boolean;
+  reversesId: string | null;
+  note: string;
+}
+
+/** Ledger lines of the group, newest first, filtered in SQL. */
+export async function listLedger(groupId: string, f: LedgerFilter & { personId?: string }, limit = 500): Promise<LedgerRow[]> {
+  const rows = await db("ledger_lines as l")
+    .join("movements as m", "m.id", "l.movement_id")
+    .join("users as u", "u.id", "l.recorded_by")
+    .join("drives as d", "d.id", "l.drive_id")
+    .leftJoin("drop_points as p", "p.id", "l.drop_point_id")
+    .leftJoin("heater_units as h", "h.id", "l.heater_unit_id")
+    .select(
+      "l.id", "l.movement_id", "m.kind", "l.occurred_at", "l.recorded_at", "u.name as person", "u.id as person_id", "d.name as drive", "d.id as drive_id",
+      "p.name as drop_point", "h.name as heater_unit", "l.from_stage", "l.to_stage", "l.quantity", "l.reason", "l.is_estimate", "l.reverses_id", "l.note",
+    )
+    .where("l.group_id", groupId)
+    .modify((q) => {
+      if (f.driveId) q.andWhere("l.drive_id", f.driveId);
+      if (f.dropPointId) q.andWhere("l.drop_point_id", f.dropPointId);
+      if (f.stage) q.andWhere((w) => w.where("l.from_stage", f.stage!).orWhere("l.to_stage", f.stage!));
+      if (f.personId) q.andWhere("l.recorded_by", f.personId);
+      if (f.from) q.andWhere("l.occurred_at", ">=", f.from);
+      if (f.to) q.andWhere("l.occurred_at", "<", db.raw("?::date + 1", [f.to]));
+    })
+    .orderBy("l.id", "desc")
+    .limit(Math.min(f.limit ?? limit, 100_000));
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any
+  return rows.map((r: any) => ({
+    id: String(r.id),
+    movementId: r.movement_id,
+    kind: r.kind,
+    occurredAt: new Date(r.occurred_at).toISOString(),
+    recordedAt: new Date(r.recorded_at).toISOString(),
+    person: r.person,
+    personId: r.person_id,
+    drive: r.drive,
+    driveId: r.drive_id,
+    dropPoint: r.drop_point,
+    heaterUnit: r.heater_unit,
+    from: r.from_stage,
+    to: r.to_stage,
+    quantity: r.quantity,
+    reason: r.reason,
+    isEstimate: r.is_estimate,
+    reversesId: r.reverses_id === null ? null : String(r.reverses_id),
+    note: r.note,
+  }));
+}
+
+/** A person's own recent entries, each with whether it was undone (for the volunteer's "undo"). */
+export async function listMyEntries(groupId: string, userId: string, limit = 15) {
+  const rows = await db("movements as m")
+    .leftJoin("movements as r", "r.reverses_movement_id", "m.id")
+    .join("drives as d", "d.id", "m.drive_id")
+    .select("m.id", "m.kind", "m.occurred_at", "m.details", "d.name as drive", "r.id as reversed_by")
+    .select(db.raw(`(select coalesce(sum(quantity), 0)::int from ledger_lines l where l.movement_id = m.id and l.to_stage is not null and l.is_estimate = false) as counted`))
+    .select(db.raw(`(select coalesce(sum(quantity), 0)::int from ledger_lines l where l.movement_id = m.id and l.to_stage = 'hauled') as estimated`))
+    .select(db.raw(`(select string_agg(distinct p.name, ', ') from hauls h join drop_points p on p.id = h.drop_point_id where h.movement_id = m.id) as drop_point`))
+    .where({ "m.group_id": groupId, "m.recorded_by": userId })
+    .whereNot("m.kind", "reversal")
+    .orderBy("m.recorded_at", "desc")
+    .limit(limit);
+  return rows.map((r) => ({
+    movementId: r.id as string,
+    kind: r.kind as string,
+    occurredAt: new Date(r.occurred_at).toISOString(),
+    drive: r.drive as string,
+    dropPoint: (r.drop_point as string | null) ?? null,
+    details: r.details as Record<string, unknown>,
+    counted: Number(r.counted),
+    estimated: Number(r.estimated),
+    undone: r.reversed_by !== null,
+  }));
+}

@@ -1,0 +1,103 @@
+import { z } from "zod";
+
+// Inputs of the ledger endpoints; shared by the forms and the handlers. Safe to import in the client.
+export const REJECT_REASONS = ["dented", "crushed", "wrongSize", "notAluminium", "damaged", "other"] as const;
+export type RejectReason = (typeof REJECT_REASONS)[number];
+
+export const REJECT_REASON_LABEL: Record<RejectReason, string> = {
+  dented: "Dented",
+  crushed: "Crushed",
+  wrongSize: "Wrong size",
+  notAluminium: "Not aluminium",
+  damaged: "Torn or dirty",
+  other: "Other",
+};
+
+export const STAGES = ["hauled", "good", "washed", "opened", "punched", "claimed", "builtIn", "rejected", "recycled"] as const;
+export type Stage = (typeof STAGES)[number];
+
+export const PROCESS_FROM = ["good", "washed", "opened"] as const;
+export const PROCESS_TO = ["washed", "opened", "punched"] as const;
+
+const MAX_CANS = 1_000_000;
+const wholeCans = (label: string) =>
+  z.number({ error: `Enter the number of ${label}.` }).int(`Whole ${label} only.`).min(0, `${label} can't be negative.`).max(MAX_CANS, `That is more ${label} than one entry can hold.`);
+const positiveCans = (label: string) => wholeCans(label).min(1, `At least 1 ${label.replace(/s$/, "")}.`);
+const when = z.iso.datetime({ offset: true, error: "Use a date and time like 2026-12-02T09:30:00Z." }).optional();
+const note = z.string().trim().max(500, "Keep the note under 500 characters.").optional();
+
+export const haulInputSchema = z
+  .object({
+    dropPointId: z.uuid("Choose a drop point."),
+    bags: wholeCans("bags").max(500, "That is more bags than one pickup holds."),
+    weightKg: z.number({ error: "Enter the weight in kg." }).min(0, "Weight can't be negative.").max(5_000, "That is more than one pickup weighs.").nullable().optional(),
+    hauledAt: when,
+    note,
+  })
+  .refine((v) => v.bags > 0 || (v.weightKg ?? 0) > 0, { path: ["bags"], message: "Enter the bags, the weight, or both." });
+export type HaulInput = z.infer<typeof haulInputSchema>;
+
+export const rejectedCountsSchema = z.partialRecord(z.enum(REJECT_REASONS), wholeCans("cans"));
+
+export const sortInputSchema = z
+  .object({
+    haulIds: z.array(z.uuid("Choose the hauls this sort counted.")).min(1, "Choose at least one haul.").max(100),
+    good: wholeCans("good cans"),
+    rejected: rejectedCountsSchema.default({}),
+    sortedAt: when,
+    note,
+  })
+  .refine((v) => new Set(v.haulIds).size === v.haulIds.length, { path: ["haulIds"], message: "A haul is listed twice." })
+  .refine((v) => v.good + Object.values(v.rejected).reduce<number>((s, n) => s + (n ?? 0), 0) > 0, {
+    path: ["good"],
+    message: "A sort counts at least one can.",
+  });
+export type SortInput = z.infer<typeof sortInputSchema>;
+
+export const processingInputSchema = z
+  .object({
+    from: z.enum(PROCESS_FROM, { error: "Choose the stage the cans come from." }),
+    to: z.enum(PROCESS_TO, { error: "Choose the stage the cans go to." }),
+    quantity: positiveCans("cans"),
+    occurredAt: when,
+    note,
+  })
+  .refine((v) => PROCESS_FROM.indexOf(v.from) < PROCESS_TO.indexOf(v.to) + 1, {
+    path: ["to"],
+    message: "Cans only move forward: good → washed → opened → punched.",
+  });
+export type ProcessingInput = z.infer<typeof processingInputSchema>;
+
+export const claimInputSchema = z.object({ quantity: positiveCans("cans"), note });
+export type ClaimInput = z.infer<typeof claimInputSchema>;
+
+export const recyclingInputSchema = z.object({
+  quantity: positiveCans("cans"),
+  weightKg: z.number().min(0).max(5_000).nullable().optional(),
+  moneyReceived: z.number().min(0).max(1_000_000).nullable().optional(),
+  occurredAt: when,
+  note,
+});
+export type RecyclingInput = z.infer<typeof recyclingInputSchema>;
+
+export const ledgerFilterSchema = z.object({
+  driveId: z.uuid().optional(),
+  dropPointId: z.uuid().optional(),
+  stage: z.enum(STAGES).optional(),
+  personId: z.uuid().optional(),
+  from: z.iso.date().optional(),
+  to: z.iso.date().optional(),
+  mine: z.enum(["1"]).optional(),
+  limit: z.coerce.number().int().min(1).max(1000).optional(),
+});
+export type LedgerFilter = z.infer<typeof ledgerFilterSchema>;
+
+/** The stock shape of GET /api/drives/{id}/stock. */
+export interface DriveStock {
+  stages: { hauled: number; good: number; washed: number; opened: number; punched: number; builtIn: number; recycled: number };
+  rejected: Record<RejectReason, number>;
+  /** Rejected cans counted but not yet taken to recycling. */
+  rejectedOnHand: number;
+  claimed: number;
+  unclaimed: number;
+}
