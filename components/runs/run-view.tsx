@@ -43,7 +43,7 @@ function StopCard({ run, stop, canAct, isNext, onDone }: { run: RunDetail; stop:
         ) : stop.status === "skipped" ? (
           <p className="font-semibold text-ink-soft">Skipped — “{stop.skipReason}”</p>
         ) : canAct ? (
-          <StopActions runId={run.id} driveId={run.driveId} stopId={stop.id} dropPointId={p.id} dropPointName={p.name} onDone={onDone} />
+          <StopActions runId={run.id} stopId={stop.id} dropPointName={p.name} onDone={onDone} />
         ) : (
           <p className="text-ink-soft">Waiting for the volunteer.</p>
         )}

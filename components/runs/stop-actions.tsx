@@ -14,32 +14,35 @@ function newKey(): string {
 
 interface Props {
   runId: string;
-  driveId: string;
   stopId: string;
-  dropPointId: string;
   dropPointName: string;
   onDone: (run: unknown) => void;
 }
 
 /** Log a haul at this stop (a ledger movement, then the stop points at it), or skip it with a reason. */
-export function StopActions({ runId, driveId, stopId, dropPointId, dropPointName, onDone }: Props) {
+export function StopActions({ runId, stopId, dropPointName, onDone }: Props) {
   const [mode, setMode] = useState<"idle" | "log" | "skip">("idle");
   const [bags, setBags] = useState("");
   const [weight, setWeight] = useState("");
   const [reason, setReason] = useState("");
   const [fields, setFields] = useState<Record<string, string>>({});
-  // One key per attempt at this stop: a retry after a dropped connection never logs the haul twice.
-  const [haulKey] = useState(newKey);
+  // A retry after a dropped connection reuses the key, so the haul is never logged twice;
+  // once the server has answered (say, a 422), the corrected entry is a new request with a new key.
+  const [haulKey, setHaulKey] = useState(newKey);
 
   const log = useMutation({
     mutationFn: async () => {
-      const body: Record<string, unknown> = { dropPointId, bags: bags.trim() === "" ? undefined : Number(bags) };
+      const body: Record<string, unknown> = { bags: bags.trim() === "" ? 0 : Number(bags) };
       if (weight.trim() !== "") body.weightKg = Number(weight);
-      const haul = await fetchJson<{ id: string }>(`/api/drives/${driveId}/hauls`, { body, headers: { "Idempotency-Key": haulKey } });
-      return fetchJson(`/api/runs/${runId}/stops/${stopId}/log`, { body: { haulId: haul.id } });
+      // One request logs the haul in the ledger and settles the stop together.
+      const res = await fetchJson<{ run: unknown }>(`/api/runs/${runId}/stops/${stopId}/haul`, { body, headers: { "Idempotency-Key": haulKey } });
+      return res.run;
     },
     onSuccess: onDone,
-    onError: (e) => setFields(e instanceof ApiError ? e.fields : {}),
+    onError: (e) => {
+      setFields(e instanceof ApiError ? e.fields : {});
+      if (e instanceof ApiError && e.status !== 0) setHaulKey(newKey());
+    },
   });
   const skip = useMutation({
     mutationFn: () => fetchJson(`/api/runs/${runId}/stops/${stopId}/skip`, { body: { reason } }),

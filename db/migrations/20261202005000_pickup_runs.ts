@@ -1,8 +1,7 @@
 import type { Knex } from "knex";
 
 // Pickup runs: an ordered route over drop points for one volunteer, and its
-// stops. A stop's haul lives in the ledger; the stop only points at it, so the
-// reference is added by a later migration once the hauls table exists.
+// stops. A stop's haul lives in the ledger; the stop only points at it.
 export async function up(knex: Knex): Promise<void> {
   await knex.schema.createTable("pickup_runs", (t) => {
     t.uuid("id").primary().defaultTo(knex.raw("gen_random_uuid()"));
@@ -40,13 +39,15 @@ export async function up(knex: Knex): Promise<void> {
     t.double("leg_km").notNullable();
     t.string("status", 8).notNullable().defaultTo("pending");
     t.text("skip_reason");
-    t.uuid("haul_id");
+    t.uuid("haul_id").references("hauls.id");
     t.uuid("resolved_by").references("users.id").onDelete("SET NULL");
     t.timestamp("resolved_at", { useTz: true });
     t.unique(["run_id", "position"]);
     t.unique(["run_id", "drop_point_id"]);
     t.index(["drop_point_id"]);
   });
+  // One haul settles one stop.
+  await knex.raw("create unique index pickup_run_stops_haul_unique on pickup_run_stops (haul_id) where haul_id is not null");
   await knex.raw(
     "alter table pickup_run_stops add constraint pickup_run_stops_status_check check (status in ('pending','logged','skipped'))",
   );

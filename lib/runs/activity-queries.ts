@@ -5,8 +5,7 @@ import type { HaulSample } from "./suggest";
 import { RECENT_HAULS } from "./suggest";
 
 // Hauls belong to the ledger and fill reports to the drop-point area; runs only
-// read them. Until those tables exist in a database, suggestions fall back to
-// "never hauled, nothing reported".
+// read them. Until the fill-report table exists, suggestions rest on hauls alone.
 const present = new Set<string>();
 async function tableExists(name: string): Promise<boolean> {
   if (present.has(name)) return true;
@@ -19,7 +18,7 @@ async function tableExists(name: string): Promise<boolean> {
 /** The last few hauls of each drop point, newest first. */
 export async function recentHauls(groupId: string, dropPointIds: string[]): Promise<Map<string, HaulSample[]>> {
   const out = new Map<string, HaulSample[]>();
-  if (dropPointIds.length === 0 || !(await tableExists("hauls"))) return out;
+  if (dropPointIds.length === 0) return out;
   const rows = await db
     .select("drop_point_id", "bags", "at")
     .from(
@@ -27,10 +26,11 @@ export async function recentHauls(groupId: string, dropPointIds: string[]): Prom
         .select(
           "drop_point_id",
           "bags",
-          "created_at as at",
-          db.raw("row_number() over (partition by drop_point_id order by created_at desc) as n"),
+          "hauled_at as at",
+          db.raw("row_number() over (partition by drop_point_id order by hauled_at desc) as n"),
         )
         .where("group_id", groupId)
+        .whereNull("reversed_at")
         .whereIn("drop_point_id", dropPointIds)
         .as("h"),
     )
@@ -61,9 +61,11 @@ export async function latestFillReports(
 
 /** 422 unless the haul exists in the group and was taken at this drive's drop point. */
 export async function assertHaulAtStop(groupId: string, driveId: string, dropPointId: string, haulId: string) {
-  const haul = (await tableExists("hauls"))
-    ? await db("hauls").select("id").where({ id: haulId, group_id: groupId, drive_id: driveId, drop_point_id: dropPointId }).first()
-    : null;
+  const haul = await db("hauls")
+    .select("id")
+    .where({ id: haulId, group_id: groupId, drive_id: driveId, drop_point_id: dropPointId })
+    .whereNull("reversed_at")
+    .first();
   if (!haul) {
     throw new AppError("invalid_input", "That haul was not logged at this stop.", {
       fields: { haulId: "Log the haul at this drop point first" },

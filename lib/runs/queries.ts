@@ -211,6 +211,23 @@ export async function createRun(actor: Actor, input: CreateRunInput) {
   });
 }
 
+/** Locks the run and returns the stop if the actor may settle it and it is still pending. */
+export async function lockPendingStop(actor: Actor, runId: string, stopId: string, trx: Knex.Transaction) {
+  const run = await trx("pickup_runs")
+    .select("id", "assignee_id", "started_at")
+    .where({ id: runId, group_id: actor.group.id })
+    .forUpdate()
+    .first();
+  if (!run || (actor.role !== "organiser" && run.assignee_id !== actor.user.id)) throw notFound("That pickup run");
+  const stop = await trx("pickup_run_stops")
+    .select("id", "status", "drop_point_id")
+    .where({ id: stopId, run_id: runId, group_id: actor.group.id })
+    .first();
+  if (!stop) throw notFound("That stop");
+  if (stop.status !== "pending") throw conflict(`This stop is already ${stop.status}.`);
+  return { run, stop: { id: stop.id as string, dropPointId: stop.drop_point_id as string } };
+}
+
 /**
  * Marks one stop logged or skipped, then moves the run's state along. Only the
  * run's volunteer or an organiser may; a stop already settled is a 409.
@@ -222,18 +239,11 @@ export async function resolveStop(
   change: { status: "skipped"; reason: string } | { status: "logged"; haulId: string },
   trx: Knex.Transaction,
 ) {
-  const run = await trx("pickup_runs")
-    .select("id", "assignee_id", "state", "started_at")
-    .where({ id: runId, group_id: actor.group.id })
-    .forUpdate()
-    .first();
-  if (!run || (actor.role !== "organiser" && run.assignee_id !== actor.user.id)) throw notFound("That pickup run");
-  const stop = await trx("pickup_run_stops")
-    .select("id", "status", "drop_point_id")
-    .where({ id: stopId, run_id: runId, group_id: actor.group.id })
-    .first();
-  if (!stop) throw notFound("That stop");
-  if (stop.status !== "pending") throw conflict(`This stop is already ${stop.status}.`);
+  const { run, stop } = await lockPendingStop(actor, runId, stopId, trx);
+  if (change.status === "logged") {
+    const taken = await trx("pickup_run_stops").select("id").where({ haul_id: change.haulId }).first();
+    if (taken) throw conflict("That haul already settles another stop.");
+  }
   await trx("pickup_run_stops")
     .where({ id: stopId })
     .update({
@@ -252,5 +262,5 @@ export async function resolveStop(
       started_at: run.started_at ?? trx.fn.now(),
       finished_at: state === "done" ? trx.fn.now() : null,
     });
-  return { dropPointId: stop.drop_point_id as string, state };
+  return { dropPointId: stop.dropPointId, state };
 }
