@@ -60,4 +60,11 @@ export const rows: AuthzRow[] = [
     body: () => ({ haulId: "not-a-haul" }),
     expect: { anonymous: 401, volunteer: 422, builder: 403, organiser: 422, otherOrganiser: 404 },
   },
+  {
+    route: "app/api/runs/[id]/stops/[stopId]/haul/route.ts",
+    method: "POST",
+    path: () => `${stopPath}/haul`,
+    body: () => ({ bags: -1 }),
+    expect: { anonymous: 401, volunteer: 422, builder: 403, organiser: 422, otherOrganiser: 404 },
+  },
 ];
