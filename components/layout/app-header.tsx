@@ -7,6 +7,8 @@ const NAV: Record<Role, { href: string; label: string }[]> = {
   organiser: [
     { href: "/dashboard", label: "Dashboard" },
     { href: "/runs", label: "Pickup runs" },
+    { href: "/ledger", label: "Ledger" },
+    { href: "/log", label: "Log" },
     { href: "/mail", label: "Sent mail" },
   ],
   volunteer: [

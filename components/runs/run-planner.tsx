@@ -55,12 +55,12 @@ export function RunPlanner(props: PlannerProps) {
   const chosen = (suggestions.data ?? []).filter((s) => selection.ids.has(s.id));
 
   const create = useMutation({
-    mutationFn: (body: unknown) => fetchJson<{ id: string }>("/api/runs", { body }),
+    mutationFn: (body: unknown) => fetchJson<{ id: string }>("/api/runs", { method: "POST", json: body }),
     onSuccess: async (run) => {
       await queryClient.invalidateQueries({ queryKey: runQueries.all() });
       router.push(`/runs/${run.id}`);
     },
-    onError: (error) => setErrors(error instanceof ApiError ? error.fields : {}),
+    onError: (error) => setErrors(error instanceof ApiError ? (error.fields ?? {}) : {}),
   });
 
   function submit(event: React.FormEvent) {

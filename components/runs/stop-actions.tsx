@@ -35,19 +35,19 @@ export function StopActions({ runId, stopId, dropPointName, onDone }: Props) {
       const body: Record<string, unknown> = { bags: bags.trim() === "" ? 0 : Number(bags) };
       if (weight.trim() !== "") body.weightKg = Number(weight);
       // One request logs the haul in the ledger and settles the stop together.
-      const res = await fetchJson<{ run: unknown }>(`/api/runs/${runId}/stops/${stopId}/haul`, { body, headers: { "Idempotency-Key": haulKey } });
+      const res = await fetchJson<{ run: unknown }>(`/api/runs/${runId}/stops/${stopId}/haul`, { method: "POST", json: body, headers: { "Idempotency-Key": haulKey } });
       return res.run;
     },
     onSuccess: onDone,
     onError: (e) => {
-      setFields(e instanceof ApiError ? e.fields : {});
+      setFields(e instanceof ApiError ? (e.fields ?? {}) : {});
       if (e instanceof ApiError && e.status !== 0) setHaulKey(newKey());
     },
   });
   const skip = useMutation({
-    mutationFn: () => fetchJson(`/api/runs/${runId}/stops/${stopId}/skip`, { body: { reason } }),
+    mutationFn: () => fetchJson(`/api/runs/${runId}/stops/${stopId}/skip`, { method: "POST", json: { reason } }),
     onSuccess: onDone,
-    onError: (e) => setFields(e instanceof ApiError ? e.fields : {}),
+    onError: (e) => setFields(e instanceof ApiError ? (e.fields ?? {}) : {}),
   });
 
   if (mode === "idle") {

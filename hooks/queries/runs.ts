@@ -37,7 +37,7 @@ export const runQueries = {
   route: (input: RouteInputRaw) =>
     queryOptions({
       queryKey: ["route", input],
-      queryFn: ({ signal }) => fetchJson<RouteAnswer>("/api/plan/route", { body: input, signal }),
+      queryFn: ({ signal }) => fetchJson<RouteAnswer>("/api/plan/route", { method: "POST", json: input, signal }),
       staleTime: Infinity,
     }),
 };

@@ -1,4 +1,3 @@
-import "server-only";
 import type { Knex } from "knex";
 import { calibrationFrom, type Calibration } from "./estimate";
 

@@ -1,6 +1,4 @@
-import "server-only";
 import type { Knex } from "knex";
-import { db } from "@/lib/db";
 import { AppError, conflict, notFound } from "@/lib/api/errors";
 import type { RejectReason, Stage } from "./schemas";
 
@@ -53,6 +51,8 @@ export interface MovementSpec {
 }
 
 /** Runs `fn` in the caller's transaction when there is one, else in a new one. */
+// (No "server-only" here or in write*.ts/reverse.ts: the demo seed runs these in
+// plain Node with its own transaction. record.ts is the server's entry point.)
 export function inTx<T>(conn: Knex | Trx, fn: (trx: Trx) => Promise<T>): Promise<T> {
   return (conn as Trx).isTransaction ? fn(conn as Trx) : conn.transaction(fn);
 }
@@ -150,7 +150,9 @@ export async function postMovement(trx: Trx, m: MovementSpec, lines: LineSpec[])
     );
   }
   await applyCounted(trx, m, lines, isoDay(occurredAt));
-  await checkUnclaimed(trx, m.driveId);
+  const driveDelta = (stage: Stage) => deltas.get(keyOf({ dropPointId: null, heaterUnitId: null, stage }))?.delta ?? 0;
+  const unclaimedDelta = driveDelta("good") + driveDelta("washed") + driveDelta("opened") + driveDelta("punched") - driveDelta("claimed");
+  await checkUnclaimed(trx, m.driveId, unclaimedDelta);
   return { movementId: movement.id, lineIds };
 }
 
@@ -170,7 +172,7 @@ async function checkDebits(trx: Trx, driveId: string, debits: (Key & { delta: nu
 }
 
 /** Claims reserve processed cans; no write may leave more claimed than there are. */
-async function checkUnclaimed(trx: Trx, driveId: string): Promise<void> {
+async function checkUnclaimed(trx: Trx, driveId: string, change: number): Promise<void> {
   const rows = await trx("stage_balances")
     .select("stage", "quantity")
     .where({ drive_id: driveId })
@@ -184,8 +186,8 @@ async function checkUnclaimed(trx: Trx, driveId: string): Promise<void> {
     else processed += Number(r.quantity);
   }
   if (processed - claimed < 0) {
-    const before = rows.length ? processed - claimed : 0;
-    throw conflict(`Not enough unclaimed cans: that would leave ${before} unclaimed. Release a claim first, or claim fewer.`, {
+    const before = processed - claimed - change;
+    throw conflict(`Not enough unclaimed cans: only ${before} left unclaimed. Release a claim first, or claim fewer.`, {
       available: Math.max(0, before),
     });
   }
@@ -241,5 +243,3 @@ export async function bumpDropPoint(
     [v.hauls, v.bags, v.good_cans, v.rejected_cans, dropPointId],
   );
 }
-
-export { db };

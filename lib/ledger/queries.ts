@@ -146,3 +146,21 @@ export async function listMyEntries(groupId: string, userId: string, limit = 15)
     undone: r.reversed_by !== null,
   }));
 }
+
+/** 404 unless the drive belongs to the group; handlers call it before reading the body. */
+export async function assertOwnDrive(groupId: string, driveId: string): Promise<void> {
+  const row = await db("drives").select("id").where({ id: driveId, group_id: groupId }).first();
+  if (!row) throw notFound("That drive");
+}
+
+export async function assertOwnHeater(groupId: string, heaterUnitId: string): Promise<void> {
+  const row = await db("heater_units").select("id").where({ id: heaterUnitId, group_id: groupId }).first();
+  if (!row) throw notFound("That heater unit");
+}
+
+/** Drives with their active drop points, for the volunteer's forms; current drives first. */
+export async function listLogDrives(groupId: string) {
+  const drives = await db("drives").select("id", "name", "ends_on").where({ group_id: groupId }).orderBy([{ column: "ends_on", order: "desc" }, { column: "name" }]);
+  const points = await db("drop_points").select("id", "name", "drive_id").where({ group_id: groupId, active: true }).orderBy("name");
+  return drives.map((d) => ({ id: d.id as string, name: d.name as string, dropPoints: points.filter((p) => p.drive_id === d.id).map((p) => ({ id: p.id as string, name: p.name as string })) }));
+}

@@ -1,6 +1,4 @@
-import "server-only";
 import type { Knex } from "knex";
-import { db } from "@/lib/db";
 import { AppError, conflict, notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
 import { applyCalibration, calibrationDelta } from "./calibration";
@@ -12,7 +10,7 @@ import type { RejectReason, Stage } from "./schemas";
 
 type Conn = Knex | Knex.Transaction;
 
-export async function reverseMovement(actor: Actor, movementId: string, conn: Conn = db) {
+export async function reverseMovement(actor: Actor, movementId: string, conn: Conn) {
   return inTx(conn, async (trx) => {
     const groupId = actor.group.id;
     const found = await trx("movements").select("id", "drive_id", "recorded_by").where({ id: movementId, group_id: groupId }).first();

@@ -1,30 +1,25 @@
 import type { Metadata } from "next";
-import { Card, EmptyState } from "@/components/ui/card";
+import { EmptyState } from "@/components/ui/card";
+import { LogHome } from "@/components/ledger/log-home";
 import { requirePageRole } from "@/lib/auth/session";
-import { listDrives } from "@/lib/drives/queries";
+import { listLogDrives } from "@/lib/ledger/queries";
 
 export const metadata: Metadata = { title: "Log" };
 
-export default async function VolunteerHomePage() {
+export default async function VolunteerHomePage({ searchParams }: { searchParams: Promise<{ dropPoint?: string }> }) {
   const actor = await requirePageRole("/log", "volunteer", "organiser");
-  const drives = await listDrives(actor.group.id);
+  const { dropPoint } = await searchParams;
+  const drives = await listLogDrives(actor.group.id);
+  // A link from a pickup run (?dropPoint=) opens on that drop point's drive.
+  const initial = drives.find((d) => d.dropPoints.some((p) => p.id === dropPoint)) ?? drives.find((d) => d.dropPoints.length > 0) ?? drives[0];
   return (
-    <main className="flex flex-col gap-6">
+    <main className="mx-auto flex max-w-xl flex-col gap-5">
       <h1 className="text-3xl">Hello, {actor.user.name.split(" ")[0]}</h1>
-      <Card title="Your group's drives">
-        {drives.length === 0 ? (
-          <EmptyState title="No drives yet">Your organiser sets up drives and drop points.</EmptyState>
-        ) : (
-          <ul className="divide-y divide-paper-edge">
-            {drives.map((d) => (
-              <li key={d.id} className="py-3">
-                <span className="font-semibold">{d.name}</span>{" "}
-                <span className="text-ink-faint">· {d.dropPoints} drop points</span>
-              </li>
-            ))}
-          </ul>
-        )}
-      </Card>
+      {initial ? (
+        <LogHome drives={drives} initialDriveId={initial.id} initialDropPointId={dropPoint} />
+      ) : (
+        <EmptyState title="No drives yet">Your organiser sets up drives and drop points; then you can log hauls here.</EmptyState>
+      )}
     </main>
   );
 }

@@ -5,7 +5,7 @@ import { uuidParam, type IdContext } from "@/lib/api/params";
 import { requireRole } from "@/lib/auth/session";
 import { haulInputSchema } from "@/lib/ledger/schemas";
 import { recordHaul } from "@/lib/ledger/record";
-import { listHauls } from "@/lib/ledger/queries";
+import { assertOwnDrive, listHauls } from "@/lib/ledger/queries";
 
 export const dynamic = "force-dynamic";
 
@@ -20,6 +20,7 @@ export const GET = route(async (req: Request, ctx: IdContext) => {
 export const POST = route(async (req: Request, ctx: IdContext) => {
   const actor = await requireRole("volunteer", "organiser");
   const driveId = await uuidParam(ctx, "That drive");
+  await assertOwnDrive(actor.group.id, driveId);
   return withIdempotency(req, actor, async (trx, raw) => {
     const input = parseBody(raw, haulInputSchema);
     return { status: 201, body: await recordHaul(actor, driveId, input, trx) };

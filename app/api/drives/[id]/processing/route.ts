@@ -4,12 +4,14 @@ import { uuidParam, type IdContext } from "@/lib/api/params";
 import { requireRole } from "@/lib/auth/session";
 import { processingInputSchema } from "@/lib/ledger/schemas";
 import { recordProcessing } from "@/lib/ledger/record";
+import { assertOwnDrive } from "@/lib/ledger/queries";
 
 export const dynamic = "force-dynamic";
 
 export const POST = route(async (req: Request, ctx: IdContext) => {
   const actor = await requireRole("volunteer", "organiser");
   const driveId = await uuidParam(ctx, "That drive");
+  await assertOwnDrive(actor.group.id, driveId);
   return withIdempotency(req, actor, async (trx, raw) => {
     const input = parseBody(raw, processingInputSchema);
     return { status: 201, body: await recordProcessing(actor, driveId, input, trx) };

@@ -1,6 +1,4 @@
-import "server-only";
 import type { Knex } from "knex";
-import { db } from "@/lib/db";
 import { conflict, notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
 import { inTx, lockDrive, postMovement, type Trx } from "./post";
@@ -22,7 +20,7 @@ async function lockedUnit(trx: Trx, actor: Actor, heaterUnitId: string) {
   return locked as { id: string; drive_id: string; name: string; state: string };
 }
 
-export async function recordClaim(actor: Actor, heaterUnitId: string, quantity: number, conn: Conn = db, note?: string) {
+export async function recordClaim(actor: Actor, heaterUnitId: string, quantity: number, conn: Conn, note?: string) {
   return inTx(conn, async (trx) => {
     const unit = await lockedUnit(trx, actor, heaterUnitId);
     if (unit.state === "installed") throw conflict("This unit is already installed; it takes no more cans.");
@@ -37,7 +35,7 @@ export async function recordClaim(actor: Actor, heaterUnitId: string, quantity: 
   });
 }
 
-export async function releaseClaim(actor: Actor, heaterUnitId: string, quantity: number, conn: Conn = db, note?: string) {
+export async function releaseClaim(actor: Actor, heaterUnitId: string, quantity: number, conn: Conn, note?: string) {
   return inTx(conn, async (trx) => {
     const unit = await lockedUnit(trx, actor, heaterUnitId);
     const { movementId } = await postMovement(
@@ -49,7 +47,7 @@ export async function releaseClaim(actor: Actor, heaterUnitId: string, quantity:
   });
 }
 
-export async function recordBuiltIn(actor: Actor, heaterUnitId: string, quantity: number, conn: Conn = db, note?: string) {
+export async function recordBuiltIn(actor: Actor, heaterUnitId: string, quantity: number, conn: Conn, note?: string) {
   return inTx(conn, async (trx) => {
     const unit = await lockedUnit(trx, actor, heaterUnitId);
     const { movementId } = await postMovement(

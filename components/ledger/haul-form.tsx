@@ -1,0 +1,80 @@
+"use client";
+
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { Field, FormError } from "@/components/ui/field";
+import { Notice } from "@/components/ui/notice";
+import { fieldErrorsOf } from "@/lib/api/errors";
+import { haulInputSchema } from "@/lib/ledger/schemas";
+import { HaulCaution } from "./cautions";
+import { Stepper } from "./stepper";
+import type { SubmitResult } from "./use-outbox";
+
+type Submit = (url: string, body: unknown, label: string) => Promise<SubmitResult>;
+
+export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { driveId: string; dropPoints: { id: string; name: string }[]; initialDropPointId?: string; submit: Submit }) {
+  const [dropPointId, setDropPointId] = useState(dropPoints.some((p) => p.id === initialDropPointId) ? initialDropPointId! : "");
+  const [bags, setBags] = useState(1);
+  const [weight, setWeight] = useState("");
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [message, setMessage] = useState<{ tone: "good" | "info" | "error"; text: string } | null>(null);
+  const [pending, setPending] = useState(false);
+
+  async function onSubmit(e: React.FormEvent) {
+    e.preventDefault();
+    const weightKg = weight.trim() === "" ? null : Number(weight.replace(",", "."));
+    const parsed = haulInputSchema.safeParse({ dropPointId, bags, weightKg });
+    if (!parsed.success) {
+      setErrors(fieldErrorsOf(parsed.error));
+      return;
+    }
+    setErrors({});
+    setPending(true);
+    const name = dropPoints.find((p) => p.id === dropPointId)?.name ?? "drop point";
+    const result = await submit(`/api/drives/${driveId}/hauls`, parsed.data, `Haul: ${bags} bags from ${name}`);
+    setPending(false);
+    if (result.kind === "refused") return setMessage({ tone: "error", text: result.message });
+    setBags(1);
+    setWeight("");
+    if (result.kind === "queued") return setMessage({ tone: "info", text: result.message });
+    const body = result.body as { estimatedCans: number; estimate: { countedHauls: number } };
+    setMessage({
+      tone: "good",
+      text: `Haul recorded: about ${body.estimatedCans} cans (an estimate${body.estimate.countedHauls ? `, from ${body.estimate.countedHauls} counted hauls` : ""}; the sort will count them).`,
+    });
+  }
+
+  return (
+    <form onSubmit={onSubmit} className="flex flex-col gap-4" aria-label="Log a haul" noValidate>
+      <HaulCaution />
+      <div className="flex flex-col gap-1">
+        <label htmlFor="haul-drop-point" className="font-semibold">
+          Drop point
+        </label>
+        <select
+          id="haul-drop-point"
+          value={dropPointId}
+          onChange={(e) => setDropPointId(e.target.value)}
+          aria-describedby="haul-drop-point-error"
+          className={`min-h-11 rounded-lg border-2 bg-white px-3 ${errors.dropPointId ? "border-alarm" : "border-ink/40"}`}
+        >
+          <option value="">Choose where you picked up…</option>
+          {dropPoints.map((p) => (
+            <option key={p.id} value={p.id}>
+              {p.name}
+            </option>
+          ))}
+        </select>
+        <p id="haul-drop-point-error" aria-live="polite" className="text-sm font-semibold text-alarm">
+          {errors.dropPointId ?? ""}
+        </p>
+      </div>
+      <Stepper id="haul-bags" label="Bags" value={bags} onChange={setBags} error={errors.bags} />
+      <Field id="haul-weight" label="Weight in kg (optional)" hint="Net weight of the cans if you weighed them; it gives a better estimate." inputMode="decimal" value={weight} onChange={(e) => setWeight(e.target.value)} error={errors.weightKg} />
+      {message?.tone === "error" ? <FormError message={message.text} /> : message ? <Notice tone={message.tone === "good" ? "good" : "info"} title={message.text} /> : null}
+      <Button type="submit" disabled={pending}>
+        {pending ? "Saving…" : "Record haul"}
+      </Button>
+    </form>
+  );
+}

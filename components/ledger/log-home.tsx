@@ -1,0 +1,72 @@
+"use client";
+
+import { useState } from "react";
+import { HaulForm } from "./haul-form";
+import { SortForm } from "./sort-form";
+import { ProcessingForm } from "./processing-form";
+import { StockCard } from "./stock-card";
+import { OutboxList } from "./outbox-list";
+import { RecentEntries } from "./recent-entries";
+import { useOutbox } from "./use-outbox";
+
+export interface LogDrive {
+  id: string;
+  name: string;
+  dropPoints: { id: string; name: string }[];
+}
+
+const TABS = [
+  { id: "haul", label: "Haul" },
+  { id: "sort", label: "Sort" },
+  { id: "process", label: "Process" },
+] as const;
+
+export function LogHome({ drives, initialDriveId, initialDropPointId }: { drives: LogDrive[]; initialDriveId: string; initialDropPointId?: string }) {
+  const [driveId, setDriveId] = useState(initialDriveId);
+  const [tab, setTab] = useState<(typeof TABS)[number]["id"]>("haul");
+  const outbox = useOutbox();
+  const drive = drives.find((d) => d.id === driveId) ?? drives[0];
+
+  return (
+    <div className="flex flex-col gap-5">
+      {drives.length > 1 ? (
+        <div className="flex flex-col gap-1">
+          <label htmlFor="log-drive" className="font-semibold">
+            Drive
+          </label>
+          <select id="log-drive" className="min-h-11 rounded-lg border-2 border-ink/40 bg-white px-3" value={drive.id} onChange={(e) => setDriveId(e.target.value)}>
+            {drives.map((d) => (
+              <option key={d.id} value={d.id}>
+                {d.name}
+              </option>
+            ))}
+          </select>
+        </div>
+      ) : null}
+      <OutboxList items={outbox.items} refusals={outbox.refusals} onRetry={() => void outbox.retryNow()} onDismiss={outbox.dismissRefusal} />
+      <div role="tablist" aria-label="What to log" className="grid grid-cols-3 gap-2">
+        {TABS.map((t) => (
+          <button
+            key={t.id}
+            role="tab"
+            type="button"
+            id={`tab-${t.id}`}
+            aria-selected={tab === t.id}
+            aria-controls={`panel-${t.id}`}
+            onClick={() => setTab(t.id)}
+            className={`min-h-12 rounded-lg border-2 font-semibold focus-visible:outline-3 focus-visible:outline-ember ${tab === t.id ? "border-ember bg-ember text-white" : "border-ink/30 bg-white"}`}
+          >
+            Log a {t.label.toLowerCase()}
+          </button>
+        ))}
+      </div>
+      <section role="tabpanel" id={`panel-${tab}`} aria-labelledby={`tab-${tab}`} className="rounded-card border border-paper-edge bg-white/70 p-4">
+        {tab === "haul" ? <HaulForm key={drive.id} driveId={drive.id} dropPoints={drive.dropPoints} initialDropPointId={initialDropPointId} submit={outbox.submit} /> : null}
+        {tab === "sort" ? <SortForm key={drive.id} driveId={drive.id} submit={outbox.submit} /> : null}
+        {tab === "process" ? <ProcessingForm key={drive.id} driveId={drive.id} submit={outbox.submit} /> : null}
+      </section>
+      <StockCard driveId={drive.id} />
+      <RecentEntries />
+    </div>
+  );
+}

@@ -1,0 +1,72 @@
+"use client";
+
+import { useState } from "react";
+import { useQuery } from "@tanstack/react-query";
+import { Button } from "@/components/ui/button";
+import { FormError } from "@/components/ui/field";
+import { Notice } from "@/components/ui/notice";
+import { fieldErrorsOf } from "@/lib/api/errors";
+import { processingInputSchema } from "@/lib/ledger/schemas";
+import { stockQuery } from "@/hooks/queries/ledger";
+import { ProcessingCaution } from "./cautions";
+import { Stepper } from "./stepper";
+import type { SubmitResult } from "./use-outbox";
+
+type Submit = (url: string, body: unknown, label: string) => Promise<SubmitResult>;
+const STEPS = [
+  { from: "good", to: "washed", label: "Washed" },
+  { from: "washed", to: "opened", label: "Opened (tops off)" },
+  { from: "opened", to: "punched", label: "Punched" },
+] as const;
+
+export function ProcessingForm({ driveId, submit }: { driveId: string; submit: Submit }) {
+  const stock = useQuery(stockQuery(driveId));
+  const [stepIndex, setStepIndex] = useState(0);
+  const [quantity, setQuantity] = useState(0);
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [message, setMessage] = useState<{ tone: "good" | "info" | "error"; text: string } | null>(null);
+  const [pending, setPending] = useState(false);
+  const step = STEPS[stepIndex];
+  const available = stock.data ? stock.data.stages[step.from] : null;
+
+  async function onSubmit(e: React.FormEvent) {
+    e.preventDefault();
+    const parsed = processingInputSchema.safeParse({ from: step.from, to: step.to, quantity });
+    if (!parsed.success) return setErrors(fieldErrorsOf(parsed.error));
+    setErrors({});
+    setPending(true);
+    const result = await submit(`/api/drives/${driveId}/processing`, parsed.data, `${step.label}: ${quantity} cans`);
+    setPending(false);
+    if (result.kind === "refused") return setMessage({ tone: "error", text: result.message });
+    setQuantity(0);
+    if (result.kind === "queued") return setMessage({ tone: "info", text: result.message });
+    const body = result.body as { holes: number | null; holesPerCan: number | null };
+    setMessage({ tone: "good", text: `${step.label}: ${quantity} cans recorded.${body.holes ? ` That batch needed ${body.holes} holes (${body.holesPerCan} a can).` : ""}` });
+  }
+
+  return (
+    <form onSubmit={onSubmit} className="flex flex-col gap-4" aria-label="Log processing" noValidate>
+      <fieldset>
+        <legend className="mb-2 font-semibold">What did you do?</legend>
+        <div className="grid grid-cols-3 gap-2">
+          {STEPS.map((s, i) => (
+            <label key={s.to} className={`flex min-h-11 cursor-pointer items-center justify-center rounded-lg border-2 px-2 text-center font-semibold ${i === stepIndex ? "border-ember bg-ember-soft" : "border-ink/30 bg-white"}`}>
+              <input type="radio" name="processing-step" className="sr-only" checked={i === stepIndex} onChange={() => setStepIndex(i)} />
+              {s.label}
+            </label>
+          ))}
+        </div>
+      </fieldset>
+      <ProcessingCaution to={step.to} />
+      <p className="text-ink-soft">
+        {available === null ? "Loading what is on hand…" : `${available} cans are ${step.from} and can move on.`}
+      </p>
+      <Stepper id="processing-quantity" label="Cans in this batch" value={quantity} onChange={setQuantity} bigStep={10} error={errors.quantity ?? errors.to} />
+      {step.to === "punched" && quantity > 0 ? <p className="text-ink-soft">At 4 holes a can that is {quantity * 4} holes; the answer uses your units&apos; own count.</p> : null}
+      {message?.tone === "error" ? <FormError message={message.text} /> : message ? <Notice tone={message.tone === "good" ? "good" : "info"} title={message.text} /> : null}
+      <Button type="submit" disabled={pending}>
+        {pending ? "Saving…" : "Record processing"}
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,72 @@
+"use client";
+
+import { useState } from "react";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { Button } from "@/components/ui/button";
+import { Card, EmptyState, Skeleton } from "@/components/ui/card";
+import { FormError } from "@/components/ui/field";
+import { fetchJson } from "@/lib/api/fetch-json";
+import { ledgerKeys, myEntriesQuery, type MyEntry } from "@/hooks/queries/ledger";
+
+function describe(e: MyEntry): string {
+  const d = e.details as Record<string, unknown>;
+  switch (e.kind) {
+    case "haul":
+      return `Haul from ${e.dropPoint ?? "a drop point"}: ≈${e.estimated} cans`;
+    case "sort":
+      return `Sort: ${d.good} good, ${Number(d.counted) - Number(d.good)} rejected`;
+    case "processing":
+      return `${String(d.to).replace(/^./, (c) => c.toUpperCase())}: ${e.counted} cans`;
+    case "claim":
+      return `Claimed ${e.counted} cans`;
+    case "builtIn":
+      return `Built in ${e.counted} cans`;
+    default:
+      return `${e.kind}: ${e.counted} cans`;
+  }
+}
+
+export function RecentEntries() {
+  const qc = useQueryClient();
+  const entries = useQuery(myEntriesQuery());
+  const [error, setError] = useState<string | null>(null);
+  const undo = useMutation({
+    mutationFn: (movementId: string) =>
+      fetchJson(`/api/movements/${movementId}/reversal`, { method: "POST", headers: { "idempotency-key": `undo-${movementId}` } }),
+    onSuccess: () => {
+      setError(null);
+      return qc.invalidateQueries({ queryKey: ledgerKeys.all });
+    },
+    onError: (e: Error) => setError(e.message),
+  });
+  return (
+    <Card title="Your recent entries">
+      <FormError message={error} />
+      {entries.isPending ? (
+        <Skeleton className="h-20 w-full" />
+      ) : entries.isError ? (
+        <p className="text-alarm">Could not load your entries. Pull to refresh when you have a connection.</p>
+      ) : entries.data.length === 0 ? (
+        <EmptyState title="Nothing logged yet">Your hauls, sorts and processing show here, with an undo.</EmptyState>
+      ) : (
+        <ul className="divide-y divide-paper-edge" data-testid="recent-entries">
+          {entries.data.map((e) => (
+            <li key={e.movementId} className="flex items-center justify-between gap-3 py-2">
+              <span className={e.undone ? "text-ink-faint line-through" : ""}>
+                {describe(e)}
+                <span className="block text-sm text-ink-faint">
+                  {new Date(e.occurredAt).toLocaleString()} {e.undone ? "· undone" : ""}
+                </span>
+              </span>
+              {e.undone ? null : (
+                <Button type="button" variant="secondary" disabled={undo.isPending} onClick={() => undo.mutate(e.movementId)} aria-label={`Undo ${describe(e)}`}>
+                  Undo
+                </Button>
+              )}
+            </li>
+          ))}
+        </ul>
+      )}
+    </Card>
+  );
+}

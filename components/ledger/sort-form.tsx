@@ -1,0 +1,93 @@
+"use client";
+
+import { useState } from "react";
+import { useQuery } from "@tanstack/react-query";
+import { Button } from "@/components/ui/button";
+import { EmptyState, Skeleton } from "@/components/ui/card";
+import { FormError } from "@/components/ui/field";
+import { Notice } from "@/components/ui/notice";
+import { fieldErrorsOf } from "@/lib/api/errors";
+import { REJECT_REASON_LABEL, REJECT_REASONS, sortInputSchema, type RejectReason } from "@/lib/ledger/schemas";
+import { openHaulsQuery } from "@/hooks/queries/ledger";
+import { SortCaution } from "./cautions";
+import { Stepper } from "./stepper";
+import type { SubmitResult } from "./use-outbox";
+
+type Submit = (url: string, body: unknown, label: string) => Promise<SubmitResult>;
+const zeroRejects = () => Object.fromEntries(REJECT_REASONS.map((r) => [r, 0])) as Record<RejectReason, number>;
+
+export function SortForm({ driveId, submit }: { driveId: string; submit: Submit }) {
+  const hauls = useQuery(openHaulsQuery(driveId));
+  const [chosen, setChosen] = useState<string[]>([]);
+  const [good, setGood] = useState(0);
+  const [rejected, setRejected] = useState(zeroRejects);
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [message, setMessage] = useState<{ tone: "good" | "info" | "error"; text: string } | null>(null);
+  const [pending, setPending] = useState(false);
+  const rejectTotal = Object.values(rejected).reduce((s, n) => s + n, 0);
+  const counted = good + rejectTotal;
+
+  async function onSubmit(e: React.FormEvent) {
+    e.preventDefault();
+    const nonZero = Object.fromEntries(Object.entries(rejected).filter(([, n]) => n > 0));
+    const parsed = sortInputSchema.safeParse({ haulIds: chosen, good, rejected: nonZero });
+    if (!parsed.success) return setErrors(fieldErrorsOf(parsed.error));
+    setErrors({});
+    setPending(true);
+    const result = await submit(`/api/drives/${driveId}/sorts`, parsed.data, `Sort: ${good} good, ${rejectTotal} rejected`);
+    setPending(false);
+    if (result.kind === "refused") return setMessage({ tone: "error", text: result.message });
+    setChosen([]);
+    setGood(0);
+    setRejected(zeroRejects());
+    setMessage({ tone: result.kind === "done" ? "good" : "info", text: result.kind === "done" ? `Sort recorded: ${good} good cans, ${rejectTotal} rejected.` : result.message });
+  }
+
+  return (
+    <form onSubmit={onSubmit} className="flex flex-col gap-4" aria-label="Log a sort" noValidate>
+      <SortCaution />
+      <fieldset className="flex flex-col gap-2" aria-describedby="sort-hauls-error">
+        <legend className="mb-1 font-semibold">Which hauls did you count?</legend>
+        {hauls.isPending ? (
+          <Skeleton className="h-11 w-full" />
+        ) : hauls.isError ? (
+          <FormError message="Could not load the hauls. Check the connection and reopen this tab." />
+        ) : hauls.data.length === 0 ? (
+          <EmptyState title="No hauls waiting to be sorted">Log a haul first; it shows here until a sort counts it.</EmptyState>
+        ) : (
+          hauls.data.map((h) => (
+            <label key={h.id} className="flex min-h-11 items-center gap-3 rounded-lg border-2 border-paper-edge bg-white px-3 py-2">
+              <input
+                type="checkbox"
+                className="h-5 w-5"
+                checked={chosen.includes(h.id)}
+                onChange={(e) => setChosen((c) => (e.target.checked ? [...c, h.id] : c.filter((x) => x !== h.id)))}
+              />
+              <span>
+                {h.dropPointName} · {h.bags} bags{h.weightKg !== null ? ` · ${h.weightKg} kg` : ""} · ≈{h.estimatedCans} cans
+                <span className="block text-sm text-ink-faint">{new Date(h.hauledAt).toLocaleString()}</span>
+              </span>
+            </label>
+          ))
+        )}
+        <p id="sort-hauls-error" aria-live="polite" className="text-sm font-semibold text-alarm">
+          {errors.haulIds ?? ""}
+        </p>
+      </fieldset>
+      <Stepper id="sort-good" label="Good cans" value={good} onChange={setGood} bigStep={10} error={errors.good} />
+      <fieldset className="flex flex-col gap-1">
+        <legend className="mb-1 font-semibold">Rejected, by reason</legend>
+        {REJECT_REASONS.map((r) => (
+          <Stepper key={r} id={`sort-reject-${r}`} label={REJECT_REASON_LABEL[r]} value={rejected[r]} onChange={(n) => setRejected((x) => ({ ...x, [r]: n }))} />
+        ))}
+      </fieldset>
+      <p className="text-ink-soft" aria-live="polite">
+        Counted {counted} cans{counted > 0 ? ` · yield ${Math.round((good / counted) * 100)} %` : ""}
+      </p>
+      {message?.tone === "error" ? <FormError message={message.text} /> : message ? <Notice tone={message.tone === "good" ? "good" : "info"} title={message.text} /> : null}
+      <Button type="submit" disabled={pending}>
+        {pending ? "Saving…" : "Record sort"}
+      </Button>
+    </form>
+  );
+}

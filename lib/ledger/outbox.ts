@@ -1,0 +1,70 @@
+// The volunteer's outbox: entries wait in localStorage until the server
+// acknowledges them, and every retry sends the same Idempotency-Key, so a
+// request that reached the server but lost its answer is never recorded twice.
+// Pure helpers over a storage-like object, so they are testable without a browser.
+
+export interface OutboxItem {
+  key: string;
+  url: string;
+  body: unknown;
+  label: string;
+  createdAt: string;
+  attempts: number;
+  lastError?: string;
+}
+
+export interface StorageLike {
+  getItem(key: string): string | null;
+  setItem(key: string, value: string): void;
+}
+
+export const OUTBOX_STORAGE_KEY = "cantrove.outbox.v1";
+
+export function readOutbox(storage: StorageLike): OutboxItem[] {
+  try {
+    const parsed = JSON.parse(storage.getItem(OUTBOX_STORAGE_KEY) ?? "[]");
+    return Array.isArray(parsed) ? parsed : [];
+  } catch {
+    return [];
+  }
+}
+
+export function writeOutbox(storage: StorageLike, items: OutboxItem[]): void {
+  storage.setItem(OUTBOX_STORAGE_KEY, JSON.stringify(items));
+}
+
+export function addToOutbox(storage: StorageLike, item: OutboxItem): OutboxItem[] {
+  const items = readOutbox(storage).filter((i) => i.key !== item.key);
+  items.push(item);
+  writeOutbox(storage, items);
+  return items;
+}
+
+export function removeFromOutbox(storage: StorageLike, key: string): OutboxItem[] {
+  const items = readOutbox(storage).filter((i) => i.key !== key);
+  writeOutbox(storage, items);
+  return items;
+}
+
+export function markAttempt(storage: StorageLike, key: string, error: string): OutboxItem[] {
+  const items = readOutbox(storage).map((i) => (i.key === key ? { ...i, attempts: i.attempts + 1, lastError: error } : i));
+  writeOutbox(storage, items);
+  return items;
+}
+
+export type SendOutcome = { kind: "done"; status: number; body: unknown } | { kind: "refused"; status: number; message: string } | { kind: "retry"; message: string };
+
+/**
+ * What to do with one answer: 2xx is done; a 4xx (other than 408/429) is the
+ * server's considered refusal and will not change on retry; anything else —
+ * no network, a 5xx, a timeout — waits for the next try.
+ */
+export function classify(status: number | null, body: unknown, networkError?: string): SendOutcome {
+  if (status === null) return { kind: "retry", message: networkError ?? "No connection" };
+  if (status >= 200 && status < 300) return { kind: "done", status, body };
+  if (status >= 400 && status < 500 && status !== 408 && status !== 429) {
+    const message = (body as { error?: { message?: string } } | null)?.error?.message ?? `Refused (${status})`;
+    return { kind: "refused", status, message };
+  }
+  return { kind: "retry", message: `Server busy (${status})` };
+}

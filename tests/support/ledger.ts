@@ -1,0 +1,69 @@
+import { randomUUID } from "node:crypto";
+import { testDb } from "./db";
+import { signedIn, type ApiClient } from "./http";
+
+// A group of its own for a ledger test: its balances and calibration start at
+// zero, whatever the demo or other test files have written.
+export interface FreshGroup {
+  groupId: string;
+  driveId: string;
+  driveSlug: string;
+  dropPointIds: string[];
+  heaterIds: string[];
+  emails: { organiser: string; volunteer: string; volunteer2: string; builder: string };
+  client: (who: "organiser" | "volunteer" | "volunteer2" | "builder") => Promise<ApiClient>;
+}
+
+export async function freshGroup(label = "ledger"): Promise<FreshGroup> {
+  const db = testDb();
+  const tag = `${label}-${randomUUID().slice(0, 8)}`;
+  const hash = (await db("users").where({ email: "organiser@cantrove.test" }).first()).password_hash;
+  const [group] = await db("groups").insert({ slug: tag, name: `Test circle ${tag}`, town: "Larkhollow" }).returning("id");
+  const emails = {
+    organiser: `org-${tag}@example.test`,
+    volunteer: `vol-${tag}@example.test`,
+    volunteer2: `vol2-${tag}@example.test`,
+    builder: `bld-${tag}@example.test`,
+  };
+  for (const [role, email] of Object.entries(emails)) {
+    const [u] = await db("users").insert({ email, name: `Test ${role}`, password_hash: hash }).returning("id");
+    await db("memberships").insert({ group_id: group.id, user_id: u.id, role: role === "volunteer2" ? "volunteer" : role });
+  }
+  const [drive] = await db("drives")
+    .insert({ group_id: group.id, slug: `drive-${tag}`, name: `Drive ${tag}`, starts_on: "2026-11-01", ends_on: "2027-02-28", is_public: true })
+    .returning(["id", "slug"]);
+  const dropPointIds: string[] = [];
+  for (const [i, name] of ["North porch", "South gate"].entries()) {
+    const [p] = await db("drop_points").insert({ group_id: group.id, drive_id: drive.id, name, lat: 47.2 + i / 100, lng: -8 }).returning("id");
+    dropPointIds.push(p.id);
+  }
+  const heaterIds: string[] = [];
+  for (const name of ["Test unit A", "Test unit B"]) {
+    const [h] = await db("heater_units")
+      .insert({ group_id: group.id, drive_id: drive.id, name, glazing_width: 30, glazing_height: 60, unit: "in", columns: 11, rows: 12, cans: 132, holes_per_can: 4 })
+      .returning("id");
+    heaterIds.push(h.id);
+  }
+  const clients = new Map<string, ApiClient>();
+  return {
+    groupId: group.id,
+    driveId: drive.id,
+    driveSlug: drive.slug,
+    dropPointIds,
+    heaterIds,
+    emails,
+    client: async (who) => {
+      if (!clients.has(who)) clients.set(who, await signedIn(emails[who]));
+      return clients.get(who)!;
+    },
+  };
+}
+
+/** Hauls `bags` at a drop point and sorts them to exactly `good` good cans; returns the two bodies. */
+export async function haulAndSort(c: ApiClient, driveId: string, dropPointId: string, good: number, rejected: Record<string, number> = {}) {
+  const haul = await c.json<{ id: string; movementId: string; estimatedCans: number }>("POST", `/api/drives/${driveId}/hauls`, { dropPointId, bags: 2 });
+  if (haul.status !== 201) throw new Error(`haul failed: ${haul.status} ${JSON.stringify(haul.body)}`);
+  const sort = await c.json<{ movementId: string }>("POST", `/api/drives/${driveId}/sorts`, { haulIds: [haul.body.id], good, rejected });
+  if (sort.status !== 201) throw new Error(`sort failed: ${sort.status} ${JSON.stringify(sort.body)}`);
+  return { haul: haul.body, sort: sort.body };
+}
