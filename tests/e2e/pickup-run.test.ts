@@ -41,12 +41,13 @@ describe("pickup run journey", () => {
     const { page, context } = await newPage(browser, { viewport: { width: 1200, height: 900 } });
     await signInAs(page, DEMO.organiser);
     await page.goto("/runs/new");
-    await expect.poll(() => page.getByRole("checkbox").count()).toBe(points.length);
+    const picker = page.getByRole("group", { name: "Drop points to visit" });
+    await expect.poll(() => picker.getByRole("checkbox").count()).toBe(points.length);
     for (const p of points) {
-      await page.getByRole("checkbox", { name: new RegExp(p.name) }).setChecked(WANTED.includes(p.name));
+      await picker.getByRole("checkbox", { name: new RegExp(p.name) }).setChecked(WANTED.includes(p.name));
     }
     await page.getByLabel("Day of the run").fill("2026-12-12");
-    await page.getByLabel("Volunteer").selectOption({ label: "Tobin Ashgrove (volunteer)" });
+    await page.getByLabel("Volunteer", { exact: true }).selectOption({ label: "Tobin Ashgrove (volunteer)" });
     await page.getByTestId("route-length").waitFor();
     await expect.poll(() => page.locator(".leaflet-marker-icon").count()).toBe(3);
     await expect.poll(() => page.getByRole("list", { name: "Stops in order" }).getByRole("listitem").count()).toBe(4);
