@@ -4,7 +4,7 @@ export interface HistoryPoint {
   id: string;
   name: string;
   driveName: string;
-  history: { runId: string; plannedOn: string; status: "pending" | "logged" | "skipped"; skipReason: string | null; assigneeName: string | null }[];
+  history: { runId: string; plannedOn: string; status: "pending" | "logged" | "skipped"; skipReason: string | null; haulBags: number | null; assigneeName: string | null }[];
 }
 
 const STATUS_TEXT = { pending: "planned", logged: "haul logged", skipped: "skipped" } as const;
@@ -25,6 +25,7 @@ export function PickupHistory({ points }: { points: HistoryPoint[] }) {
                 {p.history.map((h) => (
                   <li key={h.runId}>
                     <Link href={`/runs/${h.runId}`}>{h.plannedOn}</Link> · {h.assigneeName ?? "nobody"} · {STATUS_TEXT[h.status]}
+                    {h.haulBags !== null ? `: ${h.haulBags} bag${h.haulBags === 1 ? "" : "s"}` : null}
                     {h.skipReason ? <span className="text-ink-faint"> — “{h.skipReason}”</span> : null}
                   </li>
                 ))}

@@ -6,10 +6,12 @@ import { useEffect, useMemo } from "react";
 import { CircleMarker, MapContainer, Marker, Polyline, TileLayer, Tooltip, useMap } from "react-leaflet";
 import type { RouteMapProps } from "./route-map";
 
-function numberIcon(n: number, done: boolean) {
+const MARKER_COLOUR = { pending: "#a8431a", logged: "#2f6a4a", skipped: "#6b6156" } as const;
+
+function numberIcon(n: number, status: keyof typeof MARKER_COLOUR) {
   return L.divIcon({
     className: "",
-    html: `<span style="display:flex;align-items:center;justify-content:center;width:28px;height:28px;border-radius:999px;border:2px solid #fff;background:${done ? "#2f6a4a" : "#a8431a"};color:#fff;font-weight:700;font-size:14px;box-shadow:0 1px 3px rgba(0,0,0,.4)">${n}</span>`,
+    html: `<span style="display:flex;align-items:center;justify-content:center;width:28px;height:28px;border-radius:999px;border:2px solid #fff;background:${MARKER_COLOUR[status]};color:#fff;font-weight:700;font-size:14px;box-shadow:0 1px 3px rgba(0,0,0,.4)">${n}</span>`,
     iconSize: [28, 28],
     iconAnchor: [14, 14],
   });
@@ -50,7 +52,7 @@ export default function RouteMapInner({ start, stops, returnToStart, tileUrl, at
         <Tooltip>Start</Tooltip>
       </CircleMarker>
       {stops.map((s, i) => (
-        <Marker key={s.id} position={[s.lat, s.lng]} icon={numberIcon(i + 1, s.done === true)} title={`${i + 1}. ${s.name}`}>
+        <Marker key={s.id} position={[s.lat, s.lng]} icon={numberIcon(i + 1, s.status ?? "pending")} title={`${i + 1}. ${s.name}`}>
           <Tooltip>{`${i + 1}. ${s.name}`}</Tooltip>
         </Marker>
       ))}

@@ -6,7 +6,7 @@ import { Skeleton } from "@/components/ui/card";
 export interface RouteMapProps {
   start: { lat: number; lng: number };
   /** In visiting order; the marker shows the position. */
-  stops: { id: string; name: string; lat: number; lng: number; done?: boolean }[];
+  stops: { id: string; name: string; lat: number; lng: number; status?: "pending" | "logged" | "skipped" }[];
   returnToStart?: boolean;
   tileUrl: string;
   attribution: string;

@@ -39,7 +39,16 @@ function StopCard({ run, stop, canAct, isNext, onDone }: { run: RunDetail; stop:
       </dl>
       <div className="mt-3">
         {stop.status === "logged" ? (
-          <p className="font-semibold text-moss-deep">Haul logged ✓</p>
+          <p className="font-semibold text-moss-deep">
+            Haul logged ✓
+            {stop.haul ? (
+              <span className="font-normal text-ink-soft">
+                {" "}
+                — {stop.haul.bags} bag{stop.haul.bags === 1 ? "" : "s"}
+                {stop.haul.weightKg !== null ? `, ${stop.haul.weightKg} kg` : ""}, about {stop.haul.estimatedCans} cans (estimate)
+              </span>
+            ) : null}
+          </p>
         ) : stop.status === "skipped" ? (
           <p className="font-semibold text-ink-soft">Skipped — “{stop.skipReason}”</p>
         ) : canAct ? (
@@ -81,7 +90,7 @@ export function RunView({ initial, canAct, tileUrl, attribution }: { initial: Ru
       {run.notes ? <Notice title="Notes from the organiser">{run.notes}</Notice> : null}
       <RouteMap
         start={run.start}
-        stops={run.stopList.map((s) => ({ id: s.id, name: s.dropPoint.name, lat: s.dropPoint.lat, lng: s.dropPoint.lng, done: s.status !== "pending" }))}
+        stops={run.stopList.map((s) => ({ id: s.id, name: s.dropPoint.name, lat: s.dropPoint.lat, lng: s.dropPoint.lng, status: s.status }))}
         returnToStart={run.returnToStart}
         tileUrl={tileUrl}
         attribution={attribution}

@@ -6,6 +6,7 @@ function fillLabel(s: SuggestionRow): string {
   const parts: string[] = [];
   if (s.reportedFill !== null) parts.push(`reported ${Math.round(s.reportedFill * 100)} % full`);
   if (s.daysSinceHaul === null) parts.push("never hauled");
+  else if (s.daysSinceHaul < 1) parts.push("hauled today");
   else parts.push(`last haul ${Math.floor(s.daysSinceHaul)} day${Math.floor(s.daysSinceHaul) === 1 ? "" : "s"} ago`);
   if (s.expectedFill !== null) parts.push(`expected about ${Math.round(Math.min(s.expectedFill, 9.99) * 100)} % full (estimate)`);
   return parts.join(" · ");

@@ -57,6 +57,7 @@ export interface PickupHistoryEntry {
   status: "pending" | "logged" | "skipped";
   skipReason: string | null;
   haulId: string | null;
+  haulBags: number | null;
   assigneeName: string | null;
 }
 
@@ -70,7 +71,9 @@ export async function pickupHistory(groupId: string) {
   const stops = await db("pickup_run_stops as s")
     .join("pickup_runs as r", "r.id", "s.run_id")
     .leftJoin("users as u", "u.id", "r.assignee_id")
+    .leftJoin("hauls as h", "h.id", "s.haul_id")
     .select(
+      "h.bags as haulBags",
       "s.drop_point_id as dropPointId",
       "r.id as runId",
       db.raw(`to_char(r.planned_on, 'YYYY-MM-DD') as "plannedOn"`),

@@ -56,6 +56,7 @@ export interface RunStop {
   skipReason: string | null;
   haulId: string | null;
   resolvedAt: string | null;
+  haul: { bags: number; weightKg: number | null; estimatedCans: number } | null;
   dropPoint: {
     id: string;
     name: string;
@@ -96,7 +97,11 @@ export async function getRun(actor: Actor, runId: string, trx: Knex = db): Promi
   if (!run) throw notFound("That pickup run");
   const stops = await trx("pickup_run_stops as s")
     .join("drop_points as p", "p.id", "s.drop_point_id")
+    .leftJoin("hauls as h", "h.id", "s.haul_id")
     .select(
+      "h.bags as haulBags",
+      "h.weight_kg as haulWeightKg",
+      "h.estimated_cans as haulCans",
       "s.id",
       "s.position",
       "s.leg_km as legKm",
@@ -130,6 +135,9 @@ export async function getRun(actor: Actor, runId: string, trx: Knex = db): Promi
       skipReason: s.skipReason,
       haulId: s.haulId,
       resolvedAt: s.resolvedAt ? new Date(s.resolvedAt).toISOString() : null,
+      haul: s.haulId
+        ? { bags: s.haulBags, weightKg: s.haulWeightKg === null ? null : Number(s.haulWeightKg), estimatedCans: s.haulCans }
+        : null,
       dropPoint: {
         id: s.pointId,
         name: s.name,

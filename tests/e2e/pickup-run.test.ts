@@ -111,5 +111,20 @@ describe("pickup run journey", () => {
     const skipped = await testDb()("pickup_run_stops").where({ run_id: runId, drop_point_id: idOf("Millbrook School gate") }).first();
     expect(skipped.status).toBe("skipped");
     expect(skipped.haul_id).toBeNull();
+
+    // The organiser sees the run among the done ones, and each drop point's pickup history.
+    const org = await newPage(browser, { viewport: { width: 1200, height: 900 } });
+    await signInAs(org.page, DEMO.organiser);
+    await org.page.goto("/runs");
+    const card = (title: string) => org.page.locator("section", { has: org.page.getByRole("heading", { name: title, exact: true }) });
+    const done = card("Done");
+    await done.getByRole("link", { name: /2026-12-12 · Tobin Ashgrove/ }).waitFor();
+    const history = card("Pickup history by drop point");
+    await history.getByText(/^Hilltop Corner Shop/).click();
+    await history.getByText(/haul logged: 2 bags/).first().waitFor();
+    await history.getByText(/^Millbrook School gate/).click();
+    await history.getByText(/“School closed for the holidays”/).first().waitFor();
+    if (SHOTS) await org.page.screenshot({ path: `${SHOTS}/runs-list.png`, fullPage: true });
+    await org.context.close();
   });
 });
