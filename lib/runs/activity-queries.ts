@@ -42,7 +42,7 @@ export async function recentHauls(groupId: string, dropPointIds: string[]): Prom
   return out;
 }
 
-/** The newest fill report of each drop point, as a share of the bin. */
+/** The newest fill report of each drop point, as a share of the bin (reports give percent). */
 export async function latestFillReports(
   groupId: string,
   dropPointIds: string[],
@@ -51,7 +51,7 @@ export async function latestFillReports(
   if (dropPointIds.length === 0 || !(await tableExists("fill_reports"))) return out;
   const rows = await db("fill_reports")
     .distinctOn("drop_point_id")
-    .select("drop_point_id", "fill_fraction as fraction", "created_at as at")
+    .select("drop_point_id", db.raw("level / 100.0 as fraction"), "created_at as at")
     .where("group_id", groupId)
     .whereIn("drop_point_id", dropPointIds)
     .orderBy([{ column: "drop_point_id" }, { column: "created_at", order: "desc" }]);
