@@ -6,6 +6,7 @@ import { ROLE_LABEL, type Role } from "@/lib/auth/roles";
 const NAV: Record<Role, { href: string; label: string }[]> = {
   organiser: [
     { href: "/dashboard", label: "Dashboard" },
+    { href: "/organise/drives", label: "Drives" },
     { href: "/runs", label: "Pickup runs" },
     { href: "/ledger", label: "Ledger" },
     { href: "/log", label: "Log" },

@@ -37,6 +37,40 @@ export const fileRouter = {
         .ignore();
       return { url: file.ufsUrl };
     }),
+  // A photo with a "this bin is full" report: anyone may add one, but only to a
+  // report made in the last 15 minutes that has no photo yet.
+  fillReportPhoto: f({ image: { maxFileSize: "4MB", maxFileCount: 1 } })
+    .input(z.object({ fillReportId: z.string().uuid() }))
+    .middleware(async ({ input }) => {
+      const report = await db("fill_reports as f")
+        .join("drop_points as p", "p.id", "f.drop_point_id")
+        .join("drives as d", "d.id", "p.drive_id")
+        .select("f.id", "f.group_id")
+        .where({ "f.id": input.fillReportId, "d.is_public": true })
+        .whereNull("f.photo_file_id")
+        .andWhere("f.created_at", ">", db.raw("now() - interval '15 minutes'"))
+        .first();
+      if (!report) throw new UploadThingError({ code: "NOT_FOUND", message: "That report cannot take a photo any more; send a new report." });
+      return { groupId: report.group_id as string, fillReportId: report.id as string };
+    })
+    .onUploadComplete(async ({ metadata, file }) => {
+      const [row] = await db("files")
+        .insert({
+          group_id: metadata.groupId,
+          key: file.key,
+          url: file.ufsUrl,
+          name: file.name.slice(0, 240),
+          size: file.size,
+          mime: file.type,
+          purpose: "fill-report-photo",
+          subject_id: metadata.fillReportId,
+        })
+        .onConflict("key")
+        .ignore()
+        .returning("id");
+      if (row) await db("fill_reports").where({ id: metadata.fillReportId }).whereNull("photo_file_id").update({ photo_file_id: row.id });
+      return { url: file.ufsUrl };
+    }),
 } satisfies FileRouter;
 
 export type CantroveFileRouter = typeof fileRouter;

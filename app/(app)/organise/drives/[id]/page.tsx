@@ -1,0 +1,46 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { DriveForm } from "@/components/drives/organise/drive-form";
+import { DropPointsEditor } from "@/components/drives/organise/drop-points-editor";
+import { PledgesAndReports } from "@/components/drives/organise/pledges-and-reports";
+import { Card } from "@/components/ui/card";
+import { requirePageRole } from "@/lib/auth/session";
+import { db } from "@/lib/db";
+import { findDrive, listDropPoints, listFillReports, listPledges } from "@/lib/drives/queries";
+import { tileConfig } from "@/lib/map/config";
+
+export const metadata: Metadata = { title: "Drive" };
+
+export default async function EditDrivePage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const actor = await requirePageRole(`/organise/drives/${id}`, "organiser");
+  const drive = await findDrive(actor.group.id, id);
+  if (!drive) notFound();
+  const [points, pledges, reports, group] = await Promise.all([
+    listDropPoints(actor.group.id, drive.id),
+    listPledges(actor.group.id, drive.id),
+    listFillReports(actor.group.id, drive.id),
+    db("groups").select("workshop_lat as lat", "workshop_lng as lng").where({ id: actor.group.id }).first(),
+  ]);
+  const centre = points.length
+    ? { lat: points.reduce((s, p) => s + p.lat, 0) / points.length, lng: points.reduce((s, p) => s + p.lng, 0) / points.length }
+    : { lat: group?.lat ?? 47.2, lng: group?.lng ?? -8.0 };
+  const tiles = tileConfig();
+  return (
+    <main className="flex flex-col gap-6">
+      <div>
+        <p><Link href="/organise/drives">← All drives</Link></p>
+        <h1 className="text-3xl">{drive.name}</h1>
+        {drive.isPublic ? <p><Link href={`/drives/${drive.slug}`}>Open the public page</Link></p> : <p className="text-ink-faint">Not public</p>}
+      </div>
+      <Card title="Drop points">
+        <DropPointsEditor driveId={drive.id} points={points} centre={centre} tileUrl={tiles.tileUrl} attribution={tiles.attribution} />
+      </Card>
+      <PledgesAndReports pledges={pledges} reports={reports} points={points} slug={drive.slug} />
+      <Card title="Drive details">
+        <DriveForm driveId={drive.id} initial={{ ...drive }} />
+      </Card>
+    </main>
+  );
+}

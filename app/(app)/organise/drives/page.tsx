@@ -1,0 +1,37 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { ButtonLink } from "@/components/ui/button";
+import { Card, EmptyState } from "@/components/ui/card";
+import { requirePageRole } from "@/lib/auth/session";
+import { listDrives } from "@/lib/drives/queries";
+
+export const metadata: Metadata = { title: "Drives" };
+
+export default async function OrganiseDrivesPage() {
+  const actor = await requirePageRole("/organise/drives", "organiser");
+  const drives = await listDrives(actor.group.id);
+  return (
+    <main className="flex flex-col gap-6">
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <h1 className="text-3xl">Drives</h1>
+        <ButtonLink href="/organise/drives/new">New drive</ButtonLink>
+      </div>
+      <Card>
+        {drives.length === 0 ? (
+          <EmptyState title="No drives yet">Start one with “New drive”, then place its drop points on the map.</EmptyState>
+        ) : (
+          <ul className="divide-y divide-paper-edge">
+            {drives.map((d) => (
+              <li key={d.id} className="flex flex-wrap items-baseline justify-between gap-2 py-3">
+                <Link href={`/organise/drives/${d.id}`} className="text-lg font-semibold">{d.name}</Link>
+                <span className="text-ink-faint">
+                  {d.startsOn} to {d.endsOn} · {d.dropPoints} drop points · {d.isPublic ? "public" : "not public"}
+                </span>
+              </li>
+            ))}
+          </ul>
+        )}
+      </Card>
+    </main>
+  );
+}

@@ -1,0 +1,52 @@
+import Link from "next/link";
+import { Card, EmptyState } from "@/components/ui/card";
+import { LEVEL_LABEL } from "@/lib/drives/fill";
+
+interface Pledge { id: string; name: string | null; email: string | null; bags: number; bringOn: string; dropPointName: string }
+interface Report { id: string; level: number; note: string; alerted: boolean; createdAt: Date; dropPointName: string; photoUrl: string | null }
+
+export function PledgesAndReports({ pledges, reports, points, slug }: { pledges: Pledge[]; reports: Report[]; points: { id: string; name: string }[]; slug: string }) {
+  const when = (d: Date) => new Date(d).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
+  return (
+    <>
+      <Card title={`Pledges (${pledges.length})`}>
+        {pledges.length === 0 ? (
+          <EmptyState title="No pledges yet">Share the public page; donors can pledge bags there.</EmptyState>
+        ) : (
+          <ul className="divide-y divide-paper-edge" aria-label="Pledges">
+            {pledges.map((p) => (
+              <li key={p.id} className="py-2">
+                <strong>{p.bags} bag{p.bags === 1 ? "" : "s"}</strong> to {p.dropPointName} on {p.bringOn}
+                <span className="block text-sm text-ink-soft">{p.name || "Anonymous"}{p.email ? ` · ${p.email}` : ""}</span>
+              </li>
+            ))}
+          </ul>
+        )}
+      </Card>
+      <Card title="Fill reports">
+        {reports.length === 0 ? (
+          <EmptyState title="No fill reports yet" />
+        ) : (
+          <ul className="divide-y divide-paper-edge" aria-label="Fill reports">
+            {reports.map((r) => (
+              <li key={r.id} className="py-2">
+                <strong>{r.dropPointName}</strong>: {LEVEL_LABEL[r.level] ?? `${r.level}%`} {r.alerted ? <span className="font-semibold text-alarm">· alert sent</span> : null}
+                <span className="block text-sm text-ink-soft">{when(r.createdAt)} UTC{r.note ? ` · “${r.note}”` : ""}</span>
+                {r.photoUrl ? <a href={r.photoUrl}>See the photo</a> : null}
+              </li>
+            ))}
+          </ul>
+        )}
+      </Card>
+      <Card title="Printable signs">
+        <ul className="flex flex-col gap-1">
+          {points.map((p) => (
+            <li key={p.id}>
+              <Link href={`/drives/${slug}/sign/${p.id}`}>Sign for {p.name}</Link>
+            </li>
+          ))}
+        </ul>
+      </Card>
+    </>
+  );
+}
