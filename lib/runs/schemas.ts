@@ -15,7 +15,9 @@ const uuid = (what: string) => z.uuid({ error: `Choose ${what}` });
 
 function degrees(name: string, limit: number) {
   return z
-    .number({ error: `${name} must be a number in degrees` })
+    .number({
+      error: (issue) => (issue.input === undefined || issue.input === null ? `${name} is required` : `${name} must be a number in degrees`),
+    })
     .min(-limit, { error: `${name} must be between −${limit} and ${limit}` })
     .max(limit, { error: `${name} must be between −${limit} and ${limit}` });
 }
