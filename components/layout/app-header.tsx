@@ -8,13 +8,17 @@ const NAV: Record<Role, { href: string; label: string }[]> = {
   organiser: [
     { href: "/dashboard", label: "Dashboard" },
     { href: "/organise/drives", label: "Drives" },
+    { href: "/runs", label: "Pickup runs" },
     { href: "/ledger", label: "Ledger" },
     { href: "/log", label: "Log" },
     { href: "/units", label: "Heater units" },
     { href: "/members", label: "Members" },
     { href: "/mail", label: "Sent mail" },
   ],
-  volunteer: [{ href: "/log", label: "Log" }],
+  volunteer: [
+    { href: "/log", label: "Log" },
+    { href: "/runs", label: "My runs" },
+  ],
   builder: [
     { href: "/units", label: "My units" },
     { href: "/plan", label: "Planner" },

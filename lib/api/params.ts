@@ -10,3 +10,9 @@ export async function uuidParam(ctx: IdContext, what = "That record"): Promise<s
   if (!UUID.test(id)) throw notFound(what);
   return id.toLowerCase();
 }
+
+/** The same check for any other path or query value (a second `[stopId]`, `?driveId=`). */
+export function uuidValue(value: string | null | undefined, what = "That record"): string {
+  if (!value || !UUID.test(value)) throw notFound(what);
+  return value.toLowerCase();
+}

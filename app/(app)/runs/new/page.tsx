@@ -1,0 +1,51 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { EmptyState } from "@/components/ui/card";
+import { RunPlanner } from "@/components/runs/run-planner";
+import { requirePageRole } from "@/lib/auth/session";
+import { env } from "@/lib/env";
+import { groupWorkshop, plannerDrives, suggestedStops } from "@/lib/runs/planner-queries";
+import { listDrivers } from "@/lib/runs/queries";
+
+export const metadata: Metadata = { title: "Plan a pickup run" };
+
+function tomorrow(): string {
+  return new Date(Date.now() + 86_400_000).toISOString().slice(0, 10);
+}
+
+export default async function NewRunPage({ searchParams }: { searchParams: Promise<{ drive?: string }> }) {
+  const actor = await requirePageRole("/runs/new", "organiser");
+  const drives = await plannerDrives(actor.group.id);
+  if (drives.length === 0) {
+    return (
+      <main className="flex flex-col gap-4">
+        <h1 className="text-3xl">Plan a pickup run</h1>
+        <EmptyState title="No drives yet">A run visits the drop points of a drive. Set up a drive first.</EmptyState>
+      </main>
+    );
+  }
+  const wanted = (await searchParams).drive;
+  // Default to the drive that is still running longest, where bins are filling now.
+  const drive = drives.find((d) => d.id === wanted) ?? drives[0]!;
+  const [suggestions, workshop, drivers] = await Promise.all([
+    suggestedStops(actor.group.id, drive.id),
+    groupWorkshop(actor.group.id),
+    listDrivers(actor.group.id),
+  ]);
+  return (
+    <main className="flex flex-col gap-4">
+      <p><Link href="/runs">← Pickup runs</Link></p>
+      <h1 className="text-3xl">Plan a pickup run</h1>
+      <RunPlanner
+        drives={drives.map((d) => ({ id: d.id, name: d.name }))}
+        initialDriveId={drive.id}
+        initialSuggestions={suggestions.map((s) => ({ ...s, lastHaulAt: s.lastHaulAt ? s.lastHaulAt.toISOString() : null }))}
+        workshop={workshop}
+        drivers={drivers}
+        defaultDate={tomorrow()}
+        tileUrl={env().TILE_URL}
+        attribution={env().TILE_ATTRIBUTION}
+      />
+    </main>
+  );
+}

@@ -1,0 +1,47 @@
+import type { Metadata } from "next";
+import { ButtonLink } from "@/components/ui/button";
+import { Card } from "@/components/ui/card";
+import { PickupHistory } from "@/components/runs/pickup-history";
+import { RunList } from "@/components/runs/run-list";
+import { requirePageRole } from "@/lib/auth/session";
+import { pickupHistory } from "@/lib/runs/planner-queries";
+import { listRuns } from "@/lib/runs/queries";
+
+export const metadata: Metadata = { title: "Pickup runs" };
+
+export default async function RunsPage() {
+  const actor = await requirePageRole("/runs", "organiser", "volunteer");
+  const runs = await listRuns(actor);
+  if (actor.role !== "organiser") {
+    return (
+      <main className="flex flex-col gap-4">
+        <h1 className="text-3xl">Your pickup runs</h1>
+        <Card>
+          <RunList runs={runs} empty="No runs for you yet. An organiser will send you one by e-mail." />
+        </Card>
+      </main>
+    );
+  }
+  const history = await pickupHistory(actor.group.id);
+  const by = (state: string) => runs.filter((r) => r.state === state);
+  return (
+    <main className="flex flex-col gap-4">
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <h1 className="text-3xl">Pickup runs</h1>
+        <ButtonLink href="/runs/new">Plan a run</ButtonLink>
+      </div>
+      <Card title="Under way">
+        <RunList runs={by("under_way")} empty="No run is under way." />
+      </Card>
+      <Card title="Planned">
+        <RunList runs={by("planned")} empty="No runs planned. Plan one to empty the fullest bins." />
+      </Card>
+      <Card title="Done">
+        <RunList runs={by("done")} empty="No finished runs yet." />
+      </Card>
+      <Card title="Pickup history by drop point">
+        <PickupHistory points={history} />
+      </Card>
+    </main>
+  );
+}

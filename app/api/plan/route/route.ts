@@ -1,0 +1,23 @@
+import { NextResponse } from "next/server";
+import { parseJson, route } from "@/lib/api/handler";
+import { planRoute } from "@/lib/routes/route";
+import { routeInputSchema } from "@/lib/routes/schemas";
+
+export const dynamic = "force-dynamic";
+
+// Open to anyone: a pure computation over the coordinates sent, no stored data.
+// The same body always yields the same order, so a repeated Idempotency-Key
+// with the same body gets the same answer without storing anything.
+export const POST = route(async (request) => {
+  const sent = (await request.clone().json().catch(() => null)) as { stops?: { id?: unknown }[] } | null;
+  const input = await parseJson(request, routeInputSchema);
+  const plan = planRoute(input);
+  // The schema compares ids as text; hand each back exactly as the caller sent it (7 stays a number).
+  const original = new Map<string, unknown>(input.stops.map((stop, i) => [stop.id, sent?.stops?.[i]?.id ?? stop.id]));
+  const back = (id: string | null) => (id === null ? null : original.get(id));
+  return NextResponse.json({
+    order: plan.order.map(back),
+    distanceKm: plan.distanceKm,
+    legs: plan.legs.map((leg) => ({ from: back(leg.from), to: back(leg.to), distanceKm: leg.km })),
+  });
+});

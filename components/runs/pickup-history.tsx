@@ -1,0 +1,39 @@
+import Link from "next/link";
+
+export interface HistoryPoint {
+  id: string;
+  name: string;
+  driveName: string;
+  history: { runId: string; plannedOn: string; status: "pending" | "logged" | "skipped"; skipReason: string | null; haulBags: number | null; assigneeName: string | null }[];
+}
+
+const STATUS_TEXT = { pending: "planned", logged: "haul logged", skipped: "skipped" } as const;
+
+export function PickupHistory({ points }: { points: HistoryPoint[] }) {
+  return (
+    <ul className="flex flex-col gap-2">
+      {points.map((p) => (
+        <li key={p.id}>
+          <details className="rounded-lg border border-paper-edge bg-white p-3">
+            <summary className="cursor-pointer font-semibold">
+              {p.name} <span className="font-normal text-ink-faint">· {p.driveName} · {p.history.length} visit{p.history.length === 1 ? "" : "s"} on runs</span>
+            </summary>
+            {p.history.length === 0 ? (
+              <p className="mt-2 text-ink-soft">No run has visited this drop point yet.</p>
+            ) : (
+              <ol className="mt-2 flex flex-col gap-1">
+                {p.history.map((h) => (
+                  <li key={h.runId}>
+                    <Link href={`/runs/${h.runId}`}>{h.plannedOn}</Link> · {h.assigneeName ?? "nobody"} · {STATUS_TEXT[h.status]}
+                    {h.haulBags !== null ? `: ${h.haulBags} bag${h.haulBags === 1 ? "" : "s"}` : null}
+                    {h.skipReason ? <span className="text-ink-faint"> — “{h.skipReason}”</span> : null}
+                  </li>
+                ))}
+              </ol>
+            )}
+          </details>
+        </li>
+      ))}
+    </ul>
+  );
+}

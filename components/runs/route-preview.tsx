@@ -1,0 +1,57 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import { runQueries, type SuggestionRow } from "@/hooks/queries/runs";
+import { Skeleton } from "@/components/ui/card";
+import { RouteMap } from "./route-map";
+
+export function RoutePreview({
+  start,
+  stops,
+  returnToStart,
+  tileUrl,
+  attribution,
+}: {
+  start: { lat: number; lng: number } | null;
+  stops: SuggestionRow[];
+  returnToStart: boolean;
+  tileUrl: string;
+  attribution: string;
+}) {
+  const ready = start !== null && stops.length > 0;
+  const input = {
+    start: start ?? { lat: 0, lng: 0 },
+    stops: stops.map((s) => ({ id: s.id, lat: s.lat, lng: s.lng })),
+    returnToStart,
+  };
+  const route = useQuery({ ...runQueries.route(input), enabled: ready });
+  if (!ready) {
+    return <p className="text-ink-soft">Choose a start point and at least one drop point to see the route.</p>;
+  }
+  if (route.isPending) return <Skeleton className="h-72 w-full" />;
+  if (route.isError) return <p role="alert" className="font-semibold text-alarm">{route.error.message}</p>;
+  const byId = new Map(stops.map((s) => [s.id, s]));
+  const ordered = route.data.order.map((id) => byId.get(id)!).filter(Boolean);
+  return (
+    <div className="flex flex-col gap-3">
+      <p className="text-lg">
+        Route length <strong data-testid="route-length">{route.data.distanceKm.toFixed(2)} km</strong>{" "}
+        <span className="text-sm text-ink-faint">(straight lines between stops; roads are longer)</span>
+      </p>
+      <RouteMap start={start} stops={ordered} returnToStart={returnToStart} tileUrl={tileUrl} attribution={attribution} />
+      <ol className="flex flex-col gap-1" aria-label="Stops in order">
+        <li className="text-ink-soft">Start</li>
+        {ordered.map((s, i) => (
+          <li key={s.id} className="flex justify-between gap-2">
+            <span>
+              <span className="mr-2 inline-flex h-6 w-6 items-center justify-center rounded-full bg-ember text-sm font-bold text-white">{i + 1}</span>
+              {s.name}
+            </span>
+            <span className="text-ink-faint">+{route.data.legs[i]!.distanceKm.toFixed(2)} km</span>
+          </li>
+        ))}
+        {returnToStart ? <li className="text-ink-soft">Back to the start (+{route.data.legs.at(-1)!.distanceKm.toFixed(2)} km)</li> : null}
+      </ol>
+    </div>
+  );
+}

@@ -1,0 +1,46 @@
+import Link from "next/link";
+import { EmptyState } from "@/components/ui/card";
+import { RUN_STATE_LABEL, type RunState } from "@/lib/runs/schemas";
+
+export interface RunListItem {
+  id: string;
+  driveName: string;
+  plannedOn: string;
+  state: RunState;
+  distanceKm: number;
+  assigneeName: string | null;
+  stops: number;
+  logged: number;
+  skipped: number;
+}
+
+const BADGE: Record<RunState, string> = {
+  planned: "bg-paper-deep text-ink-soft",
+  under_way: "bg-sun-soft text-sun",
+  done: "bg-moss-soft text-moss-deep",
+};
+
+export function RunStateBadge({ state }: { state: RunState }) {
+  return <span className={`rounded px-2 py-0.5 text-sm font-semibold ${BADGE[state]}`}>{RUN_STATE_LABEL[state]}</span>;
+}
+
+export function RunList({ runs, empty }: { runs: RunListItem[]; empty: string }) {
+  if (runs.length === 0) return <EmptyState title={empty} />;
+  return (
+    <ul className="divide-y divide-paper-edge">
+      {runs.map((r) => (
+        <li key={r.id} className="flex flex-wrap items-baseline justify-between gap-2 py-3">
+          <span>
+            <Link href={`/runs/${r.id}`} className="text-lg font-semibold">
+              {r.plannedOn} · {r.assigneeName ?? "nobody assigned"}
+            </Link>{" "}
+            <RunStateBadge state={r.state} />
+          </span>
+          <span className="text-ink-faint">
+            {r.driveName} · {r.stops} stops ({r.logged} logged, {r.skipped} skipped) · {r.distanceKm.toFixed(1)} km
+          </span>
+        </li>
+      ))}
+    </ul>
+  );
+}

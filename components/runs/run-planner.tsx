@@ -1,0 +1,146 @@
+"use client";
+
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useRouter } from "next/navigation";
+import { useMemo, useState } from "react";
+import { Button } from "@/components/ui/button";
+import { Card, Skeleton } from "@/components/ui/card";
+import { Field, FormError } from "@/components/ui/field";
+import { ApiError, fetchJson } from "@/lib/api/fetch-json";
+import { fieldErrorsOf } from "@/lib/api/errors";
+import { createRunInputSchema } from "@/lib/runs/schemas";
+import { runQueries, type SuggestionRow } from "@/hooks/queries/runs";
+import { StopPicker } from "./stop-picker";
+import { RoutePreview } from "./route-preview";
+
+export interface PlannerProps {
+  drives: { id: string; name: string }[];
+  initialDriveId: string;
+  initialSuggestions: SuggestionRow[];
+  workshop: { lat: number; lng: number } | null;
+  drivers: { id: string; name: string; role: string }[];
+  defaultDate: string;
+  tileUrl: string;
+  attribution: string;
+}
+
+const selectClass = "min-h-11 rounded-lg border-2 border-ink/40 bg-white px-3 py-2";
+
+export function RunPlanner(props: PlannerProps) {
+  const router = useRouter();
+  const queryClient = useQueryClient();
+  const [driveId, setDriveId] = useState(props.initialDriveId);
+  const suggestions = useQuery({
+    ...runQueries.suggestions(driveId),
+    initialData: driveId === props.initialDriveId ? props.initialSuggestions : undefined,
+  });
+  const [selection, setSelection] = useState({ driveId: props.initialDriveId, ids: new Set(props.initialSuggestions.filter((s) => s.suggested).map((s) => s.id)) });
+  // A new drive's suggestions replace the choice once they arrive.
+  if (selection.driveId !== driveId && suggestions.data) {
+    setSelection({ driveId, ids: new Set(suggestions.data.filter((s) => s.suggested).map((s) => s.id)) });
+  }
+  const [lat, setLat] = useState(props.workshop ? String(props.workshop.lat) : "");
+  const [lng, setLng] = useState(props.workshop ? String(props.workshop.lng) : "");
+  const [returnToStart, setReturnToStart] = useState(false);
+  const [plannedOn, setPlannedOn] = useState(props.defaultDate);
+  const [assigneeId, setAssigneeId] = useState("");
+  const [notes, setNotes] = useState("");
+  const [errors, setErrors] = useState<Record<string, string>>({});
+
+  const start = useMemo(() => {
+    const a = Number(lat);
+    const b = Number(lng);
+    return lat.trim() && lng.trim() && Number.isFinite(a) && Number.isFinite(b) && Math.abs(a) <= 90 && Math.abs(b) <= 180 ? { lat: a, lng: b } : null;
+  }, [lat, lng]);
+  const chosen = (suggestions.data ?? []).filter((s) => selection.ids.has(s.id));
+
+  const create = useMutation({
+    mutationFn: (body: unknown) => fetchJson<{ id: string }>("/api/runs", { method: "POST", json: body }),
+    onSuccess: async (run) => {
+      await queryClient.invalidateQueries({ queryKey: runQueries.all() });
+      router.push(`/runs/${run.id}`);
+    },
+    onError: (error) => setErrors(error instanceof ApiError ? (error.fields ?? {}) : {}),
+  });
+
+  function submit(event: React.FormEvent) {
+    event.preventDefault();
+    const body = {
+      driveId,
+      plannedOn,
+      start: { lat: lat.trim() === "" ? undefined : Number(lat), lng: lng.trim() === "" ? undefined : Number(lng) },
+      returnToStart,
+      dropPointIds: chosen.map((s) => s.id),
+      assigneeId,
+      notes,
+    };
+    const parsed = createRunInputSchema.safeParse(body);
+    if (!parsed.success) return setErrors(fieldErrorsOf(parsed.error));
+    setErrors({});
+    create.mutate(parsed.data);
+  }
+
+  const toggle = (id: string) =>
+    setSelection((s) => {
+      const ids = new Set(s.ids);
+      if (ids.has(id)) ids.delete(id);
+      else ids.add(id);
+      return { ...s, ids };
+    });
+
+  return (
+    <form onSubmit={submit} noValidate className="grid gap-6 lg:grid-cols-2">
+      <div className="flex flex-col gap-4">
+        <Card title="1. Drive and stops">
+          <div className="flex flex-col gap-1">
+            <label htmlFor="drive" className="font-semibold">Drive</label>
+            <select id="drive" className={selectClass} value={driveId} onChange={(e) => setDriveId(e.target.value)}>
+              {props.drives.map((d) => <option key={d.id} value={d.id}>{d.name}</option>)}
+            </select>
+          </div>
+          <div className="mt-4">
+            {suggestions.isPending ? (
+              <Skeleton className="h-40 w-full" />
+            ) : suggestions.isError ? (
+              <p role="alert" className="font-semibold text-alarm">{suggestions.error.message}</p>
+            ) : suggestions.data.length === 0 ? (
+              <p className="text-ink-soft">This drive has no active drop points. Add drop points to the drive first.</p>
+            ) : (
+              <StopPicker suggestions={suggestions.data} selected={selection.ids} onToggle={toggle} error={errors.dropPointIds} />
+            )}
+          </div>
+        </Card>
+        <Card title="2. Start, day and volunteer">
+          <p className="mb-2 text-sm text-ink-faint">Starts at the group&apos;s workshop; change it if the run starts elsewhere.</p>
+          <div className="grid grid-cols-2 gap-3">
+            <Field id="start-lat" label="Start latitude" inputMode="decimal" value={lat} onChange={(e) => setLat(e.target.value)} error={errors["start.lat"] ?? errors.start} />
+            <Field id="start-lng" label="Start longitude" inputMode="decimal" value={lng} onChange={(e) => setLng(e.target.value)} error={errors["start.lng"]} />
+          </div>
+          <label className="mt-1 flex items-center gap-2">
+            <input type="checkbox" className="h-5 w-5 accent-ember" checked={returnToStart} onChange={(e) => setReturnToStart(e.target.checked)} />
+            Come back to the start at the end
+          </label>
+          <Field id="planned-on" className="mt-3" label="Day of the run" type="date" value={plannedOn} onChange={(e) => setPlannedOn(e.target.value)} error={errors.plannedOn} />
+          <div className="flex flex-col gap-1">
+            <label htmlFor="assignee" className="font-semibold">Volunteer</label>
+            <select id="assignee" aria-describedby="assignee-error" aria-invalid={errors.assigneeId ? true : undefined} className={selectClass} value={assigneeId} onChange={(e) => setAssigneeId(e.target.value)}>
+              <option value="">Choose who drives it…</option>
+              {props.drivers.map((d) => <option key={d.id} value={d.id}>{d.name} ({d.role})</option>)}
+            </select>
+            <p id="assignee-error" aria-live="polite" className="text-sm font-semibold text-alarm">{errors.assigneeId ?? ""}</p>
+          </div>
+          <Field id="notes" label="Notes for the volunteer (optional)" value={notes} onChange={(e) => setNotes(e.target.value)} error={errors.notes} />
+        </Card>
+      </div>
+      <div className="flex flex-col gap-4">
+        <Card title="3. Route">
+          <RoutePreview start={start} stops={chosen} returnToStart={returnToStart} tileUrl={props.tileUrl} attribution={props.attribution} />
+        </Card>
+        <FormError message={create.isError ? create.error.message : Object.keys(errors).length ? "Some fields need another look." : null} />
+        <Button type="submit" disabled={create.isPending}>
+          {create.isPending ? "Saving the run…" : "Plan this run and tell the volunteer"}
+        </Button>
+      </div>
+    </form>
+  );
+}

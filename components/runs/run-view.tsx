@@ -1,0 +1,106 @@
+"use client";
+
+import { useQuery, useQueryClient } from "@tanstack/react-query";
+import { runQueries } from "@/hooks/queries/runs";
+import { Notice } from "@/components/ui/notice";
+import type { RunDetail, RunStop } from "@/lib/runs/queries";
+import { RunStateBadge } from "./run-list";
+import { RouteMap } from "./route-map";
+import { StopActions } from "./stop-actions";
+
+function StopCard({ run, stop, canAct, isNext, onDone }: { run: RunDetail; stop: RunStop; canAct: boolean; isNext: boolean; onDone: (r: unknown) => void }) {
+  const p = stop.dropPoint;
+  return (
+    <li
+      className={`rounded-card border-2 bg-white p-4 ${isNext ? "border-ember" : "border-paper-edge"}`}
+      aria-label={`Stop ${stop.position}: ${p.name}`}
+      data-status={stop.status}
+    >
+      <div className="flex items-start justify-between gap-2">
+        <h2 className="text-xl">
+          <span className="mr-2 inline-flex h-8 w-8 items-center justify-center rounded-full bg-ember text-base text-white">{stop.position}</span>
+          {p.name}
+        </h2>
+        <span className="text-sm text-ink-faint">+{stop.legKm.toFixed(2)} km</span>
+      </div>
+      <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-base">
+        <dt className="font-semibold">Where</dt>
+        <dd>{p.address || "—"}</dd>
+        <dt className="font-semibold">Hours</dt>
+        <dd>{p.hours || "—"}</dd>
+        <dt className="font-semibold">Access</dt>
+        <dd>{p.accessNotes || "No access notes."}</dd>
+        <dt className="font-semibold">Host</dt>
+        <dd>
+          {p.hostName ?? "—"}
+          {p.hostPhone ? <> · <a href={`tel:${p.hostPhone.replace(/\s+/g, "")}`}>{p.hostPhone}</a></> : null}
+          {p.hostEmail ? <> · <a href={`mailto:${p.hostEmail}`}>{p.hostEmail}</a></> : null}
+        </dd>
+      </dl>
+      <div className="mt-3">
+        {stop.status === "logged" ? (
+          <p className="font-semibold text-moss-deep">
+            Haul logged ✓
+            {stop.haul ? (
+              <span className="font-normal text-ink-soft">
+                {" "}
+                — {stop.haul.bags} bag{stop.haul.bags === 1 ? "" : "s"}
+                {stop.haul.weightKg !== null ? `, ${stop.haul.weightKg} kg` : ""}, about {stop.haul.estimatedCans} cans (estimate)
+              </span>
+            ) : null}
+          </p>
+        ) : stop.status === "skipped" ? (
+          <p className="font-semibold text-ink-soft">Skipped — “{stop.skipReason}”</p>
+        ) : canAct ? (
+          <StopActions runId={run.id} stopId={stop.id} dropPointName={p.name} onDone={onDone} />
+        ) : (
+          <p className="text-ink-soft">Waiting for the volunteer.</p>
+        )}
+      </div>
+    </li>
+  );
+}
+
+export function RunView({ initial, canAct, tileUrl, attribution }: { initial: RunDetail; canAct: boolean; tileUrl: string; attribution: string }) {
+  const queryClient = useQueryClient();
+  const options = runQueries.detail<RunDetail>(initial.id);
+  const { data: run } = useQuery({ ...options, initialData: initial });
+  const onDone = (updated: unknown) => {
+    queryClient.setQueryData(options.queryKey, updated as RunDetail);
+    void queryClient.invalidateQueries({ queryKey: runQueries.all() });
+  };
+  const next = run.stopList.find((s) => s.status === "pending");
+  return (
+    <div className="flex flex-col gap-4">
+      <div className="flex flex-wrap items-center gap-3">
+        <h1 className="text-3xl">Run on {run.plannedOn}</h1>
+        <RunStateBadge state={run.state} />
+      </div>
+      <p className="text-ink-soft" aria-live="polite" data-testid="run-progress">
+        {run.driveName} · {run.assigneeName ?? "nobody assigned"} · {run.logged} logged, {run.skipped} skipped of {run.stops} stops ·{" "}
+        {run.distanceKm.toFixed(1)} km
+      </p>
+      {run.state === "done" ? (
+        <Notice tone="good" title="Run done">Every stop is logged or skipped. Thank you!</Notice>
+      ) : (
+        <Notice tone="caution" title="Before you lift a bag">
+          Wear gloves: cans can have sharp edges. Sugary bins draw wasps; open bags slowly and away from your face.
+        </Notice>
+      )}
+      {run.notes ? <Notice title="Notes from the organiser">{run.notes}</Notice> : null}
+      <RouteMap
+        start={run.start}
+        stops={run.stopList.map((s) => ({ id: s.id, name: s.dropPoint.name, lat: s.dropPoint.lat, lng: s.dropPoint.lng, status: s.status }))}
+        returnToStart={run.returnToStart}
+        tileUrl={tileUrl}
+        attribution={attribution}
+        className="h-56 w-full rounded-card border border-paper-edge sm:h-80"
+      />
+      <ol className="flex flex-col gap-3">
+        {run.stopList.map((s) => (
+          <StopCard key={s.id} run={run} stop={s} canAct={canAct} isNext={s.id === next?.id} onDone={onDone} />
+        ))}
+      </ol>
+    </div>
+  );
+}
