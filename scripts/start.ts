@@ -42,8 +42,9 @@ async function main() {
   const started = Date.now();
   stack = await startStack({
     root,
-    stateDir: path.join(root, ".cantrove"),
-    pgDataDir: path.join(root, ".pgdata"),
+    // Overridable so the tests can run a second, separate `npm start`.
+    stateDir: process.env.CANTROVE_STATE_DIR ?? path.join(root, ".cantrove"),
+    pgDataDir: process.env.CANTROVE_PGDATA ?? path.join(root, ".pgdata"),
     pgPort: num("PGPORT", 54329),
     databaseName: process.env.PGDATABASE ?? "cantrove",
     databaseUrl: process.env.DATABASE_URL,

@@ -77,6 +77,8 @@ async function main(): Promise<number> {
       env: {
         ...env,
         NODE_ENV: "test" as const,
+        // Knex loads the TypeScript migrations with Node's own import().
+        NODE_OPTIONS: `${process.env.NODE_OPTIONS ?? ""} --import tsx`.trim(),
         CANTROVE_APP_URL: `http://127.0.0.1:${ports.app}`,
         CANTROVE_RUN_DIR: runDir,
         CANTROVE_TEST_PORTS: JSON.stringify(ports),

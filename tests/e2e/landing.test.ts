@@ -1,0 +1,66 @@
+import path from "node:path";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser } from "playwright-core";
+import { launchBrowser, newPage, PHONE, signInAs } from "@/tests/support/browser";
+import { DEMO } from "@/tests/support/env";
+
+const shots = path.resolve(import.meta.dirname, "../../.test-results");
+let browser: Browser;
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => browser?.close());
+
+describe("landing page", () => {
+  it("names Cantrove, lists public drives, and fits a phone without sideways scrolling", async () => {
+    const { context, page } = await newPage(browser, PHONE);
+    const requests: string[] = [];
+    page.on("request", (r) => requests.push(r.url()));
+    await page.goto("/");
+    await expect(page.title()).resolves.toContain("Cantrove");
+    await expect(page.getByRole("link", { name: "Larkhollow Winter Warmth Drive" }).count()).resolves.toBe(1);
+    const fontFamily = await page.evaluate(() => getComputedStyle(document.body).fontFamily);
+    expect(fontFamily).toContain("Source Sans 3");
+    const widths = await page.evaluate(() => [document.documentElement.scrollWidth, window.innerWidth]);
+    expect(widths[0]).toBeLessThanOrEqual(widths[1]);
+    await page.screenshot({ path: path.join(shots, "landing-phone.png"), fullPage: true });
+    // First-load JavaScript as sent over the wire (next start compresses with gzip).
+    const jsBytes = await page.evaluate(() =>
+      performance
+        .getEntriesByType("resource")
+        .filter((e) => (e as PerformanceResourceTiming).initiatorType === "script" || e.name.endsWith(".js"))
+        .reduce((sum, e) => sum + (e as PerformanceResourceTiming).encodedBodySize, 0),
+    );
+    console.log(`[measure] landing page first-load JS: ${(jsBytes / 1024).toFixed(1)} kB compressed`);
+    expect(jsBytes).toBeGreaterThan(0);
+    expect(jsBytes).toBeLessThan(250 * 1024);
+    // Fonts and assets ship with the app: every request stays on loopback.
+    expect(requests.filter((u) => !u.startsWith("http://127.0.0.1"))).toEqual([]);
+    await context.close();
+  });
+});
+
+describe("signing in", () => {
+  it("takes the organiser to the dashboard and shows captured mail on the sent-mail page", async () => {
+    const { context, page } = await newPage(browser);
+    await signInAs(page, DEMO.organiser);
+    expect(new URL(page.url()).pathname).toBe("/dashboard");
+    await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("Larkhollow Warm Rooms Circle");
+    await page.getByRole("link", { name: "Sent mail" }).click();
+    await page.waitForURL("**/mail");
+    await expect(page.getByRole("heading", { name: "Sent mail" }).count()).resolves.toBe(1);
+    await context.close();
+  });
+
+  it("says so when the password is wrong and stays on the form", async () => {
+    const { context, page } = await newPage(browser);
+    await page.goto("/signin");
+    await page.getByLabel("E-mail").fill(DEMO.organiser);
+    await page.getByLabel("Password").fill("wrong-password");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.getByText("do not match an account").waitFor();
+    expect(new URL(page.url()).pathname).toBe("/signin");
+    await context.close();
+  });
+});
