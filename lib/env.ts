@@ -13,7 +13,7 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default("Cantrove <no-reply@cantrove.test>"),
   UPLOADTHING_TOKEN: z.string().optional(),
   TILE_URL: z.string().default("/tiles/{z}/{x}/{y}.png"),
-  TILE_ATTRIBUTION: z.string().default("Map data: Cantrove demo town (invented), CC0"),
+  TILE_ATTRIBUTION: z.string().default("Map: Larkhollow demo town data (Cantrove, invented), CC0"),
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -47,3 +47,8 @@ export async function apiFetch<T>(
   }
   return data as T;
 }
+
+/** Field errors from a failed mutation, or an empty object. */
+export function fieldErrors(error: unknown): Record<string, string> {
+  return error instanceof ApiError ? error.fields : {};
+}

@@ -22,3 +22,77 @@ export async function listPublicDrives(): Promise<PublicDriveSummary[]> {
     .where({ is_public: true })
     .orderBy([{ column: "starts_on", order: "desc" }, { column: "name" }]);
 }
+
+export interface PublicDriveRow extends PublicDriveSummary {
+  id: string;
+  groupId: string;
+  groupName: string;
+  description: string;
+  wanted: string;
+  sparePercent: number;
+}
+
+export async function findPublicDrive(slug: string): Promise<PublicDriveRow | undefined> {
+  const row = await db("drives as d")
+    .join("groups as g", "g.id", "d.group_id")
+    .select(
+      "d.id",
+      "d.group_id as groupId",
+      "g.name as groupName",
+      "d.slug",
+      "d.name",
+      "d.description",
+      "d.wanted",
+      "d.spare_percent as sparePercent",
+      db.raw(`to_char(d.starts_on, 'YYYY-MM-DD') as "startsOn"`),
+      db.raw(`to_char(d.ends_on, 'YYYY-MM-DD') as "endsOn"`),
+    )
+    .where({ "d.slug": slug, "d.is_public": true })
+    .first();
+  return row ? { ...row, sparePercent: Number(row.sparePercent) } : undefined;
+}
+
+/** Cans each heater unit of the drive needs, oldest unit first. */
+export async function unitCansOf(driveId: string, groupId: string): Promise<number[]> {
+  const rows = await db("heater_units").select("cans").where({ drive_id: driveId, group_id: groupId }).orderBy([{ column: "created_at" }, { column: "name" }]);
+  return rows.map((r) => Number(r.cans));
+}
+
+export interface PublicDropPointRow {
+  id: string;
+  name: string;
+  address: string;
+  lat: number;
+  lng: number;
+  hours: string;
+  capacityBags: number;
+  fillLevel: number | null;
+  fillReportedAt: string | null;
+  photos: string[];
+}
+
+// Only public columns are selected: host name, phone and e-mail never leave.
+export async function listPublicDropPoints(driveId: string): Promise<PublicDropPointRow[]> {
+  const rows = await db("drop_points as p")
+    .select(
+      "p.id",
+      "p.name",
+      "p.address",
+      "p.lat",
+      "p.lng",
+      "p.hours",
+      "p.capacity_bags as capacityBags",
+      db.raw(`(select f.level from fill_reports f where f.drop_point_id = p.id order by f.created_at desc limit 1) as "fillLevel"`),
+      db.raw(`(select f.created_at from fill_reports f where f.drop_point_id = p.id order by f.created_at desc limit 1) as "fillReportedAt"`),
+      db.raw(
+        `coalesce((select array_agg(fi.url order by fi.created_at) from files fi where fi.purpose = 'drop-point-photo' and fi.subject_id = p.id and fi.group_id = p.group_id), '{}') as photos`,
+      ),
+    )
+    .where({ "p.drive_id": driveId, "p.active": true })
+    .orderBy("p.name");
+  return rows.map((r) => ({ ...r, fillReportedAt: r.fillReportedAt ? new Date(r.fillReportedAt).toISOString() : null }));
+}
+
+export async function findPublicDropPoint(driveId: string, id: string) {
+  return db("drop_points").select("id", "group_id as groupId", "name", "hours").where({ id, drive_id: driveId, active: true }).first();
+}

@@ -16,3 +16,104 @@ export async function listDrives(groupId: string) {
     .where("d.group_id", groupId)
     .orderBy([{ column: "d.starts_on", order: "desc" }, { column: "d.name" }]);
 }
+
+export interface DriveRecord {
+  id: string;
+  slug: string;
+  name: string;
+  startsOn: string;
+  endsOn: string;
+  isPublic: boolean;
+  description: string;
+  wanted: string;
+}
+
+export async function findDrive(groupId: string, id: string): Promise<DriveRecord | undefined> {
+  if (!UUID.test(id)) return undefined;
+  return db("drives")
+    .select(
+      "id",
+      "slug",
+      "name",
+      "description",
+      "wanted",
+      "is_public as isPublic",
+      db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`),
+      db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`),
+    )
+    .where({ id, group_id: groupId })
+    .first();
+}
+
+export const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+export interface DropPointRecord {
+  id: string;
+  driveId: string;
+  name: string;
+  address: string;
+  lat: number;
+  lng: number;
+  hours: string;
+  hostName: string;
+  hostPhone: string;
+  hostEmail: string;
+  capacityBags: number;
+  active: boolean;
+}
+
+const dropPointColumns = [
+  "id",
+  "drive_id as driveId",
+  "name",
+  "address",
+  "lat",
+  "lng",
+  "hours",
+  db.raw(`coalesce(host_name, '') as "hostName"`),
+  db.raw(`coalesce(host_phone, '') as "hostPhone"`),
+  db.raw(`coalesce(host_email::text, '') as "hostEmail"`),
+  "capacity_bags as capacityBags",
+  "active",
+];
+
+export async function listDropPoints(groupId: string, driveId: string): Promise<DropPointRecord[]> {
+  return db("drop_points").select(dropPointColumns).where({ group_id: groupId, drive_id: driveId }).orderBy("name");
+}
+
+export async function findDropPoint(groupId: string, id: string): Promise<DropPointRecord | undefined> {
+  if (!UUID.test(id)) return undefined;
+  return db("drop_points").select(dropPointColumns).where({ group_id: groupId, id }).first();
+}
+
+export async function listDropPointPhotos(groupId: string, dropPointId: string) {
+  return db("files")
+    .select("id", "url", "name", "size")
+    .where({ group_id: groupId, purpose: "drop-point-photo", subject_id: dropPointId })
+    .orderBy("created_at");
+}
+
+export async function listPledges(groupId: string, driveId: string) {
+  return db("pledges as pl")
+    .join("drop_points as p", "p.id", "pl.drop_point_id")
+    .select(
+      "pl.id",
+      "pl.name",
+      db.raw(`pl.email::text as email`),
+      "pl.bags",
+      db.raw(`to_char(pl.bring_on, 'YYYY-MM-DD') as "bringOn"`),
+      "p.name as dropPointName",
+      "pl.created_at as createdAt",
+    )
+    .where({ "pl.group_id": groupId, "pl.drive_id": driveId })
+    .orderBy([{ column: "pl.bring_on" }, { column: "pl.created_at" }]);
+}
+
+export async function listFillReports(groupId: string, driveId: string, limit = 30) {
+  return db("fill_reports as f")
+    .join("drop_points as p", "p.id", "f.drop_point_id")
+    .select("f.id", "f.level", "f.note", "f.alerted", "f.created_at as createdAt", "p.name as dropPointName")
+    .where({ "f.group_id": groupId, "p.drive_id": driveId })
+    .orderBy("f.created_at", "desc")
+    .limit(limit);
+}

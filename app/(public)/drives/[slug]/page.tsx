@@ -1,0 +1,59 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { DriveLive } from "@/components/drives/public/drive-live";
+import { CanSafetyNote, WantedCans } from "@/components/drives/public/wanted-cans";
+import { Card } from "@/components/ui/card";
+import { AppError } from "@/lib/api/errors";
+import { publicDrive, publicDropPoints } from "@/lib/drives/public-service";
+import { tileConfig } from "@/lib/map/config";
+
+export const dynamic = "force-dynamic";
+
+type Props = { params: Promise<{ slug: string }> };
+
+async function load(slug: string) {
+  try {
+    return await Promise.all([publicDrive(slug), publicDropPoints(slug)]);
+  } catch (error) {
+    if (error instanceof AppError && error.code === "not_found") notFound();
+    throw error;
+  }
+}
+
+export async function generateMetadata({ params }: Props): Promise<Metadata> {
+  const { slug } = await params;
+  try {
+    return { title: (await publicDrive(slug)).drive.name };
+  } catch {
+    return { title: "Drive not found" };
+  }
+}
+
+function formatDate(d: string) {
+  return new Date(`${d}T12:00:00Z`).toLocaleDateString("en-GB", { day: "numeric", month: "long", year: "numeric" });
+}
+
+export default async function PublicDrivePage({ params }: Props) {
+  const { slug } = await params;
+  const [drive, points] = await load(slug);
+  const tiles = tileConfig();
+  return (
+    <main id="main" className="mx-auto flex max-w-5xl flex-col gap-6 px-4 py-6">
+      <header>
+        <p className="font-semibold text-ember-deep">{drive.drive.groupName}</p>
+        <h1 className="text-3xl sm:text-4xl">{drive.drive.name}</h1>
+        <p className="mt-1 text-ink-soft">
+          {formatDate(drive.drive.startsOn)} to {formatDate(drive.drive.endsOn)}
+        </p>
+        {drive.drive.description ? <p className="mt-3 max-w-prose text-lg">{drive.drive.description}</p> : null}
+      </header>
+      <Card title="Which cans we need">
+        <WantedCans extra={drive.drive.wanted} />
+        <div className="mt-3">
+          <CanSafetyNote />
+        </div>
+      </Card>
+      <DriveLive slug={slug} initialDrive={drive} initialPoints={points} tileUrl={tiles.tileUrl} attribution={tiles.attribution} />
+    </main>
+  );
+}

@@ -1,0 +1,79 @@
+"use client";
+
+import { useQuery } from "@tanstack/react-query";
+import { useState } from "react";
+import { DriveMap } from "@/components/map/drive-map";
+import type { MapPoint } from "@/components/map/types";
+import { Card } from "@/components/ui/card";
+import { publicDriveQuery, publicDropPointsQuery, type PublicDriveView, type PublicDropPointView } from "@/lib/drives/query-options";
+import { DropPointList } from "./drop-point-list";
+import { PledgeForm } from "./pledge-form";
+import { DriveProgressBar } from "./progress-bar";
+
+export function DriveLive({
+  slug,
+  initialDrive,
+  initialPoints,
+  tileUrl,
+  attribution,
+}: {
+  slug: string;
+  initialDrive: PublicDriveView;
+  initialPoints: PublicDropPointView[];
+  tileUrl: string;
+  attribution: string;
+}) {
+  const drive = useQuery({ ...publicDriveQuery(slug), initialData: initialDrive });
+  const points = useQuery({ ...publicDropPointsQuery(slug), initialData: initialPoints });
+  const [selected, setSelected] = useState<string | null>(null);
+  const list = points.data ?? [];
+  const centre = list.length
+    ? { lat: list.reduce((s, p) => s + p.lat, 0) / list.length, lng: list.reduce((s, p) => s + p.lng, 0) / list.length }
+    : { lat: 47.2, lng: -8.0 };
+  const mapPoints: MapPoint[] = list.map((p, i) => ({
+    id: p.id,
+    name: p.name,
+    lat: p.lat,
+    lng: p.lng,
+    label: String(i + 1),
+    popup: (
+      <div>
+        <p className="font-bold">{p.name}</p>
+        <p>{p.hours}</p>
+        <p>
+          {p.tallies.bags} bags in · {p.tallies.goodCans} good cans
+        </p>
+        <a href={`#point-${p.id}`}>Details and “bin is full”</a>
+      </div>
+    ),
+  }));
+
+  return (
+    <div className="flex flex-col gap-6">
+      <Card title="How far we have come">
+        {drive.data ? <DriveProgressBar data={drive.data} /> : null}
+        {drive.isError ? <p className="text-alarm">Could not refresh the progress; showing the last figures.</p> : null}
+      </Card>
+      <section aria-labelledby="map-heading" className="flex flex-col gap-2">
+        <h2 id="map-heading" className="text-xl">
+          Drop points on the map
+        </h2>
+        <p className="text-sm text-ink-soft">Numbers match the list below. The list shows the same places for anyone who prefers reading to panning.</p>
+        <DriveMap
+          points={mapPoints}
+          center={centre}
+          zoom={14}
+          tileUrl={tileUrl}
+          attribution={attribution}
+          onMarkerSelect={setSelected}
+          className="h-80 sm:h-[28rem]"
+          label={`Map of the ${initialDrive.drive.name} drop points`}
+        />
+      </section>
+      <DropPointList slug={slug} points={list} selected={selected} />
+      <Card title="Pledge some cans">
+        <PledgeForm slug={slug} points={list} />
+      </Card>
+    </div>
+  );
+}

@@ -1,0 +1,108 @@
+"use client";
+
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { LEVEL_LABEL } from "@/lib/drives/fill";
+import type { PublicDropPointView } from "@/lib/drives/query-options";
+import { haversineKm } from "@/lib/routes/great-circle";
+import { FillReportForm } from "./fill-report-form";
+
+type Located = PublicDropPointView & { number: number; km?: number };
+
+export function sortByDistance(points: Located[], from: { lat: number; lng: number } | null): Located[] {
+  if (!from) return points;
+  return points.map((p) => ({ ...p, km: haversineKm(from, p) })).sort((a, b) => (a.km ?? 0) - (b.km ?? 0));
+}
+
+export function DropPointList({ slug, points, selected }: { slug: string; points: PublicDropPointView[]; selected: string | null }) {
+  const [here, setHere] = useState<{ lat: number; lng: number } | null>(null);
+  const [locating, setLocating] = useState(false);
+  const [locError, setLocError] = useState<string | null>(null);
+  const [reporting, setReporting] = useState<string | null>(null);
+  const numbered = sortByDistance(points.map((p, i) => ({ ...p, number: i + 1 })), here);
+
+  function locate() {
+    if (!("geolocation" in navigator)) {
+      setLocError("This browser cannot share a location. The list stays in name order.");
+      return;
+    }
+    setLocating(true);
+    setLocError(null);
+    navigator.geolocation.getCurrentPosition(
+      (pos) => {
+        setLocating(false);
+        setHere({ lat: pos.coords.latitude, lng: pos.coords.longitude });
+      },
+      () => {
+        setLocating(false);
+        setLocError("We could not get your location (permission denied or no signal). The list stays in name order.");
+      },
+      { timeout: 10_000, maximumAge: 60_000 },
+    );
+  }
+
+  return (
+    <section aria-labelledby="list-heading" className="flex flex-col gap-3">
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <h2 id="list-heading" className="text-xl">
+          Drop points {here ? "nearest first" : "by name"}
+        </h2>
+        <Button variant="secondary" onClick={locate} disabled={locating}>
+          {locating ? "Finding you…" : here ? "Update my location" : "Sort by distance from me"}
+        </Button>
+      </div>
+      {locError ? <p role="status" className="text-sun">{locError}</p> : null}
+      {numbered.length === 0 ? <p>No drop points are open right now. Check back soon.</p> : null}
+      <ol className="flex flex-col gap-3">
+        {numbered.map((p) => (
+          <li
+            key={p.id}
+            id={`point-${p.id}`}
+            data-testid="drop-point"
+            className={`rounded-card border bg-white/70 p-4 ${selected === p.id ? "border-ember ring-2 ring-ember" : "border-paper-edge"}`}
+          >
+            <div className="flex flex-wrap items-baseline justify-between gap-2">
+              <h3 className="text-lg">
+                <span className="mr-2 inline-flex h-7 w-7 items-center justify-center rounded-full bg-ember text-sm text-white" aria-hidden="true">
+                  {p.number}
+                </span>
+                {p.name}
+              </h3>
+              {p.km !== undefined ? <span className="font-semibold">{p.km < 1 ? `${Math.round(p.km * 1000)} m` : `${p.km.toFixed(1)} km`} away</span> : null}
+            </div>
+            {p.address ? <p>{p.address}</p> : null}
+            <p>
+              <span className="font-semibold">Open:</span> {p.hours || "Ask the organisers"}
+            </p>
+            <p className="text-sm text-ink-soft" data-testid="tallies">
+              {p.tallies.hauls} hauls · {p.tallies.bags} bags collected · {p.tallies.goodCans} good cans · {p.tallies.rejectedCans} set aside
+            </p>
+            {p.fillLevel !== null ? (
+              <p className={`text-sm font-semibold ${p.fillLevel >= 75 ? "text-alarm" : "text-ink-soft"}`}>
+                Last report: {LEVEL_LABEL[p.fillLevel] ?? `${p.fillLevel}%`}
+                {p.fillReportedAt ? ` (${new Date(p.fillReportedAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })})` : ""}
+              </p>
+            ) : null}
+            {p.photos.length ? (
+              <div className="mt-2 flex gap-2 overflow-x-auto">
+                {p.photos.map((url) => (
+                  // eslint-disable-next-line @next/next/no-img-element
+                  <img key={url} src={url} alt={`Photo of the bin at ${p.name}`} className="h-28 w-auto rounded-lg border border-paper-edge" loading="lazy" />
+                ))}
+              </div>
+            ) : null}
+            <div className="mt-2">
+              {reporting === p.id ? (
+                <FillReportForm slug={slug} point={p} onDone={() => setReporting(null)} />
+              ) : (
+                <Button variant="quiet" onClick={() => setReporting(p.id)} aria-label={`Report how full the bin at ${p.name} is`}>
+                  Is this bin full?
+                </Button>
+              )}
+            </div>
+          </li>
+        ))}
+      </ol>
+    </section>
+  );
+}

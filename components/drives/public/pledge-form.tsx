@@ -1,0 +1,77 @@
+"use client";
+
+import { useMutation } from "@tanstack/react-query";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { Field, FormError } from "@/components/ui/field";
+import { apiFetch, ApiError, fieldErrors } from "@/lib/api/client";
+import type { PublicDropPointView } from "@/lib/drives/query-options";
+import { pledgeInput } from "@/lib/drives/schemas";
+import { fieldErrorsOf } from "@/lib/api/errors";
+
+export function PledgeForm({ slug, points }: { slug: string; points: PublicDropPointView[] }) {
+  const [values, setValues] = useState({ name: "", email: "", dropPointId: "", bags: "1", bringOn: "" });
+  const [local, setLocal] = useState<Record<string, string>>({});
+  const [done, setDone] = useState<{ mailed: boolean } | null>(null);
+  const mutation = useMutation({
+    mutationFn: (body: unknown) => apiFetch<{ id: string; mailed: boolean }>(`/api/public/drives/${slug}/pledges`, { method: "POST", body }),
+    onSuccess: (r) => setDone({ mailed: r.mailed }),
+  });
+  const errors = { ...fieldErrors(mutation.error), ...local };
+  const set = (k: keyof typeof values) => (e: React.ChangeEvent<HTMLInputElement | HTMLSelectElement>) => setValues({ ...values, [k]: e.target.value });
+
+  function submit(e: React.FormEvent) {
+    e.preventDefault();
+    const body = { ...values, bags: Number(values.bags) };
+    const parsed = pledgeInput.safeParse(body);
+    if (!parsed.success) {
+      setLocal(fieldErrorsOf(parsed.error));
+      return;
+    }
+    setLocal({});
+    mutation.mutate(parsed.data);
+  }
+
+  if (done) {
+    return (
+      <div role="status" className="flex flex-col gap-2">
+        <p className="font-semibold text-moss-deep">Thank you — your pledge is in.</p>
+        {done.mailed ? <p>We sent a confirmation to {values.email}.</p> : null}
+        <Button variant="secondary" onClick={() => { setDone(null); mutation.reset(); }}>
+          Pledge more
+        </Button>
+      </div>
+    );
+  }
+
+  return (
+    <form onSubmit={submit} noValidate className="flex flex-col gap-2" aria-label="Pledge cans">
+      <p className="text-sm text-ink-soft">Tell us roughly what you will bring, so we can empty bins in time. Name and e-mail are optional and never shown publicly.</p>
+      {mutation.error && !(mutation.error instanceof ApiError && Object.keys(mutation.error.fields).length) ? <FormError message={mutation.error.message} /> : null}
+      <div className="flex flex-col gap-1">
+        <label htmlFor="pledge-point" className="font-semibold">Drop point</label>
+        <select
+          id="pledge-point"
+          value={values.dropPointId}
+          onChange={set("dropPointId")}
+          aria-describedby="pledge-point-error"
+          aria-invalid={errors.dropPointId ? true : undefined}
+          className={`min-h-11 rounded-lg border-2 bg-white px-3 py-2 ${errors.dropPointId ? "border-alarm" : "border-ink/40"}`}
+        >
+          <option value="">Choose a drop point…</option>
+          {points.map((p) => (
+            <option key={p.id} value={p.id}>{p.name}</option>
+          ))}
+        </select>
+        <p id="pledge-point-error" aria-live="polite" className="text-sm font-semibold text-alarm">{errors.dropPointId ?? ""}</p>
+      </div>
+      <div className="grid gap-2 sm:grid-cols-2">
+        <Field id="pledge-bags" label="About how many bags" type="number" inputMode="numeric" min={1} max={50} value={values.bags} onChange={set("bags")} error={errors.bags} />
+        <Field id="pledge-when" label="When you will bring them" type="date" value={values.bringOn} onChange={set("bringOn")} error={errors.bringOn} />
+        <Field id="pledge-name" label="Your name (optional)" autoComplete="name" value={values.name} onChange={set("name")} error={errors.name} />
+        <Field id="pledge-email" label="E-mail for a confirmation (optional)" type="email" autoComplete="email" value={values.email} onChange={set("email")} error={errors.email} />
+      </div>
+      <Button type="submit" disabled={mutation.isPending}>{mutation.isPending ? "Sending…" : "Send my pledge"}</Button>
+    </form>
+  );
+}

@@ -1,0 +1,60 @@
+import { z } from "zod";
+
+// One schema per input, shared by the forms (client) and the route handlers.
+
+const isoDate = z
+  .string()
+  .regex(/^\d{4}-\d{2}-\d{2}$/, "Use a date like 2026-11-01.")
+  .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s), "That date does not exist.");
+
+export const SLUG_PATTERN = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
+
+export const driveInput = z
+  .object({
+    name: z.string().trim().min(3, "Give the drive a name of at least 3 letters.").max(120, "Keep the name under 120 characters."),
+    slug: z
+      .string()
+      .trim()
+      .min(3, "The web address needs at least 3 characters.")
+      .max(80, "Keep the web address under 80 characters.")
+      .regex(SLUG_PATTERN, "Use lower-case letters, digits and single dashes, like larkhollow-winter."),
+    startsOn: isoDate,
+    endsOn: isoDate,
+    isPublic: z.boolean(),
+    description: z.string().max(2000, "Keep the description under 2000 characters.").default(""),
+    wanted: z.string().max(1000, "Keep this under 1000 characters.").default(""),
+  })
+  .refine((d) => d.endsOn >= d.startsOn, { path: ["endsOn"], message: "The end date must be on or after the start date." });
+export type DriveInput = z.infer<typeof driveInput>;
+
+// No defaults here: a partial update must leave unsent fields alone (the table has the defaults).
+export const dropPointInput = z.object({
+  name: z.string().trim().min(2, "Give the drop point a name.").max(120, "Keep the name under 120 characters."),
+  address: z.string().trim().max(240, "Keep the address under 240 characters.").optional(),
+  lat: z.number({ message: "Place the drop point on the map." }).min(-90, "Latitude must be between −90 and 90.").max(90, "Latitude must be between −90 and 90."),
+  lng: z.number({ message: "Place the drop point on the map." }).min(-180, "Longitude must be between −180 and 180.").max(180, "Longitude must be between −180 and 180."),
+  hours: z.string().trim().max(240, "Keep the hours under 240 characters.").optional(),
+  hostName: z.string().trim().max(120).optional(),
+  hostPhone: z.string().trim().max(40, "Keep the phone number under 40 characters.").optional(),
+  hostEmail: z.union([z.literal(""), z.string().trim().email("That e-mail address does not look right.")]).optional(),
+  capacityBags: z.number({ message: "Say how many bags the bin holds." }).int("Use a whole number of bags.").min(1, "A bin holds at least 1 bag.").max(100, "Up to 100 bags."),
+  active: z.boolean().optional(),
+});
+export type DropPointInput = z.infer<typeof dropPointInput>;
+export const dropPointPatch = dropPointInput.partial();
+
+export const pledgeInput = z.object({
+  dropPointId: z.string().uuid("Choose a drop point."),
+  name: z.string().trim().max(120, "Keep the name under 120 characters.").default(""),
+  email: z.union([z.literal(""), z.string().trim().email("That e-mail address does not look right.")]).default(""),
+  bags: z.number({ message: "About how many bags?" }).int("Use a whole number of bags.").min(1, "At least 1 bag.").max(50, "For more than 50 bags, write to the organisers."),
+  bringOn: isoDate,
+});
+export type PledgeInput = z.infer<typeof pledgeInput>;
+
+export const FILL_LEVELS = [0, 25, 50, 75, 100] as const;
+export const fillReportInput = z.object({
+  level: z.number().int().refine((n) => (FILL_LEVELS as readonly number[]).includes(n), "Choose how full the bin is."),
+  note: z.string().trim().max(500, "Keep the note under 500 characters.").default(""),
+});
+export type FillReportInput = z.infer<typeof fillReportInput>;
