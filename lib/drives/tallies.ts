@@ -1,7 +1,7 @@
 import "server-only";
-// The one place the drive pages read the ledger. Until the ledger lands this
-// module reports no hauls and no counted cans; wiring it is a change here only.
+// The one place the drive pages read the ledger's running totals.
 import { driveProgress, type DriveProgress } from "@/lib/drives/progress";
+import { dropPointTallies } from "@/lib/ledger/balances";
 
 export interface DropPointTally {
   hauls: number;
@@ -12,8 +12,8 @@ export interface DropPointTally {
 
 export const EMPTY_TALLY: DropPointTally = { hauls: 0, bags: 0, goodCans: 0, rejectedCans: 0 };
 
-export async function tallies(_driveId: string): Promise<Record<string, DropPointTally>> {
-  return {};
+export async function tallies(driveId: string): Promise<Record<string, DropPointTally>> {
+  return dropPointTallies(driveId);
 }
 
 export async function progressFor(drive: { id: string; startsOn: string; sparePercent: number }, unitCans: number[], today: string): Promise<DriveProgress> {
