@@ -94,7 +94,7 @@ async function main() {
   printTable(results, report);
   const out = {
     when: new Date().toISOString(),
-    machine: { cpus: os.cpus().length, cpuModel: os.cpus()[0]?.model, memoryGb: Math.round(os.totalmem() / 2 ** 30), node: process.version },
+    machine: { cpus: os.cpus().length, loadAverage: os.loadavg().map((x) => Math.round(x * 10) / 10), cpuModel: os.cpus()[0]?.model, memoryGb: Math.round(os.totalmem() / 2 ** 30), node: process.version },
     settings: { ...opts, keep: undefined, dbPoolMax: Number(env.DB_POOL_MAX ?? 10) },
     dataset: { ...data, hauls: opts.hauls, drives: 3, dropPoints: 60, generatedSeconds: datasetSeconds },
     buildSeconds,
