@@ -15,5 +15,5 @@ export function proxy(request: NextRequest) {
 }
 
 export const config = {
-  matcher: ["/dashboard/:path*", "/log/:path*", "/units/:path*", "/members/:path*", "/mail/:path*", "/home"],
+  matcher: ["/dashboard/:path*", "/log/:path*", "/units/:path*", "/members/:path*", "/mail/:path*", "/home", "/ledger/:path*", "/organise/:path*", "/runs/:path*"],
 };

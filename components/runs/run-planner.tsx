@@ -6,7 +6,7 @@ import { useMemo, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, Skeleton } from "@/components/ui/card";
 import { Field, FormError } from "@/components/ui/field";
-import { ApiError, fetchJson } from "@/lib/api/fetch-json";
+import { ApiError, fetchJson } from "@/lib/api/client";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { createRunInputSchema } from "@/lib/runs/schemas";
 import { runQueries, type SuggestionRow } from "@/hooks/queries/runs";

@@ -4,7 +4,7 @@ import { useMutation } from "@tanstack/react-query";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
-import { ApiError, fetchJson } from "@/lib/api/fetch-json";
+import { ApiError, fetchJson } from "@/lib/api/client";
 
 function newKey(): string {
   // randomUUID needs a secure context; plain-HTTP previews get a random key of the same strength.

@@ -1,5 +1,5 @@
 import { queryOptions } from "@tanstack/react-query";
-import { fetchJson } from "@/lib/api/fetch-json";
+import { fetchJson } from "@/lib/api/client";
 import type { RouteInputRaw } from "@/lib/routes/schemas";
 
 // Shapes as the API sends them (dates as strings).

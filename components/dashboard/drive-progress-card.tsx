@@ -1,0 +1,96 @@
+import Link from "next/link";
+import { Card } from "@/components/ui/card";
+import { Notice } from "@/components/ui/notice";
+import type { DriveProgress } from "@/lib/drives/progress";
+
+interface Props {
+  drive: { id: string; slug: string; name: string; startsOn: string; endsOn: string; isPublic: boolean; dropPoints: number; heaterUnits: number };
+  progress: DriveProgress;
+  fullBins: { id: string; level: number; dropPointName: string; createdAt: Date | string }[];
+  pledges: { id: string; bags: number; bringOn: string | null; dropPointName: string }[];
+}
+
+const fmt = (n: number) => n.toLocaleString("en-GB");
+
+export function DriveProgressCard({ drive, progress, fullBins, pledges }: Props) {
+  const share = progress.target.cans > 0 ? Math.min(1, progress.goodCans / progress.target.cans) : 0;
+  return (
+    <Card
+      title={
+        <span className="flex flex-wrap items-baseline justify-between gap-2">
+          <Link href={`/organise/drives/${drive.id}`}>{drive.name}</Link>
+          <span className="text-base font-normal text-ink-faint">
+            {drive.startsOn} to {drive.endsOn}
+            {drive.isPublic ? (
+              <>
+                {" "}
+                · <Link href={`/drives/${drive.slug}`}>public page</Link>
+              </>
+            ) : (
+              " · not public"
+            )}
+          </span>
+        </span>
+      }
+    >
+      <p className="text-lg font-semibold">
+        Good cans for {progress.heatersCovered.covered} of {progress.heatersCovered.total} heaters
+      </p>
+      <div className="mt-2 h-4 overflow-hidden rounded-full bg-paper-deep" role="img" aria-label={`${Math.round(share * 100)} % of the target`}>
+        <div className="h-full bg-moss" style={{ width: `${share * 100}%` }} />
+      </div>
+      <dl className="mt-3 grid grid-cols-2 gap-x-4 gap-y-1 text-sm sm:grid-cols-4">
+        <div>
+          <dt className="text-ink-faint">Good cans</dt>
+          <dd className="font-semibold">
+            {fmt(progress.goodCans)} / {fmt(progress.target.cans)}
+          </dd>
+        </div>
+        <div>
+          <dt className="text-ink-faint">Unsorted (estimate)</dt>
+          <dd className="font-semibold">≈ {fmt(progress.estimatedUnsorted)}</dd>
+        </div>
+        <div>
+          <dt className="text-ink-faint">Yield</dt>
+          <dd className="font-semibold">
+            {Math.round(progress.yield * 100)} %{progress.yieldSource === "default" ? " (assumed until the first sort)" : ""}
+          </dd>
+        </div>
+        <div>
+          <dt className="text-ink-faint">Expected finish</dt>
+          <dd className="font-semibold">{progress.expectedFinish ?? "no pace yet"}</dd>
+        </div>
+      </dl>
+      <p className="mt-2 text-sm text-ink-faint">
+        {drive.dropPoints} drop points · {drive.heaterUnits} heater units · {fmt(Math.round(progress.pace.cansPerDay))} good cans a day over the last{" "}
+        {progress.pace.windowDays} days
+      </p>
+      {fullBins.length > 0 ? (
+        <div className="mt-4">
+          <Notice tone="caution" title="Bins reported full">
+            <ul className="list-disc pl-5">
+              {fullBins.map((f) => (
+                <li key={f.id}>
+                  {f.dropPointName}: {f.level} % on {new Date(f.createdAt).toLocaleDateString("en-GB")}
+                </li>
+              ))}
+            </ul>
+          </Notice>
+        </div>
+      ) : null}
+      {pledges.length > 0 ? (
+        <div className="mt-4">
+          <p className="font-semibold">Pledged bags coming</p>
+          <ul className="text-sm text-ink-soft">
+            {pledges.map((p) => (
+              <li key={p.id}>
+                about {p.bags} bag{p.bags === 1 ? "" : "s"} to {p.dropPointName}
+                {p.bringOn ? ` on ${p.bringOn}` : ""}
+              </li>
+            ))}
+          </ul>
+        </div>
+      ) : null}
+    </Card>
+  );
+}

@@ -1,0 +1,25 @@
+import "server-only";
+import { db } from "@/lib/db";
+import { listDrives, listFillReports, listPledges } from "./queries";
+import { unitCansOf } from "./public-queries";
+import { progressFor } from "./tallies";
+
+const today = () => new Date().toISOString().slice(0, 10);
+
+/** What the organiser's home shows: each drive's progress, and what needs attention. */
+export async function organiserDashboard(groupId: string) {
+  const drives = await listDrives(groupId);
+  const spare = await db("drives").select("id", "spare_percent").where({ group_id: groupId });
+  const spareOf = new Map(spare.map((d) => [d.id as string, Number(d.spare_percent)]));
+  return Promise.all(
+    drives.map(async (d) => {
+      const [progress, fills, pledges] = await Promise.all([
+        progressFor({ id: d.id, startsOn: d.startsOn, sparePercent: spareOf.get(d.id) ?? 5 }, await unitCansOf(d.id, groupId), today()),
+        listFillReports(groupId, d.id, 5),
+        listPledges(groupId, d.id),
+      ]);
+      const upcoming = pledges.filter((p) => !p.bringOn || p.bringOn >= today());
+      return { drive: d, progress, fullBins: fills.filter((f) => Number(f.level) >= 75), pledges: upcoming.slice(0, 5) };
+    }),
+  );
+}
