@@ -42,9 +42,11 @@ describe("cosIncidence (Duffie & Beckman eq. 1.6.2)", () => {
           const altitude = Math.asin(up) / RAD;
           const bearing = Math.atan2(east, north) / RAD;
           const surfaceBearing = gamma + 180; // south-based → compass
+          // asin near the zenith loses about half the digits (~1e-8 rad), so
+          // agreement is asked to 6 decimals, far finer than any use of cos θ.
           expect(cosIncidence(lat, decl, omega, slope, gamma)).toBeCloseTo(
             cosIncidenceFromPosition(altitude, bearing, slope, surfaceBearing),
-            9,
+            6,
           );
         },
       ),
