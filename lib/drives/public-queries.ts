@@ -72,25 +72,45 @@ export interface PublicDropPointRow {
 }
 
 // Only public columns are selected: host name, phone and e-mail never leave.
-export async function listPublicDropPoints(driveId: string): Promise<PublicDropPointRow[]> {
-  const rows = await db("drop_points as p")
-    .select(
-      "p.id",
-      "p.name",
-      "p.address",
-      "p.lat",
-      "p.lng",
-      "p.hours",
-      "p.capacity_bags as capacityBags",
-      db.raw(`(select f.level from fill_reports f where f.drop_point_id = p.id order by f.created_at desc limit 1) as "fillLevel"`),
-      db.raw(`(select f.created_at from fill_reports f where f.drop_point_id = p.id order by f.created_at desc limit 1) as "fillReportedAt"`),
-      db.raw(
-        `coalesce((select array_agg(fi.url order by fi.created_at) from files fi where fi.purpose = 'drop-point-photo' and fi.subject_id = p.id and fi.group_id = p.group_id), '{}') as photos`,
-      ),
-    )
-    .where({ "p.drive_id": driveId, "p.active": true })
-    .orderBy("p.name");
-  return rows.map((r) => ({ ...r, fillReportedAt: r.fillReportedAt ? new Date(r.fillReportedAt).toISOString() : null }));
+export interface PublicDropPointWithTallies extends PublicDropPointRow {
+  tallies: { hauls: number; bags: number; goodCans: number; rejectedCans: number };
+}
+
+/**
+ * The public map's whole answer in one round trip: the drive (by slug, public
+ * only), its active drop points, their last fill report, photos and the
+ * ledger's running tallies. The busiest public read, so kept to one query.
+ */
+export async function listPublicDropPointsWithTallies(slug: string): Promise<PublicDropPointWithTallies[]> {
+  const { rows } = await db.raw(
+    `select p.id, p.name, p.address, p.lat, p.lng, p.hours, p.capacity_bags as "capacityBags",
+            f.level as "fillLevel", f.created_at as "fillReportedAt",
+            coalesce((select array_agg(fi.url order by fi.created_at) from files fi
+                       where fi.purpose = 'drop-point-photo' and fi.subject_id = p.id and fi.group_id = p.group_id), '{}') as photos,
+            coalesce(t.hauls, 0)::int as hauls, coalesce(t.bags, 0)::int as bags,
+            coalesce(t.good_cans, 0)::bigint as "goodCans", coalesce(t.rejected_cans, 0)::bigint as "rejectedCans"
+       from drives d
+       join drop_points p on p.drive_id = d.id and p.active
+       left join drop_point_tallies t on t.drop_point_id = p.id
+       left join lateral (select level, created_at from fill_reports fr where fr.drop_point_id = p.id
+                           order by fr.created_at desc limit 1) f on true
+      where d.slug = ? and d.is_public
+      order by p.name`,
+    [slug],
+  );
+  return rows.map((r: Record<string, unknown>) => ({
+    id: r.id as string,
+    name: r.name as string,
+    address: r.address as string,
+    lat: r.lat as number,
+    lng: r.lng as number,
+    hours: r.hours as string,
+    capacityBags: r.capacityBags as number,
+    fillLevel: (r.fillLevel as number | null) ?? null,
+    fillReportedAt: r.fillReportedAt ? new Date(r.fillReportedAt as string).toISOString() : null,
+    photos: r.photos as string[],
+    tallies: { hauls: Number(r.hauls), bags: Number(r.bags), goodCans: Number(r.goodCans), rejectedCans: Number(r.rejectedCans) },
+  }));
 }
 
 export async function findPublicDropPoint(driveId: string, id: string) {

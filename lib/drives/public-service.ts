@@ -1,7 +1,7 @@
 import "server-only";
 import { notFound } from "@/lib/api/errors";
-import { findPublicDrive, listPublicDropPoints, unitCansOf } from "./public-queries";
-import { EMPTY_TALLY, progressFor, tallies } from "./tallies";
+import { findPublicDrive, listPublicDropPointsWithTallies, unitCansOf } from "./public-queries";
+import { progressFor } from "./tallies";
 
 const today = () => new Date().toISOString().slice(0, 10);
 
@@ -32,9 +32,9 @@ export async function publicDrive(slug: string) {
 export type PublicDrive = Awaited<ReturnType<typeof publicDrive>>;
 
 export async function publicDropPoints(slug: string) {
-  const drive = await findPublicDrive(slug);
-  if (!drive) throw notFound("That drive");
-  const [points, counts] = await Promise.all([listPublicDropPoints(drive.id), tallies(drive.id)]);
-  return points.map((p) => ({ ...p, tallies: counts[p.id] ?? EMPTY_TALLY }));
+  const points = await listPublicDropPointsWithTallies(slug);
+  // No rows: either a drive with no active drop point, or no such public drive.
+  if (points.length === 0 && !(await findPublicDrive(slug))) throw notFound("That drive");
+  return points;
 }
 export type PublicDropPoint = Awaited<ReturnType<typeof publicDropPoints>>[number];

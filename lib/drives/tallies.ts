@@ -1,15 +1,10 @@
 import "server-only";
 // The one place the drive pages read the ledger's running totals.
-import { driveGoodDaily, dropPointTallies, driveYieldInputs, lastHaulAt, type DropPointTally } from "@/lib/ledger/balances";
+import { driveGoodDaily, driveYieldInputs, lastHaulAt, type DropPointTally } from "@/lib/ledger/balances";
 import { addDays, DEFAULT_PACE_WINDOW_DAYS, driveProgress, type DriveProgress } from "@/lib/drives/progress";
 
 export type { DropPointTally };
 
-export const EMPTY_TALLY: DropPointTally = { hauls: 0, bags: 0, goodCans: 0, rejectedCans: 0 };
-
-export async function tallies(driveId: string): Promise<Record<string, DropPointTally>> {
-  return dropPointTallies(driveId);
-}
 
 export async function progressFor(drive: { id: string; startsOn: string; sparePercent: number }, unitCans: number[], today: string): Promise<DriveProgress> {
   const [inputs, daily] = await Promise.all([driveYieldInputs(drive.id), driveGoodDaily(drive.id, addDays(today, -DEFAULT_PACE_WINDOW_DAYS))]);

@@ -5,7 +5,13 @@ import { Button } from "@/components/ui/button";
 import { LEVEL_LABEL } from "@/lib/drives/fill";
 import type { PublicDropPointView } from "@/lib/drives/query-options";
 import { haversineKm } from "@/lib/routes/great-circle";
-import { FillReportForm } from "./fill-report-form";
+import dynamic from "next/dynamic";
+
+// The report form brings the upload client with it: load it only when someone
+// opens "Is this bin full?", so the public page stays light.
+const FillReportForm = dynamic(() => import("./fill-report-form").then((m) => m.FillReportForm), {
+  loading: () => <p className="text-ink-faint">Opening the report form…</p>,
+});
 
 type Located = PublicDropPointView & { number: number; km?: number };
 
