@@ -1,4 +1,5 @@
 import { redirect } from "next/navigation";
+import { SessionBoundary } from "@/components/auth/session-boundary";
 import { AppHeader } from "@/components/layout/app-header";
 import { DatabaseDown } from "@/components/system/database-down";
 import { getActor } from "@/lib/auth/session";
@@ -12,11 +13,11 @@ export default async function AppLayout({ children }: { children: React.ReactNod
   const actor = await getActor();
   if (!actor) redirect("/signin");
   return (
-    <>
+    <SessionBoundary>
       <AppHeader groupName={actor.group.name} role={actor.role} userName={actor.user.name} />
       <div id="main" className="mx-auto max-w-5xl px-4 py-6">
         {children}
       </div>
-    </>
+    </SessionBoundary>
   );
 }

@@ -1,6 +1,7 @@
 "use client";
 
 import { useSession } from "next-auth/react";
+import { SessionBoundary } from "@/components/auth/session-boundary";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
@@ -53,7 +54,15 @@ export function AcceptAsNewPerson({ token, email }: { token: string; email: stri
 }
 
 /** Someone already signed in as the invited address: one click adds the group and switches to it. */
-export function AcceptAsMember({ token, groupName }: { token: string; groupName: string }) {
+export function AcceptAsMember(props: { token: string; groupName: string }) {
+  return (
+    <SessionBoundary>
+      <AcceptAsMemberForm {...props} />
+    </SessionBoundary>
+  );
+}
+
+function AcceptAsMemberForm({ token, groupName }: { token: string; groupName: string }) {
   const router = useRouter();
   const { update } = useSession();
   const form = useFormFields();

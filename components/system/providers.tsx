@@ -1,16 +1,11 @@
 "use client";
 
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
-import { SessionProvider } from "next-auth/react";
 import { useState } from "react";
 
 export function Providers({ children }: { children: React.ReactNode }) {
   const [client] = useState(
     () => new QueryClient({ defaultOptions: { queries: { staleTime: 10_000, retry: 1, refetchOnWindowFocus: true } } }),
   );
-  return (
-    <SessionProvider refetchOnWindowFocus={false}>
-      <QueryClientProvider client={client}>{children}</QueryClientProvider>
-    </SessionProvider>
-  );
+  return <QueryClientProvider client={client}>{children}</QueryClientProvider>;
 }

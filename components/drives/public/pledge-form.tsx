@@ -6,30 +6,22 @@ import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
 import { fetchJson, ApiError, fieldErrors } from "@/lib/api/client";
 import type { PublicDropPointView } from "@/lib/drives/query-options";
-import { pledgeInput } from "@/lib/drives/schemas";
-import { fieldErrorsOf } from "@/lib/api/errors";
 
 export function PledgeForm({ slug, points }: { slug: string; points: PublicDropPointView[] }) {
   const [values, setValues] = useState({ name: "", email: "", dropPointId: "", bags: "1", bringOn: "" });
-  const [local, setLocal] = useState<Record<string, string>>({});
   const [done, setDone] = useState<{ mailed: boolean } | null>(null);
   const mutation = useMutation({
     mutationFn: (body: unknown) => fetchJson<{ id: string; mailed: boolean }>(`/api/public/drives/${slug}/pledges`, { method: "POST", body }),
     onSuccess: (r) => setDone({ mailed: r.mailed }),
   });
-  const errors = { ...fieldErrors(mutation.error), ...local };
+  // Checked by the server with the pledge schema: its 422 field errors show
+  // next to the fields. (Keeping zod out of this public page keeps it light.)
+  const errors = fieldErrors(mutation.error);
   const set = (k: keyof typeof values) => (e: React.ChangeEvent<HTMLInputElement | HTMLSelectElement>) => setValues({ ...values, [k]: e.target.value });
 
   function submit(e: React.FormEvent) {
     e.preventDefault();
-    const body = { ...values, bags: Number(values.bags) };
-    const parsed = pledgeInput.safeParse(body);
-    if (!parsed.success) {
-      setLocal(fieldErrorsOf(parsed.error));
-      return;
-    }
-    setLocal({});
-    mutation.mutate(parsed.data);
+    mutation.mutate({ ...values, bags: values.bags.trim() === "" ? Number.NaN : Number(values.bags) });
   }
 
   if (done) {
