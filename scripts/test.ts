@@ -1,5 +1,6 @@
 import { spawn, type ChildProcess } from "node:child_process";
 import { mkdirSync, mkdtempSync, readFileSync, rmSync, chmodSync } from "node:fs";
+import os from "node:os";
 import path from "node:path";
 import { startStack, type Stack } from "./lib/stack";
 import { buildIfStale } from "./lib/build";
@@ -11,9 +12,10 @@ const root = path.resolve(import.meta.dirname, "..");
 // CANTROVE_TEST_PORT_BASE moves every port at once, so two checkouts can test side by side.
 const base = Number(process.env.CANTROVE_TEST_PORT_BASE ?? 0);
 const ports = { pg: 54339 + base, smtp: 2535 + base, mailApi: 8035 + base, upload: 8036 + base, app: 3100 + base };
+// Under the system temp folder rather than the checkout: PostgreSQL runs as
+// the `postgres` user, which may not be allowed into the checkout's parents.
 const runDir = (() => {
-  mkdirSync(path.join(root, ".pgtest"), { recursive: true });
-  const dir = mkdtempSync(path.join(root, ".pgtest", "run-"));
+  const dir = mkdtempSync(path.join(os.tmpdir(), "cantrove-test-"));
   chmodSync(dir, 0o755);
   return dir;
 })();

@@ -61,6 +61,12 @@ export function startCluster(dataDir: string, port: number, log: (line: string) 
   if (fresh) {
     mkdirSync(dataDir, { recursive: true });
     ownByPostgres(dataDir);
+    if (process.getuid?.() === 0 && spawnSync("runuser", ["-u", "postgres", "--", "test", "-w", dataDir]).status !== 0) {
+      throw new Error(
+        `PostgreSQL runs as the postgres user, which cannot enter ${dataDir}. Make its parent folders enterable ` +
+          `(chmod o+x on each), put the project elsewhere, or set DATABASE_URL to a server of your own.`,
+      );
+    }
     asPostgres(bin, "initdb", ["-D", dataDir, "-U", "postgres", "--auth=trust", "-E", "UTF8", "--locale=C.UTF-8"]);
   }
   const pidFile = path.join(dataDir, "postmaster.pid");
