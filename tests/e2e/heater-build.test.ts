@@ -26,7 +26,8 @@ afterAll(async () => {
 /** Page object for the drive's line on /units: "Target X cans: Y for N heaters + S spare". */
 async function driveTarget(): Promise<{ cans: number; heaterCans: number; heaters: number }> {
   await page.goto("/units");
-  const text = await page.getByTestId(`drive-target-${f.demoDriveSlug}`).innerText();
+  // Inside #main only: while the page streams in, React briefly keeps a hidden copy outside it.
+  const text = await page.locator("#main").getByTestId(`drive-target-${f.demoDriveSlug}`).innerText();
   const m = /Target ([\d,]+) cans: ([\d,]+) for (\d+) heaters?/.exec(text);
   if (!m) throw new Error(`unexpected target line: ${text}`);
   const n = (s: string) => Number(s.replace(/,/g, ""));
@@ -59,7 +60,7 @@ describe("a builder plans, saves, claims, builds and prints a heater unit", () =
     expect(after.heaterCans).toBe(before.heaterCans + 132);
     expect(after.heaters).toBe(before.heaters + 1);
     expect(after.cans).toBe(after.heaterCans + Math.ceil(after.heaterCans * 0.05));
-    const covered = await page.getByTestId(`drive-covered-${f.demoDriveSlug}`).innerText();
+    const covered = await page.locator("#main").getByTestId(`drive-covered-${f.demoDriveSlug}`).innerText();
     expect(covered).toMatch(new RegExp(`^Good cans for \\d+ of ${after.heaters} heaters \\([\\d,]+ counted\\)\\.$`));
 
     // Claim the unit's cans, then record one column (12 cans) built in.
