@@ -13,13 +13,13 @@ type Conn = Knex | Knex.Transaction;
 export async function reverseMovement(actor: Actor, movementId: string, conn: Conn) {
   return inTx(conn, async (trx) => {
     const groupId = actor.group.id;
-    const found = await trx("movements").select("id", "drive_id", "recorded_by").where({ id: movementId, group_id: groupId }).first();
-    if (!found) throw notFound("That entry");
-    if (found.recorded_by !== actor.user.id && actor.role !== "organiser") {
+    // Movements never change once written, so the row read here stays true after the lock.
+    const movement = await trx("movements").where({ id: movementId, group_id: groupId }).first();
+    if (!movement) throw notFound("That entry");
+    if (movement.recorded_by !== actor.user.id && actor.role !== "organiser") {
       throw new AppError("forbidden", "Only the person who recorded this entry, or an organiser, can undo it.");
     }
-    await lockDrive(trx, groupId, found.drive_id);
-    const movement = await trx("movements").where({ id: movementId }).first();
+    await lockDrive(trx, groupId, movement.drive_id);
     if (movement.kind === "reversal") throw conflict("This entry is itself an undo; record the entry again instead.");
     const already = await trx("movements").select("id").where({ reverses_movement_id: movementId }).first();
     if (already) throw conflict("This entry was already undone.");
