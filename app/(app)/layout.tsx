@@ -3,14 +3,21 @@ import { SessionBoundary } from "@/components/auth/session-boundary";
 import { AppHeader } from "@/components/layout/app-header";
 import { DatabaseDown } from "@/components/system/database-down";
 import { getActor } from "@/lib/auth/session";
-import { pingDatabase } from "@/lib/db";
+import { isDatabaseUnreachable } from "@/lib/db";
 
 export const dynamic = "force-dynamic";
 
 // Pages below still check their own role; this layout only frames them.
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
-  if (!(await pingDatabase())) return <DatabaseDown />;
-  const actor = await getActor();
+  // The session lookup is the first query of every signed-in page, so it is
+  // also the database check: no extra round trip per page.
+  let actor: Awaited<ReturnType<typeof getActor>>;
+  try {
+    actor = await getActor();
+  } catch (error) {
+    if (isDatabaseUnreachable(error)) return <DatabaseDown />;
+    throw error;
+  }
   if (!actor) redirect("/signin");
   return (
     <SessionBoundary>

@@ -1,15 +1,12 @@
 import { PublicFooter, PublicHeader } from "@/components/layout/public-header";
-import { DatabaseDown } from "@/components/system/database-down";
-import { pingDatabase } from "@/lib/db";
 
-export const dynamic = "force-dynamic";
-
-export default async function PublicLayout({ children }: { children: React.ReactNode }) {
-  const dbUp = await pingDatabase();
+// No database check here: pages that need none (sign-in, the planner) stay up
+// without it; the landing page and app/error.tsx say when it is unreachable.
+export default function PublicLayout({ children }: { children: React.ReactNode }) {
   return (
     <>
       <PublicHeader />
-      {dbUp ? children : <DatabaseDown />}
+      {children}
       <PublicFooter />
     </>
   );

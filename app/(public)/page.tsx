@@ -1,6 +1,8 @@
 import Link from "next/link";
 import { ButtonLink } from "@/components/ui/button";
 import { Card, EmptyState } from "@/components/ui/card";
+import { DatabaseDown } from "@/components/system/database-down";
+import { isDatabaseUnreachable } from "@/lib/db";
 import { listPublicDrives } from "@/lib/drives/public-queries";
 
 const STEPS = [
@@ -15,8 +17,17 @@ function formatRange(start: string, end: string) {
   return `${fmt(start)} – ${fmt(end)}`;
 }
 
+// Lists live drives: never prerendered at build time.
+export const dynamic = "force-dynamic";
+
 export default async function LandingPage() {
-  const drives = await listPublicDrives();
+  let drives: Awaited<ReturnType<typeof listPublicDrives>>;
+  try {
+    drives = await listPublicDrives();
+  } catch (error) {
+    if (isDatabaseUnreachable(error)) return <DatabaseDown />;
+    throw error;
+  }
   return (
     <main id="main" className="mx-auto max-w-5xl px-4 py-8 sm:py-12">
       <section className="grid gap-6 sm:grid-cols-[3fr_2fr] sm:items-center">
