@@ -1,20 +1,10 @@
 import { queryOptions } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/api/client";
+import type { PublicDropPointWithTallies } from "@/lib/drives/public-queries";
 
-// Client-side shapes of the public endpoints (the server types them in public-service.ts).
-export interface PublicDropPointView {
-  id: string;
-  name: string;
-  address: string;
-  lat: number;
-  lng: number;
-  hours: string;
-  capacityBags: number;
-  fillLevel: number | null;
-  fillReportedAt: string | null;
-  photos: string[];
-  tallies: { hauls: number; bags: number; goodCans: number; rejectedCans: number };
-}
+// Client-side shapes of the public endpoints. The drop point's shape is the
+// query's own (a type-only import: nothing server-side reaches the bundle).
+export type PublicDropPointView = PublicDropPointWithTallies;
 
 export interface PublicDriveView {
   drive: { slug: string; name: string; startsOn: string; endsOn: string; description: string; wanted: string; groupName: string };
