@@ -76,11 +76,7 @@ export function startCluster(dataDir: string, port: number, log: (line: string) 
     if (status.status !== 0) rmSync(pidFile, { force: true });
     else asPostgres(bin, "pg_ctl", ["-D", dataDir, "-m", "fast", "-w", "stop"]);
   }
-  asPostgres(bin, "pg_ctl", [
-    "-D", dataDir, "-l", path.join(dataDir, "server.log"), "-w", "-t", "30",
-    "-o", `-c listen_addresses=127.0.0.1 -p ${port} -c unix_socket_directories='' -c fsync=${process.env.PG_FSYNC ?? "on"}`,
-    "start",
-  ]);
+  startClusterAt(dataDir, port);
   let stopped = false;
   return {
     dataDir,
@@ -104,7 +100,7 @@ export function startClusterAt(dataDir: string, port: number): void {
   const bin = pgBinDir();
   asPostgres(bin, "pg_ctl", [
     "-D", dataDir, "-l", path.join(dataDir, "server.log"), "-w", "-t", "30",
-    "-o", `-c listen_addresses=127.0.0.1 -p ${port} -c unix_socket_directories=''`,
+    "-o", `-c listen_addresses=127.0.0.1 -p ${port} -c unix_socket_directories='' -c fsync=${process.env.PG_FSYNC ?? "on"}`,
     "start",
   ]);
 }
