@@ -78,7 +78,8 @@ describe("a builder plans, saves, claims, builds and prints a heater unit", () =
     // The build sheet, printed to PDF by the browser.
     await page.goto(`${unitUrl}/sheet`);
     await page.getByRole("heading", { name: `Build sheet: ${name}` }).waitFor();
-    const screenText = await page.locator("main").innerText();
+    // Inside #main: while the page streams in, React briefly keeps a hidden copy outside it.
+    const screenText = await page.locator("#main").locator("main").innerText();
     expect(screenText).toContain("528");
     const pdf = await page.pdf({ format: "A4", printBackground: true });
     expect(Buffer.from(pdf.subarray(0, 5)).toString()).toBe("%PDF-");
