@@ -2,11 +2,13 @@ import type { Knex } from "knex";
 import { AppError, conflict, notFound } from "@/lib/api/errors";
 import type { RejectReason, Stage } from "./schemas";
 
-// The one place ledger lines are written. Every writer locks the drive first
-// (so writes to one drive run one after another and checks see settled
-// balances), checks the debits with a message that says what is left, then
-// writes the lines and the running totals in the same transaction. The
-// CHECK (quantity >= 0) on the totals is the last line of defence.
+// The one place ledger lines are written. postMovement hands the movement to
+// ledger_post() in PostgreSQL, which locks the drive (so writes to one drive
+// run one after another and checks see settled balances), checks the debits,
+// then writes the lines and the running totals, all in one round trip, so the
+// lock is held for microseconds rather than a dozen network round trips. A
+// refusal comes back as a message that says what is left. The CHECK
+// (quantity >= 0) on the totals is the last line of defence.
 
 export type Trx = Knex.Transaction;
 
@@ -48,6 +50,8 @@ export interface MovementSpec {
   details?: Record<string, unknown>;
   /** When the caller already wrote the movement row (a haul or sort row must refer to it first). */
   existingMovementId?: string;
+  /** The new movement's id, when the caller needs to know it before writing (to answer in advance). */
+  movementId?: string;
 }
 
 /** Runs `fn` in the caller's transaction when there is one, else in a new one. */
@@ -64,165 +68,79 @@ export async function lockDrive(trx: Trx, groupId: string, driveId: string): Pro
   return row;
 }
 
-type Key = { dropPointId: string | null; heaterUnitId: string | null; stage: Stage };
-const keyOf = (k: Key) => `${k.dropPointId ?? ""}|${k.heaterUnitId ?? ""}|${k.stage}`;
-
-// Drop-point rows exist only for open estimates, heater rows only for claims and builds.
-function keysFor(stage: Stage, line: LineSpec): Key[] {
-  const keys: Key[] = [{ dropPointId: null, heaterUnitId: null, stage }];
-  if (stage === "hauled" && line.dropPointId) keys.push({ dropPointId: line.dropPointId, heaterUnitId: null, stage });
-  if ((stage === "claimed" || stage === "builtIn") && line.heaterUnitId) keys.push({ dropPointId: null, heaterUnitId: line.heaterUnitId, stage });
-  return keys;
-}
-
 export function isoDay(d: Date): string {
   return d.toISOString().slice(0, 10);
 }
 
+/** One call of ledger_post, ready to run alone or inside another statement. */
+export interface LedgerCall {
+  sql: string;
+  bindings: [string];
+}
+
 export async function postMovement(trx: Trx, m: MovementSpec, lines: LineSpec[]): Promise<{ movementId: string; lineIds: string[] }> {
-  const occurredAt = m.occurredAt ?? new Date();
-  const deltas = new Map<string, Key & { delta: number }>();
+  return runLedgerCall(trx, ledgerPostCall(m, lines));
+}
+
+export async function runLedgerCall(conn: Knex | Trx, call: LedgerCall): Promise<{ movementId: string; lineIds: string[] }> {
+  try {
+    const { rows } = await conn.raw(`select ${call.sql} as r`, call.bindings);
+    const r = rows[0].r as { movementId: string; lineIds: (string | number)[] };
+    return { movementId: r.movementId, lineIds: r.lineIds.map(String) };
+  } catch (error) {
+    throw ledgerRefusal(error) ?? error;
+  }
+}
+
+export function ledgerPostCall(m: MovementSpec, lines: LineSpec[]): LedgerCall {
   for (const line of lines) {
     if (!Number.isInteger(line.quantity) || line.quantity <= 0) throw new AppError("internal", "A ledger line needs a positive whole quantity.");
-    for (const [stage, sign] of [[line.from, -1], [line.to, 1]] as const) {
-      if (!stage) continue;
-      for (const k of keysFor(stage, line)) {
-        const entry = deltas.get(keyOf(k)) ?? { ...k, delta: 0 };
-        entry.delta += sign * line.quantity;
-        deltas.set(keyOf(k), entry);
-      }
-    }
   }
-  await checkDebits(trx, m.driveId, [...deltas.values()].filter((d) => d.delta < 0));
-
-  const [movement] = m.existingMovementId
-    ? [{ id: m.existingMovementId }]
-    : await trx("movements")
-    .insert({
-      group_id: m.groupId,
-      drive_id: m.driveId,
-      kind: m.kind,
-      recorded_by: m.actorId,
-      occurred_at: occurredAt,
-      reverses_movement_id: m.reversesMovementId ?? null,
-      details: JSON.stringify(m.details ?? {}),
-    })
-    .returning("id");
-  const lineIds: string[] = [];
-  if (lines.length) {
-    const inserted = await trx("ledger_lines")
-      .insert(
-        lines.map((l) => ({
-          movement_id: movement.id,
-          group_id: m.groupId,
-          drive_id: m.driveId,
-          drop_point_id: l.dropPointId ?? null,
-          heater_unit_id: l.heaterUnitId ?? null,
-          from_stage: l.from,
-          to_stage: l.to,
-          quantity: l.quantity,
-          reason: l.reason ?? null,
-          is_estimate: l.isEstimate ?? false,
-          note: l.note ?? "",
-          occurred_at: occurredAt,
-          recorded_by: m.actorId,
-          reverses_id: l.reversesId ?? null,
-          haul_id: l.haulId ?? null,
-          sort_id: l.sortId ?? null,
-        })),
-      )
-      .returning("id");
-    lineIds.push(...inserted.map((r: { id: string | number }) => String(r.id)));
-  }
-
-  for (const d of deltas.values()) {
-    if (d.delta === 0) continue;
-    // Insert-then-update: CHECK constraints apply to an upsert's proposed row, so a negative delta cannot ride on it.
-    await trx.raw(
-      `insert into stage_balances (group_id, drive_id, drop_point_id, heater_unit_id, stage, quantity) values (?, ?, ?, ?, ?, 0)
-       on conflict on constraint stage_balances_key do nothing`,
-      [m.groupId, m.driveId, d.dropPointId, d.heaterUnitId, d.stage],
-    );
-    await trx.raw(
-      `update stage_balances set quantity = quantity + ? where drive_id = ? and drop_point_id is not distinct from ?
-         and heater_unit_id is not distinct from ? and stage = ?`,
-      [d.delta, m.driveId, d.dropPointId, d.heaterUnitId, d.stage],
-    );
-  }
-  await applyCounted(trx, m, lines, isoDay(occurredAt));
-  const driveDelta = (stage: Stage) => deltas.get(keyOf({ dropPointId: null, heaterUnitId: null, stage }))?.delta ?? 0;
-  const unclaimedDelta = driveDelta("good") + driveDelta("washed") + driveDelta("opened") + driveDelta("punched") - driveDelta("claimed");
-  await checkUnclaimed(trx, m.driveId, unclaimedDelta);
-  return { movementId: movement.id, lineIds };
+  const occurredAt = m.occurredAt ?? new Date();
+  // One round trip: ledger_post (db/migrations/*_ledger_post_function.ts) locks the drive, checks, writes lines and totals.
+  const payload = {
+    groupId: m.groupId,
+    driveId: m.driveId,
+    actorId: m.actorId,
+    kind: m.kind,
+    occurredAt: occurredAt.toISOString(),
+    day: isoDay(occurredAt),
+    movementId: m.movementId ?? null,
+    existingMovementId: m.existingMovementId ?? null,
+    reversesMovementId: m.reversesMovementId ?? null,
+    details: m.details ?? {},
+    lines: lines.map((l) => ({
+      from: l.from,
+      to: l.to,
+      quantity: l.quantity,
+      dropPointId: l.dropPointId ?? null,
+      heaterUnitId: l.heaterUnitId ?? null,
+      reason: l.reason ?? null,
+      isEstimate: l.isEstimate ?? false,
+      note: l.note ?? "",
+      haulId: l.haulId ?? null,
+      sortId: l.sortId ?? null,
+      reversesId: l.reversesId ?? null,
+      countedDay: l.countedDay ?? null,
+    })),
+  };
+  return { sql: "ledger_post(?::jsonb)", bindings: [JSON.stringify(payload)] };
 }
 
-async function checkDebits(trx: Trx, driveId: string, debits: (Key & { delta: number })[]): Promise<void> {
-  for (const d of debits) {
-    const row = await trx("stage_balances")
-      .select("quantity")
-      .where({ drive_id: driveId, stage: d.stage })
-      .andWhere((q) => (d.dropPointId ? q.where("drop_point_id", d.dropPointId) : q.whereNull("drop_point_id")))
-      .andWhere((q) => (d.heaterUnitId ? q.where("heater_unit_id", d.heaterUnitId) : q.whereNull("heater_unit_id")))
-      .first();
-    const have = Number(row?.quantity ?? 0);
-    if (have + d.delta < 0) {
-      throw conflict(`That needs ${-d.delta} cans ${STAGE_LABEL[d.stage]}, but only ${have} left.`, { available: have, stage: d.stage });
-    }
+/** The function's refusals as the messages people see; anything else is not ours to translate. */
+export function ledgerRefusal(error: unknown): AppError | null {
+  const e = error as { code?: string; detail?: string };
+  if (e?.code === "CT404") return notFound("That drive");
+  if (e?.code !== "CT409") return null;
+  const d = JSON.parse(e.detail ?? "{}") as { kind: string; stage?: Stage; needed?: number; available?: number };
+  if (d.kind === "debit" && d.stage) {
+    const have = Number(d.available);
+    return conflict(`That needs ${Number(d.needed)} cans ${STAGE_LABEL[d.stage]}, but only ${have} left.`, { available: have, stage: d.stage });
   }
-}
-
-/** Claims reserve processed cans; no write may leave more claimed than there are. */
-async function checkUnclaimed(trx: Trx, driveId: string, change: number): Promise<void> {
-  const rows = await trx("stage_balances")
-    .select("stage", "quantity")
-    .where({ drive_id: driveId })
-    .whereNull("drop_point_id")
-    .whereNull("heater_unit_id")
-    .whereIn("stage", ["good", "washed", "opened", "punched", "claimed"]);
-  let processed = 0;
-  let claimed = 0;
-  for (const r of rows) {
-    if (r.stage === "claimed") claimed = Number(r.quantity);
-    else processed += Number(r.quantity);
-  }
-  if (processed - claimed < 0) {
-    const before = processed - claimed - change;
-    throw conflict(`Not enough unclaimed cans: only ${before} left unclaimed. Release a claim first, or claim fewer.`, {
-      available: Math.max(0, before),
-    });
-  }
-}
-
-/** Counted cans (a sort's good and rejects, or their reversal) feed the tallies and the daily totals. */
-async function applyCounted(trx: Trx, m: MovementSpec, lines: LineSpec[], day: string): Promise<void> {
-  for (const l of lines) {
-    const sign = l.from === null ? 1 : l.to === null ? -1 : 0;
-    const stage = l.from ?? l.to;
-    if (sign === 0 || (stage !== "good" && stage !== "rejected")) continue;
-    const q = sign * l.quantity;
-    if (stage === "good") {
-      await trx.raw(
-        `insert into drive_daily_good (drive_id, day, good_cans) values (?, ?, ?)
-         on conflict (drive_id, day) do update set good_cans = drive_daily_good.good_cans + excluded.good_cans`,
-        [m.driveId, l.countedDay ?? day, q],
-      );
-    } else {
-      for (const dp of l.dropPointId ? [null, l.dropPointId] : [null]) {
-        await trx.raw(
-          `insert into reject_tallies (group_id, drive_id, drop_point_id, reason, quantity) values (?, ?, ?, ?, 0)
-           on conflict on constraint reject_tallies_key do nothing`,
-          [m.groupId, m.driveId, dp, l.reason ?? "other"],
-        );
-        await trx.raw(
-          `update reject_tallies set quantity = quantity + ? where drive_id = ? and drop_point_id is not distinct from ? and reason = ?`,
-          [q, m.driveId, dp, l.reason ?? "other"],
-        );
-      }
-    }
-    if (l.dropPointId) {
-      await bumpDropPoint(trx, m.groupId, m.driveId, l.dropPointId, stage === "good" ? { good_cans: q } : { rejected_cans: q });
-    }
-  }
+  const before = Number(d.available);
+  return conflict(`Not enough unclaimed cans: only ${before} left unclaimed. Release a claim first, or claim fewer.`, {
+    available: Math.max(0, before),
+  });
 }
 
 export async function bumpDropPoint(
