@@ -24,7 +24,15 @@ export type IdempotentWork = (trx: Knex.Transaction, rawBody: string) => Promise
 
 const KEY_PATTERN = /^[\x21-\x7e]{1,200}$/;
 
-export async function withIdempotency(request: Request, actor: Actor, work: IdempotentWork): Promise<Response> {
+interface KeyedRequest {
+  key: string | null;
+  raw: string;
+  method: string;
+  path: string;
+  bodyHash: string;
+}
+
+async function readKeyedRequest(request: Request): Promise<KeyedRequest> {
   const key = request.headers.get("idempotency-key")?.trim() || null;
   if (key !== null && !KEY_PATTERN.test(key)) {
     throw new AppError("invalid_input", "The Idempotency-Key header must be 1–200 visible ASCII characters.", {
@@ -35,6 +43,27 @@ export async function withIdempotency(request: Request, actor: Actor, work: Idem
   const method = request.method.toUpperCase();
   const path = new URL(request.url).pathname;
   const bodyHash = createHash("sha256").update(canonicalBody(raw)).digest("hex");
+  return { key, raw, method, path, bodyHash };
+}
+
+function answer(result: IdempotentResult & { replayed: boolean }): Response {
+  return NextResponse.json(result.body, {
+    status: result.status,
+    headers: result.replayed ? { "idempotency-replayed": "true" } : undefined,
+  });
+}
+
+/** The first answer stored under the key, or 409 when the key was used for another request. */
+async function replay(conn: Knex, actor: Actor, r: KeyedRequest) {
+  const first = await conn("idempotency_keys").where({ actor_id: actor.user.id, key: r.key }).first();
+  if (!first || first.method !== r.method || first.path !== r.path || first.body_hash !== r.bodyHash) {
+    throw conflict("This Idempotency-Key was already used for a different request. Send a new key for a new entry.");
+  }
+  return { status: first.status as number, body: first.response, replayed: true };
+}
+
+export async function withIdempotency(request: Request, actor: Actor, work: IdempotentWork): Promise<Response> {
+  const { key, raw, method, path, bodyHash } = await readKeyedRequest(request);
 
   const result = await db.transaction(async (trx) => {
     if (key) {
@@ -43,13 +72,7 @@ export async function withIdempotency(request: Request, actor: Actor, work: Idem
         .onConflict(["actor_id", "key"])
         .ignore()
         .returning("key");
-      if (inserted.length === 0) {
-        const first = await trx("idempotency_keys").where({ actor_id: actor.user.id, key }).first();
-        if (!first || first.method !== method || first.path !== path || first.body_hash !== bodyHash) {
-          throw conflict("This Idempotency-Key was already used for a different request. Send a new key for a new entry.");
-        }
-        return { status: first.status as number, body: first.response, replayed: true };
-      }
+      if (inserted.length === 0) return replay(trx, actor, { key, raw, method, path, bodyHash });
     }
     let outcome: IdempotentResult;
     try {
@@ -67,10 +90,61 @@ export async function withIdempotency(request: Request, actor: Actor, work: Idem
     return { ...outcome, replayed: false };
   });
 
-  return NextResponse.json(result.body, {
-    status: result.status,
-    headers: result.replayed ? { "idempotency-replayed": "true" } : undefined,
-  });
+  return answer(result);
+}
+
+/** Work that is one SQL call whose answer is known before it runs. */
+export interface PreparedStatement {
+  status: number;
+  body: unknown;
+  /** A scalar SQL expression, e.g. `ledger_post(?::jsonb)`. */
+  sql: string;
+  bindings: readonly Knex.RawBinding[];
+  /** Turns the statement's own refusals into an AppError; others stay 500. */
+  refusal?: (error: unknown) => AppError | null;
+}
+
+/**
+ * The same rule as withIdempotency for work that is a single statement: the
+ * key row with its answer and the work are one statement, so they commit
+ * together and no lock is held across a network round trip. A refusal
+ * (bad input, or the statement's own) is stored under the key on its own.
+ */
+export async function withIdempotentStatement(
+  request: Request,
+  actor: Actor,
+  prepare: (rawBody: string) => Promise<PreparedStatement>,
+): Promise<Response> {
+  const r = await readKeyedRequest(request);
+  const keyValues = (status: number, body: unknown) => [actor.user.id, r.key, r.method, r.path, r.bodyHash, status, JSON.stringify(body)];
+  const insertKey = `insert into idempotency_keys (actor_id, key, method, path, body_hash, status, response)
+                     values (?, ?, ?, ?, ?, ?, ?::jsonb) on conflict (actor_id, key) do nothing returning 1`;
+  let outcome: IdempotentResult;
+  try {
+    const p = await prepare(r.raw);
+    try {
+      if (!r.key) {
+        await db.raw(`select ${p.sql}`, p.bindings);
+      } else {
+        const { rows } = await db.raw(`with k as (${insertKey}) select exists (select 1 from k) as fresh, (select ${p.sql} from k) as done`, [
+          ...keyValues(p.status, p.body),
+          ...p.bindings,
+        ]);
+        if (!rows[0].fresh) return answer(await replay(db, actor, r));
+      }
+    } catch (error) {
+      throw p.refusal?.(error) ?? error;
+    }
+    return answer({ status: p.status, body: p.body, replayed: false });
+  } catch (error) {
+    if (!(error instanceof AppError) || error.status >= 500) throw error;
+    outcome = { status: error.status, body: errorBody(error) };
+  }
+  if (r.key) {
+    const { rows } = await db.raw(insertKey, keyValues(outcome.status, outcome.body));
+    if (rows.length === 0) return answer(await replay(db, actor, r));
+  }
+  return answer({ ...outcome, replayed: false });
 }
 
 /** Whitespace and key order do not make a different request. */

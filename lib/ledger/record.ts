@@ -17,6 +17,8 @@ export const recordHaul = (actor: Actor, driveId: string, input: HaulInput, conn
 export const recordSort = (actor: Actor, driveId: string, input: SortInput, conn: Conn = db) => w.recordSort(actor, driveId, input, conn);
 export const recordProcessing = (actor: Actor, driveId: string, input: ProcessingInput, conn: Conn = db) =>
   w.recordProcessing(actor, driveId, input, conn);
+export const prepareProcessing = (actor: Actor, driveId: string, input: ProcessingInput) => w.prepareProcessing(actor, driveId, input, db);
+export { ledgerRefusal } from "./post";
 export const recordRecycling = (actor: Actor, driveId: string, input: RecyclingInput, conn: Conn = db) =>
   w.recordRecycling(actor, driveId, input, conn);
 export const recordClaim = (actor: Actor, heaterUnitId: string, quantity: number, conn: Conn = db, note?: string) =>

@@ -1,10 +1,11 @@
+import { randomUUID } from "node:crypto";
 import type { Knex } from "knex";
 import { conflict, notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
 import { estimateHaulCans } from "./estimate";
 import { allocate } from "./allocate";
 import { loadCalibration, calibrationDelta, applyCalibration } from "./calibration";
-import { bumpDropPoint, inTx, lockDrive, postMovement, type LineSpec } from "./post";
+import { bumpDropPoint, inTx, ledgerPostCall, lockDrive, postMovement, runLedgerCall, type LedgerCall, type LineSpec } from "./post";
 import { REJECT_REASONS, type HaulInput, type ProcessingInput, type RecyclingInput, type SortInput } from "./schemas";
 
 // Writers of the ledger. Each is one transaction (or joins the caller's, as
@@ -158,28 +159,42 @@ async function postSort(
   return { movementId: movement.id as string, sortId: sort.id as string };
 }
 
-export async function recordProcessing(actor: Actor, driveId: string, input: ProcessingInput, conn: Conn) {
-  return inTx(conn, async (trx) => {
-    const groupId = actor.group.id;
-    await lockDrive(trx, groupId, driveId);
-    const occurredAt = input.occurredAt ? new Date(input.occurredAt) : new Date();
-    const { movementId } = await postMovement(
-      trx,
-      { groupId, driveId, actorId: actor.user.id, kind: "processing", occurredAt, details: { from: input.from, to: input.to } },
-      [{ from: input.from, to: input.to, quantity: input.quantity, note: input.note }],
-    );
-    const holesPerCan = input.to === "punched" ? await drivesHolesPerCan(trx, driveId) : null;
-    return {
-      movementId,
-      driveId,
-      from: input.from,
-      to: input.to,
-      quantity: input.quantity,
-      holesPerCan,
-      holes: holesPerCan === null ? null : holesPerCan * input.quantity,
-      occurredAt: occurredAt.toISOString(),
-    };
-  });
+export type ProcessingResult = {
+  movementId: string;
+  driveId: string;
+  from: ProcessingInput["from"];
+  to: ProcessingInput["to"];
+  quantity: number;
+  holesPerCan: number | null;
+  holes: number | null;
+  occurredAt: string;
+};
+
+/** The answer and the ledger call of a processing step; the movement id is chosen here, so the answer is known before the write. */
+export async function prepareProcessing(actor: Actor, driveId: string, input: ProcessingInput, conn: Conn): Promise<{ answer: ProcessingResult; call: LedgerCall }> {
+  const occurredAt = input.occurredAt ? new Date(input.occurredAt) : new Date();
+  const holesPerCan = input.to === "punched" ? await drivesHolesPerCan(conn, driveId) : null;
+  const answer: ProcessingResult = {
+    movementId: randomUUID(),
+    driveId,
+    from: input.from,
+    to: input.to,
+    quantity: input.quantity,
+    holesPerCan,
+    holes: holesPerCan === null ? null : holesPerCan * input.quantity,
+    occurredAt: occurredAt.toISOString(),
+  };
+  const call = ledgerPostCall(
+    { groupId: actor.group.id, driveId, actorId: actor.user.id, kind: "processing", occurredAt, movementId: answer.movementId, details: { from: input.from, to: input.to } },
+    [{ from: input.from, to: input.to, quantity: input.quantity, note: input.note }],
+  );
+  return { answer, call };
+}
+
+export async function recordProcessing(actor: Actor, driveId: string, input: ProcessingInput, conn: Conn): Promise<ProcessingResult> {
+  const { answer, call } = await prepareProcessing(actor, driveId, input, conn);
+  await runLedgerCall(conn, call);
+  return answer;
 }
 
 /** Holes per can most of the drive's units use; 4 when it has none. */

@@ -1,9 +1,9 @@
 import { route } from "@/lib/api/handler";
-import { parseBody, withIdempotency } from "@/lib/api/idempotency";
+import { parseBody, withIdempotentStatement } from "@/lib/api/idempotency";
 import { uuidParam, type IdContext } from "@/lib/api/params";
 import { requireRole } from "@/lib/auth/session";
 import { processingInputSchema } from "@/lib/ledger/schemas";
-import { recordProcessing } from "@/lib/ledger/record";
+import { ledgerRefusal, prepareProcessing } from "@/lib/ledger/record";
 import { assertOwnDrive } from "@/lib/ledger/queries";
 
 export const dynamic = "force-dynamic";
@@ -12,8 +12,10 @@ export const POST = route(async (req: Request, ctx: IdContext) => {
   const actor = await requireRole("volunteer", "organiser");
   const driveId = await uuidParam(ctx, "That drive");
   await assertOwnDrive(actor.group.id, driveId);
-  return withIdempotency(req, actor, async (trx, raw) => {
+  // One statement writes the key, its answer and the ledger lines (see withIdempotentStatement).
+  return withIdempotentStatement(req, actor, async (raw) => {
     const input = parseBody(raw, processingInputSchema);
-    return { status: 201, body: await recordProcessing(actor, driveId, input, trx) };
+    const { answer, call } = await prepareProcessing(actor, driveId, input);
+    return { status: 201, body: answer, ...call, refusal: ledgerRefusal };
   });
 });
