@@ -1,18 +1,25 @@
 import "server-only";
-import { getServerSession } from "next-auth";
+import { getToken } from "next-auth/jwt";
+import { cookies } from "next/headers";
 import { redirect } from "next/navigation";
-import { authOptions } from "./options";
 import { loadActor, type Actor } from "./queries";
 import { AppError } from "@/lib/api/errors";
 import type { Role } from "./roles";
 
 // The role is read from the database on every call rather than trusted from
 // the token, so a removed or demoted member loses access at once.
+//
+// The session cookie is read with next-auth's getToken: the same decryption and
+// expiry check as getServerSession, without re-issuing the token on every call
+// (route handlers cannot set the cookie anyway; the client's session refresh does).
+// Only the cookie counts, never an Authorization header.
 export async function getActor(): Promise<Actor | null> {
-  const session = await getServerSession(authOptions);
-  if (!session?.userId) return null;
+  const token = await getToken({ req: { cookies: await cookies(), headers: {} } as unknown as Parameters<typeof getToken>[0]["req"] });
+  const userId = typeof token?.userId === "string" && token.userId ? token.userId : null;
+  if (!userId) return null;
+  const groupId = typeof token?.groupId === "string" ? token.groupId : null;
   // Removed from the active group but still in another: carry on in that one.
-  return (await loadActor(session.userId, session.groupId)) ?? (session.groupId ? loadActor(session.userId) : null);
+  return (await loadActor(userId, groupId)) ?? (groupId ? loadActor(userId) : null);
 }
 
 export async function requireUser(): Promise<Actor> {
