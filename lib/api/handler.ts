@@ -3,6 +3,7 @@ import { NextResponse } from "next/server";
 import { ZodError, type ZodType } from "zod";
 import { AppError, errorBody, invalidInput } from "./errors";
 import { isDatabaseUnreachable } from "@/lib/db";
+import { forgetReads } from "@/lib/cache/read-cache";
 
 /** Maps anything thrown in a handler to the contract's error JSON. Raw database errors are logged, never shown. */
 export function toErrorResponse(error: unknown): NextResponse {
@@ -20,13 +21,16 @@ export function toErrorResponse(error: unknown): NextResponse {
 
 type Handler<C> = (request: Request, context: C) => Promise<Response>;
 
-/** Wraps a route handler so every failure leaves as the contract's error JSON. */
+/** Wraps a route handler so every failure leaves as the contract's error JSON. Any write clears the short read cache. */
 export function route<C>(handler: Handler<C>): Handler<C> {
   return async (request, context) => {
+    const writes = request.method !== "GET" && request.method !== "HEAD";
     try {
       return await handler(request, context);
     } catch (error) {
       return toErrorResponse(error);
+    } finally {
+      if (writes) forgetReads();
     }
   };
 }

@@ -1,3 +1,4 @@
+import { cachedRead } from "@/lib/cache/read-cache";
 import "server-only";
 import { notFound } from "@/lib/api/errors";
 import { findPublicDrive, listPublicDropPointsWithTallies, unitCansOf } from "./public-queries";
@@ -32,7 +33,7 @@ export async function publicDrive(slug: string) {
 export type PublicDrive = Awaited<ReturnType<typeof publicDrive>>;
 
 export async function publicDropPoints(slug: string) {
-  const points = await listPublicDropPointsWithTallies(slug);
+  const points = await cachedRead(`public-drop-points:${slug}`, () => listPublicDropPointsWithTallies(slug));
   // No rows: either a drive with no active drop point, or no such public drive.
   if (points.length === 0 && !(await findPublicDrive(slug))) throw notFound("That drive");
   return points;

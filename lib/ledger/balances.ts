@@ -1,5 +1,6 @@
 import "server-only";
 import { db } from "@/lib/db";
+import { cachedRead } from "@/lib/cache/read-cache";
 import { notFound } from "@/lib/api/errors";
 import type { GoodStageBalances } from "@/lib/drives/progress";
 import { REJECT_REASONS, type DriveStock, type RejectReason } from "./schemas";
@@ -27,6 +28,10 @@ async function rejectedByReason(driveId: string): Promise<Record<RejectReason, n
 
 /** The contract's stock shape; another group's drive is 404. */
 export async function driveStock(groupId: string, driveId: string): Promise<DriveStock> {
+  return cachedRead(`stock:${groupId}:${driveId}`, () => loadDriveStock(groupId, driveId));
+}
+
+async function loadDriveStock(groupId: string, driveId: string): Promise<DriveStock> {
   const drive = await db("drives").select("id").where({ id: driveId, group_id: groupId }).first();
   if (!drive) throw notFound("That drive");
   const t = await driveTotals(driveId);

@@ -4,6 +4,7 @@ import { UploadThingError } from "uploadthing/server";
 import { z } from "zod";
 import { getActor } from "@/lib/auth/session";
 import { db } from "@/lib/db";
+import { forgetReads } from "@/lib/cache/read-cache";
 
 const f = createUploadthing();
 
@@ -35,6 +36,7 @@ export const fileRouter = {
         })
         .onConflict("key")
         .ignore();
+      forgetReads();
       return { url: file.ufsUrl };
     }),
   // A photo with a "this bin is full" report: anyone may add one, but only to a
