@@ -24,13 +24,18 @@ export function isDatabaseUnreachable(error: unknown): boolean {
 }
 
 export async function pingDatabase(timeoutMs = 2_000): Promise<boolean> {
+  let timer: NodeJS.Timeout | undefined;
   try {
     await Promise.race([
       db.raw("select 1"),
-      new Promise((_, reject) => setTimeout(() => reject(new Error("timeout")), timeoutMs)),
+      new Promise((_, reject) => {
+        timer = setTimeout(() => reject(new Error("timeout")), timeoutMs);
+      }),
     ]);
     return true;
   } catch {
     return false;
+  } finally {
+    clearTimeout(timer);
   }
 }
