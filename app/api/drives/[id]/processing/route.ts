@@ -11,10 +11,16 @@ export const dynamic = "force-dynamic";
 export const POST = route(async (req: Request, ctx: IdContext) => {
   const actor = await requireRole("volunteer", "organiser");
   const driveId = await uuidParam(ctx, "That drive");
-  await assertOwnDrive(actor.group.id, driveId);
-  // One statement writes the key, its answer and the ledger lines (see withIdempotentStatement).
+  // One statement writes the key, its answer and the ledger lines (see withIdempotentStatement);
+  // ledger_post refuses another group's drive (404), so the hot path needs no separate check.
   return withIdempotentStatement(req, actor, async (raw) => {
-    const input = parseBody(raw, processingInputSchema);
+    let input;
+    try {
+      input = parseBody(raw, processingInputSchema);
+    } catch (error) {
+      await assertOwnDrive(actor.group.id, driveId); // another group's drive is 404 whatever the body
+      throw error;
+    }
     const { answer, call } = await prepareProcessing(actor, driveId, input);
     return { status: 201, body: answer, ...call, refusal: ledgerRefusal };
   });
