@@ -1,25 +1,53 @@
 import "server-only";
-import { getToken } from "next-auth/jwt";
+import { hkdfSync } from "node:crypto";
+import { jwtDecrypt } from "jose";
+import { getToken, type JWT, type JWTDecodeParams } from "next-auth/jwt";
 import { cookies } from "next/headers";
 import { redirect } from "next/navigation";
 import { loadActor, type Actor } from "./queries";
 import { AppError } from "@/lib/api/errors";
+import { cachedRead } from "@/lib/cache/read-cache";
 import type { Role } from "./roles";
 
-// The role is read from the database on every call rather than trusted from
-// the token, so a removed or demoted member loses access at once.
+// The role is read from the database rather than trusted from the token, so a
+// removed or demoted member loses access at once. The answer rides on the short
+// read cache (lib/cache/read-cache.ts): every write through this server clears
+// it, so a change of role or a removal bites on the next request here, and
+// within READ_CACHE_MS (2 s) on other servers.
 //
 // The session cookie is read with next-auth's getToken: the same decryption and
 // expiry check as getServerSession, without re-issuing the token on every call
 // (route handlers cannot set the cookie anyway; the client's session refresh does).
 // Only the cookie counts, never an Authorization header.
 export async function getActor(): Promise<Actor | null> {
-  const token = await getToken({ req: { cookies: await cookies(), headers: {} } as unknown as Parameters<typeof getToken>[0]["req"] });
+  const req = { cookies: await cookies(), headers: {} } as unknown as Parameters<typeof getToken>[0]["req"];
+  const token = await getToken({ req, decode: decodeSession });
   const userId = typeof token?.userId === "string" && token.userId ? token.userId : null;
   if (!userId) return null;
   const groupId = typeof token?.groupId === "string" ? token.groupId : null;
-  // Removed from the active group but still in another: carry on in that one.
-  return (await loadActor(userId, groupId)) ?? (groupId ? loadActor(userId) : null);
+  return cachedRead(`actor:${userId}:${groupId ?? ""}`, async () =>
+    // Removed from the active group but still in another: carry on in that one.
+    (await loadActor(userId, groupId)) ?? (groupId ? loadActor(userId) : null),
+  );
+}
+
+// next-auth's own decode derives the same key with HKDF on every call (a trip
+// through libuv's thread pool per request); derive it once per secret instead.
+// Same derivation (HKDF-SHA256, empty salt, next-auth's info string), same JWE check.
+const sessionKeys = new Map<string, Uint8Array>();
+function sessionKey(secret: string): Uint8Array {
+  let key = sessionKeys.get(secret);
+  if (!key) {
+    key = new Uint8Array(hkdfSync("sha256", secret, "", "NextAuth.js Generated Encryption Key", 32));
+    sessionKeys.set(secret, key);
+  }
+  return key;
+}
+
+async function decodeSession({ token, secret }: JWTDecodeParams): Promise<JWT | null> {
+  if (!token) return null;
+  const { payload } = await jwtDecrypt(token, sessionKey(String(secret)), { clockTolerance: 15 });
+  return payload as JWT;
 }
 
 export async function requireUser(): Promise<Actor> {
