@@ -8,7 +8,12 @@ export function PublicHeader() {
         <Brand />
         <nav aria-label="Main" className="flex flex-wrap items-center gap-4 font-semibold">
           <Link href="/plan">Plan a heater</Link>
-          <Link href="/signin">Sign in</Link>
+          {/* Not prefetched: the sign-in page is static, so a prefetch would
+              download its form's code on every public page, drive pages
+              included, for the few visitors who sign in. */}
+          <Link href="/signin" prefetch={false}>
+            Sign in
+          </Link>
         </nav>
       </div>
     </header>
