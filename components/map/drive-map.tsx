@@ -2,6 +2,7 @@
 
 import { lazy, Suspense, useSyncExternalStore } from "react";
 import { Skeleton } from "@/components/ui/card";
+import { LoadBoundary } from "@/components/ui/load-boundary";
 import type { MapProps } from "./types";
 
 // Leaflet touches `window` on import, so the map only ever loads in the
@@ -22,8 +23,10 @@ export function DriveMap(props: MapProps) {
   const placeholder = <Skeleton className="h-80 w-full" />;
   if (!inBrowser) return placeholder;
   return (
-    <Suspense fallback={placeholder}>
-      <LeafletMap {...props} />
-    </Suspense>
+    <LoadBoundary what="map">
+      <Suspense fallback={placeholder}>
+        <LeafletMap {...props} />
+      </Suspense>
+    </LoadBoundary>
   );
 }

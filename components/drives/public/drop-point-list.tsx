@@ -2,6 +2,7 @@
 
 import { lazy, Suspense, useState } from "react";
 import { Button } from "@/components/ui/button";
+import { LoadBoundary } from "@/components/ui/load-boundary";
 import { LEVEL_LABEL } from "@/lib/drives/fill";
 import type { PublicDropPointView } from "@/lib/drives/query-options";
 import { haversineKm } from "@/lib/routes/great-circle";
@@ -96,9 +97,11 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
             ) : null}
             <div className="mt-2">
               {reporting === p.id ? (
-                <Suspense fallback={<p role="status" className="text-ink-faint">Opening the report form…</p>}>
-                  <FillReportForm slug={slug} point={p} onDone={() => setReporting(null)} />
-                </Suspense>
+                <LoadBoundary what="report form">
+                  <Suspense fallback={<p role="status" className="text-ink-faint">Opening the report form…</p>}>
+                    <FillReportForm slug={slug} point={p} onDone={() => setReporting(null)} />
+                  </Suspense>
+                </LoadBoundary>
               ) : (
                 <Button variant="quiet" onClick={() => setReporting(p.id)} aria-label={`Report how full the bin at ${p.name} is`}>
                   Is this bin full?

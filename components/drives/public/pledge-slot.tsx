@@ -1,6 +1,7 @@
 "use client";
 
 import { lazy, memo, Suspense, useEffect, useRef } from "react";
+import { LoadBoundary } from "@/components/ui/load-boundary";
 import { LIVE, pledgeCodeWanted, WAITING, wantPledgeCode } from "./pledge-gate";
 
 // The pledge form sits below the map and the list. The server renders it in
@@ -54,9 +55,11 @@ export const PledgeSlot = memo(function PledgeSlot({ slug, points }: { slug: str
 
   return (
     <div ref={ref}>
-      <Suspense fallback={<p role="status" className="text-ink-faint">Opening the pledge form…</p>}>
-        <PledgeForm slug={slug} points={points} />
-      </Suspense>
+      <LoadBoundary what="pledge form">
+        <Suspense fallback={<p role="status" className="text-ink-faint">Opening the pledge form…</p>}>
+          <PledgeForm slug={slug} points={points} />
+        </Suspense>
+      </LoadBoundary>
     </div>
   );
 });
