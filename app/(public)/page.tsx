@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { ButtonLink } from "@/components/ui/button";
+import { ButtonLink } from "@/components/ui/button-link";
 import { Card, EmptyState } from "@/components/ui/card";
 import { DatabaseDown } from "@/components/system/database-down";
 import { isDatabaseUnreachable } from "@/lib/db";

@@ -29,7 +29,7 @@ export function AppHeader({ groupName, role, userName }: { groupName: string; ro
   return (
     <header className="no-print border-b border-paper-edge bg-paper">
       <div className="mx-auto flex max-w-5xl flex-wrap items-center justify-between gap-3 px-4 py-3">
-        <Brand />
+        <Brand link={Link} />
         <div className="text-sm text-ink-soft">
           <span className="font-semibold text-ink">{groupName}</span> · {ROLE_LABEL[role]} · {userName}
         </div>

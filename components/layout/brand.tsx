@@ -1,4 +1,4 @@
-import Link from "next/link";
+import type { ElementType } from "react";
 
 // Cantrove's mark: three can rims stacked under a low sun.
 export function BrandMark({ size = 32 }: { size?: number }) {
@@ -13,11 +13,16 @@ export function BrandMark({ size = 32 }: { size?: number }) {
   );
 }
 
-export function Brand() {
+/**
+ * The mark and name, linking home. `link` is the link component (next/link in
+ * the signed-in header); the public header keeps a plain <a>, so this module
+ * does not import next/link and public pages do not load its code.
+ */
+export function Brand({ link: Anchor = "a" }: { link?: ElementType }) {
   return (
-    <Link href="/" className="flex items-center gap-2 text-xl font-bold text-ink no-underline">
+    <Anchor href="/" className="flex items-center gap-2 text-xl font-bold text-ink no-underline">
       <BrandMark />
       <span>Cantrove</span>
-    </Link>
+    </Anchor>
   );
 }

@@ -1,14 +1,16 @@
-import Link from "next/link";
 import { Brand } from "./brand";
 
+// Plain links: a visitor's first page (often a drive page opened from a QR
+// code on a bin) then loads no client-router link code (~3 kB compressed) and
+// prefetches nothing. Going on to another page is an ordinary page load.
 export function PublicHeader() {
   return (
     <header className="no-print border-b border-paper-edge bg-paper">
       <div className="mx-auto flex max-w-5xl flex-wrap items-center justify-between gap-3 px-4 py-3">
         <Brand />
         <nav aria-label="Main" className="flex flex-wrap items-center gap-4 font-semibold">
-          <Link href="/plan">Plan a heater</Link>
-          <Link href="/signin">Sign in</Link>
+          <a href="/plan">Plan a heater</a>
+          <a href="/signin">Sign in</a>
         </nav>
       </div>
     </header>

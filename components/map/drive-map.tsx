@@ -1,15 +1,32 @@
 "use client";
 
-import dynamic from "next/dynamic";
+import { lazy, Suspense, useSyncExternalStore } from "react";
 import { Skeleton } from "@/components/ui/card";
+import { LoadBoundary } from "@/components/ui/load-boundary";
 import type { MapProps } from "./types";
 
-// Leaflet touches `window` on import, so the map only ever loads in the browser.
-const LeafletMap = dynamic(() => import("./leaflet-map"), {
-  ssr: false,
-  loading: () => <Skeleton className="h-80 w-full" />,
-});
+// Leaflet touches `window` on import, so the map only ever loads in the
+// browser: the server and the hydrating client render the skeleton, then the
+// browser swaps in the lazily loaded map. (React.lazy rather than next/dynamic:
+// next/dynamic's client helpers cost the public drive page ~2 kB compressed.)
+const LeafletMap = lazy(() => import("./leaflet-map"));
+
+const noSubscription = () => () => undefined;
+
+/** False on the server and during hydration, true once running in the browser. */
+export function useInBrowser(): boolean {
+  return useSyncExternalStore(noSubscription, () => true, () => false);
+}
 
 export function DriveMap(props: MapProps) {
-  return <LeafletMap {...props} />;
+  const inBrowser = useInBrowser();
+  const placeholder = <Skeleton className="h-80 w-full" />;
+  if (!inBrowser) return placeholder;
+  return (
+    <LoadBoundary what="map">
+      <Suspense fallback={placeholder}>
+        <LeafletMap {...props} />
+      </Suspense>
+    </LoadBoundary>
+  );
 }

@@ -1,7 +1,6 @@
-import Link from "next/link";
-import type { ButtonHTMLAttributes, ReactNode } from "react";
+import type { ButtonHTMLAttributes } from "react";
 
-type Variant = "primary" | "secondary" | "quiet" | "danger";
+export type Variant = "primary" | "secondary" | "quiet" | "danger";
 
 const VARIANT: Record<Variant, string> = {
   primary: "bg-ember text-white hover:bg-ember-deep border-ember",
@@ -23,22 +22,4 @@ export function Button({
   ...props
 }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant }) {
   return <button className={buttonClass(variant, className)} {...props} />;
-}
-
-export function ButtonLink({
-  href,
-  variant = "primary",
-  className = "",
-  children,
-}: {
-  href: string;
-  variant?: Variant;
-  className?: string;
-  children: ReactNode;
-}) {
-  return (
-    <Link href={href} className={buttonClass(variant, className)}>
-      {children}
-    </Link>
-  );
 }

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { ButtonLink } from "@/components/ui/button";
+import { ButtonLink } from "@/components/ui/button-link";
 import { Card, EmptyState } from "@/components/ui/card";
 import { DriveProgressCard } from "@/components/dashboard/drive-progress-card";
 import { requirePageRole } from "@/lib/auth/session";

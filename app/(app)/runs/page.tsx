@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { ButtonLink } from "@/components/ui/button";
+import { ButtonLink } from "@/components/ui/button-link";
 import { Card } from "@/components/ui/card";
 import { PickupHistory } from "@/components/runs/pickup-history";
 import { RunList } from "@/components/runs/run-list";

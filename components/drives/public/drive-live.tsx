@@ -1,13 +1,13 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
-import { useState } from "react";
+import { useMemo, useState } from "react";
 import { DriveMap } from "@/components/map/drive-map";
 import type { MapPoint } from "@/components/map/types";
 import { Card } from "@/components/ui/card";
 import { publicDriveQuery, publicDropPointsQuery, type PublicDriveView, type PublicDropPointView } from "@/lib/drives/query-options";
 import { DropPointList } from "./drop-point-list";
-import { PledgeForm } from "./pledge-form";
+import { PledgeSlot } from "./pledge-slot";
 import { DriveProgressBar } from "./progress-bar";
 
 export function DriveLive({
@@ -27,6 +27,11 @@ export function DriveLive({
   const points = useQuery({ ...publicDropPointsQuery(slug), initialData: initialPoints });
   const [selected, setSelected] = useState<string | null>(null);
   const list = points.data ?? [];
+  // The pledge form only needs names; keep the same array until those change
+  // (see PledgeSlot: its boundary must not re-render while it waits for code).
+  const choiceKey = list.map((p) => `${p.id}\t${p.name}`).join("\n");
+  // eslint-disable-next-line react-hooks/exhaustive-deps
+  const choices = useMemo(() => list.map(({ id, name }) => ({ id, name })), [choiceKey]);
   const centre = list.length
     ? { lat: list.reduce((s, p) => s + p.lat, 0) / list.length, lng: list.reduce((s, p) => s + p.lng, 0) / list.length }
     : { lat: 47.2, lng: -8.0 };
@@ -72,7 +77,7 @@ export function DriveLive({
       </section>
       <DropPointList slug={slug} points={list} selected={selected} />
       <Card title="Pledge some cans">
-        <PledgeForm slug={slug} points={list} />
+        <PledgeSlot slug={slug} points={choices} />
       </Card>
     </div>
   );

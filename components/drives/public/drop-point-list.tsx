@@ -1,17 +1,15 @@
 "use client";
 
-import { useState } from "react";
+import { lazy, Suspense, useState } from "react";
 import { Button } from "@/components/ui/button";
+import { LoadBoundary } from "@/components/ui/load-boundary";
 import { LEVEL_LABEL } from "@/lib/drives/fill";
 import type { PublicDropPointView } from "@/lib/drives/query-options";
 import { haversineKm } from "@/lib/routes/great-circle";
-import dynamic from "next/dynamic";
 
 // The report form brings the upload client with it: load it only when someone
 // opens "Is this bin full?", so the public page stays light.
-const FillReportForm = dynamic(() => import("./fill-report-form").then((m) => m.FillReportForm), {
-  loading: () => <p className="text-ink-faint">Opening the report form…</p>,
-});
+const FillReportForm = lazy(() => import("./fill-report-form").then((m) => ({ default: m.FillReportForm })));
 
 type Located = PublicDropPointView & { number: number; km?: number };
 
@@ -99,7 +97,11 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
             ) : null}
             <div className="mt-2">
               {reporting === p.id ? (
-                <FillReportForm slug={slug} point={p} onDone={() => setReporting(null)} />
+                <LoadBoundary what="report form">
+                  <Suspense fallback={<p role="status" className="text-ink-faint">Opening the report form…</p>}>
+                    <FillReportForm slug={slug} point={p} onDone={() => setReporting(null)} />
+                  </Suspense>
+                </LoadBoundary>
               ) : (
                 <Button variant="quiet" onClick={() => setReporting(p.id)} aria-label={`Report how full the bin at ${p.name} is`}>
                   Is this bin full?

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { Card } from "@/components/ui/card";
-import { ButtonLink } from "@/components/ui/button";
+import { ButtonLink } from "@/components/ui/button-link";
 import { GridFigures } from "@/components/heaters/grid-figures";
 import { GridPreview } from "@/components/heaters/grid-preview";
 import { ClaimsPanel } from "@/components/heaters/claims-panel";
