@@ -21,8 +21,13 @@ export function toErrorResponse(error: unknown): NextResponse {
 
 type Handler<C> = (request: Request, context: C) => Promise<Response>;
 
+export interface RouteOptions {
+  /** The handler never changes people, groups or memberships (ledger writes): its writes keep the cached roles. */
+  keepsPeople?: boolean;
+}
+
 /** Wraps a route handler so every failure leaves as the contract's error JSON. Any write clears the short read cache. */
-export function route<C>(handler: Handler<C>): Handler<C> {
+export function route<C>(handler: Handler<C>, options: RouteOptions = {}): Handler<C> {
   return async (request, context) => {
     const writes = request.method !== "GET" && request.method !== "HEAD";
     try {
@@ -30,7 +35,7 @@ export function route<C>(handler: Handler<C>): Handler<C> {
     } catch (error) {
       return toErrorResponse(error);
     } finally {
-      if (writes) forgetReads();
+      if (writes) forgetReads(options.keepsPeople ? "data" : "all");
     }
   };
 }

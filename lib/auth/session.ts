@@ -25,10 +25,9 @@ export async function getActor(): Promise<Actor | null> {
   const userId = typeof token?.userId === "string" && token.userId ? token.userId : null;
   if (!userId) return null;
   const groupId = typeof token?.groupId === "string" ? token.groupId : null;
-  return cachedRead(`actor:${userId}:${groupId ?? ""}`, async () =>
-    // Removed from the active group but still in another: carry on in that one.
-    (await loadActor(userId, groupId)) ?? (groupId ? loadActor(userId) : null),
-  );
+  // Removed from the active group but still in another: carry on in that one.
+  const load = async () => (await loadActor(userId, groupId)) ?? (groupId ? loadActor(userId) : null);
+  return cachedRead(`actor:${userId}:${groupId ?? ""}`, load, "people");
 }
 
 // next-auth's own decode derives the same key with HKDF on every call (a trip

@@ -25,4 +25,4 @@ export const POST = route(async (req: Request, ctx: IdContext) => {
     const input = parseBody(raw, haulInputSchema);
     return { status: 201, body: await recordHaul(actor, driveId, input, trx) };
   });
-});
+}, { keepsPeople: true });

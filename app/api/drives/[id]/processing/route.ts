@@ -24,4 +24,4 @@ export const POST = route(async (req: Request, ctx: IdContext) => {
     const { answer, call } = await prepareProcessing(actor, driveId, input);
     return { status: 201, body: answer, ...call, refusal: ledgerRefusal };
   });
-});
+}, { keepsPeople: true });

@@ -16,4 +16,4 @@ export const POST = route(async (req: Request, ctx: IdContext) => {
     const input = parseBody(raw, recyclingInputSchema);
     return { status: 201, body: await recordRecycling(actor, driveId, input, trx) };
   });
-});
+}, { keepsPeople: true });

@@ -16,4 +16,4 @@ export const POST = route(async (req: Request, ctx: IdContext) => {
     const input = parseBody(raw, sortInputSchema);
     return { status: 201, body: await recordSort(actor, driveId, input, trx) };
   });
-});
+}, { keepsPeople: true });

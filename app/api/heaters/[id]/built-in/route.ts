@@ -16,4 +16,4 @@ export const POST = route(async (req: Request, ctx: IdContext) => {
     const input = parseBody(raw, claimInputSchema);
     return { status: 201, body: await recordBuiltIn(actor, heaterUnitId, input.quantity, trx, input.note) };
   });
-});
+}, { keepsPeople: true });

@@ -17,4 +17,4 @@ export const POST = route(async (req: Request, ctx: IdContext) => {
     const input = parseBody(raw, claimMoveInputSchema);
     return { status: 201, body: await moveClaims(actor, fromId, input.toHeaterId, input.quantity, trx) };
   });
-});
+}, { keepsPeople: true });

@@ -11,4 +11,4 @@ export const POST = route(async (req: Request, ctx: IdContext) => {
   const actor = await requireUser();
   const movementId = await uuidParam(ctx, "That entry");
   return withIdempotency(req, actor, async (trx) => ({ status: 201, body: await reverseMovement(actor, movementId, trx) }));
-});
+}, { keepsPeople: true });

@@ -33,4 +33,4 @@ export const POST = route(async (request, ctx: { params: Promise<{ id: string; s
     await resolveStop(actor, runId, stopId, { status: "logged", haulId: haul.id }, trx);
     return { status: 201, body: { haul, run: await getRun(actor, runId, trx) } };
   });
-});
+}, { keepsPeople: true });
