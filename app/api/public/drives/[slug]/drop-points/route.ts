@@ -1,10 +1,9 @@
-import { NextResponse } from "next/server";
 import { route } from "@/lib/api/handler";
-import { publicDropPoints } from "@/lib/drives/public-service";
+import { publicDropPointsJson } from "@/lib/drives/public-service";
 
 export const dynamic = "force-dynamic";
 
 export const GET = route(async (_req, ctx: { params: Promise<{ slug: string }> }) => {
   const { slug } = await ctx.params;
-  return NextResponse.json(await publicDropPoints(slug));
+  return new Response(await publicDropPointsJson(slug), { headers: { "content-type": "application/json" } });
 });
