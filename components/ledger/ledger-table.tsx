@@ -99,7 +99,7 @@ export function LedgerTable({ drives, people, initialDriveId }: { drives: LogDri
             <tbody className="divide-y divide-paper-edge">
               {rows.data.map((r) => (
                 <tr key={r.id} className={r.reversesId ? "bg-paper-deep" : ""}>
-                  <td className="px-2 py-1 whitespace-nowrap">{new Date(r.occurredAt).toLocaleString()}</td>
+                  <td className="px-2 py-1 whitespace-nowrap">{new Date(r.occurredAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })}</td>
                   <td className="px-2 py-1">{r.kind}{r.reversesId ? ` (undoes line ${r.reversesId})` : ""}</td>
                   <td className={`px-2 py-1 ${f.driveId ? "hidden" : ""}`}>{r.drive}</td>
                   <td className="px-2 py-1">{r.dropPoint ?? r.heaterUnit ?? "—"}</td>

@@ -55,7 +55,7 @@ export function RecentEntries() {
               <span className={e.undone ? "text-ink-faint line-through" : ""}>
                 {describe(e)}
                 <span className="block text-sm text-ink-faint">
-                  {new Date(e.occurredAt).toLocaleString()} {e.undone ? "· undone" : ""}
+                  {new Date(e.occurredAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })} {e.undone ? "· undone" : ""}
                 </span>
               </span>
               {e.undone ? null : (

@@ -65,7 +65,7 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
               />
               <span>
                 {h.dropPointName} · {h.bags} bags{h.weightKg !== null ? ` · ${h.weightKg} kg` : ""} · ≈{h.estimatedCans} cans
-                <span className="block text-sm text-ink-faint">{new Date(h.hauledAt).toLocaleString()}</span>
+                <span className="block text-sm text-ink-faint">{new Date(h.hauledAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })}</span>
               </span>
             </label>
           ))
