@@ -82,23 +82,29 @@ describe("faults", () => {
 
     const deadline = Date.now() + 60_000;
     const acked: { key: string; movementId: string; tries: number }[] = [];
+    // Each writer keeps writing until the database has been back for a few of its
+    // writes (at least 12 each), so the outage always falls in the middle of the load.
+    let restarted = false;
     const writers = Array.from({ length: 3 }, async () => {
-      for (let i = 0; i < 12; i++) {
+      let afterRestart = 0;
+      for (let i = 0; i < 12 || afterRestart < 4; i++) {
         acked.push(await writeUntilAcknowledged(c, `/api/drives/${drive.id}/processing`, { from: "good", to: "washed", quantity: 1 }, deadline));
+        if (restarted) afterRestart += 1;
         await new Promise((r) => setTimeout(r, 100));
       }
     });
-    await new Promise((r) => setTimeout(r, 1_500));
+    await new Promise((r) => setTimeout(r, 1_000));
     stopClusterAt(stack.cluster!.dataDir);
     const down = await fetch(`${appUrl}/api/health`);
     expect(down.status).toBe(503);
     await new Promise((r) => setTimeout(r, 3_000));
     startClusterAt(stack.cluster!.dataDir, ports.pg);
+    restarted = true;
     await Promise.all(writers);
 
-    expect(acked.length).toBe(36);
+    expect(acked.length).toBeGreaterThanOrEqual(36);
     expect(acked.some((a) => a.tries > 1), "some writes were retried through the outage").toBe(true);
-    expect(new Set(acked.map((a) => a.movementId)).size).toBe(36);
+    expect(new Set(acked.map((a) => a.movementId)).size).toBe(acked.length);
     const lines: { movement_id: string; n: string | number }[] = await db("ledger_lines")
       .select("movement_id")
       .count({ n: "*" })
@@ -109,7 +115,7 @@ describe("faults", () => {
     expect(lines.map((l) => String(l.movement_id)).sort()).toEqual(acked.map((a) => a.movementId).sort());
     expect(lines.every((l) => Number(l.n) === 1)).toBe(true);
     const washed = Number((await db("stage_balances").where({ drive_id: drive.id, stage: "washed" }).whereNull("drop_point_id").whereNull("heater_unit_id").first()).quantity);
-    expect(washed - washedBefore).toBe(36);
+    expect(washed - washedBefore).toBe(acked.length);
     expect((await fetch(`${appUrl}/api/health`)).status).toBe(200);
     const stock = await c.json<{ stages: { washed: number } }>("GET", `/api/drives/${drive.id}/stock`);
     expect(stock.body.stages.washed).toBe(washed);
