@@ -9,7 +9,9 @@ import { bumpDropPoint, inTx, ledgerPostCall, lockDrive, postMovement, runLedger
 import { REJECT_REASONS, type HaulInput, type ProcessingInput, type RecyclingInput, type SortInput } from "./schemas";
 
 // Writers of the ledger. Each is one transaction (or joins the caller's, as
-// the Idempotency-Key helper does) and locks the drive before it checks.
+// the Idempotency-Key helper does). ledger_post locks the drive and checks the
+// group itself; a writer that reads other rows first (hauls, sorts) locks the
+// drive before those reads with lockDrive.
 
 type Conn = Knex | Knex.Transaction;
 
@@ -212,7 +214,6 @@ export async function drivesHolesPerCan(conn: Conn, driveId: string): Promise<nu
 export async function recordRecycling(actor: Actor, driveId: string, input: RecyclingInput, conn: Conn) {
   return inTx(conn, async (trx) => {
     const groupId = actor.group.id;
-    await lockDrive(trx, groupId, driveId);
     const occurredAt = input.occurredAt ? new Date(input.occurredAt) : new Date();
     const details = { weightKg: input.weightKg ?? null, moneyReceived: input.moneyReceived ?? null };
     const { movementId } = await postMovement(trx, { groupId, driveId, actorId: actor.user.id, kind: "recycling", occurredAt, details }, [
