@@ -39,8 +39,3 @@ export async function publicDropPoints(slug: string) {
   return points;
 }
 export type PublicDropPoint = Awaited<ReturnType<typeof publicDropPoints>>[number];
-
-/** The same list as JSON text, kept serialised on the read cache (the map's polling endpoint). */
-export async function publicDropPointsJson(slug: string): Promise<string> {
-  return cachedRead(`public-drop-points-json:${slug}`, async () => JSON.stringify(await publicDropPoints(slug)));
-}
