@@ -28,4 +28,3 @@ export const releaseClaim = (actor: Actor, heaterUnitId: string, quantity: numbe
 export const recordBuiltIn = (actor: Actor, heaterUnitId: string, quantity: number, conn: Conn = db, note?: string) =>
   c.recordBuiltIn(actor, heaterUnitId, quantity, conn, note);
 export const reverseMovement = (actor: Actor, movementId: string, conn: Conn = db) => reverse(actor, movementId, conn);
-export { drivesHolesPerCan } from "./write";

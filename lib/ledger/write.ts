@@ -175,7 +175,7 @@ export type ProcessingResult = {
 /** The answer and the ledger call of a processing step; the movement id is chosen here, so the answer is known before the write. */
 export async function prepareProcessing(actor: Actor, driveId: string, input: ProcessingInput, conn: Conn): Promise<{ answer: ProcessingResult; call: LedgerCall }> {
   const occurredAt = input.occurredAt ? new Date(input.occurredAt) : new Date();
-  const holesPerCan = input.to === "punched" ? await drivesHolesPerCan(conn, driveId) : null;
+  const holesPerCan = input.to === "punched" ? await drivesHolesPerCan(conn, actor.group.id, driveId) : null;
   const answer: ProcessingResult = {
     movementId: randomUUID(),
     driveId,
@@ -200,11 +200,11 @@ export async function recordProcessing(actor: Actor, driveId: string, input: Pro
 }
 
 /** Holes per can most of the drive's units use; 4 when it has none. */
-export async function drivesHolesPerCan(conn: Conn, driveId: string): Promise<number> {
+export async function drivesHolesPerCan(conn: Conn, groupId: string, driveId: string): Promise<number> {
   const row = (await conn("heater_units")
     .select("holes_per_can")
     .count({ n: "*" })
-    .where({ drive_id: driveId })
+    .where({ drive_id: driveId, group_id: groupId })
     .groupBy("holes_per_can")
     .orderBy([{ column: "n", order: "desc" }, { column: "holes_per_can", order: "desc" }])
     .first()) as { holes_per_can: number } | undefined;
