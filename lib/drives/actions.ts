@@ -40,14 +40,14 @@ export async function createDrive(groupId: string, input: DriveInput) {
 }
 
 export async function updateDrive(groupId: string, id: string, input: DriveInput) {
-  const drive = await findDrive(groupId, id);
-  if (!drive) throw notFound("That drive");
   await ensureSlugFree(input.slug, id);
+  let updated = 0;
   try {
-    await db("drives").where({ id, group_id: groupId }).update({ ...driveRow(input), updated_at: db.fn.now() });
+    updated = await db("drives").where({ id, group_id: groupId }).update({ ...driveRow(input), updated_at: db.fn.now() });
   } catch (error) {
     rethrowUnique(error);
   }
+  if (!updated) throw notFound("That drive");
   return findDrive(groupId, id);
 }
 
@@ -62,10 +62,9 @@ function pointRow(input: Partial<DropPointInput>) {
   return row;
 }
 
+/** The caller has checked that the drive is the group's (the route does, before parsing the body). */
 export async function createDropPoint(groupId: string, driveId: string, input: DropPointInput) {
-  const drive = await findDrive(groupId, driveId);
-  if (!drive) throw notFound("That drive");
-  const [row] = await db("drop_points").insert({ ...pointRow(input), group_id: groupId, drive_id: drive.id }).returning(["id"]);
+  const [row] = await db("drop_points").insert({ ...pointRow(input), group_id: groupId, drive_id: driveId }).returning(["id"]);
   return findDropPoint(groupId, row.id);
 }
 
