@@ -246,8 +246,10 @@ export async function resolveStop(
   stopId: string,
   change: { status: "skipped"; reason: string } | { status: "logged"; haulId: string },
   trx: Knex.Transaction,
+  /** What lockPendingStop already returned in this transaction, so it is not locked and read twice. */
+  locked?: Awaited<ReturnType<typeof lockPendingStop>>,
 ) {
-  const { run, stop } = await lockPendingStop(actor, runId, stopId, trx);
+  const { run, stop } = locked ?? (await lockPendingStop(actor, runId, stopId, trx));
   if (change.status === "logged") {
     const taken = await trx("pickup_run_stops").select("id").where({ haul_id: change.haulId }).first();
     if (taken) throw conflict("That haul already settles another stop.");

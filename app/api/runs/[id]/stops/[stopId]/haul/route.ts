@@ -28,9 +28,9 @@ export const POST = route(async (request, ctx: { params: Promise<{ id: string; s
     const parsed = haulInputSchema.safeParse({ ...parseBody(raw, bodySchema), dropPointId: stop.dropPoint.id });
     if (!parsed.success) throw invalidInput(parsed.error);
     // A stop already logged or skipped is a 409 before any haul is written.
-    await lockPendingStop(actor, runId, stopId, trx);
+    const locked = await lockPendingStop(actor, runId, stopId, trx);
     const haul = await recordHaul(actor, before.driveId, parsed.data, trx);
-    await resolveStop(actor, runId, stopId, { status: "logged", haulId: haul.id }, trx);
+    await resolveStop(actor, runId, stopId, { status: "logged", haulId: haul.id }, trx, locked);
     return { status: 201, body: { haul, run: await getRun(actor, runId, trx) } };
   });
 }, { keepsPeople: true });
