@@ -1,11 +1,2 @@
-import { Skeleton } from "@/components/ui/card";
-
-export default function Loading() {
-  return (
-    <main className="flex flex-col gap-4" aria-busy="true" aria-label="Loading pickup runs">
-      <Skeleton className="h-9 w-64" />
-      <Skeleton className="h-40 w-full" />
-      <Skeleton className="h-40 w-full" />
-    </main>
-  );
-}
+// The same placeholder as the section's list page.
+export { default } from "../loading";
