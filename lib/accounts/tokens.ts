@@ -1,3 +1,4 @@
+import { toSlug } from "@/lib/slug";
 import { createHash, randomBytes } from "node:crypto";
 
 // A link token is 32 random bytes; only its SHA-256 is stored.
@@ -15,12 +16,6 @@ export const RESET_MINUTES = 60;
 
 /** A URL-safe group slug from its name, with a short suffix to keep it unique. */
 export function slugify(name: string, suffix: string): string {
-  const base = name
-    .normalize("NFKD")
-    .replace(/[\u0300-\u036f]/g, "")
-    .toLowerCase()
-    .replace(/[^a-z0-9]+/g, "-")
-    .replace(/^-+|-+$/g, "")
-    .slice(0, 48);
+  const base = toSlug(name, 48);
   return `${base || "group"}-${suffix}`;
 }

@@ -8,6 +8,7 @@ import { Field, FormError } from "@/components/ui/field";
 import { fetchJson, ApiError, fieldErrors } from "@/lib/api/client";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { driveInput } from "@/lib/drives/schemas";
+import { toSlug } from "@/lib/slug";
 
 export interface DriveFormValues {
   name: string;
@@ -19,14 +20,6 @@ export interface DriveFormValues {
   wanted: string;
 }
 
-export function slugify(name: string): string {
-  return name
-    .toLowerCase()
-    .normalize("NFKD")
-    .replace(/[^a-z0-9]+/g, "-")
-    .replace(/^-+|-+$/g, "")
-    .slice(0, 80);
-}
 
 export function DriveForm({ driveId, initial }: { driveId?: string; initial?: DriveFormValues }) {
   const router = useRouter();
@@ -49,7 +42,7 @@ export function DriveForm({ driveId, initial }: { driveId?: string; initial?: Dr
   const errors = { ...fieldErrors(mutation.error), ...local };
   const text = (k: keyof DriveFormValues) => (e: React.ChangeEvent<HTMLInputElement | HTMLTextAreaElement>) => {
     const next = { ...values, [k]: e.target.value };
-    if (k === "name" && !slugTouched) next.slug = slugify(e.target.value);
+    if (k === "name" && !slugTouched) next.slug = toSlug(e.target.value, 80);
     if (k === "slug") setSlugTouched(true);
     setSaved(false);
     setValues(next);
