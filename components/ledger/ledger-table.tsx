@@ -8,6 +8,7 @@ import { fetchJson } from "@/lib/api/client";
 import { ledgerKeys } from "@/hooks/queries/ledger";
 import { STAGES } from "@/lib/ledger/schemas";
 import type { LogDrive } from "./log-home";
+import { formatDateTime } from "@/lib/format";
 
 interface Row {
   id: string;
@@ -99,7 +100,7 @@ export function LedgerTable({ drives, people, initialDriveId }: { drives: LogDri
             <tbody className="divide-y divide-paper-edge">
               {rows.data.map((r) => (
                 <tr key={r.id} className={r.reversesId ? "bg-paper-deep" : ""}>
-                  <td className="px-2 py-1 whitespace-nowrap">{new Date(r.occurredAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })}</td>
+                  <td className="px-2 py-1 whitespace-nowrap">{formatDateTime(r.occurredAt)}</td>
                   <td className="px-2 py-1">{r.kind}{r.reversesId ? ` (undoes line ${r.reversesId})` : ""}</td>
                   <td className={`px-2 py-1 ${f.driveId ? "hidden" : ""}`}>{r.drive}</td>
                   <td className="px-2 py-1">{r.dropPoint ?? r.heaterUnit ?? "—"}</td>

@@ -7,6 +7,7 @@ import { Card, EmptyState, Skeleton } from "@/components/ui/card";
 import { FormError } from "@/components/ui/field";
 import { fetchJson } from "@/lib/api/client";
 import { ledgerKeys, myEntriesQuery, type MyEntry } from "@/hooks/queries/ledger";
+import { formatDateTime } from "@/lib/format";
 
 function describe(e: MyEntry): string {
   const d = e.details as Record<string, unknown>;
@@ -55,7 +56,7 @@ export function RecentEntries() {
               <span className={e.undone ? "text-ink-faint line-through" : ""}>
                 {describe(e)}
                 <span className="block text-sm text-ink-faint">
-                  {new Date(e.occurredAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })} {e.undone ? "· undone" : ""}
+                  {formatDateTime(e.occurredAt)} {e.undone ? "· undone" : ""}
                 </span>
               </span>
               {e.undone ? null : (

@@ -12,6 +12,7 @@ import { openHaulsQuery } from "@/hooks/queries/ledger";
 import { SortCaution } from "./cautions";
 import { Stepper } from "./stepper";
 import type { SubmitResult } from "./use-outbox";
+import { formatDateTime } from "@/lib/format";
 
 type Submit = (url: string, body: unknown, label: string) => Promise<SubmitResult>;
 const zeroRejects = () => Object.fromEntries(REJECT_REASONS.map((r) => [r, 0])) as Record<RejectReason, number>;
@@ -65,7 +66,7 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
               />
               <span>
                 {h.dropPointName} · {h.bags} bags{h.weightKg !== null ? ` · ${h.weightKg} kg` : ""} · ≈{h.estimatedCans} cans
-                <span className="block text-sm text-ink-faint">{new Date(h.hauledAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })}</span>
+                <span className="block text-sm text-ink-faint">{formatDateTime(h.hauledAt)}</span>
               </span>
             </label>
           ))

@@ -1,12 +1,13 @@
 import Link from "next/link";
 import { Card, EmptyState } from "@/components/ui/card";
 import { LEVEL_LABEL } from "@/lib/drives/fill";
+import { formatDateTime } from "@/lib/format";
 
 interface Pledge { id: string; name: string | null; email: string | null; bags: number; bringOn: string; dropPointName: string }
 interface Report { id: string; level: number; note: string; alerted: boolean; createdAt: Date; dropPointName: string; photoUrl: string | null }
 
 export function PledgesAndReports({ pledges, reports, points, slug }: { pledges: Pledge[]; reports: Report[]; points: { id: string; name: string }[]; slug: string }) {
-  const when = (d: Date) => new Date(d).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
+  const when = (d: Date) => formatDateTime(d, "UTC");
   return (
     <>
       <Card title={`Pledges (${pledges.length})`}>

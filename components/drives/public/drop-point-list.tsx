@@ -6,6 +6,7 @@ import { LoadBoundary } from "@/components/ui/load-boundary";
 import { LEVEL_LABEL } from "@/lib/drives/fill";
 import type { PublicDropPointView } from "@/lib/drives/query-options";
 import { haversineKm } from "@/lib/routes/great-circle";
+import { formatDateTime } from "@/lib/format";
 
 // The report form brings the upload client with it: load it only when someone
 // opens "Is this bin full?", so the public page stays light.
@@ -84,7 +85,7 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
             {p.fillLevel !== null ? (
               <p className={`text-sm font-semibold ${p.fillLevel >= 75 ? "text-alarm" : "text-ink-soft"}`}>
                 Last report: {LEVEL_LABEL[p.fillLevel] ?? `${p.fillLevel}%`}
-                {p.fillReportedAt ? ` (${new Date(p.fillReportedAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })})` : ""}
+                {p.fillReportedAt ? ` (${formatDateTime(p.fillReportedAt)})` : ""}
               </p>
             ) : null}
             {p.photos.length ? (
