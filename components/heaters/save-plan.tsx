@@ -5,7 +5,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
-import { ApiError } from "@/lib/api/client";
+import { fieldErrors } from "@/lib/api/client";
 import type { CanGridInput } from "@/lib/heaters/schemas";
 import { createHeater, heaterKeys } from "@/hooks/queries/heaters";
 
@@ -27,7 +27,7 @@ export function SavePlan({ input, drives, planLabel, disabled }: { input: CanGri
       router.push(`/units/${unit.id}`);
     },
   });
-  const fields = save.error instanceof ApiError ? (save.error.fields ?? {}) : {};
+  const fields = fieldErrors(save.error);
   if (drives.length === 0) {
     return <p className="text-ink-soft">Your group has no drive yet. An organiser sets one up first; then save the plan to it.</p>;
   }

@@ -6,7 +6,7 @@ import { useMemo, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, Skeleton } from "@/components/ui/card";
 import { Field, FormError } from "@/components/ui/field";
-import { ApiError, fetchJson } from "@/lib/api/client";
+import { fetchJson, fieldErrors } from "@/lib/api/client";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { createRunInputSchema } from "@/lib/runs/schemas";
 import { runQueries, type SuggestionRow } from "@/hooks/queries/runs";
@@ -60,7 +60,7 @@ export function RunPlanner(props: PlannerProps) {
       await queryClient.invalidateQueries({ queryKey: runQueries.all() });
       router.push(`/runs/${run.id}`);
     },
-    onError: (error) => setErrors(error instanceof ApiError ? (error.fields ?? {}) : {}),
+    onError: (error) => setErrors(fieldErrors(error)),
   });
 
   function submit(event: React.FormEvent) {

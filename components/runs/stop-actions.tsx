@@ -4,7 +4,7 @@ import { useMutation } from "@tanstack/react-query";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
-import { ApiError, fetchJson } from "@/lib/api/client";
+import { ApiError, fetchJson, fieldErrors } from "@/lib/api/client";
 
 function newKey(): string {
   // randomUUID needs a secure context; plain-HTTP previews get a random key of the same strength.
@@ -40,14 +40,14 @@ export function StopActions({ runId, stopId, dropPointName, onDone }: Props) {
     },
     onSuccess: onDone,
     onError: (e) => {
-      setFields(e instanceof ApiError ? (e.fields ?? {}) : {});
+      setFields(fieldErrors(e));
       if (e instanceof ApiError && e.status !== 0) setHaulKey(newKey());
     },
   });
   const skip = useMutation({
     mutationFn: () => fetchJson(`/api/runs/${runId}/stops/${stopId}/skip`, { method: "POST", json: { reason } }),
     onSuccess: onDone,
-    onError: (e) => setFields(e instanceof ApiError ? (e.fields ?? {}) : {}),
+    onError: (e) => setFields(fieldErrors(e)),
   });
 
   if (mode === "idle") {
