@@ -1,4 +1,3 @@
-import { queryOptions } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/api/client";
 import type { HeaterCreateInput, HeaterState } from "@/lib/heaters/unit-schemas";
 
@@ -14,9 +13,6 @@ export interface SavedHeater {
   cans: number;
   state: HeaterState;
 }
-
-export const heatersQuery = () =>
-  queryOptions({ queryKey: heaterKeys.all, queryFn: () => fetchJson<SavedHeater[]>("/api/heaters") });
 
 export function createHeater(input: HeaterCreateInput) {
   return fetchJson<SavedHeater>("/api/heaters", { method: "POST", json: input });

@@ -6,6 +6,7 @@ import { z } from "zod";
 import { findUserForSignIn, loadActor } from "./queries";
 import { clearSignInFailures, guardSignIn, recordSignInFailure } from "@/lib/accounts/sign-in-limits";
 import { clientAddress } from "@/lib/accounts/throttle";
+import { switchGroupInputSchema } from "@/lib/accounts/schemas";
 
 const credentialsSchema = z.object({
   email: z.string().trim().toLowerCase().email(),
@@ -52,9 +53,10 @@ export const authOptions: NextAuthOptions = {
         token.userId = user.id;
         token.groupId = (user as { groupId?: string | null }).groupId ?? null;
       }
-      if (trigger === "update" && session && typeof session.groupId === "string") {
+      const switchTo = trigger === "update" ? switchGroupInputSchema.safeParse(session) : null;
+      if (switchTo?.success) {
         // Switching groups: only to a group the person really belongs to.
-        const actor = await loadActor(String(token.userId), session.groupId);
+        const actor = await loadActor(String(token.userId), switchTo.data.groupId);
         if (actor) token.groupId = actor.group.id;
       }
       return token;

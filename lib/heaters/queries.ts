@@ -79,11 +79,6 @@ export async function listHeaterUnits(groupId: string, driveId?: string): Promis
     .orderBy([{ column: "h.created_at" }, { column: "h.name" }]);
 }
 
-/** Kept for callers of the first version of this module. */
-export async function listHeaterUnitsSummary(groupId: string) {
-  return listHeaterUnits(groupId);
-}
-
 export async function getHeaterUnit(groupId: string, id: string): Promise<HeaterUnitRow> {
   if (!isUuid(id)) throw notFound("That heater unit");
   const row = await unitColumns(db("heater_units as h")).where({ "h.group_id": groupId, "h.id": id }).first();
