@@ -7,7 +7,7 @@ import { Notice } from "@/components/ui/notice";
 import { ApiError } from "@/lib/api/client";
 import { invitationInputSchema } from "@/lib/accounts/schemas";
 import { fieldErrorsOf } from "@/lib/api/errors";
-import type { Role } from "@/lib/auth/roles";
+import { ROLE_LABEL, type Role } from "@/lib/auth/roles";
 import { useInvite } from "@/hooks/queries/members";
 import { ROLE_HELP, RoleSelect } from "./role-select";
 
@@ -41,7 +41,7 @@ export function InviteForm() {
       <Field id="invite-email" name="email" type="email" label="Their e-mail" autoComplete="off" value={email} onChange={(e) => setEmail(e.target.value)} error={fields.email} />
       <RoleSelect id="invite-role" name="role" label="Role" value={role} onChange={(e) => setRole(e.target.value as Role)} error={fields.role} />
       <p className="text-sm text-ink-faint">
-        {role[0].toUpperCase() + role.slice(1)}: {ROLE_HELP[role]}.
+        {ROLE_LABEL[role]}: {ROLE_HELP[role]}.
       </p>
       <Button type="submit" disabled={invite.isPending}>
         {invite.isPending ? "Sending…" : "Send invitation"}

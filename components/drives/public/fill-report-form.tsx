@@ -8,6 +8,7 @@ import { fetchJson } from "@/lib/api/client";
 import { FILL_LEVELS } from "@/lib/drives/schemas";
 import { LEVEL_LABEL } from "@/lib/drives/fill";
 import { photoProblem, useUploadThing } from "@/lib/uploads/react";
+import { publicDropPointsQuery } from "@/lib/drives/query-options";
 
 export function FillReportForm({ slug, point, onDone }: { slug: string; point: { id: string; name: string }; onDone: () => void }) {
   const [level, setLevel] = useState<number | null>(null);
@@ -31,7 +32,7 @@ export function FillReportForm({ slug, point, onDone }: { slug: string; point: {
       }
       return report;
     },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ["public-drive", slug, "drop-points"] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: publicDropPointsQuery(slug).queryKey }),
   });
 
   if (mutation.isSuccess) {
