@@ -13,6 +13,7 @@ import { measurePage } from "./bench/page";
 import { checkTargets, printTable } from "./bench/report";
 import { signIn } from "./bench/session";
 import { DEMO_PASSWORD } from "../db/seeds/data/scenario";
+import { serverCommand } from "./lib/serve";
 
 // `npm run bench`: a throwaway PostgreSQL with a big group, the production
 // build against it, autocannon over loopback, chromium for the page.
@@ -55,7 +56,7 @@ async function main() {
   t = Date.now();
   buildIfStale(root, serverEnv, log);
   const buildSeconds = (Date.now() - t) / 1000;
-  server = spawn(path.join(root, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(ports.app)], { cwd: root, env: serverEnv, stdio: ["ignore", "ignore", "inherit"] });
+  server = spawn(...serverCommand(root, ports.app), { cwd: root, env: serverEnv, stdio: ["ignore", "ignore", "inherit"] });
   const base = `http://127.0.0.1:${ports.app}`;
   await waitForHealthy(`${base}/api/health`, 60_000);
   const cookie = await signIn(base, "organiser@cantrove.test", DEMO_PASSWORD);

@@ -4,6 +4,7 @@ import { startStack, type Stack } from "./lib/stack";
 import { buildIfStale } from "./lib/build";
 import { waitForHealthy } from "./lib/wait";
 import { DEMO_PASSWORD, DEMO_PEOPLE } from "../db/seeds/data/scenario";
+import { serverCommand } from "./lib/serve";
 
 // `npm start`: the database, the local fakes, migrations, the demo seed (once),
 // a build when the sources changed, and the production server. SIGINT or
@@ -58,7 +59,7 @@ async function main() {
   const env: NodeJS.ProcessEnv = { ...process.env, ...stack.env, NODE_ENV: "production" };
   buildIfStale(root, env);
   if (stopping) return;
-  const child = spawn(path.join(root, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
+  const child = spawn(...serverCommand(root, port), {
     cwd: root,
     env,
     stdio: ["ignore", "inherit", "inherit"],

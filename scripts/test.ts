@@ -5,6 +5,7 @@ import path from "node:path";
 import { startStack, type Stack } from "./lib/stack";
 import { buildIfStale } from "./lib/build";
 import { waitForHealthy } from "./lib/wait";
+import { serverCommand } from "./lib/serve";
 
 // `npm test`: a throwaway PostgreSQL and fakes on their own ports, the built
 // app, then vitest (unit, hooks, integration, e2e). Ends with "N passed, N failed".
@@ -59,7 +60,7 @@ async function main(): Promise<number> {
   });
   const env: NodeJS.ProcessEnv = { ...process.env, ...stack.env, NODE_ENV: "production", MAIL_RETRY_MS: "2000" };
   buildIfStale(root, env, (line) => console.log(`[build] ${line}`));
-  server = spawn(path.join(root, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(ports.app)], {
+  server = spawn(...serverCommand(root, ports.app), {
     cwd: root,
     env,
     stdio: ["ignore", "ignore", "inherit"],

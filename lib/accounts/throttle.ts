@@ -25,10 +25,3 @@ export function refusalMessage(by: "email" | "client", minutes: number): string 
     ? `Too many failed sign-ins for this e-mail. Sign-in is paused: try again in ${wait}, or reset your password.`
     : `Too many failed sign-ins from this network. Sign-in is paused: try again in ${wait}.`;
 }
-
-/** The client address from X-Forwarded-For: the nearest hop's entry, which the server or its proxy set. */
-export function clientAddress(forwardedFor: string | string[] | null | undefined): string {
-  const value = Array.isArray(forwardedFor) ? forwardedFor.join(",") : forwardedFor ?? "";
-  const parts = value.split(",").map((p) => p.trim()).filter(Boolean);
-  return (parts.at(-1) ?? "unknown").replace(/^::ffff:/, "").slice(0, 64);
-}

@@ -5,7 +5,7 @@ import bcrypt from "bcryptjs";
 import { z } from "zod";
 import { findUserForSignIn, loadActor } from "./queries";
 import { clearSignInFailures, guardSignIn, recordSignInFailure } from "@/lib/accounts/sign-in-limits";
-import { clientAddress } from "@/lib/accounts/throttle";
+import { clientAddress } from "@/lib/net/client-address";
 import { switchGroupInputSchema } from "@/lib/accounts/schemas";
 
 const credentialsSchema = z.object({
@@ -27,7 +27,7 @@ export const authOptions: NextAuthOptions = {
       // Throwing sends the message to the form as `error`; returning null is the
       // generic "does not match", the same for unknown e-mails and wrong passwords.
       async authorize(raw, req) {
-        const client = clientAddress(req?.headers?.["x-forwarded-for"]);
+        const client = clientAddress(req?.headers as Record<string, string | undefined> | undefined);
         const email = String(raw?.email ?? "").trim().toLowerCase().slice(0, 254);
         await guardSignIn(email, client);
         const parsed = credentialsSchema.safeParse(raw);

@@ -8,6 +8,7 @@ import { startClusterAt, stopClusterAt } from "@/scripts/lib/postgres";
 import { waitForHealthy } from "@/scripts/lib/wait";
 import { freePort } from "@/tests/support/ports";
 import { launchBrowser } from "@/tests/support/browser";
+import { serverCommand } from "@/scripts/lib/serve";
 
 // A stack of its own, so stopping its database disturbs no other test.
 const root = path.resolve(import.meta.dirname, "../..");
@@ -36,7 +37,7 @@ beforeAll(async () => {
     seed: "demo",
     log: () => undefined,
   });
-  server = spawn(path.join(root, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(appPort)], {
+  server = spawn(...serverCommand(root, appPort), {
     cwd: root,
     env: { ...process.env, ...stack.env, NODE_ENV: "production" },
     stdio: "ignore",

@@ -12,6 +12,7 @@ import { waitForHealthy } from "@/scripts/lib/wait";
 import { freePort } from "@/tests/support/ports";
 import { ApiClient } from "@/tests/support/http";
 import { DEMO } from "@/tests/support/env";
+import { serverCommand } from "@/scripts/lib/serve";
 
 // Faults on a stack of its own: the database stopped under writes, the mail
 // service down while a pledge is mailed, the upload service down for an upload.
@@ -31,7 +32,7 @@ beforeAll(async () => {
     root, stateDir: path.join(runDir, "state"), pgDataDir: path.join(runDir, "pgdata"), pgPort: ports.pg, databaseName: "cantrove",
     smtpPort: ports.smtp, mailApiPort: ports.mailApi, uploadPort: ports.upload, appPort: ports.app, seed: "demo", log: () => undefined,
   });
-  server = spawn(path.join(root, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(ports.app)], {
+  server = spawn(...serverCommand(root, ports.app), {
     cwd: root,
     env: { ...process.env, ...stack.env, NODE_ENV: "production", MAIL_RETRY_MS: "500" },
     stdio: "ignore",
