@@ -7,6 +7,7 @@ export type ErrorCode =
   | "forbidden"
   | "not_found"
   | "conflict"
+  | "unsupported_media_type"
   | "invalid_input"
   | "rate_limited"
   | "database_unavailable"
@@ -18,6 +19,7 @@ const STATUS: Record<ErrorCode, number> = {
   forbidden: 403,
   not_found: 404,
   conflict: 409,
+  unsupported_media_type: 415,
   invalid_input: 422,
   rate_limited: 429,
   database_unavailable: 503,

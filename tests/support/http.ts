@@ -2,8 +2,14 @@ import { APP_URL, DEMO_PASSWORD } from "./env";
 
 // A tiny HTTP client with a cookie jar, signing in through next-auth's
 // credentials flow exactly as the contract describes.
+//
+// The test server trusts one proxy hop (TRUSTED_PROXY_HOPS=1 in scripts/test.ts):
+// each client plays the proxy in front of its own made-up address, so per-client
+// limits count each test's client on its own, as they would count real people.
 export class ApiClient {
   private cookies = new Map<string, string>();
+  /** A made-up client address from 198.18.0.0/15, the range RFC 2544 sets aside for tests. */
+  address = `198.${18 + Math.floor(Math.random() * 2)}.${Math.floor(Math.random() * 256)}.${1 + Math.floor(Math.random() * 254)}`;
 
   constructor(readonly baseUrl = APP_URL) {}
 
@@ -29,6 +35,7 @@ export class ApiClient {
       signal: AbortSignal.timeout(15_000),
       headers: {
         cookie: this.cookieHeader(),
+        "x-forwarded-for": this.address,
         ...(body !== undefined && typeof body !== "string" ? { "content-type": "application/json" } : {}),
         ...headers,
       },

@@ -1,15 +1,13 @@
-import { NextResponse } from "next/server";
-import { route } from "@/lib/api/handler";
-import { requireUser } from "@/lib/auth/session";
-import { createHeaterHandler } from "@/lib/heaters/create";
+import { endpoint } from "@/lib/api/endpoint";
+import { createHeaterUnit } from "@/lib/heaters/queries";
+import { heaterCreateInputSchema } from "@/lib/heaters/unit-schemas";
 import { listHeatersWithClaims } from "@/lib/ledger/queries";
 
 export const dynamic = "force-dynamic";
 
-export const GET = route(async () => {
-  const actor = await requireUser();
-  return NextResponse.json(await listHeatersWithClaims(actor.group.id));
-});
+export const GET = endpoint({ who: "member" }, async ({ actor }) => listHeatersWithClaims(actor.group.id));
 
-// Saving a plan as a unit; the handler lives in lib/heaters/create.ts.
-export const POST = createHeaterHandler;
+// Saving a plan as a unit of one of the group's drives (createHeaterUnit checks the drive is the group's).
+export const POST = endpoint({ who: ["builder", "organiser"], body: heaterCreateInputSchema, status: 201 }, async ({ actor, body }) =>
+  createHeaterUnit({ groupId: actor.group.id, userId: actor.user.id }, body),
+);

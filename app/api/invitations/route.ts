@@ -1,18 +1,18 @@
-import { NextResponse } from "next/server";
-import { parseJson, route } from "@/lib/api/handler";
-import { requireRole } from "@/lib/auth/session";
+import { endpoint } from "@/lib/api/endpoint";
 import { invitationInputSchema } from "@/lib/accounts/schemas";
 import { createInvitation, listPendingInvitations } from "@/lib/accounts/invitations";
+import { ACCOUNT_LIMITS } from "@/lib/accounts/limits";
 
 export const dynamic = "force-dynamic";
 
-export const GET = route(async () => {
-  const actor = await requireRole("organiser");
-  return NextResponse.json(await listPendingInvitations(actor.group.id));
-});
+export const GET = endpoint({ who: ["organiser"] }, async ({ actor }) => listPendingInvitations(actor.group.id));
 
-export const POST = route(async (request) => {
-  const actor = await requireRole("organiser");
-  const input = await parseJson(request, invitationInputSchema);
-  return NextResponse.json(await createInvitation(actor, input), { status: 201 });
-});
+export const POST = endpoint(
+  {
+    who: ["organiser"],
+    body: invitationInputSchema,
+    status: 201,
+    limits: [{ rule: ACCOUNT_LIMITS.invitePerAddress, by: ({ body }) => body.email }],
+  },
+  async ({ actor, body }) => createInvitation(actor, body),
+);

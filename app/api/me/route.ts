@@ -1,10 +1,5 @@
-import { NextResponse } from "next/server";
-import { route } from "@/lib/api/handler";
-import { requireUser } from "@/lib/auth/session";
+import { endpoint } from "@/lib/api/endpoint";
 
 export const dynamic = "force-dynamic";
 
-export const GET = route(async () => {
-  const { user, group, role } = await requireUser();
-  return NextResponse.json({ user, group, role });
-});
+export const GET = endpoint({ who: "member" }, async ({ actor: { user, group, role } }) => ({ user, group, role }));

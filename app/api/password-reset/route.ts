@@ -1,5 +1,6 @@
-import { NextResponse, after } from "next/server";
-import { parseJson, route } from "@/lib/api/handler";
+import { after } from "next/server";
+import { endpoint } from "@/lib/api/endpoint";
+import { ACCOUNT_LIMITS } from "@/lib/accounts/limits";
 import { RESET_ANSWER, resetRequestInputSchema } from "@/lib/accounts/schemas";
 import { requestPasswordReset } from "@/lib/accounts/resets";
 
@@ -7,8 +8,18 @@ export const dynamic = "force-dynamic";
 
 // The same answer, at the same speed, whether or not the address has an
 // account: the lookup and the e-mail happen after the response has gone.
-export const POST = route(async (request) => {
-  const { email } = await parseJson(request, resetRequestInputSchema);
-  after(() => requestPasswordReset(email).catch((error) => console.error("[cantrove] reset mail failed", error)));
-  return NextResponse.json({ message: RESET_ANSWER }, { status: 202 });
-});
+export const POST = endpoint(
+  {
+    who: "anyone",
+    body: resetRequestInputSchema,
+    status: 202,
+    limits: [
+      { rule: ACCOUNT_LIMITS.resetPerClient, by: "client" },
+      { rule: ACCOUNT_LIMITS.resetPerAddress, by: ({ body }) => body.email },
+    ],
+  },
+  async ({ body }) => {
+    after(() => requestPasswordReset(body.email).catch((error) => console.error("[cantrove] reset mail failed", error)));
+    return { message: RESET_ANSWER };
+  },
+);

@@ -1,6 +1,4 @@
-import { NextResponse } from "next/server";
-import { parseJson, route } from "@/lib/api/handler";
-import { requireRole } from "@/lib/auth/session";
+import { endpoint } from "@/lib/api/endpoint";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail/outbox";
 import { runAssignedMail } from "@/lib/runs/mail";
@@ -9,15 +7,10 @@ import { createRunInputSchema } from "@/lib/runs/schemas";
 
 export const dynamic = "force-dynamic";
 
-export const GET = route(async () => {
-  const actor = await requireRole("organiser", "volunteer");
-  return NextResponse.json(await listRuns(actor));
-});
+export const GET = endpoint({ who: ["organiser", "volunteer"] }, async ({ actor }) => listRuns(actor));
 
-export const POST = route(async (request) => {
-  const actor = await requireRole("organiser");
-  const input = await parseJson(request, createRunInputSchema);
-  const run = await createRun(actor, input);
+export const POST = endpoint({ who: ["organiser"], body: createRunInputSchema, status: 201 }, async ({ actor, body }) => {
+  const run = await createRun(actor, body);
   // After commit: the outbox retries delivery, so a mail hiccup never loses the run.
   const mail = runAssignedMail({
     appUrl: env().APP_URL,
@@ -25,13 +18,10 @@ export const POST = route(async (request) => {
     assigneeName: run.assignee.name,
     organiserName: actor.user.name,
     driveName: run.drive.name,
-    plannedOn: input.plannedOn,
+    plannedOn: body.plannedOn,
     distanceKm: run.plan.distanceKm,
     stopNames: run.stopNames,
   });
   await sendMail({ groupId: actor.group.id, to: run.assignee.email, ...mail, kind: "pickup_run" });
-  return NextResponse.json(
-    { id: run.id, order: run.plan.order, distanceKm: run.plan.distanceKm, assigneeId: run.assignee.id },
-    { status: 201 },
-  );
+  return { id: run.id, order: run.plan.order, distanceKm: run.plan.distanceKm, assigneeId: run.assignee.id };
 });

@@ -1,13 +1,23 @@
-import { NextResponse } from "next/server";
-import { parseJson, route } from "@/lib/api/handler";
+import { endpoint } from "@/lib/api/endpoint";
+import { ACCOUNT_LIMITS } from "@/lib/accounts/limits";
 import { signUpInputSchema } from "@/lib/accounts/schemas";
 import { signUp } from "@/lib/accounts/queries";
 
 export const dynamic = "force-dynamic";
 
 // Anyone may start a group; the client signs in with the same credentials next.
-export const POST = route(async (request) => {
-  const input = await parseJson(request, signUpInputSchema);
-  const { groupId, slug } = await signUp(input);
-  return NextResponse.json({ group: { id: groupId, slug, name: input.groupName }, role: "organiser" }, { status: 201 });
-});
+export const POST = endpoint(
+  {
+    who: "anyone",
+    body: signUpInputSchema,
+    status: 201,
+    limits: [
+      { rule: ACCOUNT_LIMITS.signUpPerClient, by: "client" },
+      { rule: ACCOUNT_LIMITS.signUpPerAddress, by: ({ body }) => body.email },
+    ],
+  },
+  async ({ body }) => {
+    const { groupId, slug } = await signUp(body);
+    return { group: { id: groupId, slug, name: body.groupName }, role: "organiser" };
+  },
+);

@@ -91,4 +91,53 @@ describe("authorisation table", () => {
     }
     expect(failures).toEqual([]);
   }, 300_000);
+
+  it("declares every handler through endpoint(), so none can skip its checks", () => {
+    // next-auth's own handler is the one exception: its POSTs check its own CSRF token.
+    const undeclared = routeFiles(path.join(root, "app/api"))
+      .filter((file) => !file.includes("[...nextauth]"))
+      .flatMap((file) => {
+        const text = readFileSync(path.join(root, file), "utf8");
+        return exportedMethods(file).filter((m) => !new RegExp(`export const ${m}\\s*=\\s*endpoint(\\.\\w+)?\\(`).test(text)).map((m) => `${m} ${file}`);
+      });
+    expect(undeclared).toEqual([]);
+  });
+
+  // Cross-site request forgery: what a page on another site (or the upload
+  // service's origin, which is same-site) can make a signed-in browser send.
+  // Sec-Fetch-Site and Origin are set by browsers, never by page scripts
+  // (Fetch standard, "forbidden request-header" names).
+  it("refuses every cross-site write, whoever is signed in", async () => {
+    const failures: string[] = [];
+    const writes = rows.filter((r) => r.method !== "GET" && !r.route.includes("[...nextauth]"));
+    expect(writes.length).toBeGreaterThan(20);
+    const forged: Record<string, string>[] = [
+      { "sec-fetch-site": "cross-site", origin: "http://evil.example" },
+      { "sec-fetch-site": "same-site", origin: "http://127.0.0.1:1" },
+      { origin: "http://evil.example" },
+    ];
+    for (const row of writes) {
+      for (const headers of forged) {
+        const res = await clients.organiser.request(row.method, row.path(fixture), row.body?.(fixture), headers);
+        await res.arrayBuffer();
+        if (res.status !== 403) failures.push(`${row.method} ${row.path(fixture)} with ${JSON.stringify(headers)}: ${res.status}`);
+      }
+    }
+    expect(failures).toEqual([]);
+  }, 300_000);
+
+  it("takes JSON bodies only as application/json (a form or text/plain post is 415)", async () => {
+    const failures: string[] = [];
+    const withBodies = rows.filter((r) => r.method !== "GET" && r.body && !r.route.includes("[...nextauth]") && !r.route.includes("uploadthing"));
+    expect(withBodies.length).toBeGreaterThan(10);
+    for (const row of withBodies) {
+      const who = EVERYONE.find((w) => ([] as number[]).concat(row.expect[w]).some((s) => s === 422 || (s >= 200 && s < 300))) ?? "organiser";
+      for (const type of ["text/plain", "application/x-www-form-urlencoded"]) {
+        const res = await clients[who].request(row.method, row.path(fixture), JSON.stringify(row.body!(fixture)), { "content-type": type });
+        await res.arrayBuffer();
+        if (res.status !== 415) failures.push(`${row.method} ${row.path(fixture)} as ${who} with ${type}: ${res.status}`);
+      }
+    }
+    expect(failures).toEqual([]);
+  }, 300_000);
 });

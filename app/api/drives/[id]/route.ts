@@ -1,26 +1,14 @@
-import { NextResponse } from "next/server";
-import { notFound } from "@/lib/api/errors";
-import { parseJson, route } from "@/lib/api/handler";
-import { requireRole, requireUser } from "@/lib/auth/session";
+import { endpoint } from "@/lib/api/endpoint";
+import { idPath } from "@/lib/api/path";
 import { updateDrive } from "@/lib/drives/actions";
-import { findDrive } from "@/lib/drives/queries";
+import { ownDrive } from "@/lib/drives/resource";
 import { driveInput } from "@/lib/drives/schemas";
 
 export const dynamic = "force-dynamic";
 
-type Ctx = { params: Promise<{ id: string }> };
+export const GET = endpoint({ who: "member", params: idPath("That drive"), resource: ownDrive }, async ({ resource }) => resource);
 
-export const GET = route(async (_req, ctx: Ctx) => {
-  const actor = await requireUser();
-  const drive = await findDrive(actor.group.id, (await ctx.params).id);
-  if (!drive) throw notFound("That drive");
-  return NextResponse.json(drive);
-});
-
-export const PUT = route(async (req, ctx: Ctx) => {
-  const actor = await requireRole("organiser");
-  const drive = await findDrive(actor.group.id, (await ctx.params).id);
-  if (!drive) throw notFound("That drive");
-  const input = await parseJson(req, driveInput);
-  return NextResponse.json(await updateDrive(actor.group.id, drive.id, input));
-});
+export const PUT = endpoint(
+  { who: ["organiser"], params: idPath("That drive"), resource: ownDrive, body: driveInput },
+  async ({ actor, resource, body }) => updateDrive(actor.group.id, resource.id, body),
+);

@@ -1,18 +1,13 @@
-import { NextResponse } from "next/server";
-import { notFound } from "@/lib/api/errors";
-import { parseJson, route } from "@/lib/api/handler";
-import { requireRole } from "@/lib/auth/session";
+import { endpoint } from "@/lib/api/endpoint";
+import { idPath } from "@/lib/api/path";
 import { updateDropPoint } from "@/lib/drives/actions";
-import { findDropPoint } from "@/lib/drives/queries";
+import { ownDropPoint } from "@/lib/drives/resource";
 import { dropPointPatch } from "@/lib/drives/schemas";
 
 export const dynamic = "force-dynamic";
 
 // Partial update: the map's drag sends only lat and lng, the form sends all fields.
-export const PATCH = route(async (req, ctx: { params: Promise<{ id: string }> }) => {
-  const actor = await requireRole("organiser");
-  const point = await findDropPoint(actor.group.id, (await ctx.params).id);
-  if (!point) throw notFound("That drop point");
-  const input = await parseJson(req, dropPointPatch);
-  return NextResponse.json(await updateDropPoint(actor.group.id, point.id, input));
-});
+export const PATCH = endpoint(
+  { who: ["organiser"], params: idPath("That drop point"), resource: ownDropPoint, body: dropPointPatch },
+  async ({ actor, resource, body }) => updateDropPoint(actor.group.id, resource.id, body),
+);

@@ -1,20 +1,19 @@
-import { NextResponse } from "next/server";
 import { getServerSession } from "next-auth";
-import { parseJson, route } from "@/lib/api/handler";
+import { endpoint } from "@/lib/api/endpoint";
 import { authOptions } from "@/lib/auth/options";
 import { acceptInvitationInputSchema } from "@/lib/accounts/schemas";
 import { acceptInvitation } from "@/lib/accounts/invitations";
+import { ACCOUNT_LIMITS } from "@/lib/accounts/limits";
 
 export const dynamic = "force-dynamic";
 
 // Open to anyone holding the link: the token is the credential. Someone who
 // already has an account must also be signed in as the invited address.
-export const POST = route(async (request) => {
-  const input = await parseJson(request, acceptInvitationInputSchema);
-  const session = await getServerSession(authOptions);
-  const result = await acceptInvitation(input, session?.userId || null);
-  return NextResponse.json(
-    { group: { id: result.groupId }, role: result.role, email: result.email, newAccount: result.newAccount },
-    { status: 201 },
-  );
-});
+export const POST = endpoint(
+  { who: "anyone", body: acceptInvitationInputSchema, status: 201, limits: [{ rule: ACCOUNT_LIMITS.tokenPerClient, by: "client" }] },
+  async ({ body }) => {
+    const session = await getServerSession(authOptions);
+    const result = await acceptInvitation(body, session?.userId || null);
+    return { group: { id: result.groupId }, role: result.role, email: result.email, newAccount: result.newAccount };
+  },
+);

@@ -1,13 +1,10 @@
-import { NextResponse } from "next/server";
-import { route } from "@/lib/api/handler";
-import { requireUser } from "@/lib/auth/session";
+import { endpoint } from "@/lib/api/endpoint";
 import { listMemberships } from "@/lib/auth/queries";
 
 export const dynamic = "force-dynamic";
 
 // The groups the signed-in person belongs to, for the group switcher.
-export const GET = route(async () => {
-  const actor = await requireUser();
+export const GET = endpoint({ who: "member" }, async ({ actor }) => {
   const groups = await listMemberships(actor.user.id);
-  return NextResponse.json(groups.map((g) => ({ ...g, active: g.id === actor.group.id })));
+  return groups.map((g) => ({ ...g, active: g.id === actor.group.id }));
 });

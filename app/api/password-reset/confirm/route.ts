@@ -1,12 +1,14 @@
-import { NextResponse } from "next/server";
-import { parseJson, route } from "@/lib/api/handler";
+import { endpoint } from "@/lib/api/endpoint";
+import { ACCOUNT_LIMITS } from "@/lib/accounts/limits";
 import { resetConfirmInputSchema } from "@/lib/accounts/schemas";
 import { confirmPasswordReset } from "@/lib/accounts/resets";
 
 export const dynamic = "force-dynamic";
 
-export const POST = route(async (request) => {
-  const { token, password } = await parseJson(request, resetConfirmInputSchema);
-  await confirmPasswordReset(token, password);
-  return NextResponse.json({ message: "Your password is changed. Sign in with the new one." });
-});
+export const POST = endpoint(
+  { who: "anyone", body: resetConfirmInputSchema, limits: [{ rule: ACCOUNT_LIMITS.tokenPerClient, by: "client" }] },
+  async ({ body }) => {
+    await confirmPasswordReset(body.token, body.password);
+    return { message: "Your password is changed. Sign in with the new one." };
+  },
+);

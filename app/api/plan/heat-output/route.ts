@@ -1,10 +1,8 @@
-import { NextResponse } from "next/server";
-import { parseJson, route } from "@/lib/api/handler";
+import { endpoint } from "@/lib/api/endpoint";
 import { computeHeatOutput } from "@/lib/heaters/heat";
 import { heatOutputInputSchema } from "@/lib/heaters/schemas";
 
+export const dynamic = "force-dynamic";
+
 // Open to anyone, like the can grid; nothing is stored.
-export const POST = route(async (request) => {
-  const input = await parseJson(request, heatOutputInputSchema);
-  return NextResponse.json(computeHeatOutput(input));
-});
+export const POST = endpoint({ who: "anyone", body: heatOutputInputSchema }, async ({ body }) => computeHeatOutput(body));

@@ -1,5 +1,4 @@
-import { NextResponse } from "next/server";
-import { parseJson, route } from "@/lib/api/handler";
+import { endpoint } from "@/lib/api/endpoint";
 import { planRoute } from "@/lib/routes/route";
 import { routeInputSchema } from "@/lib/routes/schemas";
 
@@ -8,16 +7,15 @@ export const dynamic = "force-dynamic";
 // Open to anyone: a pure computation over the coordinates sent, no stored data.
 // The same body always yields the same order, so a repeated Idempotency-Key
 // with the same body gets the same answer without storing anything.
-export const POST = route(async (request) => {
-  const sent = (await request.clone().json().catch(() => null)) as { stops?: { id?: unknown }[] } | null;
-  const input = await parseJson(request, routeInputSchema);
-  const plan = planRoute(input);
+export const POST = endpoint({ who: "anyone", body: routeInputSchema }, async ({ body, raw }) => {
+  const sent = JSON.parse(raw) as { stops?: { id?: unknown }[] };
+  const plan = planRoute(body);
   // The schema compares ids as text; hand each back exactly as the caller sent it (7 stays a number).
-  const original = new Map<string, unknown>(input.stops.map((stop, i) => [stop.id, sent?.stops?.[i]?.id ?? stop.id]));
+  const original = new Map<string, unknown>(body.stops.map((stop, i) => [stop.id, sent.stops?.[i]?.id ?? stop.id]));
   const back = (id: string | null) => (id === null ? null : original.get(id));
-  return NextResponse.json({
+  return {
     order: plan.order.map(back),
     distanceKm: plan.distanceKm,
     legs: plan.legs.map((leg) => ({ from: back(leg.from), to: back(leg.to), distanceKm: leg.km })),
-  });
+  };
 });

@@ -1,7 +1,6 @@
-import { NextResponse } from "next/server";
-import { route } from "@/lib/api/handler";
+import { endpoint } from "@/lib/api/endpoint";
 import { listPublicDrives } from "@/lib/drives/public-queries";
 
 export const dynamic = "force-dynamic";
 
-export const GET = route(async () => NextResponse.json(await listPublicDrives()));
+export const GET = endpoint({ who: "anyone" }, async () => listPublicDrives());

@@ -1,13 +1,7 @@
-import { NextResponse } from "next/server";
-import { route } from "@/lib/api/handler";
-import { uuidValue } from "@/lib/api/params";
-import { requireRole } from "@/lib/auth/session";
-import { getRun } from "@/lib/runs/queries";
+import { endpoint } from "@/lib/api/endpoint";
+import { idPath } from "@/lib/api/path";
+import { visibleRun } from "@/lib/runs/resource";
 
 export const dynamic = "force-dynamic";
 
-export const GET = route(async (_request, ctx: { params: Promise<{ id: string }> }) => {
-  const actor = await requireRole("organiser", "volunteer");
-  const id = uuidValue((await ctx.params).id, "That pickup run");
-  return NextResponse.json(await getRun(actor, id));
-});
+export const GET = endpoint({ who: ["organiser", "volunteer"], params: idPath("That pickup run"), resource: visibleRun }, async ({ resource }) => resource);

@@ -1,16 +1,15 @@
-import { NextResponse } from "next/server";
-import { route } from "@/lib/api/handler";
+import { endpoint } from "@/lib/api/endpoint";
 import { notFound } from "@/lib/api/errors";
-import { uuidParam, type IdContext } from "@/lib/api/params";
+import { idPath } from "@/lib/api/path";
 import { requireUser } from "@/lib/auth/session";
 import { benchRoutesEnabled, naiveStock } from "@/lib/bench/naive-stock";
 
 export const dynamic = "force-dynamic";
 
-// Exists only when the server was started with CANTROVE_BENCH=1 (npm run bench); 404 otherwise.
-export const GET = route(async (_req: Request, ctx: IdContext) => {
+// Exists only when the server was started with CANTROVE_BENCH=1 (npm run bench): 404 for
+// everyone otherwise, before any sign-in is asked for, as for a path that does not exist.
+export const GET = endpoint({ who: "anyone", params: idPath("That drive") }, async ({ params }) => {
   if (!benchRoutesEnabled()) throw notFound("That page");
   const actor = await requireUser();
-  const driveId = await uuidParam(ctx, "That drive");
-  return NextResponse.json(await naiveStock(actor.group.id, driveId));
+  return naiveStock(actor.group.id, params.id);
 });

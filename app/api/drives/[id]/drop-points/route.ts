@@ -1,27 +1,17 @@
-import { NextResponse } from "next/server";
-import { notFound } from "@/lib/api/errors";
-import { parseJson, route } from "@/lib/api/handler";
-import { requireRole } from "@/lib/auth/session";
+import { endpoint } from "@/lib/api/endpoint";
+import { idPath } from "@/lib/api/path";
 import { createDropPoint } from "@/lib/drives/actions";
-import { findDrive, listDropPoints } from "@/lib/drives/queries";
+import { listDropPoints } from "@/lib/drives/queries";
+import { ownDrive } from "@/lib/drives/resource";
 import { dropPointInput } from "@/lib/drives/schemas";
 
 export const dynamic = "force-dynamic";
 
-type Ctx = { params: Promise<{ id: string }> };
+const drive = { who: ["organiser"], params: idPath("That drive"), resource: ownDrive } as const;
 
 // Includes the host's contact details, so organisers only.
-export const GET = route(async (_req, ctx: Ctx) => {
-  const actor = await requireRole("organiser");
-  const drive = await findDrive(actor.group.id, (await ctx.params).id);
-  if (!drive) throw notFound("That drive");
-  return NextResponse.json(await listDropPoints(actor.group.id, drive.id));
-});
+export const GET = endpoint(drive, async ({ actor, resource }) => listDropPoints(actor.group.id, resource.id));
 
-export const POST = route(async (req, ctx: Ctx) => {
-  const actor = await requireRole("organiser");
-  const drive = await findDrive(actor.group.id, (await ctx.params).id);
-  if (!drive) throw notFound("That drive");
-  const input = await parseJson(req, dropPointInput);
-  return NextResponse.json(await createDropPoint(actor.group.id, drive.id, input), { status: 201 });
-});
+export const POST = endpoint({ ...drive, body: dropPointInput, status: 201 }, async ({ actor, resource, body }) =>
+  createDropPoint(actor.group.id, resource.id, body),
+);

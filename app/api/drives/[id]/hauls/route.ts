@@ -1,28 +1,22 @@
-import { NextResponse } from "next/server";
-import { route } from "@/lib/api/handler";
-import { parseBody, withIdempotency } from "@/lib/api/idempotency";
-import { uuidParam, type IdContext } from "@/lib/api/params";
-import { requireRole } from "@/lib/auth/session";
+import { z } from "zod";
+import { endpoint } from "@/lib/api/endpoint";
+import { idPath } from "@/lib/api/path";
+import { ownDrive } from "@/lib/drives/resource";
 import { haulInputSchema } from "@/lib/ledger/schemas";
 import { recordHaul } from "@/lib/ledger/record";
-import { assertOwnDrive, listHauls } from "@/lib/ledger/queries";
+import { listHauls } from "@/lib/ledger/queries";
 
 export const dynamic = "force-dynamic";
 
-/** The drive's hauls, newest first; `?open=1` for those not yet sorted (what a sort can count). */
-export const GET = route(async (req: Request, ctx: IdContext) => {
-  const actor = await requireRole("volunteer", "organiser");
-  const driveId = await uuidParam(ctx, "That drive");
-  const open = new URL(req.url).searchParams.get("open") === "1";
-  return NextResponse.json(await listHauls(actor.group.id, driveId, { open }));
-});
+const haulsQuery = z.object({ open: z.string().optional() });
 
-export const POST = route(async (req: Request, ctx: IdContext) => {
-  const actor = await requireRole("volunteer", "organiser");
-  const driveId = await uuidParam(ctx, "That drive");
-  await assertOwnDrive(actor.group.id, driveId);
-  return withIdempotency(req, actor, async (trx, raw) => {
-    const input = parseBody(raw, haulInputSchema);
-    return { status: 201, body: await recordHaul(actor, driveId, input, trx) };
-  });
-}, { keepsPeople: true });
+/** The drive's hauls, newest first; `?open=1` for those not yet sorted (what a sort can count). */
+export const GET = endpoint(
+  { who: ["volunteer", "organiser"], params: idPath("That drive"), query: haulsQuery },
+  async ({ actor, params, query }) => listHauls(actor.group.id, params.id, { open: query.open === "1" }),
+);
+
+export const POST = endpoint.idempotent(
+  { who: ["volunteer", "organiser"], params: idPath("That drive"), resource: ownDrive, body: haulInputSchema, keepsPeople: true },
+  async ({ actor, params, body, trx }) => recordHaul(actor, params.id, body, trx),
+);

@@ -1,19 +1,12 @@
-import { route } from "@/lib/api/handler";
-import { parseBody, withIdempotency } from "@/lib/api/idempotency";
-import { uuidParam, type IdContext } from "@/lib/api/params";
-import { requireRole } from "@/lib/auth/session";
+import { endpoint } from "@/lib/api/endpoint";
+import { idPath } from "@/lib/api/path";
+import { ownDrive } from "@/lib/drives/resource";
 import { recyclingInputSchema } from "@/lib/ledger/schemas";
 import { recordRecycling } from "@/lib/ledger/record";
-import { assertOwnDrive } from "@/lib/ledger/queries";
 
 export const dynamic = "force-dynamic";
 
-export const POST = route(async (req: Request, ctx: IdContext) => {
-  const actor = await requireRole("volunteer", "organiser");
-  const driveId = await uuidParam(ctx, "That drive");
-  await assertOwnDrive(actor.group.id, driveId);
-  return withIdempotency(req, actor, async (trx, raw) => {
-    const input = parseBody(raw, recyclingInputSchema);
-    return { status: 201, body: await recordRecycling(actor, driveId, input, trx) };
-  });
-}, { keepsPeople: true });
+export const POST = endpoint.idempotent(
+  { who: ["volunteer", "organiser"], params: idPath("That drive"), resource: ownDrive, body: recyclingInputSchema, keepsPeople: true },
+  async ({ actor, params, body, trx }) => recordRecycling(actor, params.id, body, trx),
+);

@@ -1,13 +1,8 @@
-import { NextResponse } from "next/server";
-import { route } from "@/lib/api/handler";
-import { uuidParam, type IdContext } from "@/lib/api/params";
-import { requireUser } from "@/lib/auth/session";
+import { endpoint } from "@/lib/api/endpoint";
+import { idPath } from "@/lib/api/path";
 import { driveStock } from "@/lib/ledger/balances";
 
 export const dynamic = "force-dynamic";
 
-export const GET = route(async (_req: Request, ctx: IdContext) => {
-  const actor = await requireUser();
-  const driveId = await uuidParam(ctx, "That drive");
-  return NextResponse.json(await driveStock(actor.group.id, driveId));
-});
+// No separate resolver: driveStock reads the totals by drive *and* group in one query (another group's is 404).
+export const GET = endpoint({ who: "member", params: idPath("That drive") }, async ({ actor, params }) => driveStock(actor.group.id, params.id));

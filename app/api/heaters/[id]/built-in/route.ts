@@ -1,19 +1,12 @@
-import { route } from "@/lib/api/handler";
-import { parseBody, withIdempotency } from "@/lib/api/idempotency";
-import { uuidParam, type IdContext } from "@/lib/api/params";
-import { requireRole } from "@/lib/auth/session";
+import { endpoint } from "@/lib/api/endpoint";
+import { idPath } from "@/lib/api/path";
+import { ownHeaterUnit } from "@/lib/heaters/resource";
 import { claimInputSchema } from "@/lib/ledger/schemas";
 import { recordBuiltIn } from "@/lib/ledger/record";
-import { assertOwnHeater } from "@/lib/ledger/queries";
 
 export const dynamic = "force-dynamic";
 
-export const POST = route(async (req: Request, ctx: IdContext) => {
-  const actor = await requireRole("builder", "organiser");
-  const heaterUnitId = await uuidParam(ctx, "That heater unit");
-  await assertOwnHeater(actor.group.id, heaterUnitId);
-  return withIdempotency(req, actor, async (trx, raw) => {
-    const input = parseBody(raw, claimInputSchema);
-    return { status: 201, body: await recordBuiltIn(actor, heaterUnitId, input.quantity, trx, input.note) };
-  });
-}, { keepsPeople: true });
+export const POST = endpoint.idempotent(
+  { who: ["builder", "organiser"], params: idPath("That heater unit"), resource: ownHeaterUnit, body: claimInputSchema, keepsPeople: true },
+  async ({ actor, params, body, trx }) => recordBuiltIn(actor, params.id, body.quantity, trx, body.note),
+);

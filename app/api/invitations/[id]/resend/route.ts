@@ -1,14 +1,19 @@
-import { NextResponse } from "next/server";
-import { route } from "@/lib/api/handler";
-import { idParam } from "@/lib/api/ids";
-import { requireRole } from "@/lib/auth/session";
+import { endpoint } from "@/lib/api/endpoint";
+import { idPath } from "@/lib/api/path";
 import { resendInvitation } from "@/lib/accounts/invitations";
+import { ACCOUNT_LIMITS } from "@/lib/accounts/limits";
 
 export const dynamic = "force-dynamic";
 
-type Ctx = { params: Promise<{ id: string }> };
-
-export const POST = route(async (_request, { params }: Ctx) => {
-  const actor = await requireRole("organiser");
-  return NextResponse.json(await resendInvitation(actor, idParam((await params).id, "That invitation")));
-});
+// resendInvitation updates the invitation by id *and* group: another group's is 404.
+export const POST = endpoint(
+  {
+    who: ["organiser"],
+    params: idPath("That invitation"),
+    limits: [
+      { rule: ACCOUNT_LIMITS.resendPerClient, by: "client" },
+      { rule: ACCOUNT_LIMITS.resendPerInvitation, by: ({ params }) => params.id },
+    ],
+  },
+  async ({ actor, params }) => resendInvitation(actor, params.id),
+);

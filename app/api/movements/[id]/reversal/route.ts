@@ -1,14 +1,12 @@
-import { route } from "@/lib/api/handler";
-import { withIdempotency } from "@/lib/api/idempotency";
-import { uuidParam, type IdContext } from "@/lib/api/params";
-import { requireUser } from "@/lib/auth/session";
+import { endpoint } from "@/lib/api/endpoint";
+import { idPath } from "@/lib/api/path";
 import { reverseMovement } from "@/lib/ledger/record";
 
 export const dynamic = "force-dynamic";
 
-// Any signed-in member may ask; reverseMovement allows the author or an organiser.
-export const POST = route(async (req: Request, ctx: IdContext) => {
-  const actor = await requireUser();
-  const movementId = await uuidParam(ctx, "That entry");
-  return withIdempotency(req, actor, async (trx) => ({ status: 201, body: await reverseMovement(actor, movementId, trx) }));
-}, { keepsPeople: true });
+// Any signed-in member may ask; reverseMovement finds the movement by id *and*
+// group (another group's is 404) and allows its author or an organiser.
+export const POST = endpoint.idempotent(
+  { who: "member", params: idPath("That entry"), keepsPeople: true },
+  async ({ actor, params, trx }) => reverseMovement(actor, params.id, trx),
+);

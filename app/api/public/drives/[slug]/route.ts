@@ -1,10 +1,7 @@
-import { NextResponse } from "next/server";
-import { route } from "@/lib/api/handler";
+import { endpoint } from "@/lib/api/endpoint";
+import { slugPath } from "@/lib/api/path";
 import { publicDrive } from "@/lib/drives/public-service";
 
 export const dynamic = "force-dynamic";
 
-export const GET = route(async (_req, ctx: { params: Promise<{ slug: string }> }) => {
-  const { slug } = await ctx.params;
-  return NextResponse.json(await publicDrive(slug));
-});
+export const GET = endpoint({ who: "anyone", params: slugPath() }, async ({ params }) => publicDrive(params.slug));

@@ -1,12 +1,9 @@
-import { NextResponse } from "next/server";
-import { route } from "@/lib/api/handler";
+import { endpoint } from "@/lib/api/endpoint";
+import { slugPath } from "@/lib/api/path";
+import { publicDrive } from "@/lib/drives/resource";
 import { dropPointTallies } from "@/lib/ledger/balances";
-import { publicDriveId } from "@/lib/ledger/queries";
 
 export const dynamic = "force-dynamic";
 
 /** Live tallies per drop point of a public drive: counts only, no contact data. */
-export const GET = route(async (_req: Request, ctx: { params: Promise<{ slug: string }> }) => {
-  const { slug } = await ctx.params;
-  return NextResponse.json(await dropPointTallies(await publicDriveId(slug)));
-});
+export const GET = endpoint({ who: "anyone", params: slugPath(), resource: publicDrive }, async ({ resource }) => dropPointTallies(resource.id));

@@ -1,9 +1,8 @@
-import { NextResponse } from "next/server";
-import { parseJson, route } from "@/lib/api/handler";
-import { uuidValue } from "@/lib/api/params";
-import { requireRole } from "@/lib/auth/session";
+import { endpoint } from "@/lib/api/endpoint";
 import { db } from "@/lib/db";
+import { stopPath } from "@/lib/runs/paths";
 import { getRun, resolveStop } from "@/lib/runs/queries";
+import { visibleRun } from "@/lib/runs/resource";
 import { assertHaulAtStop } from "@/lib/runs/activity-queries";
 import { logStopInputSchema } from "@/lib/runs/schemas";
 
@@ -12,15 +11,12 @@ export const dynamic = "force-dynamic";
 // The haul itself is written by the ledger (POST /api/drives/{id}/hauls); this
 // marks the stop logged and records which haul it was, after checking the haul
 // belongs to this group, drive and drop point.
-export const POST = route(async (request, ctx: { params: Promise<{ id: string; stopId: string }> }) => {
-  const actor = await requireRole("organiser", "volunteer");
-  const params = await ctx.params;
-  const runId = uuidValue(params.id, "That pickup run");
-  const stopId = uuidValue(params.stopId, "That stop");
-  const run = await getRun(actor, runId);
-  const input = await parseJson(request, logStopInputSchema);
-  const stop = run.stopList.find((s) => s.id === stopId);
-  if (stop) await assertHaulAtStop(actor.group.id, run.driveId, stop.dropPoint.id, input.haulId);
-  await db.transaction((trx) => resolveStop(actor, runId, stopId, { status: "logged", haulId: input.haulId }, trx));
-  return NextResponse.json(await getRun(actor, runId));
-});
+export const POST = endpoint(
+  { who: ["organiser", "volunteer"], params: stopPath, resource: visibleRun, body: logStopInputSchema },
+  async ({ actor, params, resource: run, body }) => {
+    const stop = run.stopList.find((s) => s.id === params.stopId);
+    if (stop) await assertHaulAtStop(actor.group.id, run.driveId, stop.dropPoint.id, body.haulId);
+    await db.transaction((trx) => resolveStop(actor, params.id, params.stopId, { status: "logged", haulId: body.haulId }, trx));
+    return getRun(actor, params.id);
+  },
+);

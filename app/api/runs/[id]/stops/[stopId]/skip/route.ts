@@ -1,21 +1,17 @@
-import { NextResponse } from "next/server";
-import { parseJson, route } from "@/lib/api/handler";
-import { uuidValue } from "@/lib/api/params";
-import { requireRole } from "@/lib/auth/session";
+import { endpoint } from "@/lib/api/endpoint";
 import { db } from "@/lib/db";
+import { stopPath } from "@/lib/runs/paths";
 import { getRun, resolveStop } from "@/lib/runs/queries";
+import { visibleRun } from "@/lib/runs/resource";
 import { skipStopInputSchema } from "@/lib/runs/schemas";
 
 export const dynamic = "force-dynamic";
 
-export const POST = route(async (request, ctx: { params: Promise<{ id: string; stopId: string }> }) => {
-  const actor = await requireRole("organiser", "volunteer");
-  const params = await ctx.params;
-  const runId = uuidValue(params.id, "That pickup run");
-  const stopId = uuidValue(params.stopId, "That stop");
-  // Who may touch the run is checked before the body, so outsiders learn nothing from a 422.
-  await getRun(actor, runId);
-  const input = await parseJson(request, skipStopInputSchema);
-  await db.transaction((trx) => resolveStop(actor, runId, stopId, { status: "skipped", reason: input.reason }, trx));
-  return NextResponse.json(await getRun(actor, runId));
-});
+// Who may touch the run is resolved before the body, so outsiders learn nothing from a 422.
+export const POST = endpoint(
+  { who: ["organiser", "volunteer"], params: stopPath, resource: visibleRun, body: skipStopInputSchema },
+  async ({ actor, params, body }) => {
+    await db.transaction((trx) => resolveStop(actor, params.id, params.stopId, { status: "skipped", reason: body.reason }, trx));
+    return getRun(actor, params.id);
+  },
+);

@@ -1,15 +1,16 @@
-import { NextResponse } from "next/server";
-import { notFound } from "@/lib/api/errors";
-import { parseJson, route } from "@/lib/api/handler";
+import { z } from "zod";
+import { endpoint } from "@/lib/api/endpoint";
+import { slugSegment, uuidSegment } from "@/lib/api/path";
 import { createFillReport } from "@/lib/drives/public-actions";
+import { PUBLIC_LIMITS } from "@/lib/drives/limits";
 import { fillReportInput } from "@/lib/drives/schemas";
 
 export const dynamic = "force-dynamic";
 
+const path = z.object({ slug: slugSegment("That drive"), id: uuidSegment("That drop point") });
+
 // Anyone standing at a drop point may say how full its bin is.
-export const POST = route(async (req, ctx: { params: Promise<{ slug: string; id: string }> }) => {
-  const { slug, id } = await ctx.params;
-  if (!/^[0-9a-f-]{36}$/i.test(id)) throw notFound("That drop point");
-  const input = await parseJson(req, fillReportInput);
-  return NextResponse.json(await createFillReport(slug, id, input), { status: 201 });
-});
+export const POST = endpoint(
+  { who: "anyone", params: path, body: fillReportInput, status: 201, limits: [{ rule: PUBLIC_LIMITS.fillReportPerClient, by: "client" }] },
+  async ({ params, body }) => createFillReport(params.slug, params.id, body),
+);

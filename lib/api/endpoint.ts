@@ -1,0 +1,192 @@
+import "server-only";
+import { NextResponse, type NextRequest } from "next/server";
+import type { Knex } from "knex";
+import type { ZodType } from "zod";
+import { AppError, invalidInput, notFound } from "./errors";
+import { toErrorResponse } from "./handler";
+import { withIdempotency, withIdempotentStatement, type PreparedStatement } from "./idempotency";
+import { assertJsonContent, assertNoNul, assertSameOrigin } from "./request-guards";
+import { consumeLimit, type LimitRule } from "./rate-limit";
+import { requireRole, requireUser } from "@/lib/auth/session";
+import type { Actor } from "@/lib/auth/queries";
+import type { Role } from "@/lib/auth/roles";
+import { forgetReads } from "@/lib/cache/read-cache";
+import { clientAddress } from "@/lib/net/client-address";
+
+// One declaration per route handler: who may call it, the schemas of its path,
+// query and body, the resource it acts on (resolved by that resource's own
+// resolver in lib/<domain>/, which filters by the actor's group in SQL), its
+// idempotency and its rate limits. Every declared handler makes the same checks
+// in the same order, so a new route cannot forget one:
+//   cross-site refusal → session and role → path (non-UUID id = 404) → resource
+//   (another group's = 404) → query → JSON content type → NUL bytes → body
+//   schema (422) → rate limits (429 with Retry-After) → the work.
+// Database refusals (unique, foreign key, range) come back as 409/422, an
+// unreachable database as 503, anything else as a logged 500.
+
+export type Access = "anyone" | "member" | readonly Role[];
+type ActorOf<A extends Access> = A extends "anyone" ? Actor | null : Actor;
+
+/** Loads the record a route acts on, or throws 404 (another group's record is 404 too) or 403. */
+export type Resolver<P, R> = (actor: Actor, params: P) => Promise<R>;
+
+export interface Limit<P, B> {
+  rule: LimitRule;
+  /** "client": the caller's address (from the app's own server); a function: a key from the path or body (an e-mail address, say), or null to skip. */
+  by: "client" | ((input: { params: P; body: B }) => string | null | undefined);
+}
+
+export interface EndpointSpec<A extends Access, P, Q, B, R> {
+  who: A;
+  params?: ZodType<P>;
+  query?: ZodType<Q>;
+  body?: ZodType<B>;
+  resource?: Resolver<P, R>;
+  limits?: readonly Limit<P, B>[];
+  /** 201 for creations; the default is 200. */
+  status?: number;
+  /** The handler never changes people, groups or memberships (ledger writes): its writes keep the cached roles. */
+  keepsPeople?: boolean;
+}
+
+export interface EndpointContext<A extends Access, P, Q, B, R> {
+  request: NextRequest;
+  actor: ActorOf<A>;
+  params: P;
+  query: Q;
+  body: B;
+  /** The body as sent, for the rare handler that must echo a value exactly as the caller wrote it. */
+  raw: string;
+  resource: R;
+}
+
+type NextContext = { params?: Promise<Record<string, string | string[]>> };
+type Work<T> = T | Response;
+
+async function pathOf<P>(ctx: NextContext, schema?: ZodType<P>): Promise<P> {
+  const raw = (await ctx.params) ?? {};
+  if (!schema) return raw as P;
+  const parsed = schema.safeParse(raw);
+  // A path that cannot name a record names none: 404, with the label the schema gives.
+  if (!parsed.success) throw notFound(parsed.error.issues[0]?.message || "That record");
+  assertNoNul(parsed.data);
+  return parsed.data;
+}
+
+function queryOf<Q>(request: Request, schema?: ZodType<Q>): Q {
+  if (!schema) return undefined as Q;
+  const raw = Object.fromEntries(new URL(request.url).searchParams);
+  assertNoNul(raw);
+  const parsed = schema.safeParse(raw);
+  if (!parsed.success) throw invalidInput(parsed.error);
+  return parsed.data;
+}
+
+/** Parses a raw body against the route's schema with the wrapper's own checks. */
+export function bodyOf<B>(request: Request, raw: string, schema?: ZodType<B>): B {
+  if (!schema) return undefined as B;
+  assertJsonContent(request, raw);
+  let value: unknown;
+  try {
+    value = raw.trim() === "" ? {} : JSON.parse(raw);
+  } catch {
+    throw new AppError("invalid_input", "The request body must be JSON.", { fields: { _: "Send a JSON object." } });
+  }
+  assertNoNul(value);
+  const parsed = schema.safeParse(value);
+  if (!parsed.success) throw invalidInput(parsed.error);
+  return parsed.data;
+}
+
+async function actorFor(who: Access): Promise<Actor | null> {
+  // Open routes read no session; the few that care who is asking (accepting an invitation) ask themselves.
+  if (who === "anyone") return null;
+  if (who === "member") return requireUser();
+  return requireRole(...who);
+}
+
+/** Only well-formed requests count: a refused body sends no mail and writes nothing, and a test's bad input never uses a person's allowance. */
+async function applyLimits<P, B>(request: Request, limits: readonly Limit<P, B>[], input: { params: P; body: B }) {
+  for (const limit of limits) {
+    const key = limit.by === "client" ? clientAddress(request.headers) : limit.by(input);
+    if (key) await consumeLimit(limit.rule, key.toLowerCase());
+  }
+}
+
+/** What every declared handler shares: the checks before the body, and the error and cache handling around it. */
+function wrap<A extends Access, P, Q, B, R>(
+  spec: EndpointSpec<A, P, Q, B, R>,
+  run: (pre: Omit<EndpointContext<A, P, Q, B, R>, "body" | "raw">) => Promise<Response>,
+) {
+  return async (request: NextRequest, ctx: NextContext): Promise<Response> => {
+    const writes = request.method !== "GET" && request.method !== "HEAD";
+    try {
+      assertSameOrigin(request);
+      const actor = (await actorFor(spec.who)) as ActorOf<A>;
+      const params = await pathOf(ctx, spec.params);
+      const resource = spec.resource ? await spec.resource(actor as Actor, params) : (undefined as R);
+      const query = queryOf(request, spec.query);
+      return await run({ request, actor, params, query, resource });
+    } catch (error) {
+      return toErrorResponse(error);
+    } finally {
+      if (writes) forgetReads(spec.keepsPeople ? "data" : "all");
+    }
+  };
+}
+
+function respond(result: unknown, status: number): Response {
+  return result instanceof Response ? result : NextResponse.json(result ?? null, { status });
+}
+
+/** A route handler from its declaration. The handler returns JSON-able data (sent with `status`) or a Response. */
+export function endpoint<A extends Access, P = Record<string, never>, Q = undefined, B = undefined, R = undefined, T = unknown>(
+  spec: EndpointSpec<A, P, Q, B, R>,
+  handler: (ctx: EndpointContext<A, P, Q, B, R>) => Promise<Work<T>>,
+) {
+  return wrap(spec, async (pre) => {
+    const raw = spec.body ? await pre.request.text() : "";
+    const body = bodyOf(pre.request, raw, spec.body);
+    await applyLimits(pre.request, spec.limits ?? [], { params: pre.params, body });
+    return respond(await handler({ ...pre, body, raw }), spec.status ?? 200);
+  });
+}
+
+/**
+ * A ledger write under the Idempotency-Key rule (lib/api/idempotency.ts): the body
+ * is read inside the key's transaction, so a refusal (422 included) is the answer
+ * stored under the key, and the work runs in that transaction.
+ */
+endpoint.idempotent = function idempotent<A extends Exclude<Access, "anyone">, P, B, R, T>(
+  spec: EndpointSpec<A, P, undefined, B, R>,
+  handler: (ctx: EndpointContext<A, P, undefined, B, R> & { trx: Knex.Transaction }) => Promise<T>,
+) {
+  return wrap(spec, async (pre) =>
+    withIdempotency(pre.request, pre.actor as Actor, async (trx, raw) => {
+      const body = bodyOf(pre.request, raw, spec.body);
+      return { status: spec.status ?? 201, body: await handler({ ...pre, body, raw, trx }) };
+    }),
+  );
+};
+
+/** The same rule for work that is one SQL statement whose answer is known beforehand (see withIdempotentStatement). */
+endpoint.statement = function statement<A extends Exclude<Access, "anyone">, P, B, R>(
+  spec: EndpointSpec<A, P, undefined, B, R> & {
+    /** The statement checks the resource itself; when the body is refused first, this runs so another group's record is still 404. */
+    checkOnRefusal?: Resolver<P, unknown>;
+  },
+  prepare: (ctx: EndpointContext<A, P, undefined, B, R>) => Promise<Omit<PreparedStatement, "status"> & { status?: number }>,
+) {
+  return wrap(spec, async (pre) =>
+    withIdempotentStatement(pre.request, pre.actor as Actor, async (raw) => {
+      let body: B;
+      try {
+        body = bodyOf(pre.request, raw, spec.body);
+      } catch (error) {
+        await spec.checkOnRefusal?.(pre.actor as Actor, pre.params);
+        throw error;
+      }
+      return { status: spec.status ?? 201, ...(await prepare({ ...pre, body, raw })) };
+    }),
+  );
+};
