@@ -2,6 +2,12 @@
 
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { useState } from "react";
+import { z } from "zod";
+
+// Zod probes for eval (new Function) to compile its parsers; in the browser the
+// Content-Security-Policy forbids eval, so the probe would only log a violation.
+// The server keeps the compiled parsers.
+z.config({ jitless: true });
 
 export function Providers({ children }: { children: React.ReactNode }) {
   const [client] = useState(
