@@ -1,5 +1,6 @@
 import "server-only";
 import { db } from "@/lib/db";
+import { UUID } from "./queries";
 
 export interface PublicDriveSummary {
   slug: string;
@@ -113,6 +114,8 @@ export async function listPublicDropPointsWithTallies(slug: string): Promise<Pub
   }));
 }
 
+/** Undefined for an id that is not a UUID: PostgreSQL would refuse to compare it. */
 export async function findPublicDropPoint(driveId: string, id: string) {
+  if (!UUID.test(id)) return undefined;
   return db("drop_points").select("id", "group_id as groupId", "name", "hours").where({ id, drive_id: driveId, active: true }).first();
 }

@@ -1,11 +1,9 @@
 import { z } from "zod";
+import { day } from "@/lib/dates";
 
 // One schema per input, shared by the forms (client) and the route handlers.
 
-const isoDate = z
-  .string()
-  .regex(/^\d{4}-\d{2}-\d{2}$/, "Use a date like 2026-11-01.")
-  .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s), "That date does not exist.");
+const isoDate = day("Use a date like 2026-11-01.", "That date does not exist.");
 
 export const SLUG_PATTERN = /^[a-z0-9]+(?:-[a-z0-9]+)*$/;
 

@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { day, moment } from "@/lib/dates";
+import { DEFAULT_GRAMS_PER_CAN } from "./estimate";
 
 // Inputs of the ledger endpoints; shared by the forms and the handlers. Safe to import in the client.
 export const REJECT_REASONS = ["dented", "crushed", "wrongSize", "notAluminium", "damaged", "other"] as const;
@@ -23,14 +25,27 @@ const MAX_CANS = 1_000_000;
 const wholeCans = (label: string) =>
   z.number({ error: `Enter the number of ${label}.` }).int(`Whole ${label} only.`).min(0, `${label} can't be negative.`).max(MAX_CANS, `That is more ${label} than one entry can hold.`);
 const positiveCans = (label: string) => wholeCans(label).min(1, `At least 1 ${label.replace(/s$/, "")}.`);
-const when = z.iso.datetime({ offset: true, error: "Use a date and time like 2026-12-02T09:30:00Z." }).optional();
+const when = moment("Use a date and time like 2026-12-02T09:30:00Z.").optional();
 const note = z.string().trim().max(500, "Keep the note under 500 characters.").optional();
+
+/**
+ * A weighed haul lighter than one empty can would be estimated at no cans (and
+ * under a gram it is stored as 0 kg, which the hauls table refuses). 0 kg stays
+ * a reading: with bags it says "weighed, empty".
+ */
+export const MIN_HAUL_WEIGHT_KG = DEFAULT_GRAMS_PER_CAN / 1000;
+export const UNDER_ONE_CAN = "That weight is under one can; enter the bag count instead or weigh again.";
+const haulWeight = z
+  .number({ error: "Enter the weight in kg." })
+  .min(0, "Weight can't be negative.")
+  .max(5_000, "That is more than one pickup weighs.")
+  .refine((kg) => kg === 0 || kg >= MIN_HAUL_WEIGHT_KG, { error: UNDER_ONE_CAN, when: (payload) => payload.issues.length === 0 });
 
 export const haulInputSchema = z
   .object({
     dropPointId: z.uuid("Choose a drop point."),
     bags: wholeCans("bags").max(500, "That is more bags than one pickup holds."),
-    weightKg: z.number({ error: "Enter the weight in kg." }).min(0, "Weight can't be negative.").max(5_000, "That is more than one pickup weighs.").nullable().optional(),
+    weightKg: haulWeight.nullable().optional(),
     hauledAt: when,
     note,
   })
@@ -85,8 +100,8 @@ export const ledgerFilterSchema = z.object({
   dropPointId: z.uuid().optional(),
   stage: z.enum(STAGES).optional(),
   personId: z.uuid().optional(),
-  from: z.iso.date().optional(),
-  to: z.iso.date().optional(),
+  from: day("Use a date like 2026-11-01.").optional(),
+  to: day("Use a date like 2026-11-01.").optional(),
   mine: z.enum(["1"]).optional(),
   limit: z.coerce.number().int().min(1).max(1000).optional(),
 });

@@ -1,12 +1,12 @@
 import { randomUUID } from "node:crypto";
 import type { Knex } from "knex";
-import { conflict, notFound } from "@/lib/api/errors";
+import { AppError, conflict, notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
 import { estimateHaulCans } from "./estimate";
 import { allocate } from "./allocate";
 import { loadCalibration, calibrationDelta, applyCalibration } from "./calibration";
 import { bumpDropPoint, inTx, ledgerPostCall, lockDrive, postMovement, runLedgerCall, type LedgerCall, type LineSpec } from "./post";
-import { REJECT_REASONS, type HaulInput, type ProcessingInput, type RecyclingInput, type SortInput } from "./schemas";
+import { REJECT_REASONS, UNDER_ONE_CAN, type HaulInput, type ProcessingInput, type RecyclingInput, type SortInput } from "./schemas";
 
 // Writers of the ledger. Each is one transaction (or joins the caller's, as
 // the Idempotency-Key helper does). ledger_post locks the drive and checks the
@@ -23,6 +23,9 @@ export async function recordHaul(actor: Actor, driveId: string, input: HaulInput
     if (!point) throw notFound("That drop point");
     const calibration = await loadCalibration(trx, groupId);
     const est = estimateHaulCans({ bags: input.bags, weightKg: input.weightKg ?? null }, calibration);
+    // The schema's minimum uses the default can mass; a group whose counted cans
+    // are heavier can still estimate a light weight at no cans.
+    if (input.weightKg && est.cans === 0) throw new AppError("invalid_input", "Some fields need another look.", { fields: { weightKg: UNDER_ONE_CAN } });
     const hauledAt = input.hauledAt ? new Date(input.hauledAt) : new Date();
 
     const [movement] = await trx("movements")

@@ -236,6 +236,13 @@ export async function lockPendingStop(actor: Actor, runId: string, stopId: strin
   return { run, stop: { id: stop.id as string, dropPointId: stop.drop_point_id as string } };
 }
 
+const HAUL_TAKEN = "That haul already settles another stop.";
+
+function isUniqueViolation(error: unknown, constraint: string): boolean {
+  const e = error as { code?: string; constraint?: string } | null;
+  return e?.code === "23505" && e.constraint === constraint;
+}
+
 /**
  * Marks one stop logged or skipped, then moves the run's state along. Only the
  * run's volunteer or an organiser may; a stop already settled is a 409.
@@ -251,8 +258,11 @@ export async function resolveStop(
 ) {
   const { run, stop } = locked ?? (await lockPendingStop(actor, runId, stopId, trx));
   if (change.status === "logged") {
+    // Two runs logging one haul lock different runs; locking the haul makes
+    // the second wait for the first and then see the stop it settled.
+    await trx("hauls").select("id").where({ id: change.haulId, group_id: actor.group.id }).forUpdate().first();
     const taken = await trx("pickup_run_stops").select("id").where({ haul_id: change.haulId }).first();
-    if (taken) throw conflict("That haul already settles another stop.");
+    if (taken) throw conflict(HAUL_TAKEN);
   }
   await trx("pickup_run_stops")
     .where({ id: stopId })
@@ -262,6 +272,11 @@ export async function resolveStop(
       haul_id: change.status === "logged" ? change.haulId : null,
       resolved_by: actor.user.id,
       resolved_at: trx.fn.now(),
+    })
+    .catch((error: unknown) => {
+      // The unique index is the last word if anything slips past the lock.
+      if (isUniqueViolation(error, "pickup_run_stops_haul_unique")) throw conflict(HAUL_TAKEN);
+      throw error;
     });
   const statuses: StopStatus[] = await trx("pickup_run_stops").where({ run_id: runId }).pluck("status");
   const state = runStateOf(statuses);

@@ -2,6 +2,7 @@
  * Inputs of the pickup-run endpoints and forms; safe to import in the client.
  */
 import { z } from "zod";
+import { day } from "@/lib/dates";
 import { MAX_ROUTE_STOPS } from "@/lib/routes/schemas";
 
 export const RUN_STATES = ["planned", "under_way", "done"] as const;
@@ -25,7 +26,7 @@ function degrees(name: string, limit: number) {
 export const createRunInputSchema = z.object(
   {
     driveId: uuid("a drive"),
-    plannedOn: z.iso.date({ error: "Pick the day of the run" }),
+    plannedOn: day("Pick the day of the run"),
     start: z.object(
       { lat: degrees("Start latitude", 90), lng: degrees("Start longitude", 180) },
       { error: "Give the start point" },

@@ -8,6 +8,8 @@ import { publicDrive, publicDropPoints } from "@/lib/drives/public-service";
 import { tileConfig } from "@/lib/map/config";
 
 export const dynamic = "force-dynamic";
+// No loading.tsx for this segment: a streamed placeholder would fix the status
+// at 200 before notFound() runs, and an unknown or private drive must be a 404.
 
 type Props = { params: Promise<{ slug: string }> };
 
