@@ -1,7 +1,6 @@
 import { NextResponse } from "next/server";
-import { getServerSession } from "next-auth";
 import { parseJson, route } from "@/lib/api/handler";
-import { authOptions } from "@/lib/auth/options";
+import { getSessionUserId } from "@/lib/auth/session";
 import { acceptInvitationInputSchema } from "@/lib/accounts/schemas";
 import { acceptInvitation } from "@/lib/accounts/invitations";
 
@@ -11,8 +10,7 @@ export const dynamic = "force-dynamic";
 // already has an account must also be signed in as the invited address.
 export const POST = route(async (request) => {
   const input = await parseJson(request, acceptInvitationInputSchema);
-  const session = await getServerSession(authOptions);
-  const result = await acceptInvitation(input, session?.userId || null);
+  const result = await acceptInvitation(input, await getSessionUserId());
   return NextResponse.json(
     { group: { id: result.groupId }, role: result.role, email: result.email, newAccount: result.newAccount },
     { status: 201 },
