@@ -39,3 +39,15 @@ export function safeCallbackUrl(url: string, baseUrl: string): string {
   }
   return baseUrl;
 }
+
+/** The callbackUrl to keep: itself when it is a safe path or a safe URL on one of the origins, else "/". */
+export function keptCallbackUrl(url: string, origins: string[]): string {
+  if (isSafePath(url)) return url;
+  try {
+    const parsed = new URL(url);
+    if (origins.includes(parsed.origin) && isSafePath(`${parsed.pathname}${parsed.search}${parsed.hash}`)) return url;
+  } catch {
+    // Not a URL at all.
+  }
+  return "/";
+}

@@ -5,12 +5,12 @@ import { APP_URL } from "@/tests/support/env";
 // address (127.0.0.x): the server sees a distinct client, and the other test
 // files signing in from 127.0.0.1 are not touched by these failures.
 export function call(localAddress: string, method: string, path: string, body?: string, headers: Record<string, string> = {}) {
-  return new Promise<{ status: number; text: string; cookies: string[] }>((resolve, reject) => {
+  return new Promise<{ status: number; text: string; cookies: string[]; location?: string }>((resolve, reject) => {
     const url = new URL(path, APP_URL);
     const req = http.request({ host: url.hostname, port: url.port, path: url.pathname + url.search, method, localAddress, headers }, (res) => {
       let text = "";
       res.on("data", (c) => (text += c));
-      res.on("end", () => resolve({ status: res.statusCode ?? 0, text, cookies: (res.headers["set-cookie"] ?? []).map((c) => c.split(";")[0]) }));
+      res.on("end", () => resolve({ status: res.statusCode ?? 0, text, cookies: (res.headers["set-cookie"] ?? []).map((c) => c.split(";")[0]), location: res.headers.location }));
     });
     req.on("error", reject);
     req.end(body);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { isSafePath, safeCallbackUrl, safeRedirect } from "@/lib/auth/safe-redirect";
+import { isSafePath, keptCallbackUrl, safeCallbackUrl, safeRedirect } from "@/lib/auth/safe-redirect";
 
 // The open-redirect shapes browsers read as another host: OWASP's
 // "Unvalidated Redirects and Forwards Cheat Sheet" and the WHATWG URL
@@ -28,5 +28,13 @@ describe("safe redirects", () => {
     expect(safeCallbackUrl("/\\evil.example/", base)).toBe(base);
     expect(safeCallbackUrl("http://[::1", base)).toBe(base);
     expect(safeCallbackUrl("http://127.0.0.1:3001/", base)).toBe(base);
+  });
+
+  it("keeps a callbackUrl as it is only when it is safe, else replaces it by /", () => {
+    const origins = ["http://127.0.0.1:3000"];
+    expect(keptCallbackUrl("/log?x=1", origins)).toBe("/log?x=1");
+    expect(keptCallbackUrl("http://127.0.0.1:3000/units", origins)).toBe("http://127.0.0.1:3000/units");
+    for (const bad of ["http://[::1", "https://evil.example/", "/\\evil.example/", "http://127.0.0.1:3000//evil.example"]) expect(keptCallbackUrl(bad, origins)).toBe("/");
+    expect(keptCallbackUrl("/", origins)).toBe("/");
   });
 });
