@@ -7,7 +7,10 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
+import { ResendVerification } from "@/components/accounts/resend-verification";
+import { EMAIL_UNPROVEN } from "@/lib/accounts/schemas";
 import { ROLE_HOME, type Role } from "@/lib/auth/roles";
+import { safeRedirect } from "@/lib/auth/safe-redirect";
 
 const NO_MATCH = "That e-mail and password do not match an account. Check both and try again.";
 
@@ -16,6 +19,7 @@ export function SignInForm() {
   const params = useSearchParams();
   const next = params.get("next");
   const [error, setError] = useState<string | null>(null);
+  const [unproven, setUnproven] = useState<string | null>(null);
   const [pending, setPending] = useState(false);
 
   async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
@@ -23,21 +27,24 @@ export function SignInForm() {
     const form = new FormData(event.currentTarget);
     setPending(true);
     setError(null);
+    setUnproven(null);
+    const email = String(form.get("email") ?? "");
     const result = await signIn("credentials", {
-      email: String(form.get("email") ?? ""),
+      email,
       password: String(form.get("password") ?? ""),
       redirect: false,
     });
     if (!result || result.error) {
       setPending(false);
       // "CredentialsSignin" is the generic miss; anything else is our own
-      // message (sign-in paused after too many failures).
+      // message (sign-in paused after too many tries, address not proven yet).
       setError(result?.error && result.error !== "CredentialsSignin" ? result.error : NO_MATCH);
+      if (result?.error === EMAIL_UNPROVEN) setUnproven(email);
       return;
     }
     const me = await fetch("/api/me").then((r) => (r.ok ? r.json() : null));
     const home = me?.role ? ROLE_HOME[me.role as Role] : "/";
-    router.push(next && next.startsWith("/") && !next.startsWith("//") ? next : home);
+    router.push(safeRedirect(next, home));
     router.refresh();
   }
 
@@ -49,6 +56,7 @@ export function SignInForm() {
         </Notice>
       ) : null}
       <FormError message={error} />
+      {unproven ? <ResendVerification email={unproven} /> : null}
       <Field id="email" name="email" type="email" label="E-mail" autoComplete="email" required defaultValue={params.get("email") ?? undefined} />
       <Field id="password" name="password" type="password" label="Password" autoComplete="current-password" required />
       <Button type="submit" disabled={pending}>

@@ -14,7 +14,7 @@ export async function seed(knex: Knex): Promise<void> {
 
   const hash = await bcrypt.hash(DEMO_PASSWORD, 10);
   const [person] = await knex("users")
-    .insert({ email: "two-groups@cantrove.test", name: "Juniper Hale", password_hash: hash })
+    .insert({ email: "two-groups@cantrove.test", name: "Juniper Hale", password_hash: hash, email_verified_at: knex.fn.now() })
     .returning("id");
   // The demo group first: it is where Juniper lands after signing in.
   await knex("memberships").insert({ group_id: demo.id, user_id: person.id, role: "volunteer", created_at: knex.raw("now() - interval '1 minute'") });

@@ -15,6 +15,8 @@ export const ACCOUNT_LIMITS = {
   invitePerAddress: { name: "invite-address", points: 5, durationSec: 24 * HOUR },
   resendPerInvitation: { name: "resend-invitation", points: 3, durationSec: HOUR },
   resendPerClient: { name: "resend-client", points: 30, durationSec: HOUR },
+  /** Asking for the e-mail proof link again. */
+  verifyResendPerClient: { name: "verify-resend-client", points: 20, durationSec: HOUR },
   /** Invitation, reset and verification tokens are 256-bit, but nobody needs hundreds of tries. */
   tokenPerClient: { name: "token-client", points: 30, durationSec: 15 * 60 },
 } as const satisfies Record<string, LimitRule>;

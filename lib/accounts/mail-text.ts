@@ -27,3 +27,31 @@ export function resetMail(args: { link: string; minutes: number }) {
     ].join("\n"),
   };
 }
+
+export function verificationMail(args: { link: string; hours: number }) {
+  return {
+    subject: "Confirm your e-mail address for Cantrove",
+    text: [
+      "Someone opened a Cantrove account with this e-mail address.",
+      "",
+      `If it was you, confirm the address: ${args.link}`,
+      "",
+      `The link expires in ${args.hours} hours. Until it is opened, nobody can sign in to that account.`,
+      "If it was not you, ignore this e-mail and do not open the link.",
+    ].join("\n"),
+  };
+}
+
+export function signUpAttemptMail(args: { signInLink: string; resetLink: string }) {
+  return {
+    subject: "Someone tried to open a Cantrove account with your address",
+    text: [
+      "Someone tried to open a new Cantrove account with this e-mail address. It already has an account, so nothing was created.",
+      "",
+      `If it was you, sign in: ${args.signInLink}`,
+      `Forgot the password? Choose a new one: ${args.resetLink}`,
+      "",
+      "If it was not you, you need do nothing: your account stays as it is.",
+    ].join("\n"),
+  };
+}

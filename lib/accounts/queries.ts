@@ -1,35 +1,10 @@
 import "server-only";
-import bcrypt from "bcryptjs";
-import { randomBytes } from "node:crypto";
 import { db } from "@/lib/db";
-import { AppError, conflict, notFound } from "@/lib/api/errors";
+import { conflict, notFound } from "@/lib/api/errors";
+import { endSessions } from "@/lib/auth/queries";
 import type { Role } from "@/lib/auth/roles";
-import type { SignUpInput } from "./schemas";
-import { slugify } from "./tokens";
 
 export const BCRYPT_COST = 10;
-
-const emailTaken = () =>
-  new AppError("invalid_input", "Some fields need another look.", {
-    fields: { email: "This e-mail already has an account. Sign in, or reset the password if you forgot it." },
-  });
-
-/** A new person and a new group, with that person as its organiser. */
-export async function signUp(input: SignUpInput): Promise<{ userId: string; groupId: string; slug: string }> {
-  const hash = await bcrypt.hash(input.password, BCRYPT_COST);
-  return db.transaction(async (trx) => {
-    const [user] = await trx("users")
-      .insert({ email: input.email, name: input.name, password_hash: hash })
-      .onConflict("email")
-      .ignore()
-      .returning("id");
-    if (!user) throw emailTaken();
-    const slug = slugify(input.groupName, randomBytes(3).toString("hex"));
-    const [group] = await trx("groups").insert({ slug, name: input.groupName }).returning("id");
-    await trx("memberships").insert({ group_id: group.id, user_id: user.id, role: "organiser" });
-    return { userId: user.id, groupId: group.id, slug };
-  });
-}
 
 export interface MemberRow {
   userId: string;
@@ -73,7 +48,11 @@ export async function updateMembership(groupId: string, userId: string, change: 
     if (!member) throw notFound("That member");
     const losesOrganiser = member.role === "organiser" && ("remove" in change || change.role !== "organiser");
     if (losesOrganiser && organisers.length <= 1) throw conflict(LAST_ORGANISER, { rule: "last_organiser" });
-    if ("remove" in change) await trx("memberships").where({ group_id: groupId, user_id: userId }).delete();
+    if ("remove" in change) {
+      await trx("memberships").where({ group_id: groupId, user_id: userId }).delete();
+      // Whatever the removed person had open (in this group or another) must sign in again.
+      await endSessions(userId, trx);
+    }
     else await trx("memberships").where({ group_id: groupId, user_id: userId }).update({ role: change.role });
   });
 }

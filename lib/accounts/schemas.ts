@@ -57,3 +57,13 @@ export const switchGroupInputSchema = z.object({ groupId: z.string().uuid("Choos
 /** The one answer to a reset request, known address or not. */
 export const RESET_ANSWER =
   "If that address has a Cantrove account, a link to choose a new password is on its way. It works once, for an hour.";
+
+export const verifyEmailInputSchema = z.object({ token: tokenSchema });
+export const resendVerificationInputSchema = z.object({ email: emailSchema });
+
+/** Thrown by sign-in after a matching password whose address is not proven yet; the form offers to send the link again. */
+export const EMAIL_UNPROVEN = "Open the link we e-mailed to this address to finish setting up your account, then sign in.";
+
+/** The one answer to a request for a new link, known address or not. */
+export const RESEND_ANSWER =
+  "If that address has an account still waiting for its link, a new link is on its way. Check your inbox and spam folder.";

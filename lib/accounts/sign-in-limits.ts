@@ -1,49 +1,40 @@
 import "server-only";
 import { db } from "@/lib/db";
-import { THROTTLE, refusalMessage, throttleDecision } from "./throttle";
+import { AppError } from "@/lib/api/errors";
+import { consumeLimit, resetLimit } from "@/lib/api/rate-limit";
+import { LIMITS_TABLE, limiterFor } from "@/lib/api/rate-limit-store";
+import { CLIENT_RULE, PAIR_RULES, pairKey, refusalMessage } from "./sign-in-rules";
 
-const windowStart = () => db.raw(`now() - interval '${THROTTLE.windowMinutes} minutes'`);
-
-async function countSince(column: "email" | "client", value: string): Promise<number> {
-  const row = await db("sign_in_failures").where(column, value).andWhere("at", ">", windowStart()).count<{ count: string }[]>("* as count").first();
-  return Number(row?.count ?? 0);
-}
-
-/** Minutes until enough failures age out of the window for sign-in to open again. */
-async function minutesUntilOpen(column: "email" | "client", value: string, refuseAt: number): Promise<number> {
-  const row = await db("sign_in_failures")
-    .select(db.raw(`ceil(extract(epoch from (at + interval '${THROTTLE.windowMinutes} minutes' - now())) / 60) as minutes`))
-    .where(column, value)
-    .andWhere("at", ">", windowStart())
-    .orderBy("at", "desc")
-    .offset(refuseAt - 1)
-    .first();
-  return Math.max(1, Number(row?.minutes ?? THROTTLE.windowMinutes));
-}
+const retryOf = (reason: unknown) => Number((reason as AppError).details?.retryAfter ?? 60);
 
 /**
- * Called before checking a password: waits when there were recent failures and
- * throws (the message reaches the sign-in form) when there were too many.
+ * Called before the password is checked: takes one try from every limit at
+ * once (one atomic upsert each), so parallel guesses cannot all get through.
+ * Throws an Error whose message reaches the sign-in form when over.
  */
-export async function guardSignIn(email: string, client: string): Promise<void> {
-  const [emailFailures, clientFailures] = await Promise.all([countSince("email", email), countSince("client", client)]);
-  const decision = throttleDecision(emailFailures, clientFailures);
-  if (decision.kind === "refuse") {
-    const minutes =
-      decision.by === "email"
-        ? await minutesUntilOpen("email", email, THROTTLE.email.refuseAt)
-        : await minutesUntilOpen("client", client, THROTTLE.client.refuseAt);
-    throw new Error(refusalMessage(decision.by, minutes));
-  }
-  if (decision.delayMs > 0) await new Promise((r) => setTimeout(r, decision.delayMs));
+export async function takeSignInTry(email: string, client: string): Promise<void> {
+  const rules = [...PAIR_RULES, CLIENT_RULE];
+  const results = await Promise.allSettled(rules.map((rule) => consumeLimit(rule, rule === CLIENT_RULE ? client : pairKey(email, client))));
+  const refused = results.flatMap((r, i) => (r.status === "rejected" ? [{ rule: rules[i], reason: r.reason }] : []));
+  const broken = refused.find((r) => !(r.reason instanceof AppError && r.reason.code === "rate_limited"));
+  if (broken) throw broken.reason;
+  if (!refused.length) return;
+  const byPair = refused.filter((r) => r.rule !== CLIENT_RULE);
+  const worst = (list: typeof refused) => Math.max(...list.map((r) => retryOf(r.reason)));
+  throw new Error(byPair.length ? refusalMessage("pair", worst(byPair)) : refusalMessage("client", worst(refused)));
 }
 
-export async function recordSignInFailure(email: string, client: string): Promise<void> {
-  await db("sign_in_failures").insert({ email: email.slice(0, 254), client });
-  // Old rows are of no use; trimming here keeps the table small without a job.
-  if (Math.random() < 0.02) await db("sign_in_failures").where("at", "<", db.raw("now() - interval '1 day'")).delete();
+/** The password matched: this e-mail's tries from this client start again, and the try is given back to the client. */
+export async function signInSucceeded(email: string, client: string): Promise<void> {
+  await Promise.all([...PAIR_RULES.map((rule) => resetLimit(rule, pairKey(email, client))), limiterFor(CLIENT_RULE).reward(client, 1)]);
 }
 
-export async function clearSignInFailures(email: string): Promise<void> {
-  await db("sign_in_failures").where({ email }).delete();
+/** After a password reset: the e-mail's counts from every client go, so the reset is the way back in. */
+export async function clearSignInTries(email: string): Promise<void> {
+  const prefixes = PAIR_RULES.map((rule) => `${rule.name}:${pairKey(email, "")}`);
+  await db(LIMITS_TABLE)
+    .where((q) => {
+      for (const prefix of prefixes) q.orWhereRaw("starts_with(key, ?)", [prefix]);
+    })
+    .delete();
 }

@@ -19,3 +19,5 @@ export function slugify(name: string, suffix: string): string {
   const base = toSlug(name, 48);
   return `${base || "group"}-${suffix}`;
 }
+
+export const VERIFY_HOURS = 48;

@@ -1,27 +1,19 @@
 import "server-only";
-import { RateLimiterMemory, RateLimiterRes } from "rate-limiter-flexible";
 import { AppError } from "./errors";
+import { limiterFor } from "./rate-limit-store";
+import { retryAfterSeconds, waitText, type LimitRule } from "./rate-limit-rules";
 
-// Stand-in until the PostgreSQL-backed store lands: same interface.
-export interface LimitRule { name: string; points: number; durationSec: number; blockDurationSec?: number }
+export type { LimitRule } from "./rate-limit-rules";
 
-const limiters = new Map<string, RateLimiterMemory>();
-function limiterFor(rule: LimitRule) {
-  let limiter = limiters.get(rule.name);
-  if (!limiter) {
-    limiter = new RateLimiterMemory({ keyPrefix: rule.name, points: rule.points, duration: rule.durationSec, blockDuration: rule.blockDurationSec });
-    limiters.set(rule.name, limiter);
-  }
-  return limiter;
-}
-
+/** Consumes `points` from rule for key; throws AppError("rate_limited", message, { details: { retryAfter: <whole seconds> } }) when over. */
 export async function consumeLimit(rule: LimitRule, key: string, points = 1): Promise<void> {
   try {
     await limiterFor(rule).consume(key, points);
   } catch (error) {
-    if (!(error instanceof RateLimiterRes)) throw error;
-    const retryAfter = Math.max(1, Math.ceil(error.msBeforeNext / 1000));
-    throw new AppError("rate_limited", `Too many of these for now. Try again in ${retryAfter} seconds.`, { details: { retryAfter } });
+    // The library rejects with its result object when over the limit, with an Error when the store fails.
+    if (error instanceof Error || typeof (error as { msBeforeNext?: unknown })?.msBeforeNext !== "number") throw error;
+    const retryAfter = retryAfterSeconds((error as { msBeforeNext: number }).msBeforeNext);
+    throw new AppError("rate_limited", `Too many tries. Try again in ${waitText(retryAfter)}.`, { details: { retryAfter } });
   }
 }
 

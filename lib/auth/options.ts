@@ -4,9 +4,10 @@ import CredentialsProvider from "next-auth/providers/credentials";
 import bcrypt from "bcryptjs";
 import { z } from "zod";
 import { findUserForSignIn, loadActor } from "./queries";
-import { clearSignInFailures, guardSignIn, recordSignInFailure } from "@/lib/accounts/sign-in-limits";
+import { signInSucceeded, takeSignInTry } from "@/lib/accounts/sign-in-limits";
 import { clientAddress } from "@/lib/net/client-address";
-import { switchGroupInputSchema } from "@/lib/accounts/schemas";
+import { EMAIL_UNPROVEN, switchGroupInputSchema } from "@/lib/accounts/schemas";
+import { safeCallbackUrl } from "./safe-redirect";
 
 const credentialsSchema = z.object({
   email: z.string().trim().toLowerCase().email(),
@@ -29,29 +30,34 @@ export const authOptions: NextAuthOptions = {
       async authorize(raw, req) {
         const client = clientAddress(req?.headers as Record<string, string | undefined> | undefined);
         const email = String(raw?.email ?? "").trim().toLowerCase().slice(0, 254);
-        await guardSignIn(email, client);
+        // The try is counted before the hash is checked, so parallel guesses
+        // beyond the limit never reach bcrypt.
+        await takeSignInTry(email, client);
         const parsed = credentialsSchema.safeParse(raw);
-        if (!parsed.success) {
-          await recordSignInFailure(email, client);
-          return null;
-        }
+        if (!parsed.success) return null;
         const user = await findUserForSignIn(parsed.data.email);
         const ok = await bcrypt.compare(parsed.data.password, user?.password_hash ?? DUMMY_HASH);
-        if (!user || !user.password_hash || !ok) {
-          await recordSignInFailure(email, client);
-          return null;
-        }
-        await clearSignInFailures(email);
+        if (!user || !user.password_hash || !ok) return null;
+        await signInSucceeded(email, client);
+        // Only after the password matched, so this says nothing to a stranger.
+        if (!user.email_verified_at) throw new Error(EMAIL_UNPROVEN);
         const actor = await loadActor(user.id);
-        return { id: user.id, email: user.email, name: user.name, groupId: actor?.group.id ?? null };
+        return { id: user.id, email: user.email, name: user.name, groupId: actor?.group.id ?? null, sessionVersion: user.session_version };
       },
     }),
   ],
   callbacks: {
+    // Every redirect next-auth makes (callbackUrl included) stays on this site;
+    // a malformed one goes home instead of failing.
+    async redirect({ url, baseUrl }) {
+      return safeCallbackUrl(url, baseUrl);
+    },
     async jwt({ token, user, trigger, session }) {
       if (user) {
         token.userId = user.id;
         token.groupId = (user as { groupId?: string | null }).groupId ?? null;
+        // Compared on every request (lib/auth/session.ts): a bump ends this session.
+        token.sessionVersion = (user as { sessionVersion?: number }).sessionVersion ?? 0;
       }
       const switchTo = trigger === "update" ? switchGroupInputSchema.safeParse(session) : null;
       if (switchTo?.success) {

@@ -5,7 +5,7 @@ import { LRUCache } from "lru-cache";
 // opening the same map costs one query, not one each. Two spaces:
 // - "people": who is signed in as what (membership, role, names);
 // - "data": everything else (a drive's public drop points, its stock).
-// Every write this process handles clears both (route() calls forgetReads()
+// Every write this process handles clears both (endpoint() calls forgetReads()
 // after any request that is not a GET or HEAD, the upload callbacks call it
 // too); a handler that declares it never changes people (the ledger's) clears
 // "data" only. So a person who changes something sees it on their next read.

@@ -26,7 +26,7 @@ export async function freshGroup(label = "ledger"): Promise<FreshGroup> {
     builder: `bld-${tag}@example.test`,
   };
   for (const [role, email] of Object.entries(emails)) {
-    const [u] = await db("users").insert({ email, name: `Test ${role}`, password_hash: hash }).returning("id");
+    const [u] = await db("users").insert({ email, name: `Test ${role}`, password_hash: hash, email_verified_at: db.fn.now() }).returning("id");
     await db("memberships").insert({ group_id: group.id, user_id: u.id, role: role === "volunteer2" ? "volunteer" : role });
   }
   const [drive] = await db("drives")

@@ -21,7 +21,7 @@ export async function createOwnGroup(db: Knex, label: string, names: { drive?: s
   const emails = { organiser: `organiser+${tag}@cantrove.test`, volunteer: `volunteer+${tag}@cantrove.test`, builder: `builder+${tag}@cantrove.test` };
   const ids: Record<string, string> = {};
   for (const [role, email] of Object.entries(emails)) {
-    const [u] = await db("users").insert({ email, name: `${role} of ${label}`, password_hash: hash }).returning("id");
+    const [u] = await db("users").insert({ email, name: `${role} of ${label}`, password_hash: hash, email_verified_at: db.fn.now() }).returning("id");
     await db("memberships").insert({ group_id: group.id, user_id: u.id, role });
     ids[role] = u.id;
   }

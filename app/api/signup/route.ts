@@ -1,11 +1,12 @@
 import { endpoint } from "@/lib/api/endpoint";
 import { ACCOUNT_LIMITS } from "@/lib/accounts/limits";
 import { signUpInputSchema } from "@/lib/accounts/schemas";
-import { signUp } from "@/lib/accounts/queries";
+import { signUp } from "@/lib/accounts/sign-up";
 
 export const dynamic = "force-dynamic";
 
-// Anyone may start a group; the client signs in with the same credentials next.
+// Anyone may start a group; signing in waits until the link mailed to the address is opened.
+// An address that already has an account gets this same answer (its owner gets a mail).
 export const POST = endpoint(
   {
     who: "anyone",

@@ -7,9 +7,24 @@ export const PASSWORD = "a-long-test-password";
 
 export const uniqueEmail = (who: string) => `${who}-${randomBytes(4).toString("hex")}@accounts.test`;
 
-/** A fresh group made through sign-up, with its organiser signed in. */
-export async function freshGroup(name = "Test Circle") {
-  const email = uniqueEmail("organiser");
+/** A token from the newest mail of one kind to an address: the link's last path segment after `/<segment>/`. */
+export async function linkToken(email: string, kind: string, segment: string, after: Set<string> = new Set()): Promise<string> {
+  const mail = await waitForMail(email, (m) => m.headers["x-cantrove-kind"] === kind && !after.has(m.id));
+  const match = mail.text.match(new RegExp(`/${segment}/([A-Za-z0-9_-]+)`));
+  if (!match) throw new Error(`no /${segment}/ link in: ${mail.text}`);
+  return match[1];
+}
+
+/** Opens the confirmation link mailed at sign-up, as the person would: its page proves the address. */
+export async function proveAddress(email: string): Promise<void> {
+  const token = await linkToken(email, "email_verification", "verify");
+  const page = await new ApiClient().get(`/verify/${token}`);
+  expect(page.status).toBe(200);
+  expect(await page.text()).toContain("Your address is confirmed");
+}
+
+/** A fresh group made through sign-up, its address proven from the mail, with its organiser signed in. */
+export async function freshGroup(name = "Test Circle", email = uniqueEmail("organiser")) {
   const anonymous = new ApiClient();
   const res = await anonymous.json<{ group: { id: string; slug: string } }>("POST", "/api/signup", {
     name: "Olwen Test",
@@ -18,6 +33,7 @@ export async function freshGroup(name = "Test Circle") {
     groupName: name,
   });
   expect(res.status).toBe(201);
+  await proveAddress(email);
   const client = new ApiClient();
   expect(await client.signIn(email, PASSWORD)).toBe(200);
   return { client, email, groupId: res.body.group.id, slug: res.body.group.slug };
@@ -25,8 +41,5 @@ export async function freshGroup(name = "Test Circle") {
 
 /** The token from the newest invitation e-mail to an address (the link's last path segment). */
 export async function invitationToken(email: string, after: Set<string> = new Set()): Promise<string> {
-  const mail = await waitForMail(email, (m) => m.headers["x-cantrove-kind"] === "invitation" && !after.has(m.id));
-  const match = mail.text.match(/\/invite\/([A-Za-z0-9_-]+)/);
-  if (!match) throw new Error(`no invitation link in: ${mail.text}`);
-  return match[1];
+  return linkToken(email, "invitation", "invite", after);
 }

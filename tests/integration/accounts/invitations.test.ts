@@ -129,9 +129,12 @@ describe("invitations", () => {
     await first.client.request("POST", "/api/auth/session", { csrfToken: csrf.body.csrfToken, data: { groupId: other.groupId } });
     expect((await first.client.json<Me>("GET", "/api/me")).body.group.id).toBe(second.groupId);
 
-    // Removed from the active group, the person carries on in the group they still belong to.
+    // Removed from the active group, the person's sessions end; signed in again, they carry on in the group they still belong to.
     const firstUser = (await testDb()("users").where({ email: first.email }).first()).id;
     expect((await second.client.json("DELETE", `/api/members/${firstUser}`)).status).toBe(200);
-    expect((await first.client.json<Me>("GET", "/api/me")).body).toMatchObject({ group: { id: first.groupId }, role: "organiser" });
+    expect((await first.client.json("GET", "/api/me")).status).toBe(401);
+    const again = new ApiClient();
+    expect(await again.signIn(first.email, PASSWORD)).toBe(200);
+    expect((await again.json<Me>("GET", "/api/me")).body).toMatchObject({ group: { id: first.groupId }, role: "organiser" });
   });
 });

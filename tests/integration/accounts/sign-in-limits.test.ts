@@ -1,84 +1,91 @@
-import http from "node:http";
 import { afterAll, describe, expect, it } from "vitest";
-import { APP_URL } from "@/tests/support/env";
+import { ApiClient } from "@/tests/support/http";
 import { closeTestDb, testDb } from "@/tests/support/db";
-import { PASSWORD, freshGroup, uniqueEmail } from "./helpers";
+import { PAIR_LIMIT } from "@/lib/accounts/sign-in-rules";
+import { PASSWORD, freshGroup, linkToken, uniqueEmail } from "./helpers";
+import { csrfFrom, signInFrom } from "./sign-in-from";
 
 afterAll(closeTestDb);
 
-// Sign-in over plain node:http so each test can come from its own loopback
-// address (127.0.0.x): the server sees a distinct client, and the other test
-// files signing in from 127.0.0.1 are not slowed by these failures.
-function call(localAddress: string, method: string, path: string, body?: string, cookie = "", type?: string) {
-  return new Promise<{ status: number; text: string; cookies: string[] }>((resolve, reject) => {
-    const url = new URL(path, APP_URL);
-    const req = http.request(
-      { host: url.hostname, port: url.port, path: url.pathname + url.search, method, localAddress, headers: { cookie, ...(type ? { "content-type": type } : {}) } },
-      (res) => {
-        let text = "";
-        res.on("data", (c) => (text += c));
-        res.on("end", () => resolve({ status: res.statusCode ?? 0, text, cookies: (res.headers["set-cookie"] ?? []).map((c) => c.split(";")[0]) }));
-      },
-    );
-    req.on("error", reject);
-    req.end(body);
-  });
-}
+const PLAIN_MISS = "CredentialsSignin";
+const PAIR_REFUSAL = /Too many sign-in tries for this e-mail from your network\. Try again in .*reset your password/;
 
-async function signInFrom(localAddress: string, email: string, password: string) {
-  const csrf = await call(localAddress, "GET", "/api/auth/csrf");
-  const { csrfToken } = JSON.parse(csrf.text);
-  const form = new URLSearchParams({ csrfToken, email, password, json: "true" }).toString();
-  const res = await call(localAddress, "POST", "/api/auth/callback/credentials", form, csrf.cookies.join("; "), "application/x-www-form-urlencoded");
-  const url = res.text ? (JSON.parse(res.text) as { url: string }).url : "";
-  return { status: res.status, error: new URL(url, APP_URL).searchParams.get("error"), signedIn: res.cookies.some((c) => c.includes("session-token=")) };
-}
-
-describe("failed sign-in limits", () => {
-  it("slows, then refuses an e-mail after 10 failures, even with the right password, with a clear message", async () => {
+describe("sign-in limits", () => {
+  it("checks at most the limit of 100 parallel wrong guesses against the hash; the owner elsewhere still gets in", async () => {
     const { email } = await freshGroup();
-    const from = "127.0.0.21";
-    const times: number[] = [];
-    for (let i = 0; i < 10; i += 1) {
-      const started = Date.now();
-      const res = await signInFrom(from, email, `wrong-password-${i}`);
-      times.push(Date.now() - started);
-      expect(res).toMatchObject({ status: 401, error: "CredentialsSignin", signedIn: false });
-    }
-    // From the third failure on, each try waits 250 ms longer: lower bounds
-    // only, since a busy machine can add time but never take the wait away.
-    expect(times[5]).toBeGreaterThanOrEqual(750);
-    expect(times[9]).toBeGreaterThanOrEqual(1_750);
+    const from = "127.0.0.41";
+    const csrf = await csrfFrom(from);
+    const answers = await Promise.all(Array.from({ length: 100 }, (_, i) => signInFrom(from, email, `wrong-guess-${i}`, { csrf })));
+    const checked = answers.filter((a) => a.error === PLAIN_MISS).length;
+    const refused = answers.filter((a) => a.error && PAIR_REFUSAL.test(a.error)).length;
+    expect(answers.every((a) => a.status === 401 && !a.signedIn)).toBe(true);
+    expect(checked).toBeGreaterThanOrEqual(1);
+    expect(checked).toBeLessThanOrEqual(PAIR_LIMIT);
+    expect(checked + refused).toBe(100);
 
-    const refused = await signInFrom(from, email, PASSWORD);
-    expect(refused.status).toBe(401);
-    expect(refused.signedIn).toBe(false);
-    expect(refused.error).toMatch(/Too many failed sign-ins for this e-mail.*try again in 15 minutes/);
-
-    // The same answer for an address without an account: the limit reveals nothing.
-    const unknown = uniqueEmail("ghost");
-    for (let i = 0; i < 10; i += 1) await signInFrom(from, unknown, "guess");
-    expect((await signInFrom(from, unknown, "guess")).error).toBe(refused.error);
-
-    // The count lives in PostgreSQL, so every app server sees it.
-    const rows = await testDb()("sign_in_failures").where({ email }).count("* as n").first();
-    expect(Number(rows?.n)).toBe(10);
-    // Once the failures age out of the 15-minute window, the right password works again.
-    await testDb()("sign_in_failures").where({ email }).update({ at: testDb().raw("now() - interval '16 minutes'") });
-    expect((await signInFrom(from, email, PASSWORD)).signedIn).toBe(true);
+    // Even the right password is refused from there now ...
+    expect((await signInFrom(from, email, PASSWORD)).error).toMatch(PAIR_REFUSAL);
+    // ... but the owner on another network is not locked out by a stranger.
+    expect((await signInFrom("127.0.0.42", email, PASSWORD)).signedIn).toBe(true);
   }, 60_000);
 
-  it("refuses a client address after 50 failures across many e-mails", async () => {
-    const from = "127.0.0.22";
+  it("is not escaped by sending another X-Forwarded-For with every guess", async () => {
     const { email } = await freshGroup();
-    // Earlier failures from this address, as if made a minute ago across many e-mails.
-    await testDb()("sign_in_failures").insert(
-      Array.from({ length: 50 }, (_, i) => ({ email: `spray-${i}@accounts.test`, client: from, at: testDb().raw("now() - interval '1 minute'") })),
-    );
+    const from = "127.0.0.44";
+    const answers = [];
+    // The test server trusts one proxy hop, as behind one load balancer: the client writes what it
+    // likes on the left, the proxy appends the address it saw (here the same one every time).
+    for (let i = 0; i < PAIR_LIMIT + 3; i += 1) {
+      const forged = { "x-forwarded-for": `203.0.113.${i + 1}, ${from}`, "x-cantrove-client": `198.51.100.${i}` };
+      answers.push(await signInFrom(from, email, `wrong-${i}`, { headers: forged }));
+    }
+    expect(answers.slice(0, PAIR_LIMIT).map((a) => a.error)).toEqual(Array(PAIR_LIMIT).fill(PLAIN_MISS));
+    for (const a of answers.slice(PAIR_LIMIT)) expect(a.error).toMatch(PAIR_REFUSAL);
+  }, 60_000);
+
+  it("backs off in steps, the same for an unknown address, and a password reset opens it again", async () => {
+    const { email } = await freshGroup();
+    const from = "127.0.0.45";
+    for (let i = 0; i < 5; i += 1) expect((await signInFrom(from, email, `wrong-${i}`)).error).toBe(PLAIN_MISS);
+    const first = await signInFrom(from, email, PASSWORD);
+    expect(first.error).toMatch(/Try again in a minute/);
+    // The same refusal for an address with no account: the limit says nothing about who has one.
+    const ghost = uniqueEmail("ghost");
+    for (let i = 0; i < 5; i += 1) await signInFrom(from, ghost, "guess-guess");
+    expect((await signInFrom(from, ghost, "guess-guess")).error).toBe(first.error);
+
+    // The minute passes (its window is moved into the past): 4 more tries, then a quarter of an hour.
+    await testDb()("rate_limits").whereRaw("starts_with(key, ?)", [`sign-in-pair-minute:${email}|`]).update({ expire: Date.now() - 1 });
+    for (let i = 0; i < 4; i += 1) expect((await signInFrom(from, email, `again-${i}`)).error).toBe(PLAIN_MISS);
+    expect((await signInFrom(from, email, PASSWORD)).error).toMatch(/Try again in 1[45] minutes/);
+
+    // The reset mail is the way out: after it, the new password works from that same address.
+    await new ApiClient().json("POST", "/api/password-reset", { email });
+    const token = await linkToken(email, "password_reset", "reset");
+    expect((await new ApiClient().json("POST", "/api/password-reset/confirm", { token, password: "a-fresh-long-password" })).status).toBe(200);
+    expect((await signInFrom(from, email, "a-fresh-long-password")).signedIn).toBe(true);
+  }, 60_000);
+
+  it("refuses a client address after 50 failures across many e-mails, and no other address", async () => {
+    const { email } = await freshGroup();
+    const from = "127.0.0.46";
+    const csrf = await csrfFrom(from);
+    const answers = await Promise.all(Array.from({ length: 50 }, (_, i) => signInFrom(from, `spray-${i}-${email}`, "guess-guess", { csrf })));
+    expect(answers.every((a) => a.error === PLAIN_MISS)).toBe(true);
     const res = await signInFrom(from, email, PASSWORD);
     expect(res.signedIn).toBe(false);
-    expect(res.error).toMatch(/Too many failed sign-ins from this network.*try again in 14 minutes/);
-    // Another address is not affected.
-    expect((await signInFrom("127.0.0.23", email, PASSWORD)).signedIn).toBe(true);
+    expect(res.error).toMatch(/Too many failed sign-ins from your network\. Try again in 1[45] minutes/);
+    expect((await signInFrom("127.0.0.47", email, PASSWORD)).signedIn).toBe(true);
+  }, 60_000);
+
+  it("keeps its counts in PostgreSQL, where every app server sees them, and gives the try back on success", async () => {
+    const { email } = await freshGroup();
+    const from = "127.0.0.48";
+    await signInFrom(from, email, "wrong-wrong");
+    const pair = await testDb()("rate_limits").where({ key: `sign-in-pair-quarter:${email}|${from}` }).first();
+    expect(pair.points).toBe(1);
+    expect((await signInFrom(from, email, PASSWORD)).signedIn).toBe(true);
+    expect(await testDb()("rate_limits").where({ key: `sign-in-pair-quarter:${email}|${from}` }).first()).toBeUndefined();
+    expect((await testDb()("rate_limits").where({ key: `sign-in-client:${from}` }).first()).points).toBe(1);
   });
 });

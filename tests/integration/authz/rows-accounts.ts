@@ -110,6 +110,20 @@ export const rows: AuthzRow[] = [
     expect: ANYONE_INVALID,
   },
   {
+    route: "app/api/verify-email/route.ts",
+    method: "POST",
+    path: () => "/api/verify-email",
+    body: () => ({ token: "too-short" }),
+    expect: ANYONE_INVALID,
+  },
+  {
+    route: "app/api/verify-email/resend/route.ts",
+    method: "POST",
+    path: () => "/api/verify-email/resend",
+    body: () => ({ email: "not-an-email" }),
+    expect: ANYONE_INVALID,
+  },
+  {
     route: "app/api/me/groups/route.ts",
     method: "GET",
     path: () => "/api/me/groups",

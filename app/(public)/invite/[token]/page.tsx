@@ -1,12 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { getServerSession } from "next-auth";
 import { AcceptAsMember, AcceptAsNewPerson } from "@/components/accounts/accept-invitation";
 import { Card } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { findInvitationByToken } from "@/lib/accounts/invitations";
 import { tokenSchema } from "@/lib/accounts/schemas";
-import { authOptions } from "@/lib/auth/options";
+import { getSessionUserId } from "@/lib/auth/session";
 import { ROLE_LABEL } from "@/lib/auth/roles";
 import { findUserEmail } from "@/lib/accounts/queries";
 
@@ -54,8 +53,8 @@ async function Body({ token, invitation }: { token: string; invitation: NonNulla
       </Card>
     );
   }
-  const session = await getServerSession(authOptions);
-  const signedInEmail = session?.userId ? await findUserEmail(session.userId) : null;
+  const userId = await getSessionUserId();
+  const signedInEmail = userId ? await findUserEmail(userId) : null;
   const next = `/invite/${token}`;
   if (!signedInEmail) {
     return (
@@ -65,6 +64,9 @@ async function Body({ token, invitation }: { token: string; invitation: NonNulla
         <Link className="font-semibold" href={`/signin?next=${encodeURIComponent(next)}&email=${encodeURIComponent(invitation.email)}`}>
           Sign in as {invitation.email}
         </Link>
+        <p className="mt-2 text-sm text-ink-soft">
+          Never signed in, or forgot the password? <Link href="/forgot">Set a new one by e-mail</Link>, then come back to this link.
+        </p>
       </Card>
     );
   }

@@ -1,6 +1,5 @@
-import { getServerSession } from "next-auth";
 import { endpoint } from "@/lib/api/endpoint";
-import { authOptions } from "@/lib/auth/options";
+import { getSessionUserId } from "@/lib/auth/session";
 import { acceptInvitationInputSchema } from "@/lib/accounts/schemas";
 import { acceptInvitation } from "@/lib/accounts/invitations";
 import { ACCOUNT_LIMITS } from "@/lib/accounts/limits";
@@ -12,8 +11,7 @@ export const dynamic = "force-dynamic";
 export const POST = endpoint(
   { who: "anyone", body: acceptInvitationInputSchema, status: 201, limits: [{ rule: ACCOUNT_LIMITS.tokenPerClient, by: "client" }] },
   async ({ body }) => {
-    const session = await getServerSession(authOptions);
-    const result = await acceptInvitation(body, session?.userId || null);
+    const result = await acceptInvitation(body, await getSessionUserId());
     return { group: { id: result.groupId }, role: result.role, email: result.email, newAccount: result.newAccount };
   },
 );

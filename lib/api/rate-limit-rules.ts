@@ -1,0 +1,24 @@
+// Safe to import anywhere: the shape of a limit and the pure parts of its answer.
+
+export interface LimitRule {
+  /** Unique per rule: the limiter and its keys are named after it. */
+  name: string;
+  /** How many points a key may use per window. */
+  points: number;
+  durationSec: number;
+  /** Once over, the key stays refused this long (default: until the window ends). */
+  blockDurationSec?: number;
+}
+
+/** Whole seconds to wait, never 0, from the limiter's milliseconds. */
+export function retryAfterSeconds(msBeforeNext: number): number {
+  return Math.max(1, Math.ceil(msBeforeNext / 1000));
+}
+
+/** "a minute", "15 minutes", "2 hours": how a wait reads in a message. */
+export function waitText(seconds: number): string {
+  if (seconds <= 60) return "a minute";
+  const minutes = Math.ceil(seconds / 60);
+  if (minutes < 120) return `${minutes} minutes`;
+  return `${Math.ceil(minutes / 60)} hours`;
+}
