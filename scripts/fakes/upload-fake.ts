@@ -2,8 +2,7 @@ import http from "node:http";
 import { createHmac, createHash, timingSafeEqual } from "node:crypto";
 import { mkdirSync, existsSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import path from "node:path";
-import { photoKind } from "../../lib/uploads/photo-kind";
-import { safeFileName } from "../../lib/uploads/photo-rules";
+import { servedHeaders } from "./upload-served";
 
 // A loopback stand-in for the hosted upload service, speaking the protocol the
 // uploadthing SDK uses: signed PUTs of multipart files, route metadata, the
@@ -44,20 +43,6 @@ async function readBody(req: http.IncomingMessage): Promise<Buffer> {
   const chunks: Buffer[] = [];
   for await (const chunk of req) chunks.push(chunk as Buffer);
   return Buffer.concat(chunks);
-}
-
-/** Headers for serving a stored file, decided by its bytes, never by its declared type or name. */
-export async function servedHeaders(bytes: Uint8Array, name: string): Promise<Record<string, string>> {
-  const type = await photoKind(bytes);
-  const filename = safeFileName(name, type);
-  return {
-    "content-type": type ?? "application/octet-stream",
-    "content-disposition": `${type ? "inline" : "attachment"}; filename="${filename}"`,
-    "x-content-type-options": "nosniff",
-    "content-security-policy": "default-src 'none'; img-src 'self'; sandbox",
-    "cross-origin-resource-policy": "cross-origin",
-    "cache-control": "public, max-age=31536000, immutable",
-  };
 }
 
 const CORS = {
