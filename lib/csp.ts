@@ -4,7 +4,7 @@
  * header and puts it on its own scripts). Pure, so it is unit tested.
  *
  * Where uploads go and come from is read from the environment at run time:
- * the upload service's origins (UPLOADTHING_INGEST_URL, UPLOADTHING_API_URL)
+ * the upload service's origins (UPLOADTHING_INGEST_URL, UPLOADTHING_API_URL), the file host (UPLOAD_ORIGIN)
  * and any further ones in CANTROVE_UPLOAD_ORIGINS (space-separated, e.g. a
  * hosted upload service or a separate file host). A loopback origin is kept
  * only in local mode — APP_URL itself on loopback, as `npm start` and
@@ -38,7 +38,7 @@ export function isLocalMode(env: Env): boolean {
 /** The exact origins the browser may send uploads to and show uploaded files from. */
 export function uploadOrigins(env: Env): string[] {
   const local = isLocalMode(env);
-  const values = [env.UPLOADTHING_INGEST_URL, env.UPLOADTHING_API_URL, ...(env.CANTROVE_UPLOAD_ORIGINS ?? "").split(/\s+/)];
+  const values = [env.UPLOADTHING_INGEST_URL, env.UPLOADTHING_API_URL, env.UPLOAD_ORIGIN, ...(env.CANTROVE_UPLOAD_ORIGINS ?? "").split(/\s+/)];
   const origins = new Set<string>();
   for (const value of values) {
     const url = originOf(value);

@@ -12,6 +12,7 @@ const envSchema = z.object({
   MAIL_API_URL: z.string().url().default("http://127.0.0.1:8025"),
   MAIL_FROM: z.string().default("Cantrove <no-reply@cantrove.test>"),
   UPLOADTHING_TOKEN: z.string().optional(),
+  UPLOAD_ORIGIN: z.string().url({ message: "UPLOAD_ORIGIN must be a URL such as https://files.example.org" }).optional(),
   TILE_URL: z.string().default("/tiles/{z}/{x}/{y}.png"),
   TILE_ATTRIBUTION: z.string().default("Map: Larkhollow demo town data (Cantrove, invented), CC0"),
 });

@@ -6,7 +6,24 @@ import { sendMail } from "@/lib/mail/outbox";
 import { LEVEL_LABEL, shouldAlert } from "./fill";
 import { findPublicDrive, findPublicDropPoint } from "./public-queries";
 import type { FillReportInput, PledgeInput } from "./schemas";
+import { binFullAlert, confirmationAddressKey, pledgeConfirmation } from "./public-mail";
 import { lastHauls } from "./tallies";
+
+/**
+ * True for the first pledge of the day (UTC) naming this address on this
+ * drive: the primary key decides, so concurrent pledges cannot both win.
+ */
+async function claimConfirmation(groupId: string, driveId: string, email: string): Promise<boolean> {
+  const today = db.raw("(now() at time zone 'UTC')::date");
+  const claimed = await db("pledge_confirmations")
+    .insert({ group_id: groupId, drive_id: driveId, address_hash: confirmationAddressKey(email), day: today })
+    .onConflict(["drive_id", "address_hash", "day"])
+    .ignore()
+    .returning("day");
+  // Yesterday's claims decide nothing any more; the key's drive prefix keeps this cheap.
+  if (claimed.length) await db("pledge_confirmations").where({ drive_id: driveId }).andWhere("day", "<", db.raw("(now() at time zone 'UTC')::date - 1")).del();
+  return claimed.length > 0;
+}
 
 export async function createPledge(slug: string, input: PledgeInput) {
   const drive = await findPublicDrive(slug);
@@ -25,22 +42,18 @@ export async function createPledge(slug: string, input: PledgeInput) {
     })
     .returning(["id"]);
   let mailed = false;
-  if (input.email) {
-    const link = `${env().APP_URL}/drives/${drive.slug}`;
-    const text = [
-      `Thank you${input.name ? `, ${input.name}` : ""}!`,
-      "",
-      `You plan to bring about ${input.bags} bag${input.bags === 1 ? "" : "s"} of cans to ${point.name} on ${input.bringOn} for the ${drive.name}.`,
-      point.hours ? `Opening hours: ${point.hours}.` : "",
-      "",
-      "Wanted: standard 355 mL aluminium drink cans, undented, not crushed, rinsed.",
-      "Please keep back slim, tall and steel cans.",
-      "",
-      `The drive's page: ${link}`,
-      "",
-      `— ${drive.groupName}`,
-    ].filter((l, i, a) => l !== "" || a[i - 1] !== "");
-    await sendMail({ groupId: drive.groupId, to: input.email, subject: `Your pledge for the ${drive.name}`, text: text.join("\n"), kind: "pledge-confirmation" });
+  if (input.email && (await claimConfirmation(drive.groupId, drive.id, input.email))) {
+    const mail = pledgeConfirmation({
+      driveName: drive.name,
+      groupName: drive.groupName,
+      pointName: point.name,
+      pointHours: point.hours ?? null,
+      bags: input.bags,
+      bringOn: input.bringOn,
+      donorName: input.name,
+      driveUrl: `${env().APP_URL}/drives/${drive.slug}`,
+    });
+    await sendMail({ groupId: drive.groupId, to: input.email, ...mail, kind: "pledge-confirmation" });
     mailed = true;
   }
   return { id: row.id as string, mailed };
@@ -64,15 +77,9 @@ export async function createFillReport(slug: string, dropPointId: string, input:
   });
   if (result.alerted) {
     const organisers = await db("memberships as m").join("users as u", "u.id", "m.user_id").select("u.email").where({ "m.group_id": drive.groupId, "m.role": "organiser" });
-    const text = [
-      `Someone at ${point.name} reports the bin is: ${LEVEL_LABEL[input.level]}.`,
-      input.note ? `Their note: ${input.note}` : "",
-      "",
-      "Plan a haul soon. You will not get another alert for this bin until it has been hauled.",
-      `${env().APP_URL}/drives/${drive.slug}`,
-    ].filter(Boolean);
+    const mail = binFullAlert({ pointName: point.name, levelLabel: LEVEL_LABEL[input.level], note: input.note, driveUrl: `${env().APP_URL}/drives/${drive.slug}` });
     for (const o of organisers) {
-      await sendMail({ groupId: drive.groupId, to: o.email, subject: `Bin filling up: ${point.name}`, text: text.join("\n"), kind: "bin-full" });
+      await sendMail({ groupId: drive.groupId, to: o.email, ...mail, kind: "bin-full" });
     }
   }
   return result;

@@ -1,12 +1,17 @@
 import http from "node:http";
 import { createHmac, createHash, timingSafeEqual } from "node:crypto";
-import { mkdirSync, existsSync, readFileSync, writeFileSync } from "node:fs";
+import { mkdirSync, existsSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import path from "node:path";
+import { servedHeaders } from "./upload-served";
 
 // A loopback stand-in for the hosted upload service, speaking the protocol the
 // uploadthing SDK uses: signed PUTs of multipart files, route metadata, the
-// signed callback to the app, and the app's callback result. Files are kept on
-// disk so an upload survives a restart.
+// signed callback to the app, the app's callback result and UTApi's
+// deleteFiles. Files are kept on disk so an upload survives a restart.
+//
+// Every file is served inert: the content type comes from its bytes (one of
+// the three photo types, else an octet-stream download), with nosniff and a
+// sandboxing CSP, so even a file the app has not yet refused cannot run.
 export interface UploadFake {
   port: number;
   origin: string;
@@ -47,9 +52,11 @@ const CORS = {
   "access-control-expose-headers": "x-ut-range-start",
 };
 
-export async function startUploadFake(opts: { dir: string; port: number; apiKey: string }): Promise<UploadFake> {
+/** fileOrigin: where files are said to be served (UPLOAD_ORIGIN); a host name that reaches this port. */
+export async function startUploadFake(opts: { dir: string; port: number; apiKey: string; fileOrigin?: string }): Promise<UploadFake> {
   mkdirSync(opts.dir, { recursive: true });
   const origin = `http://127.0.0.1:${opts.port}`;
+  const fileOrigin = opts.fileOrigin ? new URL(opts.fileOrigin).origin : origin;
   const pending = new Map<string, Pending>();
   const waiting = new Map<string, (serverData: unknown) => void>();
 
@@ -80,13 +87,26 @@ export async function startUploadFake(opts: { dir: string; port: number; apiKey:
         waiting.delete(body.fileKey);
         return send(200, { ok: true });
       }
+      if (req.method === "POST" && url.pathname === "/v6/deleteFiles") {
+        if (req.headers["x-uploadthing-api-key"] !== opts.apiKey) return send(401, { error: "bad api key" });
+        const body = JSON.parse((await readBody(req)).toString("utf8"));
+        let deletedCount = 0;
+        for (const key of (body.fileKeys ?? []) as string[]) {
+          if (!/^[\w-]+$/.test(key) || !existsSync(path.join(opts.dir, key))) continue;
+          rmSync(path.join(opts.dir, key), { force: true });
+          rmSync(path.join(opts.dir, key + ".json"), { force: true });
+          deletedCount += 1;
+        }
+        return send(200, { success: true, deletedCount });
+      }
       const served = url.pathname.match(/^\/f\/([\w-]+)$/);
-      if (req.method === "GET" && served) {
+      if ((req.method === "GET" || req.method === "HEAD") && served) {
         const file = path.join(opts.dir, served[1]);
         if (!existsSync(file)) return send(404, { error: "not found" });
         const meta = JSON.parse(readFileSync(file + ".json", "utf8"));
-        res.writeHead(200, { "content-type": meta.type, "cache-control": "public, max-age=31536000, immutable", ...CORS });
-        return res.end(readFileSync(file));
+        const bytes = readFileSync(file);
+        res.writeHead(200, { ...(await servedHeaders(bytes, String(meta.name ?? ""))), "content-length": String(bytes.length), ...CORS });
+        return res.end(req.method === "HEAD" ? undefined : bytes);
       }
       const keyMatch = url.pathname.match(/^\/([\w-]+)$/);
       if (req.method === "HEAD" && keyMatch) {
@@ -130,9 +150,9 @@ export async function startUploadFake(opts: { dir: string; port: number; apiKey:
       customId: null,
       lastModified: Date.now(),
       key,
-      url: `${origin}/f/${key}`,
-      appUrl: `${origin}/f/${key}`,
-      ufsUrl: `${origin}/f/${key}`,
+      url: `${fileOrigin}/f/${key}`,
+      appUrl: `${fileOrigin}/f/${key}`,
+      ufsUrl: `${fileOrigin}/f/${key}`,
       fileHash,
     };
     writeFileSync(path.join(opts.dir, key), bytes);

@@ -53,7 +53,9 @@ export async function startStack(opts: StackOptions): Promise<Stack> {
   }
   const apiKey = `sk_local_${persistentSecret(opts.stateDir).slice(0, 24)}`;
   const mail = await startMailFake({ dir: path.join(opts.stateDir, "mail"), smtpPort: opts.smtpPort, apiPort: opts.mailApiPort });
-  const uploads = await startUploadFake({ dir: path.join(opts.stateDir, "uploads"), port: opts.uploadPort, apiKey });
+  // UPLOAD_ORIGIN: serve files under another host name (another site from the app), as in production.
+  const uploadOrigin = process.env.UPLOAD_ORIGIN || undefined;
+  const uploads = await startUploadFake({ dir: path.join(opts.stateDir, "uploads"), port: opts.uploadPort, apiKey, fileOrigin: uploadOrigin });
   const appUrl = `http://127.0.0.1:${opts.appPort}`;
   const env: Record<string, string> = {
     DATABASE_URL: databaseUrl,
@@ -68,6 +70,7 @@ export async function startStack(opts: StackOptions): Promise<Stack> {
     UPLOADTHING_API_URL: uploads.origin,
     UPLOADTHING_IS_DEV: "false",
     UPLOADTHING_CALLBACK_URL: `${appUrl}/api/uploadthing`,
+    ...(uploadOrigin ? { UPLOAD_ORIGIN: uploadOrigin } : {}),
     NEXT_TELEMETRY_DISABLED: "1",
   };
   for (const [k, v] of Object.entries(env)) process.env[k] = v;

@@ -65,7 +65,11 @@ describe("organiser sets up a drive; the public uses it", () => {
     await org.page.waitForURL(/\/organise\/drop-points\//);
     const picker = org.page.getByLabel("Add a photo of the bin");
     await picker.setInputFiles({ name: "notes.txt", mimeType: "text/plain", buffer: Buffer.from("not a photo") });
-    await org.page.getByText("“notes.txt” is not a picture").waitFor();
+    await org.page.getByText("“notes.txt” is not a JPEG, PNG or WebP photo").waitFor();
+    // A text file renamed .png gets past the picker but not the server, which reads its bytes.
+    await picker.setInputFiles({ name: "fake.png", mimeType: "image/png", buffer: Buffer.from("not an image\n") });
+    await org.page.getByText("That file is not a JPEG, PNG or WebP photo, so it was not added.").waitFor({ timeout: 30_000 });
+    expect(await org.page.getByText("Photo added.").count()).toBe(0);
     await picker.setInputFiles({ name: "bin.png", mimeType: "image/png", buffer: pngOf(64) });
     await org.page.getByText("Photo added.").waitFor({ timeout: 30_000 });
     await org.page.getByRole("img", { name: "Photo of the bin at Lantern Street bakery" }).waitFor();

@@ -8,6 +8,7 @@ import { startStack, type Stack } from "@/scripts/lib/stack";
 import { startClusterAt, stopClusterAt } from "@/scripts/lib/postgres";
 import { startMailFake, readMail, type MailFake } from "@/scripts/fakes/mail-fake";
 import { startUploadFake } from "@/scripts/fakes/upload-fake";
+import { pngBytes } from "@/tests/support/images";
 import { waitForHealthy } from "@/scripts/lib/wait";
 import { freePort } from "@/tests/support/ports";
 import { ApiClient } from "@/tests/support/http";
@@ -161,14 +162,15 @@ describe("faults", () => {
     // What the browser's upload button does: ask the app for a signed URL, then PUT the file there.
     const attempt = async (): Promise<string> => {
       const res = await organiser.request("POST", "/api/uploadthing?actionType=upload&slug=dropPointPhoto", {
-        files: [{ name: "porch.png", size: 68, type: "image/png", lastModified: Date.now() }],
+        files: [{ name: "porch.png", size: pngBytes().length, type: "image/png", lastModified: Date.now() }],
         input: { dropPointId: point.id },
       }, { "x-uploadthing-package": "@uploadthing/react", "x-uploadthing-version": "7.7.4" });
       const text = await res.text();
       if (!res.ok) return `presign refused: HTTP ${res.status} ${text.slice(0, 160)}`;
       const [signed] = JSON.parse(text) as { url: string }[];
       const form = new FormData();
-      form.set("file", new Blob([new Uint8Array(68)], { type: "image/png" }), "porch.png");
+      // A real PNG: the app refuses anything whose bytes are not a photo.
+      form.set("file", new Blob([new Uint8Array(pngBytes())], { type: "image/png" }), "porch.png");
       try {
         const put = await fetch(signed.url, { method: "PUT", body: form, signal: AbortSignal.timeout(10_000) });
         return put.ok ? "uploaded" : `upload refused: HTTP ${put.status}`;

@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useRef, useState } from "react";
 import { FormError } from "@/components/ui/field";
-import { photoProblem, useUploadThing } from "@/lib/uploads/react";
+import { PHOTO_ACCEPT, photoProblem, uploadRefusal, useUploadThing } from "@/lib/uploads/react";
 
 export function PhotoUploader({ dropPointId }: { dropPointId: string }) {
   const router = useRouter();
@@ -14,10 +14,12 @@ export function PhotoUploader({ dropPointId }: { dropPointId: string }) {
   const { startUpload, isUploading } = useUploadThing("dropPointPhoto", {
     uploadProgressGranularity: "fine",
     onUploadProgress: setProgress,
-    onClientUploadComplete: () => {
+    onClientUploadComplete: (results) => {
       setProgress(null);
-      setDone(true);
       if (input.current) input.current.value = "";
+      const refused = uploadRefusal(results);
+      if (refused) return setError(refused);
+      setDone(true);
       router.refresh();
     },
     onUploadError: (e) => {
@@ -48,7 +50,7 @@ export function PhotoUploader({ dropPointId }: { dropPointId: string }) {
     <div className="flex flex-col gap-2">
       <label htmlFor="dp-photo" className="font-semibold">Add a photo of the bin</label>
       <p id="dp-photo-hint" className="text-sm text-ink-faint">A picture (JPEG, PNG or WebP), at most 4 MB. It is shown on the public page.</p>
-      <input ref={input} id="dp-photo" type="file" accept="image/*" aria-describedby="dp-photo-hint" onChange={onPick} disabled={isUploading} className="min-h-11" />
+      <input ref={input} id="dp-photo" type="file" accept={PHOTO_ACCEPT} aria-describedby="dp-photo-hint" onChange={onPick} disabled={isUploading} className="min-h-11" />
       {progress !== null ? (
         <div>
           <div role="progressbar" aria-label="Upload progress" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(progress)} className="h-3 overflow-hidden rounded-full bg-paper-deep">

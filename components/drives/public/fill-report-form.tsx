@@ -7,7 +7,7 @@ import { FormError } from "@/components/ui/field";
 import { fetchJson } from "@/lib/api/client";
 import { FILL_LEVELS } from "@/lib/drives/schemas";
 import { LEVEL_LABEL } from "@/lib/drives/fill";
-import { photoProblem, useUploadThing } from "@/lib/uploads/react";
+import { PHOTO_ACCEPT, photoProblem, uploadRefusal, useUploadThing } from "@/lib/uploads/react";
 import { publicDropPointsQuery } from "@/lib/drives/query-options";
 
 export function FillReportForm({ slug, point, onDone }: { slug: string; point: { id: string; name: string }; onDone: () => void }) {
@@ -26,7 +26,10 @@ export function FillReportForm({ slug, point, onDone }: { slug: string; point: {
         setProgress(0);
         // The report counts even if the photo fails; say so instead of failing it.
         await startUpload([photo], { fillReportId: report.id })
-          .then(() => setPhotoNote("Your photo is attached."))
+          .then((results) => {
+            const refused = uploadRefusal(results);
+            setPhotoNote(refused ? `The report is in. ${refused}` : "Your photo is attached.");
+          })
           .catch((e: Error) => setPhotoNote(`The report is in, but the photo was not saved: ${e.message}`))
           .finally(() => setProgress(null));
       }
@@ -71,11 +74,11 @@ export function FillReportForm({ slug, point, onDone }: { slug: string; point: {
       <label htmlFor={`note-${point.id}`} className="font-semibold">Anything else? (optional)</label>
       <textarea id={`note-${point.id}`} value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} rows={2} className="rounded-lg border-2 border-ink/40 bg-white px-3 py-2" />
       <label htmlFor={`photo-${point.id}`} className="font-semibold">Photo of the bin (optional)</label>
-      <p id={`photo-hint-${point.id}`} className="text-sm text-ink-faint">A picture, at most 4 MB.</p>
+      <p id={`photo-hint-${point.id}`} className="text-sm text-ink-faint">A JPEG, PNG or WebP photo, at most 4 MB.</p>
       <input
         id={`photo-${point.id}`}
         type="file"
-        accept="image/*"
+        accept={PHOTO_ACCEPT}
         aria-describedby={`photo-hint-${point.id}`}
         className="min-h-11"
         onChange={(e) => {
