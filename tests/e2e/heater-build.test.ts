@@ -67,7 +67,7 @@ describe("a builder plans, saves, claims, builds and prints a heater unit", () =
     await page.getByRole("button", { name: "Save as a heater unit" }).click();
     await page.waitForURL(/\/units\/[0-9a-f-]{36}$/, { timeout: 20_000 });
     const unitUrl = new URL(page.url()).pathname;
-    await expect(page.getByRole("heading", { name }).isVisible()).resolves.toBe(true);
+    await page.getByRole("heading", { name }).waitFor();
 
     // Target = Σ unit cans + ⌈5 %⌉ spare (PRODUCT.md computation 2).
     const after = await driveTarget();
@@ -87,7 +87,8 @@ describe("a builder plans, saves, claims, builds and prints a heater unit", () =
     await page.getByRole("button", { name: "Record built in" }).click();
     await page.waitForFunction(() => document.querySelector('[data-figure="built-in"]')?.textContent === "12 of 132");
     expect(await figure("claimed")).toBe("120");
-    expect(await page.locator("[data-state]").first().getAttribute("data-state")).toBe("building");
+    // The figures are live (react-query); the state badge follows with the page's refresh.
+    await page.waitForFunction(() => document.querySelector("[data-state]")?.getAttribute("data-state") === "building");
 
     // Past its need: 132 cans + ⌈132 × 5 %⌉ = 139 (PRODUCT.md's spare rule), 132 claimed or built in, 7 left.
     expect(await figure("need")).toBe("139");
