@@ -1,69 +1,72 @@
 "use client";
 
+import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Notice } from "@/components/ui/notice";
 import { formatNumber } from "@/lib/heaters/format";
-import { moveClaimsTo, postClaimAction } from "@/hooks/queries/heaters";
+import { needRefusalMessage } from "@/lib/heaters/need";
+import { heatersQuery, moveClaimsTo, postClaimAction, type HeaterSummary } from "@/hooks/queries/heaters";
+import { stockQuery } from "@/hooks/queries/ledger";
+import type { DriveStock } from "@/lib/ledger/schemas";
 import { QuantityAction } from "./quantity-action";
+import { UnitFigures } from "./unit-figures";
 
 export interface ClaimsView {
-  unitId: string;
-  cans: number;
+  unit: HeaterSummary;
+  driveId: string;
   rows: number;
-  claimed: number;
-  builtIn: number;
-  /** The drive's processed cans not claimed by any unit. */
-  driveUnclaimed: number;
-  drivePunched: number;
+  stock: DriveStock;
   installed: boolean;
   isOrganiser: boolean;
+  /** Why this person may not change the unit's cans (a builder on someone else's unit), or null. */
+  refusal: string | null;
   otherUnits: Array<{ id: string; name: string }>;
 }
 
-/** Cans claimed for the unit and built into it, with the ledger actions that change them. */
+/** Cans claimed for the unit and built into it, live, with the ledger actions that change them. */
 export function ClaimsPanel({ v }: { v: ClaimsView }) {
-  const toClaim = Math.max(0, v.cans - v.claimed - v.builtIn);
+  // Live figures: both reads start from the server's render and refresh after every action.
+  const unit = useQuery({ ...heatersQuery(), select: (list) => list.find((u) => u.id === v.unit.id) }).data ?? v.unit;
+  const stock = useQuery({ ...stockQuery(v.driveId), initialData: v.stock }).data;
   const [moveTo, setMoveTo] = useState(v.otherUnits[0]?.id ?? "");
   return (
     <div className="flex flex-col gap-4">
-      <dl className="grid grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-4">
-        <Figure id="needed" label="Cans needed" value={formatNumber(v.cans)} />
-        <Figure id="claimed" label="Claimed, not yet built in" value={formatNumber(v.claimed)} />
-        <Figure id="built-in" label="Built in" value={`${formatNumber(v.builtIn)} of ${formatNumber(v.cans)}`} />
-        <Figure id="to-claim" label="Still to claim" value={formatNumber(toClaim)} />
-      </dl>
-      <p className="text-sm text-ink-soft">
-        The drive has {formatNumber(v.driveUnclaimed)} finished or in-process cans no unit has claimed, {formatNumber(v.drivePunched)} of them punched.
+      <UnitFigures c={unit} />
+      <p className="text-sm text-ink-soft" data-testid="drive-unclaimed">
+        The drive has {formatNumber(stock.unclaimed)} finished or in-process cans no unit has claimed, {formatNumber(stock.stages.punched)} of them punched.
         Building in uses punched cans.
       </p>
       {v.installed ? (
         <Notice title="This heater is on the wall">It takes no more cans.</Notice>
+      ) : v.refusal ? (
+        <Notice title="Someone else builds this unit">{v.refusal}</Notice>
       ) : (
         <div className="grid gap-4 md:grid-cols-3">
           <QuantityAction
             id="claim-quantity"
             label="Claim cans"
-            hint="Sets cans aside for this unit"
-            initial={Math.max(1, Math.min(toClaim, v.driveUnclaimed))}
+            hint={`Sets cans aside for this unit; it still needs ${formatNumber(unit.remaining)}`}
+            initial={Math.max(1, Math.min(unit.remaining, stock.unclaimed))}
             submitLabel="Claim"
-            run={(q, key) => postClaimAction(v.unitId, "claims", q, key)}
+            check={(q) => (q > unit.remaining ? needRefusalMessage(unit) : null)}
+            run={(q, key) => postClaimAction(v.unit.id, "claims", q, key)}
           />
           <QuantityAction
             id="built-quantity"
             label="Record cans built in"
             hint={`One column is ${v.rows} cans`}
-            initial={Math.max(1, Math.min(v.rows, v.claimed))}
+            initial={Math.max(1, Math.min(v.rows, unit.claimed))}
             submitLabel="Record built in"
-            run={(q, key) => postClaimAction(v.unitId, "built-in", q, key)}
+            run={(q, key) => postClaimAction(v.unit.id, "built-in", q, key)}
           />
           <QuantityAction
             id="release-quantity"
             label="Release claimed cans"
             hint="Gives them back to the drive"
-            initial={Math.max(1, v.claimed)}
+            initial={Math.max(1, unit.claimed)}
             submitLabel="Release"
             variant="secondary"
-            run={(q, key) => postClaimAction(v.unitId, "releases", q, key)}
+            run={(q, key) => postClaimAction(v.unit.id, "releases", q, key)}
           />
         </div>
       )}
@@ -72,10 +75,10 @@ export function ClaimsPanel({ v }: { v: ClaimsView }) {
           <QuantityAction
             id="move-quantity"
             label="Cans to move"
-            initial={Math.max(1, v.claimed)}
+            initial={Math.max(1, unit.claimed)}
             submitLabel="Move claim"
             variant="secondary"
-            run={(q, key) => moveClaimsTo(v.unitId, moveTo, q, key)}
+            run={(q, key) => moveClaimsTo(v.unit.id, moveTo, q, key)}
           >
             <div className="flex flex-col gap-1">
               <label htmlFor="move-to" className="font-semibold">Move claimed cans to</label>
@@ -88,15 +91,6 @@ export function ClaimsPanel({ v }: { v: ClaimsView }) {
           </QuantityAction>
         </div>
       ) : null}
-    </div>
-  );
-}
-
-function Figure({ id, label, value }: { id: string; label: string; value: string }) {
-  return (
-    <div className="flex flex-col">
-      <dt className="text-sm text-ink-faint">{label}</dt>
-      <dd className="text-lg font-bold" data-figure={id}>{value}</dd>
     </div>
   );
 }

@@ -7,8 +7,13 @@ import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
 import { ApiError } from "@/lib/api/client";
 import { heaterKeys } from "@/hooks/queries/heaters";
+import { ledgerKeys } from "@/hooks/queries/ledger";
 
-/** A small form: how many cans, one button; the server's 409 or 422 shows next to it. */
+/**
+ * A small form: how many cans, one button; the server's 409 or 422 shows next
+ * to it. `check` refuses before sending what the server would refuse anyway
+ * (with the server's own message), e.g. a claim past the unit's need.
+ */
 export function QuantityAction({
   id,
   label,
@@ -17,6 +22,7 @@ export function QuantityAction({
   submitLabel,
   variant = "primary",
   run,
+  check,
   children,
 }: {
   id: string;
@@ -26,6 +32,7 @@ export function QuantityAction({
   submitLabel: string;
   variant?: "primary" | "secondary";
   run: (quantity: number, key: string) => Promise<unknown>;
+  check?: (quantity: number) => string | null;
   children?: ReactNode;
 }) {
   const router = useRouter();
@@ -34,12 +41,14 @@ export function QuantityAction({
   const [typed, setTyped] = useState<string | null>(null);
   const text = typed ?? String(initial);
   const [done, setDone] = useState<string | null>(null);
+  const [refused, setRefused] = useState<string | null>(null);
   const action = useMutation({
     mutationFn: (quantity: number) => run(quantity, crypto.randomUUID()),
     onSuccess: async (_data, quantity) => {
       setDone(`${submitLabel}: ${quantity} cans recorded.`);
       setTyped(null);
-      await queryClient.invalidateQueries({ queryKey: heaterKeys.all });
+      // The unit's figures and the drive's stock are react-query reads; the rest of the page is the server's.
+      await Promise.all([queryClient.invalidateQueries({ queryKey: heaterKeys.all }), queryClient.invalidateQueries({ queryKey: ledgerKeys.all })]);
       router.refresh();
     },
   });
@@ -51,12 +60,30 @@ export function QuantityAction({
       onSubmit={(e) => {
         e.preventDefault();
         setDone(null);
-        action.mutate(Number(text));
+        const quantity = Number(text);
+        const refusal = check && Number.isInteger(quantity) && quantity > 0 ? check(quantity) : null;
+        setRefused(refusal);
+        if (refusal) {
+          action.reset();
+          return;
+        }
+        action.mutate(quantity);
       }}
     >
       {children}
-      <Field id={id} label={label} hint={hint} inputMode="numeric" value={text} error={fieldError} onChange={(e) => setTyped(e.target.value)} />
-      <FormError message={action.error && !fieldError ? action.error.message : null} />
+      <Field
+        id={id}
+        label={label}
+        hint={hint}
+        inputMode="numeric"
+        value={text}
+        error={fieldError}
+        onChange={(e) => {
+          setTyped(e.target.value);
+          setRefused(null);
+        }}
+      />
+      <FormError message={refused ?? (action.error && !fieldError ? action.error.message : null)} />
       {done ? (
         <p role="status" className="text-sm font-semibold text-moss-deep">
           {done}

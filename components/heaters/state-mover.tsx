@@ -5,23 +5,34 @@ import { useRouter } from "next/navigation";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/ui/field";
 import { moveHeater, heaterKeys } from "@/hooks/queries/heaters";
+import { ledgerKeys } from "@/hooks/queries/ledger";
+import { formatNumber } from "@/lib/heaters/format";
 import { HEATER_STATE_LABEL, stateIndexOf, type HeaterState } from "@/lib/heaters/unit-schemas";
 
 /** Buttons for the state moves this person may make; the server checks the same rule. */
-export function StateMover({ id, state, moves }: { id: string; state: HeaterState; moves: HeaterState[] }) {
+export function StateMover({ id, state, moves, refusal }: { id: string; state: HeaterState; moves: HeaterState[]; refusal?: string | null }) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const move = useMutation({
     mutationFn: (to: HeaterState) => moveHeater(id, to),
     onSuccess: async () => {
-      await queryClient.invalidateQueries({ queryKey: heaterKeys.all });
+      await Promise.all([queryClient.invalidateQueries({ queryKey: heaterKeys.all }), queryClient.invalidateQueries({ queryKey: ledgerKeys.all })]);
       router.refresh();
     },
   });
-  if (moves.length === 0) return <p className="text-ink-soft">No state change is open to you from here.</p>;
+  const released = move.data?.released ?? 0;
+  const done = move.data ? (
+    <p role="status" className="font-semibold text-moss-deep">
+      Now “{HEATER_STATE_LABEL[move.data.state]}”.
+      {released > 0 ? ` ${formatNumber(released)} claimed ${released === 1 ? "can" : "cans"} not built in went back to the drive.` : ""}
+    </p>
+  ) : null;
+  if (refusal) return <p className="text-ink-soft">{refusal}</p>;
+  if (moves.length === 0) return <>{done}<p className="text-ink-soft">No state change is open to you from here.</p></>;
   return (
     <div className="flex flex-col gap-2">
       <FormError message={move.error?.message} />
+      {done}
       <div className="flex flex-wrap gap-2">
         {moves.map((to) => {
           const back = stateIndexOf(to) < stateIndexOf(state);
@@ -32,6 +43,9 @@ export function StateMover({ id, state, moves }: { id: string; state: HeaterStat
           );
         })}
       </div>
+      {moves.includes("installed") && state !== "installed" ? (
+        <p className="text-sm text-ink-faint">Marking it on the wall gives any claimed cans not built in back to the drive.</p>
+      ) : null}
     </div>
   );
 }

@@ -1,3 +1,4 @@
+import { queryOptions } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/api/client";
 import type { HeaterCreateInput, HeaterState } from "@/lib/heaters/unit-schemas";
 
@@ -5,7 +6,25 @@ import type { HeaterCreateInput, HeaterState } from "@/lib/heaters/unit-schemas"
 export const heaterKeys = {
   all: ["heaters"] as const,
   detail: (id: string) => ["heaters", id] as const,
+  list: () => ["heaters", "list"] as const,
 };
+
+/** One entry of `GET /api/heaters`: the contract's fields plus the unit's need. */
+export interface HeaterSummary {
+  id: string;
+  name: string;
+  driveId: string | null;
+  builderId: string | null;
+  cans: number;
+  claimed: number;
+  builtIn: number;
+  state: HeaterState;
+  spare: number;
+  need: number;
+  remaining: number;
+}
+
+export const heatersQuery = () => queryOptions({ queryKey: heaterKeys.list(), queryFn: () => fetchJson<HeaterSummary[]>("/api/heaters") });
 
 export interface SavedHeater {
   id: string;
@@ -19,7 +38,7 @@ export function createHeater(input: HeaterCreateInput) {
 }
 
 export function moveHeater(id: string, state: HeaterState) {
-  return fetchJson<SavedHeater>(`/api/heaters/${id}/state`, { method: "POST", json: { state } });
+  return fetchJson<SavedHeater & { released: number }>(`/api/heaters/${id}/state`, { method: "POST", json: { state } });
 }
 
 export type ClaimAction = "claims" | "releases" | "built-in";

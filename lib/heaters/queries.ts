@@ -15,7 +15,10 @@ export interface HeaterUnitRow {
   driveId: string | null;
   driveName: string | null;
   driveSlug: string | null;
+  builderId: string | null;
   builderName: string | null;
+  /** The drive's spare allowance in percent (0 when the unit has no drive). */
+  sparePercent: number;
   unit: LengthUnit;
   coverage: "chamber" | "full";
   glazingWidth: number;
@@ -48,7 +51,9 @@ function unitColumns(q: Knex.QueryBuilder) {
       "h.drive_id as driveId",
       "d.name as driveName",
       "d.slug as driveSlug",
+      "h.builder_id as builderId",
       "u.name as builderName",
+      db.raw('coalesce(d.spare_percent, 0)::float as "sparePercent"'),
       "h.unit",
       "h.coverage",
       "h.glazing_width as glazingWidth",
@@ -150,25 +155,7 @@ export async function createHeaterUnit(
   return getHeaterUnit(actor.groupId, row.id);
 }
 
-/** Moves the state under a row lock so two people moving it at once cannot skip the rule. */
-export async function moveHeaterState(
-  groupId: string,
-  id: string,
-  to: HeaterState,
-  check: (from: HeaterState) => { ok: true } | { ok: false; reason: string },
-) {
-  if (!isUuid(id)) throw notFound("That heater unit");
-  await db.transaction(async (trx) => {
-    const row = await trx("heater_units").select("state").where({ id, group_id: groupId }).forUpdate().first();
-    if (!row) throw notFound("That heater unit");
-    const verdict = check(row.state);
-    if (!verdict.ok) throw new AppError("conflict", verdict.reason, { details: { state: row.state } });
-    await trx("heater_units").where({ id, group_id: groupId }).update({ state: to, state_changed_at: trx.fn.now() });
-  });
-  return getHeaterUnit(groupId, id);
-}
-
-function isUuid(id: string): boolean {
+export function isUuid(id: string): boolean {
   return /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id);
 }
 

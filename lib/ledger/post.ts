@@ -1,5 +1,6 @@
 import type { Knex } from "knex";
 import { AppError, conflict, notFound } from "@/lib/api/errors";
+import { needRefusalMessage } from "@/lib/heaters/need";
 import type { RejectReason, Stage } from "./schemas";
 
 // The one place ledger lines are written. postMovement hands the movement to
@@ -132,7 +133,12 @@ export function ledgerRefusal(error: unknown): AppError | null {
   const e = error as { code?: string; detail?: string };
   if (e?.code === "CT404") return notFound("That drive");
   if (e?.code !== "CT409") return null;
-  const d = JSON.parse(e.detail ?? "{}") as { kind: string; stage?: Stage; needed?: number; available?: number };
+  const d = JSON.parse(e.detail ?? "{}") as { kind: string; stage?: Stage; needed?: number; available?: number; remaining?: number; cans?: number; spare?: number };
+  if (d.kind === "need") {
+    // From the unit-need trigger (migration 20261203030000): the claim would pass cans + spare.
+    const n = { remaining: Number(d.remaining), cans: Number(d.cans), spare: Number(d.spare) };
+    return conflict(needRefusalMessage(n), { remaining: n.remaining });
+  }
   if (d.kind === "debit" && d.stage) {
     const have = Number(d.available);
     return conflict(`That needs ${Number(d.needed)} cans ${STAGE_LABEL[d.stage]}, but only ${have} left.`, { available: have, stage: d.stage });

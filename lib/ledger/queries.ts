@@ -1,6 +1,7 @@
 import "server-only";
 import { db } from "@/lib/db";
 import { notFound } from "@/lib/api/errors";
+import { unitNeed } from "@/lib/heaters/need";
 import { heaterClaims } from "./balances";
 import type { LedgerFilter } from "./schemas";
 
@@ -32,20 +33,36 @@ export async function listHauls(groupId: string, driveId: string, opts: { open?:
   }));
 }
 
+/** The contract's `GET /api/heaters`, plus each unit's need (cans + its spare share) and what it still needs. */
 export async function listHeatersWithClaims(groupId: string) {
   const [units, claims] = await Promise.all([
-    db("heater_units").select("id", "name", "drive_id", "cans", "state").where({ group_id: groupId }).orderBy("created_at"),
+    db("heater_units as h")
+      .leftJoin("drives as d", function () {
+        this.on("d.id", "=", "h.drive_id").andOn("d.group_id", "=", "h.group_id");
+      })
+      .select("h.id", "h.name", "h.drive_id", "h.builder_id", "h.cans", "h.state", db.raw("coalesce(d.spare_percent, 0)::float as spare_percent"))
+      .where("h.group_id", groupId)
+      .orderBy("h.created_at"),
     heaterClaims(groupId),
   ]);
-  return units.map((u) => ({
-    id: u.id as string,
-    name: u.name as string,
-    driveId: u.drive_id as string | null,
-    cans: u.cans as number,
-    claimed: claims[u.id]?.claimed ?? 0,
-    builtIn: claims[u.id]?.builtIn ?? 0,
-    state: u.state as string,
-  }));
+  return units.map((u) => {
+    const claimed = claims[u.id]?.claimed ?? 0;
+    const builtIn = claims[u.id]?.builtIn ?? 0;
+    const n = unitNeed(u.cans as number, Number(u.spare_percent), claimed, builtIn);
+    return {
+      id: u.id as string,
+      name: u.name as string,
+      driveId: u.drive_id as string | null,
+      builderId: u.builder_id as string | null,
+      cans: u.cans as number,
+      claimed,
+      builtIn,
+      state: u.state as string,
+      spare: n.spare,
+      need: n.need,
+      remaining: n.remaining,
+    };
+  });
 }
 
 export async function publicDriveId(slug: string): Promise<string> {
@@ -151,11 +168,6 @@ export async function listMyEntries(groupId: string, userId: string, limit = 15)
 export async function assertOwnDrive(groupId: string, driveId: string): Promise<void> {
   const row = await db("drives").select("id").where({ id: driveId, group_id: groupId }).first();
   if (!row) throw notFound("That drive");
-}
-
-export async function assertOwnHeater(groupId: string, heaterUnitId: string): Promise<void> {
-  const row = await db("heater_units").select("id").where({ id: heaterUnitId, group_id: groupId }).first();
-  if (!row) throw notFound("That heater unit");
 }
 
 /** Drives with their active drop points, for the volunteer's forms; current drives first. */

@@ -79,7 +79,9 @@ describe("sorts, processing, claims and undo", () => {
     const heaters = (await bld.json<{ id: string; claimed: number; builtIn: number; state: string }[]>("GET", "/api/heaters")).body;
     expect(heaters.find((h) => h.id === g.heaterIds[0])).toMatchObject({ claimed: 72, builtIn: 60, state: "building" });
 
-    // More than the unclaimed cans: 409 with what is left.
+    // More than the unclaimed cans: 409 with what is left. (The unit is made big enough that the
+    // drive's unclaimed cans, not the unit's need, is what the claim runs into.)
+    await testDb()("heater_units").where({ id: g.heaterIds[1] }).update({ columns: 50, rows: 40, cans: 2000 });
     const greedy = await bld.json<{ error: { message: string } }>("POST", `/api/heaters/${g.heaterIds[1]}/claims`, { quantity: s.unclaimed + 1 });
     expect(greedy.status).toBe(409);
     expect(greedy.body.error.message).toMatch(new RegExp(`only ${s.unclaimed} left`));

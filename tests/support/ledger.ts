@@ -25,9 +25,11 @@ export async function freshGroup(label = "ledger"): Promise<FreshGroup> {
     volunteer2: `vol2-${tag}@example.test`,
     builder: `bld-${tag}@example.test`,
   };
+  const userIds: Record<string, string> = {};
   for (const [role, email] of Object.entries(emails)) {
     const [u] = await db("users").insert({ email, name: `Test ${role}`, password_hash: hash, email_verified_at: db.fn.now() }).returning("id");
     await db("memberships").insert({ group_id: group.id, user_id: u.id, role: role === "volunteer2" ? "volunteer" : role });
+    userIds[role] = u.id;
   }
   const [drive] = await db("drives")
     .insert({ group_id: group.id, slug: `drive-${tag}`, name: `Drive ${tag}`, starts_on: "2026-11-01", ends_on: "2027-02-28", is_public: true })
@@ -37,10 +39,11 @@ export async function freshGroup(label = "ledger"): Promise<FreshGroup> {
     const [p] = await db("drop_points").insert({ group_id: group.id, drive_id: drive.id, name, lat: 47.2 + i / 100, lng: -8 }).returning("id");
     dropPointIds.push(p.id);
   }
+  // Both units are built by the group's builder, who may claim for them.
   const heaterIds: string[] = [];
   for (const name of ["Test unit A", "Test unit B"]) {
     const [h] = await db("heater_units")
-      .insert({ group_id: group.id, drive_id: drive.id, name, glazing_width: 30, glazing_height: 60, unit: "in", columns: 11, rows: 12, cans: 132, holes_per_can: 4 })
+      .insert({ group_id: group.id, drive_id: drive.id, builder_id: userIds.builder, name, glazing_width: 30, glazing_height: 60, unit: "in", columns: 11, rows: 12, cans: 132, holes_per_can: 4 })
       .returning("id");
     heaterIds.push(h.id);
   }

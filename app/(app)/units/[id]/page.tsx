@@ -15,7 +15,9 @@ import { computeCanGrid } from "@/lib/heaters/can-grid";
 import { listDriveTargets } from "@/lib/heaters/drive-targets";
 import { formatLength } from "@/lib/heaters/format";
 import { getHeaterUnit, listHeaterUnits, planOf } from "@/lib/heaters/queries";
-import { driveStock, heaterClaims } from "@/lib/ledger/balances";
+import { driveStock } from "@/lib/ledger/balances";
+import { listHeatersWithClaims } from "@/lib/ledger/queries";
+import { unitRefusal } from "@/lib/heaters/builder-rule";
 import { resolveCanGridInput } from "@/lib/heaters/schemas";
 import { allowedMoves } from "@/lib/heaters/states";
 
@@ -33,9 +35,12 @@ export default async function UnitPage({ params }: Props) {
   const plan = planOf(unit);
   const grid = computeCanGrid(plan);
   const [drive] = unit.driveId ? await listDriveTargets(actor.group.id, unit.driveId) : [];
-  const [claims, stock, siblings] = unit.driveId
-    ? await Promise.all([heaterClaims(actor.group.id, unit.driveId), driveStock(actor.group.id, unit.driveId), listHeaterUnits(actor.group.id, unit.driveId)])
-    : [null, null, []];
+  const [summaries, stock, siblings] = unit.driveId
+    ? await Promise.all([listHeatersWithClaims(actor.group.id), driveStock(actor.group.id, unit.driveId), listHeaterUnits(actor.group.id, unit.driveId)])
+    : [[], null, []];
+  const summary = summaries.find((u) => u.id === unit.id);
+  // The same rule the routes apply (lib/heaters/resolve-unit.ts): offer only what the server allows.
+  const refusal = unitRefusal({ role: actor.role, userId: actor.user.id }, unit, "claim");
   return (
     <main className="flex flex-col gap-5">
       <p>
@@ -47,7 +52,7 @@ export default async function UnitPage({ params }: Props) {
           <p className="mt-1 flex flex-wrap items-center gap-2 text-ink-soft">
             <StateBadge state={unit.state} />
             {unit.driveName ? <span>Counted against {unit.driveName}</span> : <span>Not counted against a drive</span>}
-            {unit.builderName ? <span>· planned by {unit.builderName}</span> : null}
+            {unit.builderName ? <span>· built by {unit.builderName}</span> : null}
           </p>
         </div>
         <ButtonLink href={`/units/${unit.id}/sheet`} variant="secondary">
@@ -56,7 +61,12 @@ export default async function UnitPage({ params }: Props) {
       </div>
 
       <Card title="State">
-        <StateMover id={unit.id} state={unit.state} moves={allowedMoves(unit.state, actor.role)} />
+        <StateMover
+          id={unit.id}
+          state={unit.state}
+          moves={allowedMoves(unit.state, actor.role)}
+          refusal={unitRefusal({ role: actor.role, userId: actor.user.id }, unit, "state")}
+        />
         <p className="mt-2 text-sm text-ink-faint">
           Units move forward: planned → gathering cans → being built → on the wall. Only an organiser can step one back.
         </p>
@@ -69,19 +79,17 @@ export default async function UnitPage({ params }: Props) {
         </Card>
       ) : null}
 
-      {claims && stock ? (
+      {summary && stock && unit.driveId ? (
         <Card title="Cans for this unit">
           <ClaimsPanel
             v={{
-              unitId: unit.id,
-              cans: unit.cans,
+              unit: { ...summary, state: unit.state },
+              driveId: unit.driveId,
               rows: unit.rows,
-              claimed: claims[unit.id]?.claimed ?? 0,
-              builtIn: claims[unit.id]?.builtIn ?? 0,
-              driveUnclaimed: stock.unclaimed,
-              drivePunched: stock.stages.punched,
+              stock,
               installed: unit.state === "installed",
               isOrganiser: actor.role === "organiser",
+              refusal,
               otherUnits: siblings.filter((u) => u.id !== unit.id && u.state !== "installed").map((u) => ({ id: u.id, name: u.name })),
             }}
           />

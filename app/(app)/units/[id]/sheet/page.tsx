@@ -14,6 +14,9 @@ import { computeMaterials } from "@/lib/heaters/materials";
 import { getHeaterUnit, planOf } from "@/lib/heaters/queries";
 import { resolveCanGridInput } from "@/lib/heaters/schemas";
 import { HEATER_STATE_LABEL } from "@/lib/heaters/unit-schemas";
+import { unitNeed } from "@/lib/heaters/need";
+import { listHeatersWithClaims } from "@/lib/ledger/queries";
+import { UnitFigures } from "@/components/heaters/unit-figures";
 
 export const metadata: Metadata = { title: "Build sheet" };
 
@@ -31,6 +34,10 @@ export default async function BuildSheetPage({ params }: Props) {
   const grid = computeCanGrid(plan);
   const materials = computeMaterials(plan);
   const steps = buildSteps({ ...grid, holesPerCan: resolved.holesPerCan });
+  // The same figures as the unit page, as they stand when the sheet is printed.
+  const summary = (await listHeatersWithClaims(actor.group.id)).find((u) => u.id === unit.id);
+  const counts = summary ?? { ...unitNeed(unit.cans, unit.sparePercent, 0, 0), claimed: 0, builtIn: 0 };
+  const printedAt = new Date().toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" }) + " UTC";
   return (
     <main className="build-sheet flex flex-col gap-5 print:gap-3">
       <div className="no-print flex flex-wrap items-center justify-between gap-3">
@@ -52,6 +59,11 @@ export default async function BuildSheetPage({ params }: Props) {
           <GridFigures grid={grid} />
           <GridPreview plan={resolved} grid={grid} title={`${grid.columns} by ${grid.rows} cans`} />
         </div>
+      </section>
+
+      <section className="break-inside-avoid" data-testid="sheet-cans">
+        <h2 className="mb-2 text-xl">Cans for this unit</h2>
+        <UnitFigures c={counts} printedAt={printedAt} />
       </section>
 
       <section className="break-inside-avoid">

@@ -1,12 +1,12 @@
 import { endpoint } from "@/lib/api/endpoint";
 import { idPath } from "@/lib/api/path";
-import { ownHeaterUnit } from "@/lib/heaters/resource";
+import { unitFor } from "@/lib/heaters/resource";
 import { claimInputSchema } from "@/lib/ledger/schemas";
 import { recordBuiltIn } from "@/lib/ledger/record";
 
 export const dynamic = "force-dynamic";
 
 export const POST = endpoint.idempotent(
-  { who: ["builder", "organiser"], params: idPath("That heater unit"), resource: ownHeaterUnit, body: claimInputSchema, keepsPeople: true },
+  { who: ["builder", "organiser"], params: idPath("That heater unit"), resource: unitFor("builtIn"), body: claimInputSchema, keepsPeople: true },
   async ({ actor, params, body, trx }) => recordBuiltIn(actor, params.id, body.quantity, trx, body.note),
 );

@@ -1,16 +1,16 @@
 import { endpoint } from "@/lib/api/endpoint";
 import { idPath } from "@/lib/api/path";
-import { moveHeaterState } from "@/lib/heaters/queries";
-import { ownHeaterUnit } from "@/lib/heaters/resource";
-import { checkStateMove } from "@/lib/heaters/states";
+import { moveUnitState } from "@/lib/heaters/move-state";
+import { unitFor } from "@/lib/heaters/resource";
 import { heaterStateInputSchema } from "@/lib/heaters/unit-schemas";
 
 export const dynamic = "force-dynamic";
 
 // Moves a unit along planned → claiming → building → installed; the rule is
-// in lib/heaters/states.ts and is checked under a row lock.
+// in lib/heaters/states.ts and is checked under a row lock. Installing gives
+// the unit's unbuilt claims back to the drive (`released` in the answer).
+// Another group's unit is 404, another builder's 403, before anything about the body is said.
 export const POST = endpoint(
-  { who: ["builder", "organiser"], params: idPath("That heater unit"), resource: ownHeaterUnit, body: heaterStateInputSchema },
-  async ({ actor, params, body }) =>
-    moveHeaterState(actor.group.id, params.id, body.state, (from) => checkStateMove(from, body.state, actor.role)),
+  { who: ["builder", "organiser"], params: idPath("That heater unit"), resource: unitFor("state"), body: heaterStateInputSchema },
+  async ({ actor, params, body }) => moveUnitState(actor, params.id, body.state),
 );
