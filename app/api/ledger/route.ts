@@ -2,19 +2,24 @@ import { NextResponse } from "next/server";
 import { route } from "@/lib/api/handler";
 import { AppError, invalidInput } from "@/lib/api/errors";
 import { requireUser } from "@/lib/auth/session";
-import { ledgerFilterSchema } from "@/lib/ledger/schemas";
-import { listLedger, listMyEntries } from "@/lib/ledger/queries";
+import { LEDGER_PAGE, ledgerListQuerySchema, NEXT_CURSOR_HEADER, TOTAL_HEADER } from "@/lib/ledger/ledger-row";
+import { listLedgerPage } from "@/lib/ledger/ledger-list";
+import { listMyEntries } from "@/lib/ledger/queries";
 
 export const dynamic = "force-dynamic";
 
 // `?mine=1`: anyone's own recent entries (for undo). Otherwise the group's
-// ledger with filters, for organisers.
+// ledger with filters, for organisers: the body stays the array of lines; the
+// total and the next page's `cursor` travel in headers.
 export const GET = route(async (req: Request) => {
   const actor = await requireUser();
   const params = Object.fromEntries(new URL(req.url).searchParams);
-  const parsed = ledgerFilterSchema.safeParse(params);
+  const parsed = ledgerListQuerySchema.safeParse(params);
   if (!parsed.success) throw invalidInput(parsed.error);
   if (parsed.data.mine) return NextResponse.json(await listMyEntries(actor.group.id, actor.user.id));
   if (actor.role !== "organiser") throw new AppError("forbidden", "The full ledger is for organisers; add ?mine=1 for your own entries.");
-  return NextResponse.json(await listLedger(actor.group.id, parsed.data));
+  const page = await listLedgerPage(actor.group.id, parsed.data, LEDGER_PAGE);
+  const headers: Record<string, string> = { [TOTAL_HEADER]: String(page.total) };
+  if (page.nextCursor) headers[NEXT_CURSOR_HEADER] = page.nextCursor;
+  return NextResponse.json(page.rows, { headers });
 });
