@@ -97,10 +97,9 @@ export async function listLedger(groupId: string, f: Filter, limit = 500): Promi
   return (await listLedgerPage(groupId, f, limit)).rows;
 }
 
-/** The drive's slug and dates, for the export's file name. */
+/** The drive's slug and dates, for the export's file name; null for another group's drive (its rows are filtered out anyway). */
 export async function exportDrive(groupId: string, driveId: string | undefined) {
   if (!driveId) return null;
   const d = await db("drives").select("slug", db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`), db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`)).where({ id: driveId, group_id: groupId }).first();
-  if (!d) throw notFound("That drive");
-  return d as { slug: string; startsOn: string; endsOn: string };
+  return (d ?? null) as { slug: string; startsOn: string; endsOn: string } | null;
 }
