@@ -27,6 +27,12 @@ export async function listFullBins(groupId: string, driveId: string): Promise<Fu
   }));
 }
 
+/** 404 unless the drop point is the group's; checked before the body is read. */
+export async function assertOwnDropPoint(groupId: string, dropPointId: string): Promise<void> {
+  const row = await db("drop_points").select("id").where({ id: dropPointId, group_id: groupId }).first();
+  if (!row) throw notFound("That drop point");
+}
+
 /**
  * The organiser marks a bin as dealt with. `asOf` (the report they saw) keeps
  * a report that arrived after they looked from being cleared unseen.

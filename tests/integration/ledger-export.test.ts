@@ -33,6 +33,8 @@ describe("ledger table and CSV export", () => {
 
 describe("CSV export of the ledger screen", () => {
   it("neutralises a volunteer's =HYPERLINK note (OWASP CSV Injection), names the drive and range, writes local time and words", async () => {
+    // A group of its own, so the recycling test's counts below stay as they were.
+    const g = await freshGroup("export-csv");
     const vol = await g.client("volunteer");
     const note = '=HYPERLINK("http://evil.example/x","Open me")';
     const haul = await vol.json("POST", `/api/drives/${g.driveId}/hauls`, { dropPointId: g.dropPointIds[1], bags: 1, note, hauledAt: "2026-11-30T23:30:00Z" });

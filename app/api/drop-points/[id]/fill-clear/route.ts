@@ -3,7 +3,7 @@ import { route } from "@/lib/api/handler";
 import { parseBody } from "@/lib/api/idempotency";
 import { uuidParam, type IdContext } from "@/lib/api/params";
 import { requireRole } from "@/lib/auth/session";
-import { clearFill } from "@/lib/drives/fill-queries";
+import { assertOwnDropPoint, clearFill } from "@/lib/drives/fill-queries";
 import { fillClearInput } from "@/lib/drives/schemas";
 
 export const dynamic = "force-dynamic";
@@ -12,6 +12,7 @@ export const dynamic = "force-dynamic";
 export const POST = route(async (req: Request, ctx: IdContext) => {
   const actor = await requireRole("organiser");
   const dropPointId = await uuidParam(ctx, "That drop point");
+  await assertOwnDropPoint(actor.group.id, dropPointId);
   // The body is optional: an empty one clears up to now.
   const input = parseBody(await req.text(), fillClearInput);
   return NextResponse.json(await clearFill(actor.group.id, dropPointId, input.asOf));
