@@ -1,12 +1,13 @@
 import Link from "next/link";
 import { Card } from "@/components/ui/card";
-import { Notice } from "@/components/ui/notice";
+import type { FullBin } from "@/lib/drives/fill-queries";
+import { FullBins } from "./full-bins";
 import type { DriveProgress } from "@/lib/drives/progress";
 
 interface Props {
   drive: { id: string; slug: string; name: string; startsOn: string; endsOn: string; isPublic: boolean; dropPoints: number; heaterUnits: number };
   progress: DriveProgress;
-  fullBins: { id: string; level: number; dropPointName: string; createdAt: Date | string }[];
+  fullBins: FullBin[];
   pledges: { id: string; bags: number; bringOn: string | null; dropPointName: string }[];
 }
 
@@ -65,19 +66,7 @@ export function DriveProgressCard({ drive, progress, fullBins, pledges }: Props)
         {drive.dropPoints} drop points · {drive.heaterUnits} heater units · {fmt(Math.round(progress.pace.cansPerDay))} good cans a day over the last{" "}
         {progress.pace.windowDays} days
       </p>
-      {fullBins.length > 0 ? (
-        <div className="mt-4">
-          <Notice tone="caution" title="Bins reported full">
-            <ul className="list-disc pl-5">
-              {fullBins.map((f) => (
-                <li key={f.id}>
-                  {f.dropPointName}: {f.level} % on {new Date(f.createdAt).toLocaleDateString("en-GB")}
-                </li>
-              ))}
-            </ul>
-          </Notice>
-        </div>
-      ) : null}
+      <FullBins bins={fullBins} />
       {pledges.length > 0 ? (
         <div className="mt-4">
           <p className="font-semibold">Pledged bags coming</p>

@@ -1,118 +1,86 @@
 "use client";
 
-import { useMemo, useState } from "react";
-import { keepPreviousData, useQuery } from "@tanstack/react-query";
-import { buttonClass } from "@/components/ui/button";
+import { useInfiniteQuery } from "@tanstack/react-query";
+import { useMemo } from "react";
+import { Button, buttonClass } from "@/components/ui/button";
 import { EmptyState, Skeleton } from "@/components/ui/card";
-import { fetchJson } from "@/lib/api/client";
+import { fetchJsonWithHeaders } from "@/lib/api/client";
 import { ledgerKeys } from "@/hooks/queries/ledger";
-import { STAGES } from "@/lib/ledger/schemas";
+import { NEXT_CURSOR_HEADER, TOTAL_HEADER, type LedgerPage, type LedgerRow } from "@/lib/ledger/ledger-row";
 import type { LogDrive } from "./log-home";
-import { formatDateTime } from "@/lib/format";
+import { LedgerFilters } from "./ledger-table-filters";
+import { LedgerLine } from "./ledger-table-row";
+import { useLedgerFilters } from "./ledger-table-url";
 
-interface Row {
-  id: string;
-  kind: string;
-  occurredAt: string;
-  person: string;
-  drive: string;
-  dropPoint: string | null;
-  heaterUnit: string | null;
-  from: string | null;
-  to: string | null;
-  quantity: number;
-  reason: string | null;
-  isEstimate: boolean;
-  reversesId: string | null;
+const fmt = (n: number) => n.toLocaleString("en-GB");
+
+async function fetchPage(query: string, cursor: string | null): Promise<LedgerPage> {
+  const qs = cursor ? `${query}${query ? "&" : ""}cursor=${cursor}` : query;
+  const { body, headers } = await fetchJsonWithHeaders<LedgerRow[]>(`/api/ledger?${qs}`);
+  return { rows: body, total: Number(headers.get(TOTAL_HEADER) ?? body.length), nextCursor: headers.get(NEXT_CURSOR_HEADER) };
 }
 
-const select = "min-h-11 rounded-lg border-2 border-ink/40 bg-white px-2";
-
-export function LedgerTable({ drives, people, initialDriveId }: { drives: LogDrive[]; people: { id: string; name: string }[]; initialDriveId: string }) {
-  const [f, setF] = useState<Record<string, string>>({ driveId: initialDriveId });
-  const set = (k: string, v: string) => setF((old) => Object.fromEntries(Object.entries({ ...old, [k]: v }).filter(([, x]) => x !== "")));
-  const qs = useMemo(() => new URLSearchParams(f).toString(), [f]);
-  const rows = useQuery({ queryKey: ledgerKeys.list(f), queryFn: () => fetchJson<Row[]>(`/api/ledger?${qs}`), placeholderData: keepPreviousData });
-  const dropPoints = drives.find((d) => d.id === f.driveId)?.dropPoints ?? drives.flatMap((d) => d.dropPoints);
+export function LedgerTable({ drives, people, initialDriveId, timeZone }: { drives: LogDrive[]; people: { id: string; name: string }[]; initialDriveId: string; timeZone: string }) {
+  const { filters, set, query } = useLedgerFilters(initialDriveId);
+  const pages = useInfiniteQuery({
+    queryKey: ledgerKeys.list(filters as Record<string, string>),
+    queryFn: ({ pageParam }) => fetchPage(query, pageParam),
+    initialPageParam: null as string | null,
+    getNextPageParam: (last) => last.nextCursor,
+  });
+  const rows = useMemo(() => pages.data?.pages.flatMap((p) => p.rows) ?? [], [pages.data]);
+  const total = pages.data?.pages[0]?.total ?? 0;
+  // The lines of one movement are undone together; the confirmation names them all.
+  const byMovement = useMemo(() => {
+    const m = new Map<string, string[]>();
+    for (const r of rows) m.set(r.movementId, [...(m.get(r.movementId) ?? []), r.id]);
+    return m;
+  }, [rows]);
 
   return (
     <div className="flex flex-col gap-3">
-      <form className="grid grid-cols-2 gap-2 sm:grid-cols-3 lg:grid-cols-6" aria-label="Filter the ledger" onSubmit={(e) => e.preventDefault()}>
-        <label className="flex flex-col text-sm font-semibold">
-          Drive
-          <select className={select} value={f.driveId ?? ""} onChange={(e) => set("driveId", e.target.value)}>
-            <option value="">All drives</option>
-            {drives.map((d) => <option key={d.id} value={d.id}>{d.name}</option>)}
-          </select>
-        </label>
-        <label className="flex flex-col text-sm font-semibold">
-          Drop point
-          <select className={select} value={f.dropPointId ?? ""} onChange={(e) => set("dropPointId", e.target.value)}>
-            <option value="">All</option>
-            {dropPoints.map((p) => <option key={p.id} value={p.id}>{p.name}</option>)}
-          </select>
-        </label>
-        <label className="flex flex-col text-sm font-semibold">
-          Stage
-          <select className={select} value={f.stage ?? ""} onChange={(e) => set("stage", e.target.value)}>
-            <option value="">All</option>
-            {STAGES.map((s) => <option key={s} value={s}>{s}</option>)}
-          </select>
-        </label>
-        <label className="flex flex-col text-sm font-semibold">
-          Person
-          <select className={select} value={f.personId ?? ""} onChange={(e) => set("personId", e.target.value)}>
-            <option value="">Everyone</option>
-            {people.map((p) => <option key={p.id} value={p.id}>{p.name}</option>)}
-          </select>
-        </label>
-        <label className="flex flex-col text-sm font-semibold">
-          From
-          <input type="date" className={select} value={f.from ?? ""} onChange={(e) => set("from", e.target.value)} />
-        </label>
-        <label className="flex flex-col text-sm font-semibold">
-          To
-          <input type="date" className={select} value={f.to ?? ""} onChange={(e) => set("to", e.target.value)} />
-        </label>
-      </form>
+      <LedgerFilters drives={drives} people={people} filters={filters} set={set} />
       <div>
-        <a className={buttonClass("secondary")} href={`/api/ledger/export?${qs}`} download>
+        <a className={buttonClass("secondary")} href={`/api/ledger/export?${query}`} download>
           Download CSV
         </a>
       </div>
-      {rows.isPending ? (
+      {pages.isPending ? (
         <Skeleton className="h-40 w-full" />
-      ) : rows.isError ? (
-        <p role="alert" className="text-alarm">Could not load the ledger: {rows.error.message}. Change a filter or reload to try again.</p>
-      ) : rows.data.length === 0 ? (
+      ) : pages.isError ? (
+        <p role="alert" className="text-alarm">Could not load the ledger: {pages.error.message}. Change a filter or reload to try again.</p>
+      ) : rows.length === 0 ? (
         <EmptyState title="No ledger lines match">Widen the dates or clear a filter.</EmptyState>
       ) : (
-        <div className="overflow-x-auto">
-          <table className="w-full min-w-[720px] text-left text-sm">
-            <caption className="sr-only">Ledger lines, newest first</caption>
-            <thead className="border-b-2 border-ink/30">
-              <tr>
-                {["When", "Entry", "Drive", "Drop point / unit", "From → to", "Cans", "Reason", "By"].map((h) => (
-                  <th key={h} scope="col" className={`px-2 py-2 ${h === "Drive" && f.driveId ? "hidden" : ""}`}>{h}</th>
-                ))}
-              </tr>
-            </thead>
-            <tbody className="divide-y divide-paper-edge">
-              {rows.data.map((r) => (
-                <tr key={r.id} className={r.reversesId ? "bg-paper-deep" : ""}>
-                  <td className="px-2 py-1 whitespace-nowrap">{formatDateTime(r.occurredAt)}</td>
-                  <td className="px-2 py-1">{r.kind}{r.reversesId ? ` (undoes line ${r.reversesId})` : ""}</td>
-                  <td className={`px-2 py-1 ${f.driveId ? "hidden" : ""}`}>{r.drive}</td>
-                  <td className="px-2 py-1">{r.dropPoint ?? r.heaterUnit ?? "—"}</td>
-                  <td className="px-2 py-1">{r.from ?? "·"} → {r.to ?? "·"}</td>
-                  <td className="px-2 py-1 tabular-nums">{r.isEstimate ? "≈" : ""}{r.quantity}</td>
-                  <td className="px-2 py-1">{r.reason ?? ""}</td>
-                  <td className="px-2 py-1">{r.person}</td>
+        <>
+          <div className="overflow-x-auto">
+            <table className="w-full min-w-[820px] text-left text-sm">
+              <caption className="sr-only">Ledger lines, newest first by when they happened</caption>
+              <thead className="border-b-2 border-ink/30">
+                <tr>
+                  {["Line", "When", "Entry", "Drive", "Drop point / unit", "Move", "Cans", "Reason", "By", "Correct"].map((h) => (
+                    <th key={h} scope="col" className={`px-2 py-2 ${h === "Drive" && filters.driveId ? "hidden" : ""}`}>{h === "Correct" ? <span className="sr-only">{h}</span> : h}</th>
+                  ))}
                 </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+              </thead>
+              <tbody className="divide-y divide-paper-edge">
+                {rows.map((r) => (
+                  <LedgerLine key={r.id} r={r} siblings={byMovement.get(r.movementId) ?? [r.id]} showDrive={!filters.driveId} timeZone={timeZone} />
+                ))}
+              </tbody>
+            </table>
+          </div>
+          <p role="status" className="flex flex-wrap items-center gap-3 text-sm">
+            <span data-testid="ledger-count">
+              Showing {fmt(rows.length)} of {fmt(total)} line{total === 1 ? "" : "s"}
+            </span>
+            {pages.hasNextPage ? (
+              <Button variant="secondary" onClick={() => pages.fetchNextPage()} disabled={pages.isFetchingNextPage}>
+                {pages.isFetchingNextPage ? "Loading…" : "Load more"}
+              </Button>
+            ) : null}
+          </p>
+        </>
       )}
     </div>
   );

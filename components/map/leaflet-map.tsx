@@ -6,13 +6,14 @@ import { useEffect, useMemo } from "react";
 import { MapContainer, Marker, Popup, TileLayer, useMap, useMapEvents } from "react-leaflet";
 import { DEMO_TILE_BBOX, MAX_ZOOM, MIN_ZOOM } from "@/lib/map/tiles";
 import type { MapPoint, MapProps } from "./types";
+import { fillGlyphSvg } from "./fill-glyph";
 
 // Pins are drawn with CSS, so no marker image has to be found by the bundler.
-function pinIcon(tone: MapPoint["tone"], label?: string) {
+function pinIcon(tone: MapPoint["tone"], label?: string, fill?: MapPoint["fill"]) {
   const colour = tone === "draft" ? "#8a5a00" : tone === "paused" ? "#6b6156" : tone === "you" ? "#204a33" : "#a8431a";
   return L.divIcon({
     className: "cantrove-pin",
-    html: `<span style="display:flex;align-items:center;justify-content:center;width:30px;height:30px;border-radius:50% 50% 50% 0;transform:rotate(-45deg);background:${colour};border:2px solid #fff;box-shadow:0 1px 4px rgba(0,0,0,.4)"><span style="transform:rotate(45deg);color:#fff;font-weight:700;font-size:13px">${label ?? ""}</span></span>`,
+    html: `<span style="position:relative;display:block;width:30px;height:30px" data-fill="${fill ?? "none"}"><span style="display:flex;align-items:center;justify-content:center;width:30px;height:30px;border-radius:50% 50% 50% 0;transform:rotate(-45deg);background:${colour};border:2px solid #fff;box-shadow:0 1px 4px rgba(0,0,0,.4)"><span style="transform:rotate(45deg);color:#fff;font-weight:700;font-size:13px">${label ?? ""}</span></span>${fillGlyphSvg(fill)}</span>`,
     iconSize: [30, 30],
     iconAnchor: [15, 30],
     popupAnchor: [0, -28],
@@ -71,7 +72,7 @@ export default function LeafletMap({ points, center, zoom = 14, tileUrl, attribu
           <Marker
             key={p.id}
             position={[p.lat, p.lng]}
-            icon={pinIcon(p.tone, p.label)}
+            icon={pinIcon(p.tone, p.label, p.fill)}
             title={p.name}
             alt={p.name}
             keyboard

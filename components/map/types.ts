@@ -1,4 +1,5 @@
 import type { ReactNode } from "react";
+import type { FillShape } from "@/lib/drives/fill";
 
 export interface MapPoint {
   id: string;
@@ -7,6 +8,8 @@ export interface MapPoint {
   lng: number;
   tone?: "active" | "paused" | "draft" | "you";
   label?: string;
+  /** The bin's fill, drawn as a shape on the pin (public map). */
+  fill?: FillShape;
   draggable?: boolean;
   popup?: ReactNode;
 }

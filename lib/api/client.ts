@@ -22,6 +22,11 @@ export interface FetchJsonInit {
 }
 
 export async function fetchJson<T>(path: string, init: FetchJsonInit = {}): Promise<T> {
+  return (await fetchJsonWithHeaders<T>(path, init)).body;
+}
+
+/** fetchJson for answers that carry more in headers (the ledger's total and next cursor). */
+export async function fetchJsonWithHeaders<T>(path: string, init: FetchJsonInit = {}): Promise<{ body: T; headers: Headers }> {
   const payload = init.json !== undefined ? init.json : init.body;
   let res: Response;
   try {
@@ -56,7 +61,7 @@ export async function fetchJson<T>(path: string, init: FetchJsonInit = {}): Prom
       error?.fields ?? {},
     );
   }
-  return body as T;
+  return { body: body as T, headers: res.headers };
 }
 
 /** Field errors from a failed mutation, or an empty object. */

@@ -1,6 +1,7 @@
 import "server-only";
 import { db } from "@/lib/db";
-import { listDrives, listFillReports, listPledges } from "./queries";
+import { listDrives, listPledges } from "./queries";
+import { listFullBins } from "./fill-queries";
 import { unitCansOf } from "./public-queries";
 import { progressFor } from "./tallies";
 
@@ -15,11 +16,11 @@ export async function organiserDashboard(groupId: string) {
     drives.map(async (d) => {
       const [progress, fills, pledges] = await Promise.all([
         progressFor({ id: d.id, startsOn: d.startsOn, sparePercent: spareOf.get(d.id) ?? 5 }, await unitCansOf(d.id, groupId), today()),
-        listFillReports(groupId, d.id, 5),
+        listFullBins(groupId, d.id),
         listPledges(groupId, d.id),
       ]);
       const upcoming = pledges.filter((p) => !p.bringOn || p.bringOn >= today());
-      return { drive: d, progress, fullBins: fills.filter((f) => Number(f.level) >= 75), pledges: upcoming.slice(0, 5) };
+      return { drive: d, progress, fullBins: fills, pledges: upcoming.slice(0, 5) };
     }),
   );
 }

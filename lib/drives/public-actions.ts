@@ -64,7 +64,10 @@ export async function createFillReport(slug: string, dropPointId: string, input:
   if (!drive) throw notFound("That drive");
   const point = await findPublicDropPoint(drive.id, dropPointId);
   if (!point) throw notFound("That drop point");
-  const haulAt = (await lastHauls([point.id]))[point.id] ?? null;
+  // An organiser's "clear" ends a fill episode as a haul does, so the next full report alerts again.
+  const hauledAt = (await lastHauls([point.id]))[point.id] ?? null;
+  const clearedAt = point.fillClearedAt ? new Date(point.fillClearedAt) : null;
+  const haulAt = !clearedAt || (hauledAt && hauledAt > clearedAt) ? hauledAt : clearedAt;
   const result = await db.transaction(async (trx) => {
     // The row lock serialises reports for one bin, so two reports at once cannot both alert.
     await trx("drop_points").where({ id: point.id }).forUpdate().first();

@@ -1,6 +1,7 @@
 import "server-only";
 import { db } from "@/lib/db";
-import { UUID } from "./queries";
+import { UUID } from "@/lib/api/path";
+import { CURRENT_FILL_LATERAL } from "./fill";
 
 export interface PublicDriveSummary {
   slug: string;
@@ -69,6 +70,8 @@ export interface PublicDropPointRow {
   capacityBags: number;
   fillLevel: number | null;
   fillReportedAt: string | null;
+  /** The bin's fill now: its newest report since the last haul or clear (lib/drives/fill.ts); null when none. */
+  fill: { level: number; reportedAt: string } | null;
   photos: string[];
 }
 
@@ -85,7 +88,7 @@ export interface PublicDropPointWithTallies extends PublicDropPointRow {
 export async function listPublicDropPointsWithTallies(slug: string): Promise<PublicDropPointWithTallies[]> {
   const { rows } = await db.raw(
     `select p.id, p.name, p.address, p.lat, p.lng, p.hours, p.capacity_bags as "capacityBags",
-            f.level as "fillLevel", f.created_at as "fillReportedAt",
+            f.level as "fillLevel", f.created_at as "fillReportedAt", cf.fill_level, cf.fill_at,
             coalesce((select array_agg(fi.url order by fi.created_at) from files fi
                        where fi.purpose = 'drop-point-photo' and fi.subject_id = p.id and fi.group_id = p.group_id), '{}') as photos,
             coalesce(t.hauls, 0)::int as hauls, coalesce(t.bags, 0)::int as bags,
@@ -95,6 +98,7 @@ export async function listPublicDropPointsWithTallies(slug: string): Promise<Pub
        left join drop_point_tallies t on t.drop_point_id = p.id
        left join lateral (select level, created_at from fill_reports fr where fr.drop_point_id = p.id
                            order by fr.created_at desc limit 1) f on true
+       ${CURRENT_FILL_LATERAL}
       where d.slug = ? and d.is_public
       order by p.name`,
     [slug],
@@ -109,6 +113,7 @@ export async function listPublicDropPointsWithTallies(slug: string): Promise<Pub
     capacityBags: r.capacityBags as number,
     fillLevel: (r.fillLevel as number | null) ?? null,
     fillReportedAt: r.fillReportedAt ? new Date(r.fillReportedAt as string).toISOString() : null,
+    fill: r.fill_level === null || r.fill_level === undefined ? null : { level: Number(r.fill_level), reportedAt: new Date(r.fill_at as string).toISOString() },
     photos: r.photos as string[],
     tallies: { hauls: Number(r.hauls), bags: Number(r.bags), goodCans: Number(r.goodCans), rejectedCans: Number(r.rejectedCans) },
   }));
@@ -117,5 +122,5 @@ export async function listPublicDropPointsWithTallies(slug: string): Promise<Pub
 /** Undefined for an id that is not a UUID: PostgreSQL would refuse to compare it. */
 export async function findPublicDropPoint(driveId: string, id: string) {
   if (!UUID.test(id)) return undefined;
-  return db("drop_points").select("id", "group_id as groupId", "name", "hours").where({ id, drive_id: driveId, active: true }).first();
+  return db("drop_points").select("id", "group_id as groupId", "name", "hours", "fill_cleared_at as fillClearedAt").where({ id, drive_id: driveId, active: true }).first();
 }

@@ -56,3 +56,9 @@ export const fillReportInput = z.object({
   note: z.string().trim().max(500, "Keep the note under 500 characters.").default(""),
 });
 export type FillReportInput = z.infer<typeof fillReportInput>;
+
+/** POST /api/drop-points/{id}/fill-clear: optionally the time of the report the organiser saw. */
+export const fillClearInput = z.object({
+  asOf: z.iso.datetime({ offset: true, error: "Use a date and time like 2026-12-02T09:30:00Z." }).optional(),
+});
+export type FillClearInput = z.infer<typeof fillClearInput>;

@@ -1,19 +1,96 @@
-// Column order and headings of the ledger's CSV export.
-export const LEDGER_CSV_COLUMNS = [
-  { key: "id", header: "line" },
-  { key: "occurredAt", header: "occurred_at" },
-  { key: "recordedAt", header: "recorded_at" },
-  { key: "kind", header: "entry" },
-  { key: "drive", header: "drive" },
-  { key: "dropPoint", header: "drop_point" },
-  { key: "heaterUnit", header: "heater_unit" },
-  { key: "from", header: "from_stage" },
-  { key: "to", header: "to_stage" },
-  { key: "quantity", header: "quantity" },
-  { key: "reason", header: "reason" },
-  { key: "isEstimate", header: "estimate" },
-  { key: "person", header: "recorded_by" },
-  { key: "reversesId", header: "reverses_line" },
-  { key: "movementId", header: "movement" },
-  { key: "note", header: "note" },
-];
+import { stringify } from "csv-stringify/sync";
+import { entryLabel, moveLabel, reasonLabel, stageLabel } from "./labels";
+import type { LedgerRow } from "./ledger-row";
+
+// The ledger's CSV export: human words for codes (from ./labels), the group's
+// local time next to ISO UTC, and no cell a spreadsheet would run as a formula.
+
+/**
+ * OWASP, "CSV Injection" (owasp.org/www-community/attacks/CSV_Injection): a cell
+ * starting with = + - @ tab (0x09) or carriage return (0x0D) may be run as a
+ * formula by a spreadsheet. Prefix such a cell with a single quote so it is
+ * read as text; the caller quotes the cell and doubles inner quotes.
+ */
+const FORMULA_START = /^[=+\-@\t\r]/;
+
+export function neutraliseCell(value: string): string {
+  return FORMULA_START.test(value) ? `'${value}` : value;
+}
+
+/** "2026-11-03 14:05:09" in the zone given (an IANA name such as Europe/London). */
+export function localTime(iso: string, timeZone: string): string {
+  const parts = Object.fromEntries(
+    new Intl.DateTimeFormat("en-GB", { timeZone, year: "numeric", month: "2-digit", day: "2-digit", hour: "2-digit", minute: "2-digit", second: "2-digit", hourCycle: "h23" })
+      .formatToParts(new Date(iso))
+      .map((p) => [p.type, p.value]),
+  );
+  return `${parts.year}-${parts.month}-${parts.day} ${parts.hour}:${parts.minute}:${parts.second}`;
+}
+
+export function ledgerCsvColumns(timeZone: string) {
+  return [
+    { key: "line", header: "line" },
+    { key: "occurredAt", header: "occurred_at" },
+    { key: "occurredLocal", header: `occurred_local (${timeZone})` },
+    { key: "recordedAt", header: "recorded_at" },
+    { key: "recordedLocal", header: `recorded_local (${timeZone})` },
+    { key: "entry", header: "entry" },
+    { key: "drive", header: "drive" },
+    { key: "dropPoint", header: "drop_point" },
+    { key: "heaterUnit", header: "heater_unit" },
+    { key: "from", header: "from_stage" },
+    { key: "to", header: "to_stage" },
+    { key: "move", header: "move" },
+    { key: "quantity", header: "quantity" },
+    { key: "reason", header: "reason" },
+    { key: "isEstimate", header: "estimate" },
+    { key: "person", header: "recorded_by" },
+    { key: "reversesId", header: "reverses_line" },
+    { key: "reversedById", header: "undone_by_line" },
+    { key: "movementId", header: "movement" },
+    { key: "note", header: "note" },
+  ];
+}
+
+export function ledgerCsv(rows: LedgerRow[], timeZone: string): string {
+  const records = rows.map((r) => ({
+    line: r.id,
+    occurredAt: r.occurredAt,
+    occurredLocal: localTime(r.occurredAt, timeZone),
+    recordedAt: r.recordedAt,
+    recordedLocal: localTime(r.recordedAt, timeZone),
+    entry: entryLabel(r.kind, r.reversesId),
+    drive: r.drive,
+    dropPoint: r.dropPoint ?? "",
+    heaterUnit: r.heaterUnit ?? "",
+    from: stageLabel(r.from),
+    to: stageLabel(r.to),
+    move: moveLabel(r.from, r.to),
+    quantity: r.quantity,
+    reason: reasonLabel(r.reason),
+    isEstimate: r.isEstimate,
+    person: r.person,
+    reversesId: r.reversesId ?? "",
+    reversedById: r.reversedById ?? "",
+    movementId: r.movementId,
+    note: r.note,
+  }));
+  return stringify(records, {
+    header: true,
+    columns: ledgerCsvColumns(timeZone),
+    cast: {
+      boolean: (v) => (v ? "yes" : "no"),
+      // Every text cell goes through the OWASP rule; a neutralised one is always quoted.
+      string: (v) => {
+        const safe = neutraliseCell(v);
+        return safe === v ? v : { value: safe, quoted: true };
+      },
+    },
+  });
+}
+
+/** cantrove-ledger-<drive-slug>-2026-11-01-to-2026-11-30.csv */
+export function ledgerCsvFileName(driveSlug: string | null, from: string, to: string): string {
+  const safe = (s: string) => s.replace(/[^a-z0-9-]+/gi, "-").replace(/^-+|-+$/g, "").toLowerCase() || "drive";
+  return `cantrove-ledger-${driveSlug ? safe(driveSlug) : "all-drives"}-${safe(from)}-to-${safe(to)}.csv`;
+}

@@ -3,7 +3,6 @@ import { db } from "@/lib/db";
 import { notFound } from "@/lib/api/errors";
 import { unitNeed } from "@/lib/heaters/need";
 import { heaterClaims } from "./balances";
-import type { LedgerFilter } from "./schemas";
 
 export async function listHauls(groupId: string, driveId: string, opts: { open?: boolean } = {}) {
   const drive = await db("drives").select("id").where({ id: driveId, group_id: groupId }).first();
@@ -71,72 +70,9 @@ export async function publicDriveId(slug: string): Promise<string> {
   return drive.id;
 }
 
-export interface LedgerRow {
-  id: string;
-  movementId: string;
-  kind: string;
-  occurredAt: string;
-  recordedAt: string;
-  person: string;
-  personId: string;
-  drive: string;
-  driveId: string;
-  dropPoint: string | null;
-  heaterUnit: string | null;
-  from: string | null;
-  to: string | null;
-  quantity: number;
-  reason: string | null;
-  isEstimate: boolean;
-  reversesId: string | null;
-  note: string;
-}
-
-/** Ledger lines of the group, newest first, filtered in SQL. */
-export async function listLedger(groupId: string, f: LedgerFilter & { personId?: string }, limit = 500): Promise<LedgerRow[]> {
-  const rows = await db("ledger_lines as l")
-    .join("movements as m", "m.id", "l.movement_id")
-    .join("users as u", "u.id", "l.recorded_by")
-    .join("drives as d", "d.id", "l.drive_id")
-    .leftJoin("drop_points as p", "p.id", "l.drop_point_id")
-    .leftJoin("heater_units as h", "h.id", "l.heater_unit_id")
-    .select(
-      "l.id", "l.movement_id", "m.kind", "l.occurred_at", "l.recorded_at", "u.name as person", "u.id as person_id", "d.name as drive", "d.id as drive_id",
-      "p.name as drop_point", "h.name as heater_unit", "l.from_stage", "l.to_stage", "l.quantity", "l.reason", "l.is_estimate", "l.reverses_id", "l.note",
-    )
-    .where("l.group_id", groupId)
-    .modify((q) => {
-      if (f.driveId) q.andWhere("l.drive_id", f.driveId);
-      if (f.dropPointId) q.andWhere("l.drop_point_id", f.dropPointId);
-      if (f.stage) q.andWhere((w) => w.where("l.from_stage", f.stage!).orWhere("l.to_stage", f.stage!));
-      if (f.personId) q.andWhere("l.recorded_by", f.personId);
-      if (f.from) q.andWhere("l.occurred_at", ">=", f.from);
-      if (f.to) q.andWhere("l.occurred_at", "<", db.raw("?::date + 1", [f.to]));
-    })
-    .orderBy("l.id", "desc")
-    .limit(Math.min(f.limit ?? limit, 100_000));
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any
-  return rows.map((r: any) => ({
-    id: String(r.id),
-    movementId: r.movement_id,
-    kind: r.kind,
-    occurredAt: new Date(r.occurred_at).toISOString(),
-    recordedAt: new Date(r.recorded_at).toISOString(),
-    person: r.person,
-    personId: r.person_id,
-    drive: r.drive,
-    driveId: r.drive_id,
-    dropPoint: r.drop_point,
-    heaterUnit: r.heater_unit,
-    from: r.from_stage,
-    to: r.to_stage,
-    quantity: r.quantity,
-    reason: r.reason,
-    isEstimate: r.is_estimate,
-    reversesId: r.reverses_id === null ? null : String(r.reverses_id),
-    note: r.note,
-  }));
-}
+// The organiser's ledger list lives in ./ledger-list (paging, order, undo links).
+export { listLedger } from "./ledger-list";
+export type { LedgerRow } from "./ledger-row";
 
 /** A person's own recent entries, each with whether it was undone (for the volunteer's "undo"). */
 export async function listMyEntries(groupId: string, userId: string, limit = 15) {
@@ -183,8 +119,8 @@ export async function listGroupPeople(groupId: string) {
 
 /** What the organiser's charts need about one drive: its start, spare and the cans of its units. */
 export async function driveChartBasics(groupId: string, driveId: string) {
-  const drive = await db("drives").select("id", "name", db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`), "spare_percent").where({ id: driveId, group_id: groupId }).first();
+  const drive = await db("drives").select("id", "name", db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`), db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`), "spare_percent").where({ id: driveId, group_id: groupId }).first();
   if (!drive) throw notFound("That drive");
   const units = await db("heater_units").select("cans").where({ drive_id: driveId, group_id: groupId }).orderBy("created_at");
-  return { name: drive.name as string, startsOn: drive.startsOn as string, sparePercent: Number(drive.spare_percent), unitCans: units.map((u) => Number(u.cans)) };
+  return { name: drive.name as string, startsOn: drive.startsOn as string, endsOn: drive.endsOn as string, sparePercent: Number(drive.spare_percent), unitCans: units.map((u) => Number(u.cans)) };
 }

@@ -27,4 +27,4 @@ export const releaseClaim = (actor: Actor, heaterUnitId: string, quantity: numbe
   c.releaseClaim(actor, heaterUnitId, quantity, conn, note);
 export const recordBuiltIn = (actor: Actor, heaterUnitId: string, quantity: number, conn: Conn = db, note?: string) =>
   c.recordBuiltIn(actor, heaterUnitId, quantity, conn, note);
-export const reverseMovement = (actor: Actor, movementId: string, conn: Conn = db) => reverse(actor, movementId, conn);
+export const reverseMovement = (actor: Actor, movementId: string, conn: Conn = db, reason?: string) => reverse(actor, movementId, conn, reason);

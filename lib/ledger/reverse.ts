@@ -10,7 +10,8 @@ import type { RejectReason, Stage } from "./schemas";
 
 type Conn = Knex | Knex.Transaction;
 
-export async function reverseMovement(actor: Actor, movementId: string, conn: Conn) {
+/** `reason`: why it is undone (an organiser correcting someone else's entry); kept with the undo. */
+export async function reverseMovement(actor: Actor, movementId: string, conn: Conn, reason?: string) {
   return inTx(conn, async (trx) => {
     const groupId = actor.group.id;
     // Movements never change once written, so the row read here stays true after the lock.
@@ -51,13 +52,13 @@ export async function reverseMovement(actor: Actor, movementId: string, conn: Co
       sortId: l.sort_id,
       reversesId: String(l.id),
       countedDay: isoDay(new Date(l.occurred_at)),
-      note: "undo",
+      note: reason ? `undo: ${reason}` : "undo",
     }));
     const result = await postMovement(
       trx,
-      { groupId, driveId: movement.drive_id, actorId: actor.user.id, kind: "reversal", reversesMovementId: movementId, details: { reversedKind: movement.kind } },
+      { groupId, driveId: movement.drive_id, actorId: actor.user.id, kind: "reversal", reversesMovementId: movementId, details: reason ? { reversedKind: movement.kind, reason } : { reversedKind: movement.kind } },
       lines,
     );
-    return { movementId: result.movementId, reverses: movementId, reversedKind: movement.kind as string, driveId: movement.drive_id as string, lines: lines.length };
+    return { movementId: result.movementId, reverses: movementId, reversedKind: movement.kind as string, driveId: movement.drive_id as string, lines: lines.length, reason: reason ?? null };
   });
 }

@@ -116,3 +116,9 @@ export interface DriveStock {
   claimed: number;
   unclaimed: number;
 }
+
+/** POST /api/movements/{id}/reversal: the body is optional; a reason is kept with the undo. */
+export const reversalInputSchema = z.object({
+  reason: z.string().trim().max(300, "Keep the reason under 300 characters.").optional(),
+});
+export type ReversalInput = z.infer<typeof reversalInputSchema>;

@@ -22,12 +22,37 @@ describe("ledger table and CSV export", () => {
     const text = await res.text();
     // RFC 4180: one header line, then one line per record, CRLF or LF separated (no field here holds a newline).
     const lines = text.trim().split(/\r?\n/);
-    expect(lines[0].split(",").slice(0, 4)).toEqual(["line", "occurred_at", "recorded_at", "entry"]);
+    expect(lines[0].split(",").slice(0, 6)).toEqual(["line", "occurred_at", "occurred_local (Europe/London)", "recorded_at", "recorded_local (Europe/London)", "entry"]);
     expect(lines).toHaveLength(all.length + 1);
-    expect(lines.some((l) => l.includes(",rejected,2,dented,"))).toBe(true);
+    expect(lines.some((l) => l.includes(",rejected,into rejected,2,dented,"))).toBe(true);
 
     const vol = await g.client("volunteer");
     expect((await vol.get(`/api/ledger/export?driveId=${g.driveId}`)).status).toBe(403);
+  });
+});
+
+describe("CSV export of the ledger screen", () => {
+  it("neutralises a volunteer's =HYPERLINK note (OWASP CSV Injection), names the drive and range, writes local time and words", async () => {
+    // A group of its own, so the recycling test's counts below stay as they were.
+    const g = await freshGroup("export-csv");
+    const vol = await g.client("volunteer");
+    const note = '=HYPERLINK("http://evil.example/x","Open me")';
+    const haul = await vol.json("POST", `/api/drives/${g.driveId}/hauls`, { dropPointId: g.dropPointIds[1], bags: 1, note, hauledAt: "2026-11-30T23:30:00Z" });
+    expect(haul.status).toBe(201);
+    await vol.json("POST", `/api/drives/${g.driveId}/sorts`, { haulIds: [(haul.body as { id: string }).id], good: 10, rejected: { wrongSize: 3 } });
+    const org = await g.client("organiser");
+    const res = await org.get(`/api/ledger/export?driveId=${g.driveId}&from=2026-11-01&to=2026-11-30`);
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-disposition")).toBe(`attachment; filename="cantrove-ledger-${g.driveSlug}-2026-11-01-to-2026-11-30.csv"`);
+    const text = await res.text();
+    // OWASP (owasp.org/www-community/attacks/CSV_Injection): prefix ' and quote the cell.
+    expect(text).toContain(`"'=HYPERLINK(""http://evil.example/x"",""Open me"")"`);
+    expect(text).not.toMatch(/(^|,)=HYPERLINK/m);
+    // 23:30 UTC on 30 Nov is 23:30 in London (GMT in winter; IANA tz database).
+    expect(text).toContain("2026-11-30T23:30:00.000Z,2026-11-30 23:30:00,");
+    const all = await (await org.get(`/api/ledger/export?driveId=${g.driveId}`)).text();
+    expect(all).toContain(",wrong size,");
+    expect(all).not.toMatch(/wrongSize|builtIn/);
   });
 });
 

@@ -7,13 +7,18 @@ import { requirePageRole } from "@/lib/auth/session";
 import { driveTarget } from "@/lib/drives/progress";
 import { driveGoodDaily, dropPointTallies } from "@/lib/ledger/balances";
 import { driveChartBasics, listGroupPeople, listLogDrives } from "@/lib/ledger/queries";
+import { groupTimeZone } from "@/lib/ledger/ledger-list";
+import { dailySeries } from "@/lib/ledger/daily-series";
+import { localTime } from "@/lib/ledger/csv";
 
 export const metadata: Metadata = { title: "Ledger" };
 
-export default async function LedgerPage({ searchParams }: { searchParams: Promise<{ drive?: string }> }) {
+export default async function LedgerPage({ searchParams }: { searchParams: Promise<{ drive?: string; driveId?: string }> }) {
   const actor = await requirePageRole("/ledger", "organiser");
-  const { drive: wanted } = await searchParams;
-  const [drives, people] = await Promise.all([listLogDrives(actor.group.id), listGroupPeople(actor.group.id)]);
+  // ?driveId= is the table's filter (kept in the address); ?drive= is the older link form.
+  const { drive: oldLink, driveId } = await searchParams;
+  const wanted = driveId ?? oldLink;
+  const [drives, people, timeZone] = await Promise.all([listLogDrives(actor.group.id), listGroupPeople(actor.group.id), groupTimeZone(actor.group.id)]);
   const drive = drives.find((d) => d.id === wanted) ?? drives[0];
   if (!drive) {
     return (
@@ -26,8 +31,8 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
   const basics = await driveChartBasics(actor.group.id, drive.id);
   const [daily, tallies] = await Promise.all([driveGoodDaily(drive.id, basics.startsOn), dropPointTallies(drive.id)]);
   const target = driveTarget(basics.unitCans, basics.sparePercent);
-  let running = 0;
-  const dailyPoints = daily.map((d) => ({ ...d, cumulative: (running += d.goodCans) }));
+  const today = localTime(new Date().toISOString(), timeZone).slice(0, 10);
+  const dailyPoints = dailySeries(daily, basics.startsOn, today < basics.endsOn ? today : basics.endsOn);
   const names = new Map(drive.dropPoints.map((p) => [p.id, p.name]));
   const yieldPoints = Object.entries(tallies).map(([id, t]) => {
     const counted = t.goodCans + t.rejectedCans;
@@ -39,7 +44,7 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
       <h1 className="text-3xl">Ledger</h1>
       <nav aria-label="Drive" className="flex flex-wrap gap-3">
         {drives.map((d) => (
-          <a key={d.id} href={`/ledger?drive=${d.id}`} aria-current={d.id === drive.id ? "page" : undefined} className={d.id === drive.id ? "font-bold text-ink" : ""}>
+          <a key={d.id} href={`/ledger?driveId=${d.id}`} aria-current={d.id === drive.id ? "page" : undefined} className={d.id === drive.id ? "font-bold text-ink" : ""}>
             {d.name}
           </a>
         ))}
@@ -59,7 +64,7 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
         <RecyclingForm driveId={drive.id} />
       </Card>
       <Card title="Every line">
-        <LedgerTable drives={drives} people={people} initialDriveId={drive.id} />
+        <LedgerTable drives={drives} people={people} initialDriveId={drive.id} timeZone={timeZone} />
       </Card>
     </main>
   );

@@ -1,14 +1,20 @@
+import { NextResponse } from "next/server";
 import { endpoint } from "@/lib/api/endpoint";
 import { AppError } from "@/lib/api/errors";
-import { ledgerFilterSchema } from "@/lib/ledger/schemas";
-import { listLedger, listMyEntries } from "@/lib/ledger/queries";
+import { LEDGER_PAGE, ledgerListQuerySchema, NEXT_CURSOR_HEADER, TOTAL_HEADER } from "@/lib/ledger/ledger-row";
+import { listLedgerPage } from "@/lib/ledger/ledger-list";
+import { listMyEntries } from "@/lib/ledger/queries";
 
 export const dynamic = "force-dynamic";
 
 // `?mine=1`: anyone's own recent entries (for undo). Otherwise the group's
-// ledger with filters, for organisers.
-export const GET = endpoint({ who: "member", query: ledgerFilterSchema }, async ({ actor, query }) => {
+// ledger with filters, for organisers: the body stays the array of lines; the
+// total and the next page's `cursor` travel in headers.
+export const GET = endpoint({ who: "member", query: ledgerListQuerySchema }, async ({ actor, query }) => {
   if (query.mine) return listMyEntries(actor.group.id, actor.user.id);
   if (actor.role !== "organiser") throw new AppError("forbidden", "The full ledger is for organisers; add ?mine=1 for your own entries.");
-  return listLedger(actor.group.id, query);
+  const page = await listLedgerPage(actor.group.id, query, LEDGER_PAGE);
+  const headers: Record<string, string> = { [TOTAL_HEADER]: String(page.total) };
+  if (page.nextCursor) headers[NEXT_CURSOR_HEADER] = page.nextCursor;
+  return NextResponse.json(page.rows, { headers });
 });

@@ -4,6 +4,7 @@ import { useQuery } from "@tanstack/react-query";
 import { useMemo, useState } from "react";
 import { DriveMap } from "@/components/map/drive-map";
 import type { MapPoint } from "@/components/map/types";
+import { FILL_SHAPE_LABEL, fillShape } from "@/lib/drives/fill";
 import { Card } from "@/components/ui/card";
 import { publicDriveQuery, publicDropPointsQuery, type PublicDriveView, type PublicDropPointView } from "@/lib/drives/query-options";
 import { DropPointList } from "./drop-point-list";
@@ -41,9 +42,11 @@ export function DriveLive({
     lat: p.lat,
     lng: p.lng,
     label: String(i + 1),
+    fill: fillShape(p.fill?.level),
     popup: (
       <div>
         <p className="font-bold">{p.name}</p>
+        <p data-testid="popup-fill">Bin: {FILL_SHAPE_LABEL[fillShape(p.fill?.level)]}</p>
         <p>{p.hours}</p>
         <p>
           {p.tallies.bags} bags in · {p.tallies.goodCans} good cans
@@ -63,7 +66,7 @@ export function DriveLive({
         <h2 id="map-heading" className="text-xl">
           Drop points on the map
         </h2>
-        <p className="text-sm text-ink-soft">Numbers match the list below. The list shows the same places for anyone who prefers reading to panning.</p>
+        <p className="text-sm text-ink-soft">Numbers match the list below. The badge on a pin shows the bin: an empty ring when reported empty, half filled when part full, a solid disc with a bar when full; no badge when nothing was reported since the last pickup. The list shows the same places, and the same fill in words, for anyone who prefers reading to panning.</p>
         <DriveMap
           points={mapPoints}
           center={centre}

@@ -3,7 +3,7 @@
 import { lazy, Suspense, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { LoadBoundary } from "@/components/ui/load-boundary";
-import { LEVEL_LABEL } from "@/lib/drives/fill";
+import { FILL_SHAPE_LABEL, fillShape, LEVEL_LABEL } from "@/lib/drives/fill";
 import type { PublicDropPointView } from "@/lib/drives/query-options";
 import { haversineKm } from "@/lib/routes/great-circle";
 import { formatDateTime } from "@/lib/format";
@@ -82,12 +82,10 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
             <p className="text-sm text-ink-soft" data-testid="tallies">
               {p.tallies.hauls} hauls · {p.tallies.bags} bags collected · {p.tallies.goodCans} good cans · {p.tallies.rejectedCans} set aside
             </p>
-            {p.fillLevel !== null ? (
-              <p className={`text-sm font-semibold ${p.fillLevel >= 75 ? "text-alarm" : "text-ink-soft"}`}>
-                Last report: {LEVEL_LABEL[p.fillLevel] ?? `${p.fillLevel}%`}
-                {p.fillReportedAt ? ` (${formatDateTime(p.fillReportedAt)})` : ""}
-              </p>
-            ) : null}
+            <p className={`text-sm font-semibold ${fillShape(p.fill?.level) === "full" ? "text-alarm" : "text-ink-soft"}`} data-testid="fill" data-fill={fillShape(p.fill?.level)}>
+              Bin: {FILL_SHAPE_LABEL[fillShape(p.fill?.level)]}
+              {p.fill ? ` — ${LEVEL_LABEL[p.fill.level] ?? `${p.fill.level} %`} (${formatDateTime(p.fill.reportedAt)})` : " since the last pickup"}
+            </p>
             {p.photos.length ? (
               <div className="mt-2 flex gap-2 overflow-x-auto">
                 {p.photos.map((url) => (

@@ -50,6 +50,13 @@ export const rows: AuthzRow[] = [
     expect: organiserOnly,
   },
   {
+    route: "app/api/drop-points/[id]/fill-clear/route.ts",
+    method: "POST",
+    path: (f) => `/api/drop-points/${f.demoDropPointId}/fill-clear`,
+    body: () => ({ asOf: "not a time" }),
+    expect: organiserOnly,
+  },
+  {
     route: "app/api/public/drives/[slug]/route.ts",
     method: "GET",
     path: (f) => `/api/public/drives/${f.demoDriveSlug}`,

@@ -1,0 +1,49 @@
+"use client";
+
+import { useMutation } from "@tanstack/react-query";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { Notice } from "@/components/ui/notice";
+import { fetchJson } from "@/lib/api/client";
+import { LEVEL_LABEL, timeAgo } from "@/lib/drives/fill";
+import type { FullBin } from "@/lib/drives/fill-queries";
+import { formatDateTime } from "@/lib/format";
+
+/** Every bin full now, once each; a haul from it or "Clear" takes it off the list. */
+export function FullBins({ bins }: { bins: FullBin[] }) {
+  const router = useRouter();
+  const [cleared, setCleared] = useState<string[]>([]);
+  const clear = useMutation({
+    mutationFn: (b: FullBin) => fetchJson(`/api/drop-points/${b.dropPointId}/fill-clear`, { method: "POST", body: { asOf: b.reportedAt } }),
+    onSuccess: (_data, b) => {
+      setCleared((c) => [...c, `${b.dropPointId}@${b.reportedAt}`]);
+      router.refresh();
+    },
+  });
+  const shown = bins.filter((b) => !cleared.includes(`${b.dropPointId}@${b.reportedAt}`));
+  if (shown.length === 0) return null;
+  return (
+    <div className="mt-4" data-testid="full-bins">
+      <Notice tone="caution" title={`${shown.length} bin${shown.length === 1 ? "" : "s"} reported full`}>
+        <ul className="flex flex-col gap-1">
+          {shown.map((b) => (
+            <li key={b.dropPointId} className="flex flex-wrap items-center justify-between gap-2" data-testid="full-bin">
+              <span>
+                <strong>{b.dropPointName}</strong>: {LEVEL_LABEL[b.level] ?? `${b.level} %`},{" "}
+                <time dateTime={b.reportedAt} title={formatDateTime(b.reportedAt)}>
+                  reported {timeAgo(b.reportedAt)}
+                </time>
+              </span>
+              <Button variant="secondary" onClick={() => clear.mutate(b)} disabled={clear.isPending} aria-label={`Clear the full report for ${b.dropPointName}`}>
+                Clear
+              </Button>
+            </li>
+          ))}
+        </ul>
+        <p className="mt-1 text-sm">A haul from a bin clears it. Clear it here when it was emptied another way or the report was wrong.</p>
+        {clear.isError ? <p role="alert" className="text-alarm">Could not clear it: {clear.error.message}</p> : null}
+      </Notice>
+    </div>
+  );
+}

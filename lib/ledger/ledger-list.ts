@@ -1,0 +1,105 @@
+import "server-only";
+import type { Knex } from "knex";
+import { db } from "@/lib/db";
+import { notFound } from "@/lib/api/errors";
+import type { LedgerListQuery, LedgerPage, LedgerRow } from "./ledger-row";
+
+// The organiser's ledger: newest first by when it happened, then by line, so
+// an entry logged late still sits at its real place. Paged by a cursor (the
+// last line shown), so "Load more" neither skips nor repeats a line while
+// others keep logging.
+
+type Filter = LedgerListQuery & { personId?: string };
+
+/** The group's IANA time zone; day filters and the CSV's local times use it. */
+export async function groupTimeZone(groupId: string): Promise<string> {
+  const row = await db("groups").select("time_zone").where({ id: groupId }).first();
+  if (!row) throw notFound("That group");
+  return row.time_zone as string;
+}
+
+function filtered(groupId: string, f: Filter, timeZone: string): Knex.QueryBuilder {
+  return db("ledger_lines as l")
+    .where("l.group_id", groupId)
+    .modify((q) => {
+      if (f.driveId) q.andWhere("l.drive_id", f.driveId);
+      if (f.dropPointId) q.andWhere("l.drop_point_id", f.dropPointId);
+      if (f.stage) q.andWhere((w) => w.where("l.from_stage", f.stage!).orWhere("l.to_stage", f.stage!));
+      if (f.personId) q.andWhere("l.recorded_by", f.personId);
+      // Days are the group's days: "to 30 Nov" ends at local midnight, not UTC's.
+      if (f.from) q.andWhere("l.occurred_at", ">=", db.raw("(?::date)::timestamp at time zone ?", [f.from, timeZone]));
+      if (f.to) q.andWhere("l.occurred_at", "<", db.raw("(?::date + 1)::timestamp at time zone ?", [f.to, timeZone]));
+    });
+}
+
+export async function listLedgerPage(groupId: string, f: Filter, pageSize: number, timeZone?: string): Promise<LedgerPage> {
+  const zone = timeZone ?? (await groupTimeZone(groupId));
+  const limit = Math.min(f.limit ?? pageSize, 100_000);
+  const [rows, count] = await Promise.all([
+    filtered(groupId, f, zone)
+      .join("movements as m", "m.id", "l.movement_id")
+      .join("users as u", "u.id", "l.recorded_by")
+      .join("drives as d", "d.id", "l.drive_id")
+      .leftJoin("drop_points as p", "p.id", "l.drop_point_id")
+      .leftJoin("heater_units as h", "h.id", "l.heater_unit_id")
+      // The undo of this line's movement, and within it the line that undoes this one.
+      .leftJoin("movements as rm", "rm.reverses_movement_id", "l.movement_id")
+      .leftJoin("ledger_lines as rl", function () {
+        this.on("rl.movement_id", "=", "rm.id").andOn("rl.reverses_id", "=", "l.id");
+      })
+      .select(
+        "l.id", "l.movement_id", "m.kind", "l.occurred_at", "l.recorded_at", "u.name as person", "u.id as person_id", "d.name as drive", "d.id as drive_id",
+        "p.name as drop_point", "h.name as heater_unit", "l.from_stage", "l.to_stage", "l.quantity", "l.reason", "l.is_estimate", "l.reverses_id", "l.note",
+        "rl.id as reversed_by_id", db.raw(`case when m.kind = 'reversal' then m.details->>'reason' end as reversal_reason`),
+      )
+      .modify((q) => {
+        if (f.cursor) {
+          q.andWhere(db.raw("(l.occurred_at, l.id) < (select c.occurred_at, c.id from ledger_lines c where c.id = ? and c.group_id = ?)", [f.cursor, groupId]));
+        }
+      })
+      .orderBy([{ column: "l.occurred_at", order: "desc" }, { column: "l.id", order: "desc" }])
+      .limit(limit + 1),
+    filtered(groupId, f, zone).count<{ n: string }[]>({ n: "*" }),
+  ]);
+  const more = rows.length > limit;
+  const page = (more ? rows.slice(0, limit) : rows).map(toRow);
+  return { rows: page, total: Number(count[0].n), nextCursor: more ? page[page.length - 1].id : null };
+}
+
+// eslint-disable-next-line @typescript-eslint/no-explicit-any
+function toRow(r: any): LedgerRow {
+  return {
+    id: String(r.id),
+    movementId: r.movement_id,
+    kind: r.kind,
+    occurredAt: new Date(r.occurred_at).toISOString(),
+    recordedAt: new Date(r.recorded_at).toISOString(),
+    person: r.person,
+    personId: r.person_id,
+    drive: r.drive,
+    driveId: r.drive_id,
+    dropPoint: r.drop_point,
+    heaterUnit: r.heater_unit,
+    from: r.from_stage,
+    to: r.to_stage,
+    quantity: r.quantity,
+    reason: r.reason,
+    isEstimate: r.is_estimate,
+    reversesId: r.reverses_id === null ? null : String(r.reverses_id),
+    note: r.note,
+    reversedById: r.reversed_by_id === null ? null : String(r.reversed_by_id),
+    reversalReason: r.reversal_reason ?? null,
+  };
+}
+
+/** Ledger lines of the group, newest first (as the page lists them), up to `limit`. */
+export async function listLedger(groupId: string, f: Filter, limit = 500): Promise<LedgerRow[]> {
+  return (await listLedgerPage(groupId, f, limit)).rows;
+}
+
+/** The drive's slug and dates, for the export's file name; null for another group's drive (its rows are filtered out anyway). */
+export async function exportDrive(groupId: string, driveId: string | undefined) {
+  if (!driveId) return null;
+  const d = await db("drives").select("slug", db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`), db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`)).where({ id: driveId, group_id: groupId }).first();
+  return (d ?? null) as { slug: string; startsOn: string; endsOn: string } | null;
+}
