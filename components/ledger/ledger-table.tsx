@@ -9,11 +9,13 @@ import { ledgerKeys } from "@/hooks/queries/ledger";
 import { STAGES } from "@/lib/ledger/schemas";
 import type { LogDrive } from "./log-home";
 import { formatDateTime } from "@/lib/format";
+import { sentLabel } from "@/lib/ledger/entry-time";
 
 interface Row {
   id: string;
   kind: string;
   occurredAt: string;
+  recordedAt: string;
   person: string;
   drive: string;
   dropPoint: string | null;
@@ -100,7 +102,11 @@ export function LedgerTable({ drives, people, initialDriveId }: { drives: LogDri
             <tbody className="divide-y divide-paper-edge">
               {rows.data.map((r) => (
                 <tr key={r.id} className={r.reversesId ? "bg-paper-deep" : ""}>
-                  <td className="px-2 py-1 whitespace-nowrap">{formatDateTime(r.occurredAt)}</td>
+                  <td className="px-2 py-1 whitespace-nowrap">
+                    {formatDateTime(r.occurredAt)}
+                    {/* An entry kept offline is shown at when it happened, and when it reached the server. */}
+                    {sentLabel(r.occurredAt, r.recordedAt) ? <span className="text-ink-faint">, {sentLabel(r.occurredAt, r.recordedAt)}</span> : null}
+                  </td>
                   <td className="px-2 py-1">{r.kind}{r.reversesId ? ` (undoes line ${r.reversesId})` : ""}</td>
                   <td className={`px-2 py-1 ${f.driveId ? "hidden" : ""}`}>{r.drive}</td>
                   <td className="px-2 py-1">{r.dropPoint ?? r.heaterUnit ?? "—"}</td>
