@@ -7,6 +7,7 @@ import { Notice } from "@/components/ui/notice";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { haulInputSchema } from "@/lib/ledger/schemas";
 import { HaulCaution } from "./cautions";
+import { ConfirmUnusual } from "./confirm-unusual";
 import { Stepper } from "./stepper";
 import type { SubmitResult } from "./use-outbox";
 
@@ -19,6 +20,7 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<{ tone: "good" | "info" | "error"; text: string } | null>(null);
   const [pending, setPending] = useState(false);
+  const [ask, setAsk] = useState<{ question: string; confirm: () => Promise<SubmitResult> } | null>(null);
 
   async function onSubmit(e: React.FormEvent) {
     e.preventDefault();
@@ -31,8 +33,19 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
     setErrors({});
     setPending(true);
     const name = dropPoints.find((p) => p.id === dropPointId)?.name ?? "drop point";
-    const result = await submit(`/api/drives/${driveId}/hauls`, parsed.data, `Haul: ${bags} bags from ${name}`);
+    settle(await submit(`/api/drives/${driveId}/hauls`, parsed.data, `Haul: ${bags} bags from ${name}`));
+  }
+
+  async function answerYes() {
+    if (!ask) return;
+    setPending(true);
+    settle(await ask.confirm());
+  }
+
+  function settle(result: SubmitResult) {
     setPending(false);
+    setAsk(null);
+    if (result.kind === "refused" && result.question && result.confirm) return setAsk({ question: result.question, confirm: result.confirm });
     if (result.kind === "refused") return setMessage({ tone: "error", text: result.message });
     setBags(1);
     setWeight("");
@@ -71,8 +84,9 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
       </div>
       <Stepper id="haul-bags" label="Bags" value={bags} onChange={setBags} error={errors.bags} />
       <Field id="haul-weight" label="Weight in kg (optional)" hint="Net weight of the cans if you weighed them; it gives a better estimate." inputMode="decimal" value={weight} onChange={(e) => setWeight(e.target.value)} error={errors.weightKg} />
+      {ask ? <ConfirmUnusual question={ask.question} pending={pending} onYes={() => void answerYes()} onNo={() => setAsk(null)} /> : null}
       {message?.tone === "error" ? <FormError message={message.text} /> : message ? <Notice tone={message.tone === "good" ? "good" : "info"} title={message.text} /> : null}
-      <Button type="submit" disabled={pending}>
+      <Button type="submit" disabled={pending || ask !== null}>
         {pending ? "Saving…" : "Record haul"}
       </Button>
     </form>

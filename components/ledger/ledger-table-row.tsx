@@ -7,6 +7,7 @@ import { fetchJson } from "@/lib/api/client";
 import { ledgerKeys } from "@/hooks/queries/ledger";
 import { formatDateTime } from "@/lib/format";
 import { entryLabel, kindLabel, lineLabel, moveLabel, reasonLabel } from "@/lib/ledger/labels";
+import { sentLabel } from "@/lib/ledger/entry-time";
 import type { LedgerRow } from "@/lib/ledger/ledger-row";
 
 const cell = "px-2 py-1 align-top";
@@ -15,11 +16,16 @@ const cell = "px-2 py-1 align-top";
 export function LedgerLine({ r, siblings, showDrive, timeZone }: { r: LedgerRow; siblings: string[]; showDrive: boolean; timeZone: string }) {
   const [asking, setAsking] = useState(false);
   const undoable = r.kind !== "reversal" && !r.reversedById;
+  const sent = sentLabel(r.occurredAt, r.recordedAt, timeZone);
   return (
     <>
       <tr className={r.reversesId ? "bg-paper-deep" : ""} data-line={r.id}>
         <td className={`${cell} tabular-nums font-semibold`}>{r.id}</td>
-        <td className={`${cell} whitespace-nowrap`}>{formatDateTime(r.occurredAt, timeZone)}</td>
+        <td className={`${cell} whitespace-nowrap`}>
+          {formatDateTime(r.occurredAt, timeZone)}
+          {/* An entry kept offline is shown at when it happened, and when it reached the server. */}
+          {sent ? <span className="block text-sm text-ink-faint">{sent}</span> : null}
+        </td>
         <td className={cell}>
           {entryLabel(r.kind, r.reversesId)}
           {r.reversedById ? <span className="block text-sm text-ink-faint">undone by {lineLabel(r.reversedById)}</span> : null}

@@ -43,7 +43,7 @@ export function LogHome({ drives, initialDriveId, initialDropPointId }: { drives
           </select>
         </div>
       ) : null}
-      <OutboxList items={outbox.items} refusals={outbox.refusals} onRetry={() => void outbox.retryNow()} onDismiss={outbox.dismissRefusal} />
+      <OutboxList items={outbox.items} refusals={outbox.refusals} onRetry={() => void outbox.retryNow()} onDismiss={outbox.dismissRefusal} onConfirm={outbox.confirmRefusal} />
       <div role="tablist" aria-label="What to log" className="grid grid-cols-3 gap-2">
         {TABS.map((t) => (
           <button

@@ -3,17 +3,21 @@
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import type { OutboxItem } from "@/lib/ledger/outbox";
+import type { Refusal } from "./use-outbox";
 
 export function OutboxList({
   items,
   refusals,
   onRetry,
   onDismiss,
+  onConfirm,
 }: {
   items: OutboxItem[];
-  refusals: { key: string; label: string; message: string }[];
+  refusals: Refusal[];
   onRetry: () => void;
   onDismiss: (key: string) => void;
+  /** "Yes, that is right" to an entry the server asked about while it waited in the queue. */
+  onConfirm: (key: string) => void;
 }) {
   if (items.length === 0 && refusals.length === 0) return null;
   return (
@@ -34,15 +38,30 @@ export function OutboxList({
           </Button>
         </Notice>
       ) : null}
-      {refusals.map((r) => (
-        <div key={r.key} role="alert" className="rounded-lg border-2 border-alarm bg-alarm-soft px-3 py-2">
-          <p className="font-semibold text-alarm">Not recorded: {r.label}</p>
-          <p>{r.message}</p>
-          <Button type="button" variant="quiet" onClick={() => onDismiss(r.key)}>
-            Dismiss
-          </Button>
-        </div>
-      ))}
+      {refusals.map((r) =>
+        r.question ? (
+          <div key={r.key} role="alertdialog" aria-label="Check this number" className="rounded-lg border-2 border-sun bg-sun-soft px-3 py-2">
+            <p className="font-semibold">Not recorded yet: {r.label}</p>
+            <p>Really? {r.question}</p>
+            <div className="mt-1 flex flex-wrap gap-2">
+              <Button type="button" onClick={() => onConfirm(r.key)}>
+                Yes, record it
+              </Button>
+              <Button type="button" variant="quiet" onClick={() => onDismiss(r.key)}>
+                No, drop it
+              </Button>
+            </div>
+          </div>
+        ) : (
+          <div key={r.key} role="alert" className="rounded-lg border-2 border-alarm bg-alarm-soft px-3 py-2">
+            <p className="font-semibold text-alarm">Not recorded: {r.label}</p>
+            <p>{r.message}</p>
+            <Button type="button" variant="quiet" onClick={() => onDismiss(r.key)}>
+              Dismiss
+            </Button>
+          </div>
+        ),
+      )}
     </section>
   );
 }

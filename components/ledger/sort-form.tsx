@@ -10,6 +10,7 @@ import { fieldErrorsOf } from "@/lib/api/errors";
 import { REJECT_REASON_LABEL, REJECT_REASONS, sortInputSchema, type RejectReason } from "@/lib/ledger/schemas";
 import { openHaulsQuery } from "@/hooks/queries/ledger";
 import { SortCaution } from "./cautions";
+import { ConfirmUnusual } from "./confirm-unusual";
 import { Stepper } from "./stepper";
 import type { SubmitResult } from "./use-outbox";
 import { formatDateTime } from "@/lib/format";
@@ -25,6 +26,7 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<{ tone: "good" | "info" | "error"; text: string } | null>(null);
   const [pending, setPending] = useState(false);
+  const [ask, setAsk] = useState<{ question: string; confirm: () => Promise<SubmitResult> } | null>(null);
   const rejectTotal = Object.values(rejected).reduce((s, n) => s + n, 0);
   const counted = good + rejectTotal;
 
@@ -35,8 +37,19 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
     if (!parsed.success) return setErrors(fieldErrorsOf(parsed.error));
     setErrors({});
     setPending(true);
-    const result = await submit(`/api/drives/${driveId}/sorts`, parsed.data, `Sort: ${good} good, ${rejectTotal} rejected`);
+    settle(await submit(`/api/drives/${driveId}/sorts`, parsed.data, `Sort: ${good} good, ${rejectTotal} rejected`));
+  }
+
+  async function answerYes() {
+    if (!ask) return;
+    setPending(true);
+    settle(await ask.confirm());
+  }
+
+  function settle(result: SubmitResult) {
     setPending(false);
+    setAsk(null);
+    if (result.kind === "refused" && result.question && result.confirm) return setAsk({ question: result.question, confirm: result.confirm });
     if (result.kind === "refused") return setMessage({ tone: "error", text: result.message });
     setChosen([]);
     setGood(0);
@@ -85,8 +98,9 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
       <p className="text-ink-soft" aria-live="polite">
         Counted {counted} cans{counted > 0 ? ` · yield ${Math.round((good / counted) * 100)} %` : ""}
       </p>
+      {ask ? <ConfirmUnusual question={ask.question} pending={pending} onYes={() => void answerYes()} onNo={() => setAsk(null)} /> : null}
       {message?.tone === "error" ? <FormError message={message.text} /> : message ? <Notice tone={message.tone === "good" ? "good" : "info"} title={message.text} /> : null}
-      <Button type="submit" disabled={pending}>
+      <Button type="submit" disabled={pending || ask !== null}>
         {pending ? "Saving…" : "Record sort"}
       </Button>
     </form>

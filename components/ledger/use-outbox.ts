@@ -2,10 +2,22 @@
 
 import { useCallback, useEffect, useRef, useState } from "react";
 import { useQueryClient } from "@tanstack/react-query";
-import { addToOutbox, classify, markAttempt, readOutbox, removeFromOutbox, type OutboxItem } from "@/lib/ledger/outbox";
+import { addToOutbox, classify, confirmedCopy, markAttempt, newOutboxItem, readOutbox, removeFromOutbox, type OutboxItem } from "@/lib/ledger/outbox";
 import { ledgerKeys } from "@/hooks/queries/ledger";
 
-export type SubmitResult = { kind: "done"; body: unknown } | { kind: "refused"; message: string; fields?: Record<string, string> } | { kind: "queued"; message: string };
+export type SubmitResult =
+  | { kind: "done"; body: unknown }
+  /** `question` and `confirm` when the server asks about an unusual number: `confirm()` sends it again, confirmed. */
+  | { kind: "refused"; message: string; fields?: Record<string, string>; question?: string; confirm?: () => Promise<SubmitResult> }
+  | { kind: "queued"; message: string };
+
+export interface Refusal {
+  key: string;
+  label: string;
+  message: string;
+  question?: string;
+  item: OutboxItem;
+}
 
 const RETRY_MS = 4_000;
 
@@ -33,7 +45,7 @@ async function send(item: OutboxItem) {
 export function useOutbox() {
   const qc = useQueryClient();
   const [items, setItems] = useState<OutboxItem[]>([]);
-  const [refusals, setRefusals] = useState<{ key: string; label: string; message: string }[]>([]);
+  const [refusals, setRefusals] = useState<Refusal[]>([]);
   const busy = useRef(false);
 
   const settle = useCallback(
@@ -43,7 +55,7 @@ export function useOutbox() {
         return;
       }
       setItems(removeFromOutbox(localStorage, item.key));
-      if (outcome.kind === "refused") setRefusals((r) => [...r, { key: item.key, label: item.label, message: outcome.message }]);
+      if (outcome.kind === "refused") setRefusals((r) => [...r, { key: item.key, label: item.label, message: outcome.message, question: outcome.question, item }]);
       void qc.invalidateQueries({ queryKey: ledgerKeys.all });
     },
     [qc],
@@ -78,9 +90,8 @@ export function useOutbox() {
     };
   }, [flush]);
 
-  const submit = useCallback(
-    async (url: string, body: unknown, label: string): Promise<SubmitResult> => {
-      const item: OutboxItem = { key: crypto.randomUUID(), url, body, label, createdAt: new Date().toISOString(), attempts: 0 };
+  const sendNow = useCallback(
+    async (item: OutboxItem): Promise<SubmitResult> => {
       setItems(addToOutbox(localStorage, item));
       if (busy.current || readOutbox(localStorage).length > 1) {
         void flush();
@@ -100,13 +111,31 @@ export function useOutbox() {
       setItems(removeFromOutbox(localStorage, item.key));
       void qc.invalidateQueries({ queryKey: ledgerKeys.all });
       if (outcome.kind === "refused") {
-        const fields = (outcome as { body?: { error?: { fields?: Record<string, string> } } }).body?.error?.fields;
-        return { kind: "refused", message: outcome.message, fields };
+        const { message, fields, question } = outcome;
+        return { kind: "refused", message, fields, question, ...(question ? { confirm: () => sendNow(confirmedCopy(item, crypto.randomUUID())) } : {}) };
       }
       return { kind: "done", body: outcome.body };
     },
     [flush, qc],
   );
 
-  return { items, refusals, dismissRefusal: (key: string) => setRefusals((r) => r.filter((x) => x.key !== key)), submit, retryNow: flush };
+  const submit = useCallback(
+    (url: string, body: unknown, label: string) => sendNow(newOutboxItem(url, body, label, new Date(), crypto.randomUUID())),
+    [sendNow],
+  );
+
+  /** "Yes, that is right" to a queued entry the server asked about: it goes again, confirmed, under a new key. */
+  const confirmRefusal = useCallback(
+    (key: string) => {
+      const refusal = refusals.find((r) => r.key === key);
+      setRefusals((r) => r.filter((x) => x.key !== key));
+      if (refusal) {
+        setItems(addToOutbox(localStorage, confirmedCopy(refusal.item, crypto.randomUUID())));
+        void flush();
+      }
+    },
+    [refusals, flush],
+  );
+
+  return { items, refusals, dismissRefusal: (key: string) => setRefusals((r) => r.filter((x) => x.key !== key)), confirmRefusal, submit, retryNow: flush };
 }

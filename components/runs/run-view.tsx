@@ -7,8 +7,9 @@ import type { RunDetail, RunStop } from "@/lib/runs/queries";
 import { RunStateBadge } from "./run-list";
 import { RouteMap } from "./route-map";
 import { StopActions } from "./stop-actions";
+import { UndoStopHaul, UnskipStop } from "./stop-undo";
 
-function StopCard({ run, stop, canAct, isNext, onDone }: { run: RunDetail; stop: RunStop; canAct: boolean; isNext: boolean; onDone: (r: unknown) => void }) {
+function StopCard({ run, stop, canAct, isNext, onDone, onChanged }: { run: RunDetail; stop: RunStop; canAct: boolean; isNext: boolean; onDone: (r: unknown) => void; onChanged: () => void }) {
   const p = stop.dropPoint;
   return (
     <li
@@ -39,18 +40,24 @@ function StopCard({ run, stop, canAct, isNext, onDone }: { run: RunDetail; stop:
       </dl>
       <div className="mt-3">
         {stop.status === "logged" ? (
-          <p className="font-semibold text-moss-deep">
-            Haul logged ✓
-            {stop.haul ? (
-              <span className="font-normal text-ink-soft">
-                {" "}
-                — {stop.haul.bags} bag{stop.haul.bags === 1 ? "" : "s"}
-                {stop.haul.weightKg !== null ? `, ${stop.haul.weightKg} kg` : ""}, about {stop.haul.estimatedCans} cans (estimate)
-              </span>
-            ) : null}
-          </p>
+          <>
+            <p className="font-semibold text-moss-deep">
+              Haul logged ✓
+              {stop.haul ? (
+                <span className="font-normal text-ink-soft">
+                  {" "}
+                  — {stop.haul.bags} bag{stop.haul.bags === 1 ? "" : "s"}
+                  {stop.haul.weightKg !== null ? `, ${stop.haul.weightKg} kg` : ""}, about {stop.haul.estimatedCans} cans (estimate)
+                </span>
+              ) : null}
+            </p>
+            {canAct && stop.haul ? <UndoStopHaul movementId={stop.haul.movementId} dropPointName={p.name} onDone={onChanged} /> : null}
+          </>
         ) : stop.status === "skipped" ? (
-          <p className="font-semibold text-ink-soft">Skipped — “{stop.skipReason}”</p>
+          <>
+            <p className="font-semibold text-ink-soft">Skipped — “{stop.skipReason}”</p>
+            {canAct ? <UnskipStop runId={run.id} stopId={stop.id} dropPointName={p.name} onDone={onDone} /> : null}
+          </>
         ) : canAct ? (
           <StopActions runId={run.id} stopId={stop.id} dropPointName={p.name} onDone={onDone} />
         ) : (
@@ -69,6 +76,8 @@ export function RunView({ initial, canAct, tileUrl, attribution }: { initial: Ru
     queryClient.setQueryData(options.queryKey, updated as RunDetail);
     void queryClient.invalidateQueries({ queryKey: runQueries.all() });
   };
+  // After an undo in the ledger the run is read again: the stop it reopened comes back pending.
+  const onChanged = () => void queryClient.invalidateQueries({ queryKey: runQueries.all() });
   const next = run.stopList.find((s) => s.status === "pending");
   return (
     <div className="flex flex-col gap-4">
@@ -98,7 +107,7 @@ export function RunView({ initial, canAct, tileUrl, attribution }: { initial: Ru
       />
       <ol className="flex flex-col gap-3">
         {run.stopList.map((s) => (
-          <StopCard key={s.id} run={run} stop={s} canAct={canAct} isNext={s.id === next?.id} onDone={onDone} />
+          <StopCard key={s.id} run={run} stop={s} canAct={canAct} isNext={s.id === next?.id} onDone={onDone} onChanged={onChanged} />
         ))}
       </ol>
     </div>

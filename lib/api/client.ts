@@ -6,6 +6,8 @@ export class ApiError extends Error {
     readonly code: string,
     message: string,
     readonly fields: Record<string, string> = {},
+    /** The rest of the error JSON, e.g. `confirm: "implausible"` when the server asks about an unusual number. */
+    readonly details: Record<string, unknown> = {},
   ) {
     super(message);
     this.name = "ApiError";
@@ -53,15 +55,21 @@ export async function fetchJsonWithHeaders<T>(path: string, init: FetchJsonInit 
     body = null;
   }
   if (!res.ok) {
-    const error = (body as { error?: { code?: string; message?: string; fields?: Record<string, string> } } | null)?.error;
+    const error = (body as { error?: { code?: string; message?: string; fields?: Record<string, string> } & Record<string, unknown> } | null)?.error;
     throw new ApiError(
       res.status,
       error?.code ?? "http_error",
       error?.message ?? `The server answered ${res.status}. Try again in a moment.`,
       error?.fields ?? {},
+      error ?? {},
     );
   }
   return { body: body as T, headers: res.headers };
+}
+
+/** The server's question when it asks before recording an unusual number (409, confirm "implausible"), else null. */
+export function unusualQuestion(error: unknown): string | null {
+  return error instanceof ApiError && error.status === 409 && error.details.confirm === "implausible" ? error.message : null;
 }
 
 /** Field errors from a failed mutation, or an empty object. */

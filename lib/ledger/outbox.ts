@@ -52,7 +52,31 @@ export function markAttempt(storage: StorageLike, key: string, error: string): O
   return items;
 }
 
-export type SendOutcome = { kind: "done"; status: number; body: unknown } | { kind: "refused"; status: number; message: string } | { kind: "retry"; message: string };
+/**
+ * A new entry, stamped with the time it was entered: the body carries it as
+ * `happenedAt`, so the server records when it happened, not when the queue
+ * got through. Stamped once, here, so every retry sends the same body under
+ * the same key (a different body under a used key is refused).
+ */
+export function newOutboxItem(url: string, body: unknown, label: string, now: Date, key: string): OutboxItem {
+  const createdAt = now.toISOString();
+  const stamped = body && typeof body === "object" && !Array.isArray(body) ? { happenedAt: createdAt, ...(body as Record<string, unknown>) } : body;
+  return { key, url, body: stamped, label, createdAt, attempts: 0 };
+}
+
+/**
+ * The same entry sent again after the person said an unusual number is right:
+ * `confirmUnusual: true`, the time it was first entered, and a NEW key — the
+ * refusal is stored under the old key, which would only replay it.
+ */
+export function confirmedCopy(item: OutboxItem, key: string): OutboxItem {
+  return { ...item, key, body: { ...(item.body as Record<string, unknown>), confirmUnusual: true }, attempts: 0, lastError: undefined };
+}
+
+export type SendOutcome =
+  | { kind: "done"; status: number; body: unknown }
+  | { kind: "refused"; status: number; message: string; fields?: Record<string, string>; question?: string }
+  | { kind: "retry"; message: string };
 
 /**
  * What to do with one answer: 2xx is done; a 4xx (other than 408/429) is the
@@ -63,8 +87,11 @@ export function classify(status: number | null, body: unknown, networkError?: st
   if (status === null) return { kind: "retry", message: networkError ?? "No connection" };
   if (status >= 200 && status < 300) return { kind: "done", status, body };
   if (status >= 400 && status < 500 && status !== 408 && status !== 429) {
-    const message = (body as { error?: { message?: string } } | null)?.error?.message ?? `Refused (${status})`;
-    return { kind: "refused", status, message };
+    const error = (body as { error?: { message?: string; fields?: Record<string, string>; confirm?: string } } | null)?.error;
+    const message = error?.message ?? `Refused (${status})`;
+    // The server's question about an unusual number: the person answers it, then the entry goes again confirmed.
+    const question = status === 409 && error?.confirm === "implausible" ? message : undefined;
+    return { kind: "refused", status, message, ...(error?.fields ? { fields: error.fields } : {}), ...(question ? { question } : {}) };
   }
   return { kind: "retry", message: `Server busy (${status})` };
 }

@@ -4,6 +4,7 @@ import type { Actor } from "@/lib/auth/queries";
 import { applyCalibration, calibrationDelta } from "./calibration";
 import { bumpDropPoint, inTx, isoDay, lockDrive, postMovement, type LineSpec } from "./post";
 import type { RejectReason, Stage } from "./schemas";
+import { reopenStopOfHaul } from "@/lib/runs/stop-follow";
 
 // Undo by a new movement whose lines run the other way; both stay in history.
 // Only the author or an organiser may undo, and each movement only once.
@@ -30,6 +31,8 @@ export async function reverseMovement(actor: Actor, movementId: string, conn: Co
       if (haul.sort_id) throw conflict("This haul was already sorted; undo the sort first.");
       await trx("hauls").where({ id: haul.id }).update({ reversed_at: trx.fn.now() });
       await bumpDropPoint(trx, groupId, haul.drive_id, haul.drop_point_id, { hauls: -1, bags: -haul.bags });
+      // The pickup-run stop this haul settled is open again, so it can be logged anew.
+      await reopenStopOfHaul(trx, groupId, haul.id);
     }
     if (movement.kind === "sort") {
       const sort = await trx("sorts").where({ movement_id: movementId }).first();

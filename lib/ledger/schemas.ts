@@ -26,6 +26,10 @@ const wholeCans = (label: string) =>
   z.number({ error: `Enter the number of ${label}.` }).int(`Whole ${label} only.`).min(0, `${label} can't be negative.`).max(MAX_CANS, `That is more ${label} than one entry can hold.`);
 const positiveCans = (label: string) => wholeCans(label).min(1, `At least 1 ${label.replace(/s$/, "")}.`);
 const when = moment("Use a date and time like 2026-12-02T09:30:00Z.").optional();
+/** When it happened, as the entering phone says (an offline entry is sent later); checked against the drive and the clock. */
+const happenedAt = when;
+/** Sent again after the server asked about an unusual number (409, confirm "implausible"): "yes, that is right". */
+const confirmUnusual = z.boolean({ error: "Send true to confirm an unusual entry." }).optional();
 const note = z.string().trim().max(500, "Keep the note under 500 characters.").optional();
 
 /**
@@ -47,6 +51,8 @@ export const haulInputSchema = z
     bags: wholeCans("bags").max(500, "That is more bags than one pickup holds."),
     weightKg: haulWeight.nullable().optional(),
     hauledAt: when,
+    happenedAt,
+    confirmUnusual,
     note,
   })
   .refine((v) => v.bags > 0 || (v.weightKg ?? 0) > 0, { path: ["bags"], message: "Enter the bags, the weight, or both." });
@@ -60,6 +66,8 @@ export const sortInputSchema = z
     good: wholeCans("good cans"),
     rejected: rejectedCountsSchema.default({}),
     sortedAt: when,
+    happenedAt,
+    confirmUnusual,
     note,
   })
   .refine((v) => new Set(v.haulIds).size === v.haulIds.length, { path: ["haulIds"], message: "A haul is listed twice." })
@@ -75,6 +83,7 @@ export const processingInputSchema = z
     to: z.enum(PROCESS_TO, { error: "Choose the stage the cans go to." }),
     quantity: positiveCans("cans"),
     occurredAt: when,
+    happenedAt,
     note,
   })
   .refine((v) => PROCESS_FROM.indexOf(v.from) < PROCESS_TO.indexOf(v.to) + 1, {

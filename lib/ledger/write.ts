@@ -5,6 +5,8 @@ import type { Actor } from "@/lib/auth/queries";
 import { estimateHaulCans } from "./estimate";
 import { allocate } from "./allocate";
 import { loadCalibration, calibrationDelta, applyCalibration } from "./calibration";
+import { resolveEntryTime } from "./entry-time-query";
+import { askUnlessConfirmed, checkHaul, checkSort } from "./plausibility";
 import { bumpDropPoint, inTx, ledgerPostCall, lockDrive, postMovement, runLedgerCall, type LedgerCall, type LineSpec } from "./post";
 import { REJECT_REASONS, UNDER_ONE_CAN, type HaulInput, type ProcessingInput, type RecyclingInput, type SortInput } from "./schemas";
 
@@ -19,14 +21,17 @@ export async function recordHaul(actor: Actor, driveId: string, input: HaulInput
   return inTx(conn, async (trx) => {
     const groupId = actor.group.id;
     await lockDrive(trx, groupId, driveId);
-    const point = await trx("drop_points").select("id", "name").where({ id: input.dropPointId, drive_id: driveId, group_id: groupId }).first();
+    const point = await trx("drop_points").select("id", "name", "capacity_bags").where({ id: input.dropPointId, drive_id: driveId, group_id: groupId }).first();
     if (!point) throw notFound("That drop point");
+    const hauledAt = await resolveEntryTime(trx, { groupId, driveId }, { happenedAt: input.happenedAt, legacy: input.hauledAt, legacyField: "hauledAt" });
     const calibration = await loadCalibration(trx, groupId);
     const est = estimateHaulCans({ bags: input.bags, weightKg: input.weightKg ?? null }, calibration);
     // The schema's minimum uses the default can mass; a group whose counted cans
     // are heavier can still estimate a light weight at no cans.
     if (input.weightKg && est.cans === 0) throw new AppError("invalid_input", "Some fields need another look.", { fields: { weightKg: UNDER_ONE_CAN } });
-    const hauledAt = input.hauledAt ? new Date(input.hauledAt) : new Date();
+    const byBags = estimateHaulCans({ bags: input.bags }, calibration);
+    const weighed = est.method === "weight";
+    askUnlessConfirmed(checkHaul({ bags: input.bags, capacityBags: point.capacity_bags, cansByWeight: weighed ? est.cans : null, cansPerBag: byBags.perUnit }), input.confirmUnusual);
 
     const [movement] = await trx("movements")
       .insert({ group_id: groupId, drive_id: driveId, kind: "haul", recorded_by: actor.user.id, occurred_at: hauledAt, details: "{}" })
@@ -100,7 +105,9 @@ export async function recordSort(actor: Actor, driveId: string, input: SortInput
     const bags = hauls.reduce((s, h) => s + h.bags, 0);
     const allWeighed = hauls.every((h) => h.weight_kg !== null);
     const weightKg = allWeighed ? hauls.reduce((s, h) => s + Number(h.weight_kg), 0) : null;
-    const sortedAt = input.sortedAt ? new Date(input.sortedAt) : new Date();
+    const estimated = hauls.reduce((s, h) => s + h.estimated_cans, 0);
+    askUnlessConfirmed(checkSort({ counted, estimated, bags, hauls: hauls.length }), input.confirmUnusual);
+    const sortedAt = await resolveEntryTime(trx, { groupId, driveId }, { happenedAt: input.happenedAt, legacy: input.sortedAt, legacyField: "sortedAt" });
     const details = { good: input.good, rejected, counted, haulCount: hauls.length, bags, weightKg };
 
     const weights = hauls.map((h) => (h.estimated_cans > 0 ? h.estimated_cans : 1));
@@ -118,7 +125,7 @@ export async function recordSort(actor: Actor, driveId: string, input: SortInput
       good: input.good,
       rejected,
       counted,
-      closedEstimate: hauls.reduce((s, h) => s + h.estimated_cans, 0),
+      closedEstimate: estimated,
       yield: counted > 0 ? input.good / counted : null,
       sortedAt: sortedAt.toISOString(),
     };
@@ -177,7 +184,7 @@ export type ProcessingResult = {
 
 /** The answer and the ledger call of a processing step; the movement id is chosen here, so the answer is known before the write. */
 export async function prepareProcessing(actor: Actor, driveId: string, input: ProcessingInput, conn: Conn): Promise<{ answer: ProcessingResult; call: LedgerCall }> {
-  const occurredAt = input.occurredAt ? new Date(input.occurredAt) : new Date();
+  const occurredAt = await resolveEntryTime(conn, { groupId: actor.group.id, driveId }, { happenedAt: input.happenedAt, legacy: input.occurredAt, legacyField: "occurredAt" });
   const holesPerCan = input.to === "punched" ? await drivesHolesPerCan(conn, actor.group.id, driveId) : null;
   const answer: ProcessingResult = {
     movementId: randomUUID(),

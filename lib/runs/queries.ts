@@ -56,7 +56,8 @@ export interface RunStop {
   skipReason: string | null;
   haulId: string | null;
   resolvedAt: string | null;
-  haul: { bags: number; weightKg: number | null; estimatedCans: number } | null;
+  /** `movementId` is the ledger entry to undo (POST /api/movements/{id}/reversal), which reopens the stop. */
+  haul: { bags: number; weightKg: number | null; estimatedCans: number; movementId: string } | null;
   dropPoint: {
     id: string;
     name: string;
@@ -102,6 +103,7 @@ export async function getRun(actor: Actor, runId: string, trx: Knex = db): Promi
       "h.bags as haulBags",
       "h.weight_kg as haulWeightKg",
       "h.estimated_cans as haulCans",
+      "h.movement_id as haulMovementId",
       "s.id",
       "s.position",
       "s.leg_km as legKm",
@@ -136,7 +138,7 @@ export async function getRun(actor: Actor, runId: string, trx: Knex = db): Promi
       haulId: s.haulId,
       resolvedAt: s.resolvedAt ? new Date(s.resolvedAt).toISOString() : null,
       haul: s.haulId
-        ? { bags: s.haulBags, weightKg: s.haulWeightKg === null ? null : Number(s.haulWeightKg), estimatedCans: s.haulCans }
+        ? { bags: s.haulBags, weightKg: s.haulWeightKg === null ? null : Number(s.haulWeightKg), estimatedCans: s.haulCans, movementId: s.haulMovementId }
         : null,
       dropPoint: {
         id: s.pointId,

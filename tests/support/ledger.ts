@@ -62,11 +62,15 @@ export async function freshGroup(label = "ledger"): Promise<FreshGroup> {
   };
 }
 
-/** Hauls `bags` at a drop point and sorts them to exactly `good` good cans; returns the two bodies. */
+/**
+ * Hauls 2 bags at a drop point and sorts them to exactly `good` good cans; returns the two bodies.
+ * The sort is sent confirmed: callers set up stock of any size, and the question
+ * about unusual counts has its own tests (ledger-plausibility.test.ts).
+ */
 export async function haulAndSort(c: ApiClient, driveId: string, dropPointId: string, good: number, rejected: Record<string, number> = {}) {
   const haul = await c.json<{ id: string; movementId: string; estimatedCans: number }>("POST", `/api/drives/${driveId}/hauls`, { dropPointId, bags: 2 });
   if (haul.status !== 201) throw new Error(`haul failed: ${haul.status} ${JSON.stringify(haul.body)}`);
-  const sort = await c.json<{ movementId: string }>("POST", `/api/drives/${driveId}/sorts`, { haulIds: [haul.body.id], good, rejected });
+  const sort = await c.json<{ movementId: string }>("POST", `/api/drives/${driveId}/sorts`, { haulIds: [haul.body.id], good, rejected, confirmUnusual: true });
   if (sort.status !== 201) throw new Error(`sort failed: ${sort.status} ${JSON.stringify(sort.body)}`);
   return { haul: haul.body, sort: sort.body };
 }

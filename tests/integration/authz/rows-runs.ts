@@ -54,6 +54,13 @@ export const rows: AuthzRow[] = [
     expect: { anonymous: 401, volunteer: 422, builder: 403, organiser: 422, otherOrganiser: 404 },
   },
   {
+    route: "app/api/runs/[id]/stops/[stopId]/unskip/route.ts",
+    method: "POST",
+    path: () => `${stopPath}/unskip`,
+    note: "the demo stop is pending, so those who may touch it get 409 (not skipped)",
+    expect: { anonymous: 401, volunteer: 409, builder: 403, organiser: 409, otherOrganiser: 404 },
+  },
+  {
     route: "app/api/runs/[id]/stops/[stopId]/log/route.ts",
     method: "POST",
     path: () => `${stopPath}/log`,

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { addToOutbox, classify, markAttempt, readOutbox, removeFromOutbox, type OutboxItem } from "@/lib/ledger/outbox";
+import { addToOutbox, classify, confirmedCopy, markAttempt, newOutboxItem, readOutbox, removeFromOutbox, type OutboxItem } from "@/lib/ledger/outbox";
 
 function memory() {
   const m = new Map<string, string>();
@@ -32,5 +32,32 @@ describe("outbox", () => {
     expect(classify(429, null).kind).toBe("retry");
     expect(classify(201, { id: 1 })).toEqual({ kind: "done", status: 201, body: { id: 1 } });
     expect(classify(409, { error: { message: "only 3 left" } })).toEqual({ kind: "refused", status: 409, message: "only 3 left" });
+  });
+});
+
+describe("entry time and confirmation", () => {
+  it("stamps a new entry with the time it was entered, once, in its body", () => {
+    const entered = new Date("2026-12-02T10:00:00Z");
+    const i = newOutboxItem("/api/drives/d/hauls", { bags: 2 }, "Haul", entered, "k1");
+    expect(i).toMatchObject({ key: "k1", createdAt: "2026-12-02T10:00:00.000Z", attempts: 0, body: { bags: 2, happenedAt: "2026-12-02T10:00:00.000Z" } });
+    // A time the form set itself wins.
+    expect(newOutboxItem("/x", { happenedAt: "2026-12-01T09:00:00Z" }, "x", entered, "k2").body).toEqual({ happenedAt: "2026-12-01T09:00:00Z" });
+  });
+
+  it("resends a confirmed entry under a new key, with the time it was first entered", () => {
+    const first = newOutboxItem("/api/drives/d/sorts", { haulIds: ["h"], good: 1_000_000 }, "Sort", new Date("2026-12-02T10:00:00Z"), "old");
+    const again = confirmedCopy({ ...first, attempts: 2, lastError: "x" }, "new");
+    expect(again.key).toBe("new");
+    expect(again.body).toEqual({ haulIds: ["h"], good: 1_000_000, happenedAt: "2026-12-02T10:00:00.000Z", confirmUnusual: true });
+    expect(again.attempts).toBe(0);
+    expect(first.body).not.toHaveProperty("confirmUnusual");
+  });
+
+  it("turns the server's question into one the form can ask", () => {
+    const question = "That is 1,000,000 cans from 1 bag (about 60 expected). Is that right?";
+    const asked = classify(409, { error: { code: "conflict", message: question, confirm: "implausible" } });
+    expect(asked).toMatchObject({ kind: "refused", status: 409, question });
+    expect(classify(409, { error: { code: "conflict", message: "Only 3 left." } })).not.toHaveProperty("question");
+    expect(classify(422, { error: { code: "invalid_input", message: "m", fields: { happenedAt: "future" } } })).toMatchObject({ fields: { happenedAt: "future" } });
   });
 });

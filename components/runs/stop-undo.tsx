@@ -1,0 +1,62 @@
+"use client";
+
+import { useMutation } from "@tanstack/react-query";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { FormError } from "@/components/ui/field";
+import { fetchJson } from "@/lib/api/client";
+
+function newKey(): string {
+  if (typeof crypto.randomUUID === "function") return crypto.randomUUID();
+  return Array.from(crypto.getRandomValues(new Uint8Array(16)), (b) => b.toString(16).padStart(2, "0")).join("");
+}
+
+/** A skipped stop goes back on the run, pending, to be logged or skipped again. */
+export function UnskipStop({ runId, stopId, dropPointName, onDone }: { runId: string; stopId: string; dropPointName: string; onDone: (run: unknown) => void }) {
+  const unskip = useMutation({
+    mutationFn: () => fetchJson(`/api/runs/${runId}/stops/${stopId}/unskip`, { method: "POST", json: {} }),
+    onSuccess: onDone,
+  });
+  return (
+    <div className="mt-2 flex flex-col gap-1">
+      <Button type="button" variant="secondary" aria-label={`Put ${dropPointName} back on the run`} disabled={unskip.isPending} onClick={() => unskip.mutate()}>
+        {unskip.isPending ? "Saving…" : "Put back on the run"}
+      </Button>
+      <FormError message={unskip.isError ? unskip.error.message : null} />
+    </div>
+  );
+}
+
+/**
+ * Undoes the stop's haul in the ledger (a reversing entry; both stay in its
+ * history), which puts the stop back to pending so the right haul can be logged.
+ */
+export function UndoStopHaul({ movementId, dropPointName, onDone }: { movementId: string; dropPointName: string; onDone: () => void }) {
+  const [asking, setAsking] = useState(false);
+  const [key] = useState(newKey);
+  const undo = useMutation({
+    mutationFn: () => fetchJson(`/api/movements/${movementId}/reversal`, { method: "POST", json: {}, headers: { "Idempotency-Key": key } }),
+    onSuccess: onDone,
+  });
+  if (!asking) {
+    return (
+      <Button type="button" variant="quiet" className="mt-2" onClick={() => setAsking(true)}>
+        Undo this haul
+      </Button>
+    );
+  }
+  return (
+    <div role="alertdialog" aria-label={`Undo the haul at ${dropPointName}`} className="mt-2 rounded-lg border-2 border-sun bg-sun-soft p-3">
+      <p>Undo this haul? It is taken back out of the ledger (the undo stays in its history) and the stop is open to log again.</p>
+      <div className="mt-2 flex flex-wrap gap-2">
+        <Button type="button" disabled={undo.isPending} onClick={() => undo.mutate()}>
+          {undo.isPending ? "Saving…" : "Yes, undo it"}
+        </Button>
+        <Button type="button" variant="secondary" disabled={undo.isPending} onClick={() => setAsking(false)}>
+          No, keep it
+        </Button>
+      </div>
+      <FormError message={undo.isError ? undo.error.message : null} />
+    </div>
+  );
+}

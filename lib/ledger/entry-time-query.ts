@@ -1,0 +1,23 @@
+import type { Knex } from "knex";
+import { notFound } from "@/lib/api/errors";
+import { entryTime } from "./entry-time";
+
+/**
+ * The time a writer records: the request's own (`happenedAt`, or the older
+ * per-kind name such as `hauledAt`), checked against the drive's start, else now.
+ * Reads the drive only when a time was given, so the usual entry costs nothing more.
+ */
+export async function resolveEntryTime(
+  conn: Knex | Knex.Transaction,
+  m: { groupId: string; driveId: string },
+  given: { happenedAt?: string; legacy?: string; legacyField: string },
+): Promise<Date> {
+  const value = given.happenedAt ?? given.legacy;
+  if (!value) return new Date();
+  const row = await conn("drives")
+    .select(conn.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`))
+    .where({ id: m.driveId, group_id: m.groupId })
+    .first();
+  if (!row) throw notFound("That drive");
+  return entryTime(value, given.happenedAt ? "happenedAt" : given.legacyField, row.startsOn as string);
+}

@@ -1,0 +1,42 @@
+import type { Knex } from "knex";
+import { conflict, notFound } from "@/lib/api/errors";
+import type { Actor } from "@/lib/auth/queries";
+import type { StopStatus } from "./schemas";
+import { runStateOf } from "./state";
+
+// A run's stops follow what happened in the ledger and on the road: a stop
+// whose haul is undone is pending again, a skipped stop can be put back, and
+// the run's state is recomputed from its stops in the same transaction.
+// No "server-only" here: the ledger's reversal (also used by scripts) calls it.
+
+/** Sets the run's state from its stops; `finished_at` only while it is done. */
+export async function refreshRunState(trx: Knex.Transaction, runId: string) {
+  const statuses: StopStatus[] = await trx("pickup_run_stops").where({ run_id: runId }).pluck("status");
+  const state = runStateOf(statuses);
+  await trx("pickup_runs")
+    .where({ id: runId })
+    .update({ state, finished_at: state === "done" ? trx.raw("coalesce(finished_at, now())") : null });
+  return state;
+}
+
+/** The stop a reversed haul settled goes back to pending (and its run to not done). */
+export async function reopenStopOfHaul(trx: Knex.Transaction, groupId: string, haulId: string): Promise<{ runId: string; stopId: string } | null> {
+  const [stop] = await trx("pickup_run_stops")
+    .where({ haul_id: haulId, group_id: groupId })
+    .update({ status: "pending", haul_id: null, skip_reason: null, resolved_by: null, resolved_at: null })
+    .returning(["id", "run_id"]);
+  if (!stop) return null;
+  await refreshRunState(trx, stop.run_id);
+  return { runId: stop.run_id as string, stopId: stop.id as string };
+}
+
+/** Puts a skipped stop back on the run. The run's volunteer or an organiser only; a stop not skipped is 409. */
+export async function unskipStop(actor: Actor, runId: string, stopId: string, trx: Knex.Transaction) {
+  const run = await trx("pickup_runs").select("id", "assignee_id").where({ id: runId, group_id: actor.group.id }).forUpdate().first();
+  if (!run || (actor.role !== "organiser" && run.assignee_id !== actor.user.id)) throw notFound("That pickup run");
+  const stop = await trx("pickup_run_stops").select("id", "status").where({ id: stopId, run_id: runId, group_id: actor.group.id }).first();
+  if (!stop) throw notFound("That stop");
+  if (stop.status !== "skipped") throw conflict(`This stop is ${stop.status}, not skipped.`);
+  await trx("pickup_run_stops").where({ id: stopId }).update({ status: "pending", skip_reason: null, resolved_by: null, resolved_at: null });
+  return { state: await refreshRunState(trx, runId) };
+}
