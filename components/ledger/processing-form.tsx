@@ -6,10 +6,11 @@ import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { fieldErrorsOf } from "@/lib/api/errors";
-import { processingInputSchema } from "@/lib/ledger/schemas";
+import { LOSS_REASON_LABEL, processingInputSchema, type LossReason } from "@/lib/ledger/schemas";
 import { stockQuery } from "@/hooks/queries/ledger";
 import { ProcessingCaution } from "./cautions";
 import { Stepper } from "./stepper";
+import { LossFields, lossReasonsFor, ownLossReason } from "./loss-fields";
 import type { SubmitResult } from "./use-outbox";
 
 type Submit = (url: string, body: unknown, label: string) => Promise<SubmitResult>;
@@ -23,25 +24,30 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
   const stock = useQuery(stockQuery(driveId));
   const [stepIndex, setStepIndex] = useState(0);
   const [quantity, setQuantity] = useState(0);
+  const [lost, setLost] = useState(0);
+  const [chosenReason, setLossReason] = useState<LossReason | null>(null);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<{ tone: "good" | "info" | "error"; text: string } | null>(null);
   const [pending, setPending] = useState(false);
   const step = STEPS[stepIndex];
   const available = stock.data ? stock.data.stages[step.from] : null;
+  const lossReason = chosenReason && lossReasonsFor(step.to).includes(chosenReason) ? chosenReason : ownLossReason(step.to);
 
   async function onSubmit(e: React.FormEvent) {
     e.preventDefault();
-    const parsed = processingInputSchema.safeParse({ from: step.from, to: step.to, quantity });
+    const parsed = processingInputSchema.safeParse({ from: step.from, to: step.to, quantity, ...(lost > 0 ? { lost: { reason: lossReason, quantity: lost } } : {}) });
     if (!parsed.success) return setErrors(fieldErrorsOf(parsed.error));
     setErrors({});
     setPending(true);
-    const result = await submit(`/api/drives/${driveId}/processing`, parsed.data, `${step.label}: ${quantity} cans`);
+    const lostText = lost > 0 ? `, ${lost} lost (${LOSS_REASON_LABEL[lossReason].toLowerCase()})` : "";
+    const result = await submit(`/api/drives/${driveId}/processing`, parsed.data, `${step.label}: ${quantity} cans${lostText}`);
     setPending(false);
     if (result.kind === "refused") return setMessage({ tone: "error", text: result.message });
     setQuantity(0);
+    setLost(0);
     if (result.kind === "queued") return setMessage({ tone: "info", text: result.message });
     const body = result.body as { holes: number | null; holesPerCan: number | null };
-    setMessage({ tone: "good", text: `${step.label}: ${quantity} cans recorded.${body.holes ? ` That batch needed ${body.holes} holes (${body.holesPerCan} a can).` : ""}` });
+    setMessage({ tone: "good", text: `${step.label}: ${quantity} cans recorded${lostText}.${body.holes ? ` That batch needed ${body.holes} holes (${body.holesPerCan} a can).` : ""}` });
   }
 
   return (
@@ -63,6 +69,7 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
       </p>
       <Stepper id="processing-quantity" label="Cans in this batch" value={quantity} onChange={setQuantity} bigStep={10} error={errors.quantity ?? errors.to} />
       {step.to === "punched" && quantity > 0 ? <p className="text-ink-soft">At 4 holes a can that is {quantity * 4} holes; the answer uses your units&apos; own count.</p> : null}
+      <LossFields to={step.to} from={step.from} reason={lossReason} quantity={lost} onReason={setLossReason} onQuantity={setLost} errors={errors} />
       {message?.tone === "error" ? <FormError message={message.text} /> : message ? <Notice tone={message.tone === "good" ? "good" : "info"} title={message.text} /> : null}
       <Button type="submit" disabled={pending}>
         {pending ? "Saving…" : "Record processing"}

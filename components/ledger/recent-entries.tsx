@@ -16,8 +16,14 @@ function describe(e: MyEntry): string {
       return `Haul from ${e.dropPoint ?? "a drop point"}: ≈${e.estimated} cans`;
     case "sort":
       return `Sort: ${d.good} good, ${Number(d.counted) - Number(d.good)} rejected`;
-    case "processing":
-      return `${String(d.to).replace(/^./, (c) => c.toUpperCase())}: ${e.counted} cans`;
+    case "processing": {
+      // Older entries carry no quantity in their details; their lines all went to `to`.
+      const lost = d.lost as { quantity: number } | undefined;
+      const moved = typeof d.quantity === "number" ? d.quantity : e.counted;
+      return `${String(d.to).replace(/^./, (c) => c.toUpperCase())}: ${moved} cans${lost ? `, ${lost.quantity} lost` : ""}`;
+    }
+    case "stockCount":
+      return `Stock count: ${(d.lines as unknown[] | undefined)?.length ?? 0} stages adjusted`;
     case "claim":
       return `Claimed ${e.counted} cans`;
     case "builtIn":

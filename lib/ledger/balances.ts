@@ -3,7 +3,7 @@ import { db } from "@/lib/db";
 import { cachedRead } from "@/lib/cache/read-cache";
 import { notFound } from "@/lib/api/errors";
 import type { GoodStageBalances } from "@/lib/drives/progress";
-import { REJECT_REASONS, type DriveStock, type RejectReason } from "./schemas";
+import { TALLY_REASONS, type DriveStock, type TallyReason } from "./schemas";
 
 // Reads of the running totals; none of them scans the ledger.
 
@@ -19,10 +19,10 @@ async function driveTotals(driveId: string): Promise<Record<string, number>> {
   return Object.fromEntries(rows.map((r) => [r.stage, Number(r.quantity)]));
 }
 
-async function rejectedByReason(driveId: string): Promise<Record<RejectReason, number>> {
+async function rejectedByReason(driveId: string): Promise<Record<TallyReason, number>> {
   const rows = await db("reject_tallies").select("reason", "quantity").where({ drive_id: driveId }).whereNull("drop_point_id");
-  const out = Object.fromEntries(REJECT_REASONS.map((r) => [r, 0])) as Record<RejectReason, number>;
-  for (const r of rows) out[r.reason as RejectReason] = Number(r.quantity);
+  const out = Object.fromEntries(TALLY_REASONS.map((r) => [r, 0])) as Record<TallyReason, number>;
+  for (const r of rows) out[r.reason as TallyReason] = Number(r.quantity);
   return out;
 }
 

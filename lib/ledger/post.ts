@@ -1,7 +1,7 @@
 import type { Knex } from "knex";
 import { AppError, conflict, notFound } from "@/lib/api/errors";
 import { needRefusalMessage } from "@/lib/heaters/need";
-import type { RejectReason, Stage } from "./schemas";
+import type { LineReason, Stage } from "./schemas";
 
 // The one place ledger lines are written. postMovement hands the movement to
 // ledger_post() in PostgreSQL, which locks the drive (so writes to one drive
@@ -31,7 +31,7 @@ export interface LineSpec {
   quantity: number;
   dropPointId?: string | null;
   heaterUnitId?: string | null;
-  reason?: RejectReason | null;
+  reason?: LineReason | null;
   isEstimate?: boolean;
   note?: string;
   haulId?: string | null;
@@ -45,7 +45,7 @@ export interface MovementSpec {
   groupId: string;
   driveId: string;
   actorId: string;
-  kind: "haul" | "sort" | "processing" | "claim" | "release" | "builtIn" | "recycling" | "reversal";
+  kind: "haul" | "sort" | "processing" | "claim" | "release" | "builtIn" | "recycling" | "reversal" | "stockCount";
   occurredAt?: Date;
   reversesMovementId?: string;
   details?: Record<string, unknown>;

@@ -100,12 +100,6 @@ export async function listMyEntries(groupId: string, userId: string, limit = 15)
   }));
 }
 
-/** 404 unless the drive belongs to the group; handlers call it before reading the body. */
-export async function assertOwnDrive(groupId: string, driveId: string): Promise<void> {
-  const row = await db("drives").select("id").where({ id: driveId, group_id: groupId }).first();
-  if (!row) throw notFound("That drive");
-}
-
 /** Drives with their active drop points, for the volunteer's forms; current drives first. */
 export async function listLogDrives(groupId: string) {
   const drives = await db("drives").select("id", "name", "ends_on").where({ group_id: groupId }).orderBy([{ column: "ends_on", order: "desc" }, { column: "name" }]);

@@ -5,6 +5,8 @@ import type { Actor } from "@/lib/auth/queries";
 import * as w from "./write";
 import * as c from "./write-claims";
 import { reverseMovement as reverse } from "./reverse";
+import * as sc from "./stock-count";
+import type { StockCountInput } from "./stock-count-schema";
 import type { HaulInput, ProcessingInput, RecyclingInput, SortInput } from "./schemas";
 
 // The server's entry points for writing the ledger. Each runs in its own
@@ -28,3 +30,4 @@ export const releaseClaim = (actor: Actor, heaterUnitId: string, quantity: numbe
 export const recordBuiltIn = (actor: Actor, heaterUnitId: string, quantity: number, conn: Conn = db, note?: string) =>
   c.recordBuiltIn(actor, heaterUnitId, quantity, conn, note);
 export const reverseMovement = (actor: Actor, movementId: string, conn: Conn = db, reason?: string) => reverse(actor, movementId, conn, reason);
+export const recordStockCount = (actor: Actor, driveId: string, input: StockCountInput, conn: Conn = db) => sc.recordStockCount(actor, driveId, input, conn);

@@ -3,7 +3,7 @@ import { AppError, conflict, notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
 import { applyCalibration, calibrationDelta } from "./calibration";
 import { bumpDropPoint, inTx, isoDay, lockDrive, postMovement, type LineSpec } from "./post";
-import type { RejectReason, Stage } from "./schemas";
+import type { LineReason, Stage } from "./schemas";
 import { reopenStopOfHaul } from "@/lib/runs/stop-follow";
 
 // Undo by a new movement whose lines run the other way; both stay in history.
@@ -49,7 +49,7 @@ export async function reverseMovement(actor: Actor, movementId: string, conn: Co
       quantity: l.quantity,
       dropPointId: l.drop_point_id,
       heaterUnitId: l.heater_unit_id,
-      reason: l.reason as RejectReason | null,
+      reason: l.reason as LineReason | null,
       isEstimate: l.is_estimate,
       haulId: l.haul_id,
       sortId: l.sort_id,

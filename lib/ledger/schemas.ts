@@ -15,6 +15,22 @@ export const REJECT_REASON_LABEL: Record<RejectReason, string> = {
   other: "Other",
 };
 
+/** Why cans were lost on the way through processing; each names the step it happened in (PRODUCT.md "Loss"). */
+export const LOSS_REASONS = ["damagedWashing", "damagedOpening", "damagedPunching"] as const;
+export type LossReason = (typeof LOSS_REASONS)[number];
+export const LOSS_REASON_LABEL: Record<LossReason, string> = {
+  damagedWashing: "Damaged in washing",
+  damagedOpening: "Damaged in opening",
+  damagedPunching: "Damaged in punching",
+};
+/** The stage a loss reason's step leads to: a step that stops earlier cannot lose cans in it. */
+export const LOSS_STEP: Record<LossReason, (typeof PROCESS_TO)[number]> = { damagedWashing: "washed", damagedOpening: "opened", damagedPunching: "punched" };
+/** Every reason the reject tallies (and the stock's `rejected`) are kept by: a sort's and processing losses'. */
+export const TALLY_REASONS = [...REJECT_REASONS, ...LOSS_REASONS] as const;
+export type TallyReason = (typeof TALLY_REASONS)[number];
+/** A ledger line's reason: a reject's or loss's, or `stockCount` on the lines of a stock count's adjustment. */
+export type LineReason = TallyReason | "stockCount";
+
 export const STAGES = ["hauled", "good", "washed", "opened", "punched", "claimed", "builtIn", "rejected", "recycled"] as const;
 export type Stage = (typeof STAGES)[number];
 
@@ -77,11 +93,19 @@ export const sortInputSchema = z
   });
 export type SortInput = z.infer<typeof sortInputSchema>;
 
+export const lossInputSchema = z.object({
+  reason: z.enum(LOSS_REASONS, { error: "Choose how the cans were lost." }),
+  quantity: positiveCans("lost cans"),
+});
+
 export const processingInputSchema = z
   .object({
     from: z.enum(PROCESS_FROM, { error: "Choose the stage the cans come from." }),
     to: z.enum(PROCESS_TO, { error: "Choose the stage the cans go to." }),
-    quantity: positiveCans("cans"),
+    // 0 only when the whole batch was lost (then `lost` says how many).
+    quantity: wholeCans("cans"),
+    /** Cans lost on the way: they leave `from` for `rejected` in the same movement. */
+    lost: lossInputSchema.optional(),
     occurredAt: when,
     happenedAt,
     note,
@@ -89,7 +113,13 @@ export const processingInputSchema = z
   .refine((v) => PROCESS_FROM.indexOf(v.from) < PROCESS_TO.indexOf(v.to) + 1, {
     path: ["to"],
     message: "Cans only move forward: good → washed → opened → punched.",
-  });
+  })
+  .refine((v) => v.quantity > 0 || v.lost !== undefined, { path: ["quantity"], message: "At least 1 can." })
+  .refine((v) => !v.lost || PROCESS_TO.indexOf(LOSS_STEP[v.lost.reason]) <= PROCESS_TO.indexOf(v.to), {
+    path: ["lost", "reason"],
+    message: "This step stops before that one: choose where the cans were really damaged.",
+  })
+  .refine((v) => v.quantity + (v.lost?.quantity ?? 0) <= MAX_CANS, { path: ["lost", "quantity"], message: "That is more cans than one entry can hold." });
 export type ProcessingInput = z.infer<typeof processingInputSchema>;
 
 export const claimInputSchema = z.object({ quantity: positiveCans("cans"), note });
@@ -119,7 +149,8 @@ export type LedgerFilter = z.infer<typeof ledgerFilterSchema>;
 /** The stock shape of GET /api/drives/{id}/stock. */
 export interface DriveStock {
   stages: { hauled: number; good: number; washed: number; opened: number; punched: number; builtIn: number; recycled: number };
-  rejected: Record<RejectReason, number>;
+  /** Rejects by reason: a sort's reasons and processing losses' (LOSS_REASONS), both counted. */
+  rejected: Record<TallyReason, number>;
   /** Rejected cans counted but not yet taken to recycling. */
   rejectedOnHand: number;
   claimed: number;

@@ -8,7 +8,7 @@ import { loadCalibration, calibrationDelta, applyCalibration } from "./calibrati
 import { resolveEntryTime } from "./entry-time-query";
 import { askUnlessConfirmed, checkHaul, checkSort } from "./plausibility";
 import { bumpDropPoint, inTx, ledgerPostCall, lockDrive, postMovement, runLedgerCall, type LedgerCall, type LineSpec } from "./post";
-import { REJECT_REASONS, UNDER_ONE_CAN, type HaulInput, type ProcessingInput, type RecyclingInput, type SortInput } from "./schemas";
+import { REJECT_REASONS, UNDER_ONE_CAN, type HaulInput, type LossReason, type ProcessingInput, type RecyclingInput, type SortInput } from "./schemas";
 
 // Writers of the ledger. Each is one transaction (or joins the caller's, as
 // the Idempotency-Key helper does). ledger_post locks the drive and checks the
@@ -177,6 +177,8 @@ export type ProcessingResult = {
   from: ProcessingInput["from"];
   to: ProcessingInput["to"];
   quantity: number;
+  /** Cans lost on the way (to `rejected` with the reason), or null. */
+  lost: { reason: LossReason; quantity: number } | null;
   holesPerCan: number | null;
   holes: number | null;
   occurredAt: string;
@@ -186,20 +188,24 @@ export type ProcessingResult = {
 export async function prepareProcessing(actor: Actor, driveId: string, input: ProcessingInput, conn: Conn): Promise<{ answer: ProcessingResult; call: LedgerCall }> {
   const occurredAt = await resolveEntryTime(conn, { groupId: actor.group.id, driveId }, { happenedAt: input.happenedAt, legacy: input.occurredAt, legacyField: "occurredAt" });
   const holesPerCan = input.to === "punched" ? await drivesHolesPerCan(conn, actor.group.id, driveId) : null;
+  const lost = input.lost ? { reason: input.lost.reason, quantity: input.lost.quantity } : null;
   const answer: ProcessingResult = {
     movementId: randomUUID(),
     driveId,
     from: input.from,
     to: input.to,
     quantity: input.quantity,
+    lost,
     holesPerCan,
     holes: holesPerCan === null ? null : holesPerCan * input.quantity,
     occurredAt: occurredAt.toISOString(),
   };
-  const call = ledgerPostCall(
-    { groupId: actor.group.id, driveId, actorId: actor.user.id, kind: "processing", occurredAt, movementId: answer.movementId, details: { from: input.from, to: input.to } },
-    [{ from: input.from, to: input.to, quantity: input.quantity, note: input.note }],
-  );
+  // Lost cans leave `from` in the same movement, so ledger_post checks `from` for quantity + lost at once.
+  const lines: LineSpec[] = [];
+  if (input.quantity > 0) lines.push({ from: input.from, to: input.to, quantity: input.quantity, note: input.note });
+  if (lost) lines.push({ from: input.from, to: "rejected", quantity: lost.quantity, reason: lost.reason, note: input.note });
+  const details = lost ? { from: input.from, to: input.to, quantity: input.quantity, lost } : { from: input.from, to: input.to, quantity: input.quantity };
+  const call = ledgerPostCall({ groupId: actor.group.id, driveId, actorId: actor.user.id, kind: "processing", occurredAt, movementId: answer.movementId, details }, lines);
   return { answer, call };
 }
 

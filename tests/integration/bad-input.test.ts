@@ -6,6 +6,7 @@ import { ApiClient, signedIn } from "@/tests/support/http";
 import { closeTestDb, testDb } from "@/tests/support/db";
 import { demoFixture } from "@/tests/support/fixtures";
 import { createOwnGroup, ledgerDigest, type OwnGroup } from "@/tests/support/own-group";
+import { totalsMismatches } from "@/tests/support/ledger-totals";
 import { corrupted, edgeValue, junkBody, oddText } from "./bad-input/arbitraries";
 import { ENDPOINTS, type Caller, type Endpoint, type Extra } from "./bad-input/endpoints";
 import type { AuthzRow } from "./authz/types";
@@ -198,6 +199,7 @@ describe("bad input at every POST endpoint", () => {
     failures.sort((a, b) => Number(a.includes("[NUL byte]")) - Number(b.includes("[NUL byte]")));
     expect(failures.slice(0, 10), `seed ${SEED}`).toEqual([]);
     expect(await ledgerDigest(db, g.groupId)).toBe(before);
+    expect(await totalsMismatches(db, g.groupId)).toEqual([]);
     // The session still works and the balance is what the setup left.
     const stock = await clients.volunteer.json<{ stages: { good: number; washed: number }; claimed: number }>("GET", `/api/drives/${g.driveId}/stock`);
     expect(stock.body.stages).toMatchObject({ good: 170, washed: 30 });

@@ -60,6 +60,9 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
           <YieldChart points={yieldPoints} />
         </Card>
       </div>
+      <p>
+        <a href={`/ledger/stock-count?drive=${drive.id}`}>Count what is on hand (stock count)</a>
+      </p>
       <Card title="Rejects taken to recycling">
         <RecyclingForm driveId={drive.id} />
       </Card>

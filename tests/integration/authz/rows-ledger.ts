@@ -40,6 +40,14 @@ export const rows: AuthzRow[] = [
     }),
   ),
   {
+    route: "app/api/drives/[id]/stock-counts/route.ts",
+    method: "POST",
+    path: (f) => `/api/drives/${f.demoDriveId}/stock-counts`,
+    body: () => ({ counted: {}, expected: {}, reason: "" }),
+    expect: { anonymous: 401, volunteer: 403, builder: 403, organiser: 422, otherOrganiser: 404 },
+    note: "a stock count overrides running totals: organisers only",
+  },
+  {
     route: "app/api/heaters/route.ts",
     method: "GET",
     path: () => "/api/heaters",

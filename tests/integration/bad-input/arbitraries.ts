@@ -12,7 +12,8 @@ export type FieldKind =
   | { kind: "text"; max: number; required: boolean } // any text: a NUL byte or too long is never accepted
   | { kind: "day"; required: boolean } // YYYY-MM-DD within 2000–2100
   | { kind: "moment"; required: boolean } // ISO date-time with offset within 2000–2100
-  | { kind: "weight"; required: boolean }; // a haul's kg: none under one can (≈ 13.3 g)
+  | { kind: "weight"; required: boolean } // a haul's kg: none under one can (≈ 13.3 g)
+  | { kind: "loss"; required: boolean }; // { reason: a loss reason, quantity ≥ 1 }
 
 const SQLISH = ["'; drop table ledger_lines; --", "1 OR 1=1", "\" or \"\"=\"", "1; update stage_balances set quantity = 0", "$$; select pg_sleep(5); $$", "' union select * from users --"];
 const HTMLISH = ["<script>alert(1)</script>", "<img src=x onerror=alert(1)>", "\"><svg onload=alert(1)>", "javascript:alert(1)", "&lt;b&gt;&amp;", "{{7*7}}", "${7*7}"];
@@ -101,6 +102,15 @@ export function badValue(f: FieldKind): fc.Arbitrary<unknown> {
       return fc.oneof({ weight: 3, arbitrary: extremeMoment }, { weight: 1, arbitrary: fc.constantFrom("2026-12-02", "2026-12-02T09:30:00", "now", "") }, { weight: 1, arbitrary: fc.integer() });
     case "weight":
       return fc.oneof({ weight: 3, arbitrary: tinyWeight }, negative, fc.double({ min: 5_000.5, max: 1e300, noNaN: true }), numericString, oddText, fc.boolean());
+    case "loss":
+      return fc.oneof(
+        fc.record({ reason: fc.oneof(oddText, fc.constantFrom("dented", "damaged", "stockCount")), quantity: fc.constant(1) }),
+        fc.record({ reason: fc.constant("damagedWashing"), quantity: fc.oneof(negative, fractional, fc.constant(0), numericString, oddText) }),
+        fc.record({ quantity: fc.integer({ min: 1, max: 5 }) }),
+        oddText,
+        fc.integer(),
+        fc.array(fc.integer({ min: 1, max: 5 }), { minLength: 1, maxLength: 3 }),
+      );
   }
 }
 

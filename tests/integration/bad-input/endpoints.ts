@@ -58,14 +58,25 @@ export const ENDPOINTS: Endpoint[] = [
     path: (g) => `/api/drives/${g.driveId}/processing`,
     callers: ["volunteer", "organiser"],
     ledger: true,
-    template: () => ({ from: "good", to: "washed", quantity: 1 }),
+    template: () => ({ from: "good", to: "washed", quantity: 1, lost: { reason: "damagedWashing", quantity: 1 } }),
     fields: {
       from: { kind: "choice", values: ["good", "washed", "opened"], required: true },
       to: { kind: "choice", values: ["washed", "opened", "punched"], required: true },
-      quantity: count(1, 1_000_000),
+      // 0 is allowed only with a loss, and the template has one: its corruptions are the other bad values.
+      quantity: count(0, 1_000_000),
+      lost: { kind: "loss", required: false },
       occurredAt: moment,
       note,
     },
+  },
+  {
+    // Valid as sent (the setup leaves 170 good cans); every generated body breaks a count.
+    route: "app/api/drives/[id]/stock-counts/route.ts",
+    path: (g) => `/api/drives/${g.driveId}/stock-counts`,
+    callers: ["organiser"],
+    ledger: true,
+    template: () => ({ counted: { good: 160 }, expected: { good: 170 }, reason: "Shelf recount" }),
+    fields: { counted: { kind: "rejects", required: true }, expected: { kind: "rejects", required: true } },
   },
   {
     route: "app/api/drives/[id]/recycling/route.ts",

@@ -1,0 +1,63 @@
+"use client";
+
+import { LOSS_REASON_LABEL, LOSS_REASONS, LOSS_STEP, PROCESS_TO, type LossReason } from "@/lib/ledger/schemas";
+import { Stepper } from "./stepper";
+
+type To = (typeof PROCESS_TO)[number];
+
+/** The loss reasons a step can have: its own and the earlier steps' (cans found damaged later), never a later one. */
+export function lossReasonsFor(to: To): LossReason[] {
+  return LOSS_REASONS.filter((r) => PROCESS_TO.indexOf(LOSS_STEP[r]) <= PROCESS_TO.indexOf(to));
+}
+
+/** The step's own reason, which is what a loss during it usually is. */
+export const ownLossReason = (to: To): LossReason => LOSS_REASONS.find((r) => LOSS_STEP[r] === to)!;
+
+// The processing form's "lost on the way" part: cans damaged during the step
+// leave their stage for the rejects, with the reason, in the same entry.
+export function LossFields({
+  to,
+  from,
+  reason,
+  quantity,
+  onReason,
+  onQuantity,
+  errors,
+}: {
+  to: To;
+  from: string;
+  reason: LossReason;
+  quantity: number;
+  onReason: (r: LossReason) => void;
+  onQuantity: (n: number) => void;
+  errors: Record<string, string>;
+}) {
+  return (
+    <fieldset className="flex flex-col gap-2 rounded-lg border-2 border-dashed border-ink/30 p-3">
+      <legend className="px-1 font-semibold">Lost on the way</legend>
+      <p className="text-sm text-ink-soft">Crushed, torn or bent so badly they can&apos;t be used? They go to the rejects from {from}, not on to {to}.</p>
+      <div className="flex flex-col gap-1">
+        <label htmlFor="processing-lost-reason" className="font-semibold">
+          How were they damaged?
+        </label>
+        <select
+          id="processing-lost-reason"
+          className="min-h-11 rounded-lg border-2 border-ink/40 bg-white px-3"
+          value={reason}
+          onChange={(e) => onReason(e.target.value as LossReason)}
+          aria-describedby="processing-lost-reason-error"
+        >
+          {lossReasonsFor(to).map((r) => (
+            <option key={r} value={r}>
+              {LOSS_REASON_LABEL[r]}
+            </option>
+          ))}
+        </select>
+        <p id="processing-lost-reason-error" aria-live="polite" className="text-sm font-semibold text-alarm">
+          {errors["lost.reason"] ?? ""}
+        </p>
+      </div>
+      <Stepper id="processing-lost" label="Cans lost" value={quantity} onChange={onQuantity} error={errors["lost.quantity"] ?? errors.lost} />
+    </fieldset>
+  );
+}
