@@ -28,7 +28,10 @@ const makeSpace = () => ({
     fetchMethod: async (_key, _stale, { context }) => ({ value: await context() }),
   }),
 });
-const spaces = { people: makeSpace(), data: makeSpace() };
+// Kept on globalThis: the server may load this module once per route bundle,
+// and a write in one route must clear what a page in another has kept.
+const shared = globalThis as typeof globalThis & { __cantroveReadCache?: Record<CacheSpace, ReturnType<typeof makeSpace>> };
+const spaces = (shared.__cantroveReadCache ??= { people: makeSpace(), data: makeSpace() });
 
 export async function cachedRead<T>(key: string, load: () => Promise<T>, space: CacheSpace = "data"): Promise<T> {
   if (ttl === 0) return load();

@@ -82,7 +82,7 @@ describe("an entry kept offline", () => {
     const org = await newPage(browser, { viewport: { width: 1200, height: 900 } });
     await signInAs(org.page, g.emails.organiser);
     await org.page.goto(`/ledger?driveId=${g.driveId}`);
-    await org.page.getByRole("cell", { name: /, sent \d\d:\d\d/ }).first().waitFor();
+    await org.page.getByRole("cell", { name: /\d\d:\d\d\s*sent \d\d:\d\d/ }).first().waitFor();
     await org.context.close();
   });
 });
