@@ -20,7 +20,7 @@ import { SavePlan, type DriveChoice } from "./save-plan";
  * The heater planner. Everything is computed in the browser with the same
  * pure functions the API uses, so the page and /api/plan/* always agree.
  */
-export function Planner({ drives, canSave, latitude, today }: { drives: DriveChoice[] | null; canSave: boolean; latitude: number; today: string }) {
+export function Planner({ drives, canSave, latitude, today }: { drives: DriveChoice | null; canSave: boolean; latitude: number; today: string }) {
   const [settings, setSettings] = useState<PlanSettings>(INITIAL_SETTINGS);
   const [options, setOptions] = useState(INITIAL_OPTIONS);
   const [selected, setSelected] = useState(0);
@@ -97,7 +97,7 @@ export function Planner({ drives, canSave, latitude, today }: { drives: DriveCho
 
       <Card title="7. Save as a heater unit">
         {canSave && drives ? (
-          <SavePlan input={current.input} drives={drives} planLabel={label} disabled={!current.ok} />
+          <SavePlan input={current.input} choice={drives} planLabel={label} disabled={!current.ok} />
         ) : (
           <p className="text-ink-soft">
             Builders and organisers of a group can save this plan as a heater unit of a drive. <a href="/signin?next=/plan">Sign in</a> to save it;

@@ -8,18 +8,26 @@ import { Field, FormError } from "@/components/ui/field";
 import { fieldErrors } from "@/lib/api/client";
 import type { CanGridInput } from "@/lib/heaters/schemas";
 import { createHeater, heaterKeys } from "@/hooks/queries/heaters";
+import { useRememberDrive } from "@/hooks/queries/current-drive";
+import { DriveBanner } from "@/components/drives/drive-banner";
+import type { DriveSpan } from "@/lib/drives/current-drive";
 
+/** The group's drives, the one to open on (remembered, else running today) and the group's day. */
 export interface DriveChoice {
-  id: string;
-  name: string;
+  drives: DriveSpan[];
+  initialId: string | null;
+  today: string;
 }
 
 /** Saves the chosen plan as a heater unit counted against one of the group's drives. */
-export function SavePlan({ input, drives, planLabel, disabled }: { input: CanGridInput; drives: DriveChoice[]; planLabel: string; disabled: boolean }) {
+export function SavePlan({ input, choice, planLabel, disabled }: { input: CanGridInput; choice: DriveChoice; planLabel: string; disabled: boolean }) {
+  const { drives, today } = choice;
   const router = useRouter();
   const queryClient = useQueryClient();
   const [name, setName] = useState("");
-  const [driveId, setDriveId] = useState(drives[0]?.id ?? "");
+  const [driveId, setDriveId] = useState(choice.initialId ?? drives[0]?.id ?? "");
+  const remembered = useRememberDrive();
+  const drive = drives.find((d) => d.id === driveId);
   const save = useMutation({
     mutationFn: () => createHeater({ name, driveId, plan: input }),
     onSuccess: async (unit) => {
@@ -48,7 +56,10 @@ export function SavePlan({ input, drives, planLabel, disabled }: { input: CanGri
         <select
           id="unit-drive"
           value={driveId}
-          onChange={(e) => setDriveId(e.target.value)}
+          onChange={(e) => {
+            setDriveId(e.target.value);
+            remembered.remember(e.target.value);
+          }}
           aria-describedby="unit-drive-error"
           className="min-h-11 rounded-lg border-2 border-ink/40 bg-white px-3"
         >
@@ -58,6 +69,7 @@ export function SavePlan({ input, drives, planLabel, disabled }: { input: CanGri
         </select>
         <p id="unit-drive-error" aria-live="polite" className="text-sm font-semibold text-alarm">{fields.driveId ?? ""}</p>
       </div>
+      {drive ? <DriveBanner drive={drive} today={today} lead="Counting it against" rememberError={remembered.error} /> : null}
       {Object.entries(fields)
         .filter(([k]) => k.startsWith("plan."))
         .map(([k, v]) => (

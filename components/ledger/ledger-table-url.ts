@@ -2,6 +2,7 @@
 
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useCallback, useMemo } from "react";
+import { putCurrentDrive } from "@/hooks/queries/current-drive";
 
 // The ledger's filters live in the address (?driveId=…&stage=…), so a filtered
 // view can be bookmarked or shared and Back/Forward step through the filters.
@@ -29,6 +30,9 @@ export function useLedgerFilters(defaultDriveId: string) {
       const next = new URLSearchParams(params.toString());
       next.delete("drive");
       if (key === "driveId") {
+        // Choosing one drive here makes it the person's drive on the other pages too
+        // (the address already names it for this one, so a failure loses nothing).
+        if (value) void putCurrentDrive(value).catch(() => undefined);
         next.set("driveId", value || "all");
         next.delete("dropPointId");
       } else if (value) next.set(key, value);

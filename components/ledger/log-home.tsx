@@ -1,6 +1,8 @@
 "use client";
 
 import { useState } from "react";
+import { DriveBanner } from "@/components/drives/drive-banner";
+import { useRememberDrive } from "@/hooks/queries/current-drive";
 import { HaulForm } from "./haul-form";
 import { SortForm } from "./sort-form";
 import { ProcessingForm } from "./processing-form";
@@ -12,6 +14,8 @@ import { useOutbox } from "./use-outbox";
 export interface LogDrive {
   id: string;
   name: string;
+  startsOn: string;
+  endsOn: string;
   dropPoints: { id: string; name: string }[];
 }
 
@@ -21,8 +25,9 @@ const TABS = [
   { id: "process", label: "Log processing" },
 ] as const;
 
-export function LogHome({ drives, initialDriveId, initialDropPointId }: { drives: LogDrive[]; initialDriveId: string; initialDropPointId?: string }) {
+export function LogHome({ drives, initialDriveId, initialDropPointId, today }: { drives: LogDrive[]; initialDriveId: string; initialDropPointId?: string; today: string }) {
   const [driveId, setDriveId] = useState(initialDriveId);
+  const remembered = useRememberDrive();
   const [tab, setTab] = useState<(typeof TABS)[number]["id"]>("haul");
   const outbox = useOutbox();
   const drive = drives.find((d) => d.id === driveId) ?? drives[0];
@@ -34,7 +39,15 @@ export function LogHome({ drives, initialDriveId, initialDropPointId }: { drives
           <label htmlFor="log-drive" className="font-semibold">
             Drive
           </label>
-          <select id="log-drive" className="min-h-11 rounded-lg border-2 border-ink/40 bg-white px-3" value={drive.id} onChange={(e) => setDriveId(e.target.value)}>
+          <select
+            id="log-drive"
+            className="min-h-11 rounded-lg border-2 border-ink/40 bg-white px-3"
+            value={drive.id}
+            onChange={(e) => {
+              setDriveId(e.target.value);
+              remembered.remember(e.target.value);
+            }}
+          >
             {drives.map((d) => (
               <option key={d.id} value={d.id}>
                 {d.name}
@@ -43,6 +56,7 @@ export function LogHome({ drives, initialDriveId, initialDropPointId }: { drives
           </select>
         </div>
       ) : null}
+      <DriveBanner drive={drive} today={today} rememberError={remembered.error} />
       <OutboxList items={outbox.items} refusals={outbox.refusals} onRetry={() => void outbox.retryNow()} onDismiss={outbox.dismissRefusal} onConfirm={outbox.confirmRefusal} />
       <div role="tablist" aria-label="What to log" className="grid grid-cols-3 gap-2">
         {TABS.map((t) => (

@@ -5,17 +5,22 @@ import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, Skeleton } from "@/components/ui/card";
+import { DriveBanner } from "@/components/drives/drive-banner";
 import { Field, FormError } from "@/components/ui/field";
 import { fetchJson, fieldErrors } from "@/lib/api/client";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { createRunInputSchema } from "@/lib/runs/schemas";
 import { runQueries, type SuggestionRow } from "@/hooks/queries/runs";
+import { useRememberDrive } from "@/hooks/queries/current-drive";
+import type { DriveSpan } from "@/lib/drives/current-drive";
 import { StopPicker } from "./stop-picker";
 import { RoutePreview } from "./route-preview";
 
 export interface PlannerProps {
-  drives: { id: string; name: string }[];
+  drives: DriveSpan[];
   initialDriveId: string;
+  /** The group's day, for the warning when the drive is not running. */
+  today: string;
   initialSuggestions: SuggestionRow[];
   workshop: { lat: number; lng: number } | null;
   drivers: { id: string; name: string; role: string }[];
@@ -30,6 +35,8 @@ export function RunPlanner(props: PlannerProps) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const [driveId, setDriveId] = useState(props.initialDriveId);
+  const remembered = useRememberDrive();
+  const drive = props.drives.find((d) => d.id === driveId) ?? props.drives[0];
   const suggestions = useQuery({
     ...runQueries.suggestions(driveId),
     initialData: driveId === props.initialDriveId ? props.initialSuggestions : undefined,
@@ -94,10 +101,23 @@ export function RunPlanner(props: PlannerProps) {
         <Card title="1. Drive and stops">
           <div className="flex flex-col gap-1">
             <label htmlFor="drive" className="font-semibold">Drive</label>
-            <select id="drive" className={selectClass} value={driveId} onChange={(e) => setDriveId(e.target.value)}>
+            <select
+              id="drive"
+              className={selectClass}
+              value={driveId}
+              onChange={(e) => {
+                setDriveId(e.target.value);
+                remembered.remember(e.target.value);
+              }}
+            >
               {props.drives.map((d) => <option key={d.id} value={d.id}>{d.name}</option>)}
             </select>
           </div>
+          {drive ? (
+            <div className="mt-3">
+              <DriveBanner drive={drive} today={props.today} lead="Planning for" rememberError={remembered.error} />
+            </div>
+          ) : null}
           <div className="mt-4">
             {suggestions.isPending ? (
               <Skeleton className="h-40 w-full" />

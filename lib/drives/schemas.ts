@@ -62,3 +62,7 @@ export const fillClearInput = z.object({
   asOf: z.iso.datetime({ offset: true, error: "Use a date and time like 2026-12-02T09:30:00Z." }).optional(),
 });
 export type FillClearInput = z.infer<typeof fillClearInput>;
+
+/** PUT /api/me/drive: the drive the person works on from now on, on every page where cans are entered. */
+export const currentDriveInput = z.object({ driveId: z.uuid({ error: "Choose one of your group's drives." }) });
+export type CurrentDriveInput = z.infer<typeof currentDriveInput>;

@@ -111,7 +111,14 @@ export function planOf(u: HeaterUnitRow): CanGridInput {
 
 export async function listGroupDrives(groupId: string) {
   return db("drives")
-    .select("id", "name", "slug", db.raw("spare_percent::float as \"sparePercent\""))
+    .select(
+      "id",
+      "name",
+      "slug",
+      db.raw("spare_percent::float as \"sparePercent\""),
+      db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`),
+      db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`),
+    )
     .where({ group_id: groupId })
     .orderBy([{ column: "starts_on", order: "desc" }, { column: "name" }]);
 }

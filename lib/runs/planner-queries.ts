@@ -15,7 +15,7 @@ export interface PlannerPoint extends Suggestion {
 
 export async function plannerDrives(groupId: string) {
   return db("drives")
-    .select("id", "name", "slug", db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`))
+    .select("id", "name", "slug", db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`), db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`))
     .where({ group_id: groupId })
     .orderBy([{ column: "ends_on", order: "desc" }, { column: "name" }]);
 }

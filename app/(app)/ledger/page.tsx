@@ -3,13 +3,15 @@ import { Card, EmptyState } from "@/components/ui/card";
 import { GoodCansChart, YieldChart } from "@/components/ledger/ledger-charts";
 import { LedgerTable } from "@/components/ledger/ledger-table";
 import { RecyclingForm } from "@/components/ledger/recycling-form";
+import { DriveBanner } from "@/components/drives/drive-banner";
+import { DriveLinks } from "@/components/drives/drive-links";
 import { requirePageRole } from "@/lib/auth/session";
+import { pageDrive } from "@/lib/drives/current-drive-queries";
 import { driveTarget } from "@/lib/drives/progress";
 import { driveGoodDaily, dropPointTallies } from "@/lib/ledger/balances";
 import { driveChartBasics, listGroupPeople, listLogDrives } from "@/lib/ledger/queries";
 import { groupTimeZone } from "@/lib/ledger/ledger-list";
 import { dailySeries } from "@/lib/ledger/daily-series";
-import { localTime } from "@/lib/ledger/csv";
 
 export const metadata: Metadata = { title: "Ledger" };
 
@@ -19,7 +21,8 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
   const { drive: oldLink, driveId } = await searchParams;
   const wanted = driveId ?? oldLink;
   const [drives, people, timeZone] = await Promise.all([listLogDrives(actor.group.id), listGroupPeople(actor.group.id), groupTimeZone(actor.group.id)]);
-  const drive = drives.find((d) => d.id === wanted) ?? drives[0];
+  // The address wins (links, the table's filter); else the remembered drive, else the one running today.
+  const { drive, today } = await pageDrive(actor, drives, wanted);
   if (!drive) {
     return (
       <main className="flex flex-col gap-4">
@@ -31,7 +34,6 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
   const basics = await driveChartBasics(actor.group.id, drive.id);
   const [daily, tallies] = await Promise.all([driveGoodDaily(drive.id, basics.startsOn), dropPointTallies(drive.id)]);
   const target = driveTarget(basics.unitCans, basics.sparePercent);
-  const today = localTime(new Date().toISOString(), timeZone).slice(0, 10);
   const dailyPoints = dailySeries(daily, basics.startsOn, today < basics.endsOn ? today : basics.endsOn);
   const names = new Map(drive.dropPoints.map((p) => [p.id, p.name]));
   const yieldPoints = Object.entries(tallies).map(([id, t]) => {
@@ -42,13 +44,8 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
   return (
     <main className="flex flex-col gap-5">
       <h1 className="text-3xl">Ledger</h1>
-      <nav aria-label="Drive" className="flex flex-wrap gap-3">
-        {drives.map((d) => (
-          <a key={d.id} href={`/ledger?driveId=${d.id}`} aria-current={d.id === drive.id ? "page" : undefined} className={d.id === drive.id ? "font-bold text-ink" : ""}>
-            {d.name}
-          </a>
-        ))}
-      </nav>
+      <DriveLinks drives={drives} currentId={drive.id} path="/ledger" param="driveId" />
+      <DriveBanner drive={drive} today={today} lead="Entering for" />
       <div className="grid gap-5 lg:grid-cols-2">
         <Card title={`Good cans per day · ${drive.name}`}>
           <GoodCansChart daily={dailyPoints} target={target.cans} />

@@ -2,7 +2,10 @@ import type { Metadata } from "next";
 import { Card, EmptyState } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import { StockCountForm } from "@/components/ledger/stock-count-form";
+import { DriveBanner } from "@/components/drives/drive-banner";
+import { DriveLinks } from "@/components/drives/drive-links";
 import { requirePageRole } from "@/lib/auth/session";
+import { pageDrive } from "@/lib/drives/current-drive-queries";
 import { listLogDrives } from "@/lib/ledger/queries";
 
 export const metadata: Metadata = { title: "Stock count" };
@@ -11,7 +14,7 @@ export default async function StockCountPage({ searchParams }: { searchParams: P
   const actor = await requirePageRole("/ledger/stock-count", "organiser");
   const { drive: wanted } = await searchParams;
   const drives = await listLogDrives(actor.group.id);
-  const drive = drives.find((d) => d.id === wanted) ?? drives[0];
+  const { drive, today } = await pageDrive(actor, drives, wanted);
   return (
     <main className="mx-auto flex max-w-3xl flex-col gap-5">
       <p>
@@ -23,14 +26,9 @@ export default async function StockCountPage({ searchParams }: { searchParams: P
       ) : (
         <>
           {drives.length > 1 ? (
-            <nav aria-label="Drive" className="flex flex-wrap gap-3">
-              {drives.map((d) => (
-                <a key={d.id} href={`/ledger/stock-count?drive=${d.id}`} aria-current={d.id === drive.id ? "page" : undefined} className={d.id === drive.id ? "font-bold text-ink" : ""}>
-                  {d.name}
-                </a>
-              ))}
-            </nav>
+            <DriveLinks drives={drives} currentId={drive.id} path="/ledger/stock-count" param="drive" />
           ) : null}
+          <DriveBanner drive={drive} today={today} lead="Counting for" />
           <p className="text-ink-soft">
             Count the cans in each box or bag and type what is really there. The differences from the running totals are posted as one
             adjustment entry with your reason, and can be undone like any other entry. Hauled cans (an estimate until sorted), claimed and

@@ -3,6 +3,7 @@ import Link from "next/link";
 import { EmptyState } from "@/components/ui/card";
 import { RunPlanner } from "@/components/runs/run-planner";
 import { requirePageRole } from "@/lib/auth/session";
+import { pageDrive } from "@/lib/drives/current-drive-queries";
 import { env } from "@/lib/env";
 import { groupWorkshop, plannerDrives, suggestedStops } from "@/lib/runs/planner-queries";
 import { listDrivers } from "@/lib/runs/queries";
@@ -25,8 +26,9 @@ export default async function NewRunPage({ searchParams }: { searchParams: Promi
     );
   }
   const wanted = (await searchParams).drive;
-  // Default to the drive that is still running longest, where bins are filling now.
-  const drive = drives.find((d) => d.id === wanted) ?? drives[0]!;
+  // The address wins; else the remembered drive, else the one running today, where bins are filling now.
+  const picked = await pageDrive(actor, drives, wanted);
+  const drive = picked.drive!;
   const [suggestions, workshop, drivers] = await Promise.all([
     suggestedStops(actor.group.id, drive.id),
     groupWorkshop(actor.group.id),
@@ -37,8 +39,9 @@ export default async function NewRunPage({ searchParams }: { searchParams: Promi
       <p><Link href="/runs">← Pickup runs</Link></p>
       <h1 className="text-3xl">Plan a pickup run</h1>
       <RunPlanner
-        drives={drives.map((d) => ({ id: d.id, name: d.name }))}
+        drives={drives.map((d) => ({ id: d.id, name: d.name, startsOn: d.startsOn, endsOn: d.endsOn }))}
         initialDriveId={drive.id}
+        today={picked.today}
         initialSuggestions={suggestions.map((s) => ({ ...s, lastHaulAt: s.lastHaulAt ? s.lastHaulAt.toISOString() : null }))}
         workshop={workshop}
         drivers={drivers}

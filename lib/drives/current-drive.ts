@@ -1,0 +1,74 @@
+// Which drive a page opens on when the person has not said (pure; safe in the client).
+// Dates are calendar days `YYYY-MM-DD`, which compare correctly as strings; `today`
+// is the group's own day (groups.time_zone), worked out by the caller.
+
+export interface DriveSpan {
+  id: string;
+  name: string;
+  startsOn: string;
+  endsOn: string;
+}
+
+export type DriveTiming = "running" | "upcoming" | "ended";
+
+export function driveTiming(drive: Pick<DriveSpan, "startsOn" | "endsOn">, today: string): DriveTiming {
+  if (today < drive.startsOn) return "upcoming";
+  if (today > drive.endsOn) return "ended";
+  return "running";
+}
+
+const byName = (a: DriveSpan, b: DriveSpan) => (a.name < b.name ? -1 : a.name > b.name ? 1 : a.id < b.id ? -1 : 1);
+
+/**
+ * The drive running today (if several, the one that started latest), else the
+ * next to start, else the one that ended most recently. A past or future drive
+ * is never chosen while one is running. Ties fall to the name, so the choice
+ * never depends on the order the drives were listed in.
+ */
+export function defaultDrive<D extends DriveSpan>(drives: readonly D[], today: string): D | undefined {
+  const running = drives.filter((d) => driveTiming(d, today) === "running");
+  if (running.length) return [...running].sort((a, b) => (a.startsOn === b.startsOn ? byName(a, b) : a.startsOn > b.startsOn ? -1 : 1))[0];
+  const upcoming = drives.filter((d) => driveTiming(d, today) === "upcoming");
+  if (upcoming.length) return [...upcoming].sort((a, b) => (a.startsOn === b.startsOn ? byName(a, b) : a.startsOn < b.startsOn ? -1 : 1))[0];
+  return [...drives].sort((a, b) => (a.endsOn === b.endsOn ? byName(a, b) : a.endsOn > b.endsOn ? -1 : 1))[0];
+}
+
+/** The person's remembered drive when it is still one of the group's drives, else the default. */
+export function pickDrive<D extends DriveSpan>(drives: readonly D[], today: string, ...preferred: (string | null | undefined)[]): D | undefined {
+  for (const id of preferred) {
+    const found = id ? drives.find((d) => d.id === id) : undefined;
+    if (found) return found;
+  }
+  return defaultDrive(drives, today);
+}
+
+// Our own month names: the server's and the browser's Intl data can differ ("Sep"/"Sept"),
+// which would make the rendered page and the hydrated one disagree.
+const SHORT = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"];
+const LONG = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
+
+function parts(day: string) {
+  const [y, m, d] = day.split("-").map(Number);
+  return { y, m: m - 1, d };
+}
+
+/** "1 March 2027". */
+export function longDay(day: string): string {
+  const { y, m, d } = parts(day);
+  return `${d} ${LONG[m]} ${y}`;
+}
+
+/** "1 Nov – 31 Dec 2026", or "1 Nov 2026 – 31 Jan 2027" across a new year. */
+export function spanText(drive: Pick<DriveSpan, "startsOn" | "endsOn">): string {
+  const a = parts(drive.startsOn);
+  const b = parts(drive.endsOn);
+  return a.y === b.y ? `${a.d} ${SHORT[a.m]} – ${b.d} ${SHORT[b.m]} ${b.y}` : `${a.d} ${SHORT[a.m]} ${a.y} – ${b.d} ${SHORT[b.m]} ${b.y}`;
+}
+
+/** What to say plainly when entries go to a drive that is not running today; null while it runs. */
+export function timingWarning(drive: Pick<DriveSpan, "startsOn" | "endsOn">, today: string): string | null {
+  const timing = driveTiming(drive, today);
+  if (timing === "upcoming") return `This drive starts on ${longDay(drive.startsOn)}.`;
+  if (timing === "ended") return `This drive ended on ${longDay(drive.endsOn)}.`;
+  return null;
+}
