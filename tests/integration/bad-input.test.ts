@@ -11,7 +11,8 @@ import { corrupted, edgeValue, junkBody, oddText } from "./bad-input/arbitraries
 import { ENDPOINTS, type Caller, type Endpoint, type Extra } from "./bad-input/endpoints";
 import type { AuthzRow } from "./authz/types";
 
-// Property-based bad input (fast-check) at every POST endpoint, as the roles
+// Property-based bad input (fast-check) at every POST endpoint (and the PUTs
+// listed in bad-input/endpoints.ts), as the roles
 // allowed to call it: no 5xx, every refusal is the contract's error JSON, and
 // the ledger with all its running totals is exactly as it was. Besides
 // arbitrary junk, every text field gets NUL bytes, every date years such as
@@ -171,7 +172,7 @@ describe("bad input at every POST endpoint", () => {
           let res: Response;
           let text: string;
           const send = async () => {
-            const r = await clients[c.caller].request("POST", c.endpoint.path(g, extra), c.body, c.headers);
+            const r = await clients[c.caller].request(c.endpoint.method ?? "POST", c.endpoint.path(g, extra), c.body, c.headers);
             return { r, t: await r.text() };
           };
           try {

@@ -74,3 +74,17 @@ export async function haulAndSort(c: ApiClient, driveId: string, dropPointId: st
   if (sort.status !== 201) throw new Error(`sort failed: ${sort.status} ${JSON.stringify(sort.body)}`);
   return { haul: haul.body, sort: sort.body };
 }
+
+/** A calendar day `days` from today (UTC), as YYYY-MM-DD; tests keep weeks from any edge, so the group's own zone never matters. */
+export function dayFromToday(days: number): string {
+  return new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
+}
+
+/** Another drive for a fresh group, with one drop point unless `dropPoint: false`; returns its id. */
+export async function addDrive(g: FreshGroup, d: { name: string; startsOn: string; endsOn: string; dropPoint?: boolean }): Promise<string> {
+  const db = testDb();
+  const slug = `${g.driveSlug}-${randomUUID().slice(0, 6)}`;
+  const [drive] = await db("drives").insert({ group_id: g.groupId, slug, name: d.name, starts_on: d.startsOn, ends_on: d.endsOn, is_public: false }).returning("id");
+  if (d.dropPoint !== false) await db("drop_points").insert({ group_id: g.groupId, drive_id: drive.id, name: `${d.name} porch`, lat: 47.3, lng: -8 });
+  return drive.id as string;
+}

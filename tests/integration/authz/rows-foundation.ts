@@ -14,6 +14,14 @@ export const rows: AuthzRow[] = [
     expect: { anonymous: 401, volunteer: 200, builder: 200, organiser: 200, otherOrganiser: 200 },
   },
   {
+    route: "app/api/me/drive/route.ts",
+    method: "PUT",
+    path: () => "/api/me/drive",
+    body: (f) => ({ driveId: f.otherDriveId }),
+    expect: { anonymous: 401, volunteer: 404, builder: 404, organiser: 404, otherOrganiser: 200 },
+    note: "any member may remember a drive, only one of the group they act in: the other group's drive is 404 for the demo group and stored for its own organiser",
+  },
+  {
     route: "app/api/drives/route.ts",
     method: "GET",
     path: () => "/api/drives",

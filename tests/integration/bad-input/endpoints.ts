@@ -18,6 +18,8 @@ export interface Extra {
 
 export interface Endpoint {
   route: string;
+  /** POST unless said: a few writes that set one thing are PUTs. */
+  method?: "POST" | "PUT";
   path: (g: OwnGroup, extra: Extra) => string;
   callers: Caller[];
   ledger: boolean;
@@ -165,5 +167,15 @@ export const ENDPOINTS: Endpoint[] = [
     ledger: false,
     template: (g) => ({ name: "Hall heater", driveId: g.driveId, notes: "south wall", plan: { glazingWidth: 900, glazingHeight: 1800, unit: "mm", coverage: "chamber" } }),
     fields: { name: text(120, true), notes: text(2000) },
+  },
+  {
+    // The person's remembered drive: any body but one naming a drive of the group is refused, and changes nothing.
+    route: "app/api/me/drive/route.ts",
+    method: "PUT",
+    path: () => "/api/me/drive",
+    callers: ["volunteer", "builder", "organiser"],
+    ledger: false,
+    template: (g) => ({ driveId: g.driveId }),
+    fields: { driveId: { kind: "choice", values: [], required: true } },
   },
 ];
