@@ -26,8 +26,9 @@ export function DriveLinks({ drives, currentId, path, param }: { drives: { id: s
             if (e.metaKey || e.ctrlKey || e.shiftKey || e.altKey || e.button !== 0) return;
             e.preventDefault();
             setBusy(d.id);
-            // Remembering is a convenience: the address names the drive either way.
-            await putCurrentDrive(d.id).catch(() => undefined);
+            // Remembering is a convenience: the address names the drive either way, so a slow
+            // or failed answer never holds the person on this page for long.
+            await putCurrentDrive(d.id, AbortSignal.timeout(4_000)).catch(() => undefined);
             setBusy(null);
             router.push(href(d.id));
           }}

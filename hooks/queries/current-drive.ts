@@ -2,8 +2,8 @@ import { useMutation } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/api/client";
 
 /** PUT /api/me/drive: the drive the person works on from now on. */
-export function putCurrentDrive(driveId: string) {
-  return fetchJson<{ driveId: string }>("/api/me/drive", { method: "PUT", json: { driveId } });
+export function putCurrentDrive(driveId: string, signal?: AbortSignal) {
+  return fetchJson<{ driveId: string }>("/api/me/drive", { method: "PUT", json: { driveId }, signal });
 }
 
 /**
@@ -12,7 +12,7 @@ export function putCurrentDrive(driveId: string) {
  * only means the next page may open on another drive, and says so.
  */
 export function useRememberDrive() {
-  const mutation = useMutation({ mutationFn: putCurrentDrive });
+  const mutation = useMutation({ mutationFn: (driveId: string) => putCurrentDrive(driveId) });
   return {
     remember: (driveId: string) => mutation.mutate(driveId),
     rememberAsync: (driveId: string) => mutation.mutateAsync(driveId),
