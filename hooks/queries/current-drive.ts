@@ -15,7 +15,6 @@ export function useRememberDrive() {
   const mutation = useMutation({ mutationFn: (driveId: string) => putCurrentDrive(driveId) });
   return {
     remember: (driveId: string) => mutation.mutate(driveId),
-    rememberAsync: (driveId: string) => mutation.mutateAsync(driveId),
     error: mutation.error ? `Could not remember this drive for your next visit: ${mutation.error.message}` : null,
   };
 }
