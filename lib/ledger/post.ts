@@ -141,7 +141,9 @@ export function ledgerRefusal(error: unknown): AppError | null {
   }
   if (d.kind === "debit" && d.stage) {
     const have = Number(d.available);
-    return conflict(`That needs ${Number(d.needed)} cans ${STAGE_LABEL[d.stage]}, but only ${have} left.`, { available: have, stage: d.stage });
+    const needed = Number(d.needed);
+    const cans = (n: number) => `${n} ${n === 1 ? "can" : "cans"}`;
+    return conflict(`That needs ${cans(needed)} ${STAGE_LABEL[d.stage]}, but only ${have} ${have === 1 ? "is" : "are"} left.`, { available: have, stage: d.stage });
   }
   const before = Number(d.available);
   return conflict(`Not enough unclaimed cans: only ${before} left unclaimed. Release a claim first, or claim fewer.`, {
