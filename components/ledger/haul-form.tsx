@@ -63,7 +63,7 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
     const body = result.body as { estimatedCans: number; estimate: { countedHauls: number } };
     setMessage({
       tone: "good",
-      text: `Haul recorded: about ${body.estimatedCans} cans (an estimate${body.estimate.countedHauls ? `, from ${body.estimate.countedHauls} counted hauls` : ""}; the sort will count them).`,
+      text: `Haul recorded: about ${countOf(body.estimatedCans, "can")} (an estimate${body.estimate.countedHauls ? `, from ${countOf(body.estimate.countedHauls, "counted haul")}` : ""}; the sort will count them).`,
     });
   }
 

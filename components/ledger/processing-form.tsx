@@ -11,7 +11,7 @@ import { stockQuery } from "@/hooks/queries/ledger";
 import { ProcessingCaution } from "./cautions";
 import { NumberField } from "@/components/ui/number-field";
 import { NUMBER_SPECS, parseNumberInput, parseNumberInputs } from "@/lib/forms/number-input";
-import { countOf } from "@/lib/plural";
+import { countOf, noun } from "@/lib/plural";
 import { LossFields, lossReasonsFor, ownLossReason } from "./loss-fields";
 import type { SubmitResult } from "./use-outbox";
 
@@ -59,7 +59,7 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
     setLost("0");
     if (result.kind === "queued") return setMessage({ tone: "info", text: result.message });
     const body = result.body as { holes: number | null; holesPerCan: number | null };
-    setMessage({ tone: "good", text: `${step.label}: ${countOf(parsed.data.quantity, "can")} recorded${lostNote}.${body.holes ? ` That batch needed ${body.holes} holes (${body.holesPerCan} a can).` : ""}` });
+    setMessage({ tone: "good", text: `${step.label}: ${countOf(parsed.data.quantity, "can")} recorded${lostNote}.${body.holes ? ` That batch needed ${countOf(body.holes, "hole")} (${body.holesPerCan} a can).` : ""}` });
   }
 
   return (
@@ -77,7 +77,7 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
       </fieldset>
       <ProcessingCaution to={step.to} />
       <p className="text-ink-soft">
-        {available === null ? "Loading what is on hand…" : `${countOf(available, "can")} ${available === 1 ? "is" : "are"} ${step.from} and can move on.`}
+        {available === null ? "Loading what is on hand…" : `${countOf(available, noun("can is", "cans are"))} ${step.from} and can move on.`}
       </p>
       <NumberField
         id="processing-quantity"
@@ -92,7 +92,7 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
         }}
         error={errors.quantity ?? errors.to}
       />
-      {step.to === "punched" && shownQuantity > 0 ? <p className="text-ink-soft">At 4 holes a can that is {shownQuantity * 4} holes; the answer uses your units&apos; own count.</p> : null}
+      {step.to === "punched" && shownQuantity > 0 ? <p className="text-ink-soft">At 4 holes a can that is {countOf(shownQuantity * 4, "hole")}; the answer uses your units&apos; own count.</p> : null}
       <LossFields
         to={step.to}
         from={step.from}
