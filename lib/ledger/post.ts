@@ -2,6 +2,7 @@ import type { Knex } from "knex";
 import { AppError, conflict, notFound } from "@/lib/api/errors";
 import { needRefusalMessage } from "@/lib/heaters/need";
 import type { LineReason, Stage } from "./schemas";
+import { countOf, noun, plural } from "@/lib/plural";
 
 // The one place ledger lines are written. postMovement hands the movement to
 // ledger_post() in PostgreSQL, which locks the drive (so writes to one drive
@@ -142,8 +143,7 @@ export function ledgerRefusal(error: unknown): AppError | null {
   if (d.kind === "debit" && d.stage) {
     const have = Number(d.available);
     const needed = Number(d.needed);
-    const cans = (n: number) => `${n} ${n === 1 ? "can" : "cans"}`;
-    return conflict(`That needs ${cans(needed)} ${STAGE_LABEL[d.stage]}, but only ${have} ${have === 1 ? "is" : "are"} left.`, { available: have, stage: d.stage });
+    return conflict(`That needs ${countOf(needed, "can")} ${STAGE_LABEL[d.stage]}, but only ${have} ${plural(have, noun("is", "are"))} left.`, { available: have, stage: d.stage });
   }
   const before = Number(d.available);
   return conflict(`Not enough unclaimed cans: only ${before} left unclaimed. Release a claim first, or claim fewer.`, {
