@@ -10,4 +10,10 @@ if [ ! -x /usr/bin/chromium ]; then
   apt-get update -qq && apt-get install -y -qq chromium >/dev/null
 fi
 export NEXT_TELEMETRY_DISABLED=1
+# The whole suite starts with the linter (eslint.config.mjs: Next's rules, layers,
+# cycles, file size); `npm test -- <paths>` runs just those tests.
+if [ "$#" -eq 0 ]; then
+  echo "Linting…"
+  npx eslint . --cache --cache-location node_modules/.cache/eslint/
+fi
 exec node --import tsx scripts/test.ts "$@"

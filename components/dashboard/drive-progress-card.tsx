@@ -3,6 +3,8 @@ import { Card } from "@/components/ui/card";
 import type { FullBin } from "@/lib/drives/fill-queries";
 import { FullBins } from "./full-bins";
 import type { DriveProgress } from "@/lib/drives/progress";
+import { finishText, heatersCoveredText, paceText } from "@/lib/drives/progress-wording";
+import { countOf } from "@/lib/plural";
 
 interface Props {
   drive: { id: string; slug: string; name: string; startsOn: string; endsOn: string; isPublic: boolean; dropPoints: number; heaterUnits: number };
@@ -34,10 +36,10 @@ export function DriveProgressCard({ drive, progress, fullBins, pledges }: Props)
         </span>
       }
     >
-      <p className="text-lg font-semibold">
-        Good cans for {progress.heatersCovered.covered} of {progress.heatersCovered.total} heaters
+      <p className="text-lg font-semibold" data-testid="heaters-covered">
+        {heatersCoveredText(progress.heatersCovered.covered, progress.heatersCovered.total)}
       </p>
-      <div className="mt-2 h-4 overflow-hidden rounded-full bg-paper-deep" role="img" aria-label={`${Math.round(share * 100)} % of the target`}>
+      <div className="mt-2 h-4 overflow-hidden rounded-full bg-paper-deep" role="img" aria-label={progress.target.cans > 0 ? `${Math.round(share * 100)} % of the target` : "No target yet"}>
         <div className="h-full bg-moss" style={{ width: `${share * 100}%` }} />
       </div>
       <dl className="mt-3 grid grid-cols-2 gap-x-4 gap-y-1 text-sm sm:grid-cols-4">
@@ -58,13 +60,14 @@ export function DriveProgressCard({ drive, progress, fullBins, pledges }: Props)
           </dd>
         </div>
         <div>
-          <dt className="text-ink-faint">Expected finish</dt>
-          <dd className="font-semibold">{progress.expectedFinish ?? "no pace yet"}</dd>
+          <dt className="text-ink-faint">{progress.finish.kind === "expected" ? "Expected finish" : "Finish"}</dt>
+          <dd className="font-semibold" data-testid="expected-finish">
+            {finishText(progress.finish)}
+          </dd>
         </div>
       </dl>
       <p className="mt-2 text-sm text-ink-faint">
-        {drive.dropPoints} drop points · {drive.heaterUnits} heater units · {fmt(Math.round(progress.pace.cansPerDay))} good cans a day over the last{" "}
-        {progress.pace.windowDays} days
+        {countOf(drive.dropPoints, "drop point", fmt)} · {countOf(drive.heaterUnits, "heater unit", fmt)} · {paceText(progress.pace)}
       </p>
       <FullBins bins={fullBins} />
       {pledges.length > 0 ? (
@@ -73,7 +76,7 @@ export function DriveProgressCard({ drive, progress, fullBins, pledges }: Props)
           <ul className="text-sm text-ink-soft">
             {pledges.map((p) => (
               <li key={p.id}>
-                about {p.bags} bag{p.bags === 1 ? "" : "s"} to {p.dropPointName}
+                about {countOf(p.bags, "bag", fmt)} to {p.dropPointName}
                 {p.bringOn ? ` on ${p.bringOn}` : ""}
               </li>
             ))}

@@ -9,6 +9,7 @@ import { fetchJson } from "@/lib/api/client";
 import { LEVEL_LABEL, timeAgo } from "@/lib/drives/fill";
 import type { FullBin } from "@/lib/drives/fill-queries";
 import { formatDateTime } from "@/lib/format";
+import { countOf } from "@/lib/plural";
 
 /** Every bin full now, once each; a haul from it or "Clear" takes it off the list. */
 export function FullBins({ bins }: { bins: FullBin[] }) {
@@ -25,7 +26,7 @@ export function FullBins({ bins }: { bins: FullBin[] }) {
   if (shown.length === 0) return null;
   return (
     <div className="mt-4" data-testid="full-bins">
-      <Notice tone="caution" title={`${shown.length} bin${shown.length === 1 ? "" : "s"} reported full`}>
+      <Notice tone="caution" title={`${countOf(shown.length, "bin")} reported full`}>
         <ul className="flex flex-col gap-1">
           {shown.map((b) => (
             <li key={b.dropPointId} className="flex flex-wrap items-center justify-between gap-2" data-testid="full-bin">

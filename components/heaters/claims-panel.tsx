@@ -10,6 +10,7 @@ import { stockQuery } from "@/hooks/queries/ledger";
 import type { DriveStock } from "@/lib/ledger/schemas";
 import { QuantityAction } from "./quantity-action";
 import { UnitFigures } from "./unit-figures";
+import { countOf } from "@/lib/plural";
 
 export interface ClaimsView {
   unit: HeaterSummary;
@@ -54,7 +55,7 @@ export function ClaimsPanel({ v }: { v: ClaimsView }) {
           <QuantityAction
             id="built-quantity"
             label="Record cans built in"
-            hint={`One column is ${v.rows} cans`}
+            hint={`One column is ${countOf(v.rows, "can")}`}
             initial={Math.max(1, Math.min(v.rows, unit.claimed))}
             submitLabel="Record built in"
             run={(q, key) => postClaimAction(v.unit.id, "built-in", q, key)}

@@ -4,7 +4,10 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
-import { Field, FormError } from "@/components/ui/field";
+import { FormError } from "@/components/ui/field";
+import { NumberField } from "@/components/ui/number-field";
+import { NUMBER_SPECS, parseNumberInput } from "@/lib/forms/number-input";
+import { countOf } from "@/lib/plural";
 import { ApiError } from "@/lib/api/client";
 import { heaterKeys } from "@/hooks/queries/heaters";
 import { ledgerKeys } from "@/hooks/queries/ledger";
@@ -42,17 +45,18 @@ export function QuantityAction({
   const text = typed ?? String(initial);
   const [done, setDone] = useState<string | null>(null);
   const [refused, setRefused] = useState<string | null>(null);
+  const [emptyError, setEmptyError] = useState<string | undefined>(undefined);
   const action = useMutation({
     mutationFn: (quantity: number) => run(quantity, crypto.randomUUID()),
     onSuccess: async (_data, quantity) => {
-      setDone(`${submitLabel}: ${quantity} cans recorded.`);
+      setDone(`${submitLabel}: ${countOf(quantity, "can")} recorded.`);
       setTyped(null);
       // The unit's figures and the drive's stock are react-query reads; the rest of the page is the server's.
       await Promise.all([queryClient.invalidateQueries({ queryKey: heaterKeys.all }), queryClient.invalidateQueries({ queryKey: ledgerKeys.all })]);
       router.refresh();
     },
   });
-  const fieldError = action.error instanceof ApiError ? action.error.fields?.quantity : undefined;
+  const fieldError = (action.error instanceof ApiError ? action.error.fields?.quantity : undefined) ?? emptyError;
   return (
     <form
       className="flex flex-col gap-1"
@@ -60,8 +64,14 @@ export function QuantityAction({
       onSubmit={(e) => {
         e.preventDefault();
         setDone(null);
-        const quantity = Number(text);
-        const refusal = check && Number.isInteger(quantity) && quantity > 0 ? check(quantity) : null;
+        const typedNumber = parseNumberInput(text, NUMBER_SPECS.claimCans);
+        setEmptyError(typedNumber.ok ? undefined : typedNumber.error);
+        if (!typedNumber.ok || typedNumber.value === null) {
+          action.reset();
+          return;
+        }
+        const quantity = typedNumber.value;
+        const refusal = check ? check(quantity) : null;
         setRefused(refusal);
         if (refusal) {
           action.reset();
@@ -71,16 +81,17 @@ export function QuantityAction({
       }}
     >
       {children}
-      <Field
+      <NumberField
         id={id}
         label={label}
         hint={hint}
-        inputMode="numeric"
+        spec={NUMBER_SPECS.claimCans}
         value={text}
         error={fieldError}
-        onChange={(e) => {
-          setTyped(e.target.value);
+        onChange={(raw) => {
+          setTyped(raw);
           setRefused(null);
+          setEmptyError(undefined);
         }}
       />
       <FormError message={refused ?? (action.error && !fieldError ? action.error.message : null)} />

@@ -8,6 +8,7 @@ import { moveHeater, heaterKeys } from "@/hooks/queries/heaters";
 import { ledgerKeys } from "@/hooks/queries/ledger";
 import { formatNumber } from "@/lib/heaters/format";
 import { HEATER_STATE_LABEL, stateIndexOf, type HeaterState } from "@/lib/heaters/unit-schemas";
+import { countOf } from "@/lib/plural";
 
 /** Buttons for the state moves this person may make; the server checks the same rule. */
 export function StateMover({ id, state, moves, refusal }: { id: string; state: HeaterState; moves: HeaterState[]; refusal?: string | null }) {
@@ -24,7 +25,7 @@ export function StateMover({ id, state, moves, refusal }: { id: string; state: H
   const done = move.data ? (
     <p role="status" className="font-semibold text-moss-deep">
       Now “{HEATER_STATE_LABEL[move.data.state]}”.
-      {released > 0 ? ` ${formatNumber(released)} claimed ${released === 1 ? "can" : "cans"} not built in went back to the drive.` : ""}
+      {released > 0 ? ` ${countOf(released, "claimed can", formatNumber)} not built in went back to the drive.` : ""}
     </p>
   ) : null;
   if (refusal) return <p className="text-ink-soft">{refusal}</p>;

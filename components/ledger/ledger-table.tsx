@@ -11,6 +11,7 @@ import type { LogDrive } from "./log-home";
 import { LedgerFilters } from "./ledger-table-filters";
 import { LedgerLine } from "./ledger-table-row";
 import { useLedgerFilters } from "./ledger-table-url";
+import { countOf } from "@/lib/plural";
 
 const fmt = (n: number) => n.toLocaleString("en-GB");
 
@@ -72,7 +73,7 @@ export function LedgerTable({ drives, people, initialDriveId, timeZone }: { driv
           </div>
           <p role="status" className="flex flex-wrap items-center gap-3 text-sm">
             <span data-testid="ledger-count">
-              Showing {fmt(rows.length)} of {fmt(total)} line{total === 1 ? "" : "s"}
+              Showing {fmt(rows.length)} of {countOf(total, "line", fmt)}
             </span>
             {pages.hasNextPage ? (
               <Button variant="secondary" onClick={() => pages.fetchNextPage()} disabled={pages.isFetchingNextPage}>

@@ -1,7 +1,8 @@
 "use client";
 
 import { LOSS_REASON_LABEL, LOSS_REASONS, LOSS_STEP, PROCESS_TO, type LossReason } from "@/lib/ledger/schemas";
-import { Stepper } from "./stepper";
+import { NumberField } from "@/components/ui/number-field";
+import { NUMBER_SPECS } from "@/lib/forms/number-input";
 
 type To = (typeof PROCESS_TO)[number];
 
@@ -27,9 +28,10 @@ export function LossFields({
   to: To;
   from: string;
   reason: LossReason;
-  quantity: number;
+  /** What is typed in the box, kept as typed. */
+  quantity: string;
   onReason: (r: LossReason) => void;
-  onQuantity: (n: number) => void;
+  onQuantity: (raw: string) => void;
   errors: Record<string, string>;
 }) {
   return (
@@ -57,7 +59,7 @@ export function LossFields({
           {errors["lost.reason"] ?? ""}
         </p>
       </div>
-      <Stepper id="processing-lost" label="Cans lost" value={quantity} onChange={onQuantity} error={errors["lost.quantity"] ?? errors.lost} />
+      <NumberField id="processing-lost" label="Cans lost" spec={NUMBER_SPECS.lostCans} steppers value={quantity} onChange={onQuantity} error={errors["lost.quantity"] ?? errors.lost} />
     </fieldset>
   );
 }

@@ -4,6 +4,7 @@ import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import type { OutboxItem } from "@/lib/ledger/outbox";
 import type { Refusal } from "./use-outbox";
+import { countOf, noun } from "@/lib/plural";
 
 export function OutboxList({
   items,
@@ -23,7 +24,7 @@ export function OutboxList({
   return (
     <section aria-label="Waiting to send" className="flex flex-col gap-2" data-testid="outbox">
       {items.length ? (
-        <Notice tone="info" title={`${items.length} ${items.length === 1 ? "entry is" : "entries are"} waiting to be sent`}>
+        <Notice tone="info" title={`${countOf(items.length, noun("entry is", "entries are"))} waiting to be sent`}>
           <p>Kept on this phone and retried every few seconds; nothing is lost if you close the page.</p>
           <ul className="mt-2 list-disc pl-5">
             {items.map((i) => (

@@ -9,7 +9,9 @@ import { fieldErrorsOf } from "@/lib/api/errors";
 import { LOSS_REASON_LABEL, processingInputSchema, type LossReason } from "@/lib/ledger/schemas";
 import { stockQuery } from "@/hooks/queries/ledger";
 import { ProcessingCaution } from "./cautions";
-import { Stepper } from "./stepper";
+import { NumberField } from "@/components/ui/number-field";
+import { NUMBER_SPECS, parseNumberInput, parseNumberInputs } from "@/lib/forms/number-input";
+import { countOf, noun } from "@/lib/plural";
 import { LossFields, lossReasonsFor, ownLossReason } from "./loss-fields";
 import type { SubmitResult } from "./use-outbox";
 
@@ -23,8 +25,8 @@ const STEPS = [
 export function ProcessingForm({ driveId, submit }: { driveId: string; submit: Submit }) {
   const stock = useQuery(stockQuery(driveId));
   const [stepIndex, setStepIndex] = useState(0);
-  const [quantity, setQuantity] = useState(0);
-  const [lost, setLost] = useState(0);
+  const [quantityText, setQuantity] = useState("");
+  const [lostText, setLost] = useState("0");
   const [chosenReason, setLossReason] = useState<LossReason | null>(null);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<{ tone: "good" | "info" | "error"; text: string } | null>(null);
@@ -33,21 +35,31 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
   const available = stock.data ? stock.data.stages[step.from] : null;
   const lossReason = chosenReason && lossReasonsFor(step.to).includes(chosenReason) ? chosenReason : ownLossReason(step.to);
 
+  const typedQuantity = parseNumberInput(quantityText, NUMBER_SPECS.batchCans);
+  const shownQuantity = typedQuantity.ok ? (typedQuantity.value ?? 0) : 0;
+  const clear = (key: string) => setErrors(({ [key]: _gone, ...rest }) => rest);
+
   async function onSubmit(e: React.FormEvent) {
     e.preventDefault();
+    // Anything typed that is not a whole number stops here; nothing else is ever sent in its place.
+    const numbers = parseNumberInputs({ quantity: [quantityText, NUMBER_SPECS.batchCans], "lost.quantity": [lostText, NUMBER_SPECS.lostCans] });
+    const quantity = numbers.values.quantity;
+    const lost = numbers.values["lost.quantity"] ?? 0;
     const parsed = processingInputSchema.safeParse({ from: step.from, to: step.to, quantity, ...(lost > 0 ? { lost: { reason: lossReason, quantity: lost } } : {}) });
-    if (!parsed.success) return setErrors(fieldErrorsOf(parsed.error));
+    if (!parsed.success || Object.keys(numbers.errors).length > 0) {
+      return setErrors({ ...(parsed.success ? {} : fieldErrorsOf(parsed.error)), ...(numbers.errors as Record<string, string>) });
+    }
     setErrors({});
     setPending(true);
-    const lostText = lost > 0 ? `, ${lost} lost (${LOSS_REASON_LABEL[lossReason].toLowerCase()})` : "";
-    const result = await submit(`/api/drives/${driveId}/processing`, parsed.data, `${step.label}: ${quantity} cans${lostText}`);
+    const lostNote = lost > 0 ? `, ${lost} lost (${LOSS_REASON_LABEL[lossReason].toLowerCase()})` : "";
+    const result = await submit(`/api/drives/${driveId}/processing`, parsed.data, `${step.label}: ${countOf(parsed.data.quantity, "can")}${lostNote}`);
     setPending(false);
     if (result.kind === "refused") return setMessage({ tone: "error", text: result.message });
-    setQuantity(0);
-    setLost(0);
+    setQuantity("");
+    setLost("0");
     if (result.kind === "queued") return setMessage({ tone: "info", text: result.message });
     const body = result.body as { holes: number | null; holesPerCan: number | null };
-    setMessage({ tone: "good", text: `${step.label}: ${quantity} cans recorded${lostText}.${body.holes ? ` That batch needed ${body.holes} holes (${body.holesPerCan} a can).` : ""}` });
+    setMessage({ tone: "good", text: `${step.label}: ${countOf(parsed.data.quantity, "can")} recorded${lostNote}.${body.holes ? ` That batch needed ${countOf(body.holes, "hole")} (${body.holesPerCan} a can).` : ""}` });
   }
 
   return (
@@ -65,11 +77,34 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
       </fieldset>
       <ProcessingCaution to={step.to} />
       <p className="text-ink-soft">
-        {available === null ? "Loading what is on hand…" : `${available} cans are ${step.from} and can move on.`}
+        {available === null ? "Loading what is on hand…" : `${countOf(available, noun("can is", "cans are"))} ${step.from} and can move on.`}
       </p>
-      <Stepper id="processing-quantity" label="Cans in this batch" value={quantity} onChange={setQuantity} bigStep={10} error={errors.quantity ?? errors.to} />
-      {step.to === "punched" && quantity > 0 ? <p className="text-ink-soft">At 4 holes a can that is {quantity * 4} holes; the answer uses your units&apos; own count.</p> : null}
-      <LossFields to={step.to} from={step.from} reason={lossReason} quantity={lost} onReason={setLossReason} onQuantity={setLost} errors={errors} />
+      <NumberField
+        id="processing-quantity"
+        label="Cans in this batch"
+        spec={NUMBER_SPECS.batchCans}
+        steppers
+        bigStep={10}
+        value={quantityText}
+        onChange={(raw) => {
+          setQuantity(raw);
+          clear("quantity");
+        }}
+        error={errors.quantity ?? errors.to}
+      />
+      {step.to === "punched" && shownQuantity > 0 ? <p className="text-ink-soft">At 4 holes a can that is {countOf(shownQuantity * 4, "hole")}; the answer uses your units&apos; own count.</p> : null}
+      <LossFields
+        to={step.to}
+        from={step.from}
+        reason={lossReason}
+        quantity={lostText}
+        onReason={setLossReason}
+        onQuantity={(raw) => {
+          setLost(raw);
+          clear("lost.quantity");
+        }}
+        errors={errors}
+      />
       {message?.tone === "error" ? <FormError message={message.text} /> : message ? <Notice tone={message.tone === "good" ? "good" : "info"} title={message.text} /> : null}
       <Button type="submit" disabled={pending}>
         {pending ? "Saving…" : "Record processing"}

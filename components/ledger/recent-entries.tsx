@@ -8,28 +8,29 @@ import { FormError } from "@/components/ui/field";
 import { fetchJson } from "@/lib/api/client";
 import { ledgerKeys, myEntriesQuery, type MyEntry } from "@/hooks/queries/ledger";
 import { formatDateTime } from "@/lib/format";
+import { countOf } from "@/lib/plural";
 
 function describe(e: MyEntry): string {
   const d = e.details as Record<string, unknown>;
   switch (e.kind) {
     case "haul":
-      return `Haul from ${e.dropPoint ?? "a drop point"}: ≈${e.estimated} cans`;
+      return `Haul from ${e.dropPoint ?? "a drop point"}: ≈${countOf(Number(e.estimated), "can")}`;
     case "sort":
       return `Sort: ${d.good} good, ${Number(d.counted) - Number(d.good)} rejected`;
     case "processing": {
       // Older entries carry no quantity in their details; their lines all went to `to`.
       const lost = d.lost as { quantity: number } | undefined;
       const moved = typeof d.quantity === "number" ? d.quantity : e.counted;
-      return `${String(d.to).replace(/^./, (c) => c.toUpperCase())}: ${moved} cans${lost ? `, ${lost.quantity} lost` : ""}`;
+      return `${String(d.to).replace(/^./, (c) => c.toUpperCase())}: ${countOf(Number(moved), "can")}${lost ? `, ${lost.quantity} lost` : ""}`;
     }
     case "stockCount":
       return `Stock count: ${(d.lines as unknown[] | undefined)?.length ?? 0} stages adjusted`;
     case "claim":
-      return `Claimed ${e.counted} cans`;
+      return `Claimed ${countOf(Number(e.counted), "can")}`;
     case "builtIn":
-      return `Built in ${e.counted} cans`;
+      return `Built in ${countOf(Number(e.counted), "can")}`;
     default:
-      return `${e.kind}: ${e.counted} cans`;
+      return `${e.kind}: ${countOf(Number(e.counted), "can")}`;
   }
 }
 

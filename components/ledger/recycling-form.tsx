@@ -3,14 +3,25 @@
 import { useState } from "react";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { Button } from "@/components/ui/button";
-import { Field, FormError } from "@/components/ui/field";
+import { FormError } from "@/components/ui/field";
+import { NumberField } from "@/components/ui/number-field";
+import { NUMBER_SPECS, parseNumberInputs, type NumberSpec } from "@/lib/forms/number-input";
+import { countOf, noun } from "@/lib/plural";
 import { Notice } from "@/components/ui/notice";
 import { fetchJson } from "@/lib/api/client";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { recyclingInputSchema } from "@/lib/ledger/schemas";
 import { ledgerKeys, stockQuery } from "@/hooks/queries/ledger";
 
-const num = (s: string) => (s.trim() === "" ? null : Number(s.replace(",", ".")));
+// Money is not a count or a weight; a decimal with "." or "," like 12.50, with no sign or letters.
+const MONEY: NumberSpec = {
+  noun: noun("money", "money"),
+  decimal: true,
+  min: 0,
+  max: 1_000_000,
+  message: "Enter the money received as a number, like 12.50.",
+  amount: (n) => n.toLocaleString("en-GB"),
+};
 
 /** Rejected cans taken to a scrap dealer or recycling point, with weight and money if any. */
 export function RecyclingForm({ driveId }: { driveId: string }) {
@@ -20,9 +31,9 @@ export function RecyclingForm({ driveId }: { driveId: string }) {
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [done, setDone] = useState<string | null>(null);
   const save = useMutation({
-    mutationFn: (body: unknown) => fetchJson(`/api/drives/${driveId}/recycling`, { method: "POST", json: body, headers: { "idempotency-key": crypto.randomUUID() } }),
-    onSuccess: () => {
-      setDone(`Recorded ${form.quantity} cans taken to recycling.`);
+    mutationFn: (body: { quantity: number }) => fetchJson(`/api/drives/${driveId}/recycling`, { method: "POST", json: body, headers: { "idempotency-key": crypto.randomUUID() } }),
+    onSuccess: (_res, body) => {
+      setDone(`Recorded ${countOf(body.quantity, "can")} taken to recycling.`);
       setForm({ quantity: "", weightKg: "", moneyReceived: "" });
       return qc.invalidateQueries({ queryKey: ledgerKeys.all });
     },
@@ -31,20 +42,30 @@ export function RecyclingForm({ driveId }: { driveId: string }) {
   function onSubmit(e: React.FormEvent) {
     e.preventDefault();
     setDone(null);
-    const parsed = recyclingInputSchema.safeParse({ quantity: num(form.quantity) ?? NaN, weightKg: num(form.weightKg), moneyReceived: num(form.moneyReceived) });
-    if (!parsed.success) return setErrors(fieldErrorsOf(parsed.error));
+    const numbers = parseNumberInputs({
+      quantity: [form.quantity, NUMBER_SPECS.recycledCans],
+      weightKg: [form.weightKg, NUMBER_SPECS.recycledWeightKg],
+      moneyReceived: [form.moneyReceived, MONEY],
+    });
+    const parsed = recyclingInputSchema.safeParse(numbers.values);
+    if (!parsed.success || Object.keys(numbers.errors).length > 0) {
+      return setErrors({ ...(parsed.success ? {} : fieldErrorsOf(parsed.error)), ...(numbers.errors as Record<string, string>) });
+    }
     setErrors({});
     save.mutate(parsed.data);
   }
 
-  const set = (k: keyof typeof form) => (e: React.ChangeEvent<HTMLInputElement>) => setForm((f) => ({ ...f, [k]: e.target.value }));
+  const set = (k: keyof typeof form) => (raw: string) => {
+    setForm((f) => ({ ...f, [k]: raw }));
+    setErrors(({ [k]: _gone, ...rest }) => rest);
+  };
   return (
     <form onSubmit={onSubmit} className="flex flex-col gap-3" aria-label="Rejects taken to recycling" noValidate>
       <p className="text-ink-soft">{stock.data ? `${stock.data.rejectedOnHand} rejected cans are waiting to go.` : "Loading…"}</p>
       <div className="grid gap-3 sm:grid-cols-3">
-        <Field id="recycle-quantity" label="Cans" inputMode="numeric" value={form.quantity} onChange={set("quantity")} error={errors.quantity} />
-        <Field id="recycle-weight" label="Weight in kg (optional)" inputMode="decimal" value={form.weightKg} onChange={set("weightKg")} error={errors.weightKg} />
-        <Field id="recycle-money" label="Money received (optional)" inputMode="decimal" value={form.moneyReceived} onChange={set("moneyReceived")} error={errors.moneyReceived} />
+        <NumberField id="recycle-quantity" label="Cans" spec={NUMBER_SPECS.recycledCans} value={form.quantity} onChange={set("quantity")} error={errors.quantity} />
+        <NumberField id="recycle-weight" label="Weight in kg (optional)" spec={NUMBER_SPECS.recycledWeightKg} value={form.weightKg} onChange={set("weightKg")} error={errors.weightKg} />
+        <NumberField id="recycle-money" label="Money received (optional)" spec={MONEY} value={form.moneyReceived} onChange={set("moneyReceived")} error={errors.moneyReceived} />
       </div>
       <FormError message={save.error?.message} />
       {done ? <Notice tone="good" title={done} /> : null}

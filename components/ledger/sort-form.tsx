@@ -11,30 +11,46 @@ import { REJECT_REASON_LABEL, REJECT_REASONS, sortInputSchema, type RejectReason
 import { openHaulsQuery } from "@/hooks/queries/ledger";
 import { SortCaution } from "./cautions";
 import { ConfirmUnusual } from "./confirm-unusual";
-import { Stepper } from "./stepper";
+import { NumberField } from "@/components/ui/number-field";
+import { NUMBER_SPECS, parseNumberInput, parseNumberInputs } from "@/lib/forms/number-input";
+import { countOf, plural } from "@/lib/plural";
 import type { SubmitResult } from "./use-outbox";
 import { formatDateTime } from "@/lib/format";
 
 type Submit = (url: string, body: unknown, label: string) => Promise<SubmitResult>;
-const zeroRejects = () => Object.fromEntries(REJECT_REASONS.map((r) => [r, 0])) as Record<RejectReason, number>;
+const zeroRejects = () => Object.fromEntries(REJECT_REASONS.map((r) => [r, "0"])) as Record<RejectReason, string>;
+// What the boxes hold as numbers, for the running "Counted" line; a box that is not a number counts nothing.
+const valueOf = (raw: string) => {
+  const p = parseNumberInput(raw, NUMBER_SPECS.rejectedCans);
+  return p.ok ? (p.value ?? 0) : 0;
+};
 
 export function SortForm({ driveId, submit }: { driveId: string; submit: Submit }) {
   const hauls = useQuery(openHaulsQuery(driveId));
   const [chosen, setChosen] = useState<string[]>([]);
-  const [good, setGood] = useState(0);
+  const [goodText, setGood] = useState("0");
   const [rejected, setRejected] = useState(zeroRejects);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<{ tone: "good" | "info" | "error"; text: string } | null>(null);
   const [pending, setPending] = useState(false);
   const [ask, setAsk] = useState<{ question: string; confirm: () => Promise<SubmitResult> } | null>(null);
-  const rejectTotal = Object.values(rejected).reduce((s, n) => s + n, 0);
+  const good = valueOf(goodText);
+  const rejectTotal = Object.values(rejected).reduce((s, raw) => s + valueOf(raw), 0);
   const counted = good + rejectTotal;
+  const clear = (key: string) => setErrors(({ [key]: _gone, ...rest }) => rest);
 
   async function onSubmit(e: React.FormEvent) {
     e.preventDefault();
-    const nonZero = Object.fromEntries(Object.entries(rejected).filter(([, n]) => n > 0));
-    const parsed = sortInputSchema.safeParse({ haulIds: chosen, good, rejected: nonZero });
-    if (!parsed.success) return setErrors(fieldErrorsOf(parsed.error));
+    // Anything typed that is not a whole number stops here; nothing else is ever sent in its place.
+    const numbers = parseNumberInputs({
+      good: [goodText, NUMBER_SPECS.goodCans],
+      ...Object.fromEntries(REJECT_REASONS.map((r) => [`rejected.${r}`, [rejected[r], NUMBER_SPECS.rejectedCans]])),
+    } as Record<string, [string, typeof NUMBER_SPECS.goodCans]>);
+    const nonZero = Object.fromEntries(REJECT_REASONS.map((r) => [r, numbers.values[`rejected.${r}`] ?? 0]).filter(([, n]) => (n as number) > 0));
+    const parsed = sortInputSchema.safeParse({ haulIds: chosen, good: numbers.values.good, rejected: nonZero });
+    if (!parsed.success || Object.keys(numbers.errors).length > 0) {
+      return setErrors({ ...(parsed.success ? {} : fieldErrorsOf(parsed.error)), ...(numbers.errors as Record<string, string>) });
+    }
     setErrors({});
     setPending(true);
     settle(await submit(`/api/drives/${driveId}/sorts`, parsed.data, `Sort: ${good} good, ${rejectTotal} rejected`));
@@ -52,9 +68,9 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
     if (result.kind === "refused" && result.question && result.confirm) return setAsk({ question: result.question, confirm: result.confirm });
     if (result.kind === "refused") return setMessage({ tone: "error", text: result.message });
     setChosen([]);
-    setGood(0);
+    setGood("0");
     setRejected(zeroRejects());
-    setMessage({ tone: result.kind === "done" ? "good" : "info", text: result.kind === "done" ? `Sort recorded: ${good} good cans, ${rejectTotal} rejected.` : result.message });
+    setMessage({ tone: result.kind === "done" ? "good" : "info", text: result.kind === "done" ? `Sort recorded: ${good} good ${plural(good, "can")}, ${rejectTotal} rejected.` : result.message });
   }
 
   return (
@@ -78,7 +94,7 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
                 onChange={(e) => setChosen((c) => (e.target.checked ? [...c, h.id] : c.filter((x) => x !== h.id)))}
               />
               <span>
-                {h.dropPointName} · {h.bags} bags{h.weightKg !== null ? ` · ${h.weightKg} kg` : ""} · ≈{h.estimatedCans} cans
+                {h.dropPointName} · {countOf(h.bags, "bag")}{h.weightKg !== null ? ` · ${h.weightKg} kg` : ""} · ≈{countOf(h.estimatedCans, "can")}
                 <span className="block text-sm text-ink-faint">{formatDateTime(h.hauledAt)}</span>
               </span>
             </label>
@@ -88,15 +104,39 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
           {errors.haulIds ?? ""}
         </p>
       </fieldset>
-      <Stepper id="sort-good" label="Good cans" value={good} onChange={setGood} bigStep={10} error={errors.good} />
+      <NumberField
+        id="sort-good"
+        label="Good cans"
+        spec={NUMBER_SPECS.goodCans}
+        steppers
+        bigStep={10}
+        value={goodText}
+        onChange={(raw) => {
+          setGood(raw);
+          clear("good");
+        }}
+        error={errors.good}
+      />
       <fieldset className="flex flex-col gap-1">
         <legend className="mb-1 font-semibold">Rejected, by reason</legend>
         {REJECT_REASONS.map((r) => (
-          <Stepper key={r} id={`sort-reject-${r}`} label={REJECT_REASON_LABEL[r]} value={rejected[r]} onChange={(n) => setRejected((x) => ({ ...x, [r]: n }))} />
+          <NumberField
+            key={r}
+            id={`sort-reject-${r}`}
+            label={REJECT_REASON_LABEL[r]}
+            spec={NUMBER_SPECS.rejectedCans}
+            steppers
+            value={rejected[r]}
+            onChange={(raw) => {
+              setRejected((x) => ({ ...x, [r]: raw }));
+              clear(`rejected.${r}`);
+            }}
+            error={errors[`rejected.${r}`]}
+          />
         ))}
       </fieldset>
       <p className="text-ink-soft" aria-live="polite">
-        Counted {counted} cans{counted > 0 ? ` · yield ${Math.round((good / counted) * 100)} %` : ""}
+        Counted {countOf(counted, "can")}{counted > 0 ? ` · yield ${Math.round((good / counted) * 100)} %` : ""}
       </p>
       {ask ? <ConfirmUnusual question={ask.question} pending={pending} onYes={() => void answerYes()} onNo={() => setAsk(null)} /> : null}
       {message?.tone === "error" ? <FormError message={message.text} /> : message ? <Notice tone={message.tone === "good" ? "good" : "info"} title={message.text} /> : null}

@@ -8,12 +8,14 @@ import { Notice } from "@/components/ui/notice";
 import { Skeleton } from "@/components/ui/card";
 import { fetchJson } from "@/lib/api/client";
 import { fieldErrorsOf } from "@/lib/api/errors";
+import { NUMBER_SPECS, parseNumberInput } from "@/lib/forms/number-input";
+import { NumberInput } from "@/components/ui/number-field";
+import { plural } from "@/lib/plural";
 import { ledgerKeys, stockQuery } from "@/hooks/queries/ledger";
 import { COUNTABLE_LABEL, COUNTABLE_STAGES, countDifferences, stockCountInputSchema, type CountableStage, type StockCountLine } from "@/lib/ledger/stock-count-schema";
 
 type Posted = { movementId: string; lines: StockCountLine[] };
 const signed = (n: number) => (n > 0 ? `+${n}` : `−${-n}`);
-const input = "min-h-11 w-24 rounded-lg border-2 bg-white px-2 text-right text-lg tabular-nums";
 
 // What is physically on hand, typed beside each running total; the differences
 // are posted as one adjustment entry with a reason. A box left empty is not counted.
@@ -48,10 +50,9 @@ export function StockCountForm({ driveId }: { driveId: string }) {
   const counted: Partial<Record<CountableStage, number>> = {};
   const bad: Record<string, string> = {};
   for (const s of COUNTABLE_STAGES) {
-    const t = typed[s]?.trim() ?? "";
-    if (t === "") continue;
-    if (/^\d+$/.test(t)) counted[s] = Number(t);
-    else bad[`counted.${s}`] = "Whole cans only, like 120.";
+    const p = parseNumberInput(typed[s] ?? "", NUMBER_SPECS.countedCans);
+    if (!p.ok) bad[`counted.${s}`] = p.error;
+    else if (p.value !== null) counted[s] = p.value;
   }
   const differences = countDifferences(counted, totals);
 
@@ -88,17 +89,15 @@ export function StockCountForm({ driveId }: { driveId: string }) {
                 </th>
                 <td className="py-2 pr-2 text-right tabular-nums" data-total={s}>{totals[s]}</td>
                 <td className="py-2 pr-2 text-right">
-                  <input
+                  <NumberInput
                     id={`count-${s}`}
-                    inputMode="numeric"
-                    className={`${input} ${error ? "border-alarm" : "border-ink/40"}`}
+                    name={COUNTABLE_LABEL[s]}
+                    spec={NUMBER_SPECS.countedCans}
+                    boxClassName="w-24 px-2 text-right text-lg tabular-nums"
                     value={typed[s] ?? ""}
-                    placeholder="—"
-                    aria-invalid={error ? true : undefined}
-                    aria-describedby={`count-${s}-error`}
-                    onChange={(e) => setTyped((t) => ({ ...t, [s]: e.target.value }))}
+                    error={error}
+                    onChange={(raw) => setTyped((t) => ({ ...t, [s]: raw }))}
                   />
-                  <span id={`count-${s}-error`} aria-live="polite" className="block text-sm font-semibold text-alarm">{error ?? ""}</span>
                 </td>
                 <td className={`py-2 text-right font-semibold tabular-nums ${diff ? "text-ember-deep" : "text-ink-faint"}`} data-difference={s}>
                   {diff === null ? "" : diff === 0 ? "matches" : signed(diff)}
@@ -137,7 +136,7 @@ export function StockCountForm({ driveId }: { driveId: string }) {
         <Button type="submit" disabled={post.isPending || differences.length === 0}>
           {post.isPending ? "Posting…" : "Post the difference"}
         </Button>
-        <span className="text-sm text-ink-soft">{differences.length === 0 ? "Type what you counted; stages that match need nothing." : `${differences.length} stage${differences.length === 1 ? "" : "s"} to adjust.`}</span>
+        <span className="text-sm text-ink-soft">{differences.length === 0 ? "Type what you counted; stages that match need nothing." : `${differences.length} ${plural(differences.length, "stage")} to adjust.`}</span>
       </div>
     </form>
   );

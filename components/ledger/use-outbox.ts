@@ -77,6 +77,8 @@ export function useOutbox() {
   }, [settle]);
 
   useEffect(() => {
+    // The queue lives in localStorage, which the server render cannot read: it is loaded once mounted.
+    // eslint-disable-next-line react-hooks/set-state-in-effect
     setItems(readOutbox(localStorage));
     void flush();
     const timer = setInterval(() => {
@@ -91,7 +93,9 @@ export function useOutbox() {
   }, [flush]);
 
   const sendNow = useCallback(
-    async (item: OutboxItem): Promise<SubmitResult> => {
+    (first: OutboxItem): Promise<SubmitResult> => {
+    // A confirmed resend ("yes, record it") goes through the same steps.
+    const attempt = async (item: OutboxItem): Promise<SubmitResult> => {
       setItems(addToOutbox(localStorage, item));
       if (busy.current || readOutbox(localStorage).length > 1) {
         void flush();
@@ -112,9 +116,11 @@ export function useOutbox() {
       void qc.invalidateQueries({ queryKey: ledgerKeys.all });
       if (outcome.kind === "refused") {
         const { message, fields, question } = outcome;
-        return { kind: "refused", message, fields, question, ...(question ? { confirm: () => sendNow(confirmedCopy(item, crypto.randomUUID())) } : {}) };
+        return { kind: "refused", message, fields, question, ...(question ? { confirm: () => attempt(confirmedCopy(item, crypto.randomUUID())) } : {}) };
       }
       return { kind: "done", body: outcome.body };
+    };
+    return attempt(first);
     },
     [flush, qc],
   );

@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { countOf } from "@/lib/plural";
 
 export interface HistoryPoint {
   id: string;
@@ -16,7 +17,7 @@ export function PickupHistory({ points }: { points: HistoryPoint[] }) {
         <li key={p.id}>
           <details className="rounded-lg border border-paper-edge bg-white p-3">
             <summary className="cursor-pointer font-semibold">
-              {p.name} <span className="font-normal text-ink-faint">· {p.driveName} · {p.history.length} visit{p.history.length === 1 ? "" : "s"} on runs</span>
+              {p.name} <span className="font-normal text-ink-faint">· {p.driveName} · {countOf(p.history.length, "visit")} on runs</span>
             </summary>
             {p.history.length === 0 ? (
               <p className="mt-2 text-ink-soft">No run has visited this drop point yet.</p>
@@ -25,7 +26,7 @@ export function PickupHistory({ points }: { points: HistoryPoint[] }) {
                 {p.history.map((h) => (
                   <li key={h.runId}>
                     <Link href={`/runs/${h.runId}`}>{h.plannedOn}</Link> · {h.assigneeName ?? "nobody"} · {STATUS_TEXT[h.status]}
-                    {h.haulBags !== null ? `: ${h.haulBags} bag${h.haulBags === 1 ? "" : "s"}` : null}
+                    {h.haulBags !== null ? `: ${countOf(h.haulBags, "bag")}` : null}
                     {h.skipReason ? <span className="text-ink-faint"> — “{h.skipReason}”</span> : null}
                   </li>
                 ))}

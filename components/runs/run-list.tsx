@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { EmptyState } from "@/components/ui/card";
 import { RUN_STATE_LABEL, type RunState } from "@/lib/runs/schemas";
+import { countOf } from "@/lib/plural";
 
 export interface RunListItem {
   id: string;
@@ -37,7 +38,7 @@ export function RunList({ runs, empty }: { runs: RunListItem[]; empty: string })
             <RunStateBadge state={r.state} />
           </span>
           <span className="text-ink-faint">
-            {r.driveName} · {r.stops} stops ({r.logged} logged, {r.skipped} skipped) · {r.distanceKm.toFixed(1)} km
+            {r.driveName} · {countOf(r.stops, "stop")} ({r.logged} logged, {r.skipped} skipped) · {r.distanceKm.toFixed(1)} km
           </span>
         </li>
       ))}

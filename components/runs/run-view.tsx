@@ -8,6 +8,7 @@ import { RunStateBadge } from "./run-list";
 import { RouteMap } from "./route-map";
 import { StopActions } from "./stop-actions";
 import { UndoStopHaul, UnskipStop } from "./stop-undo";
+import { countOf } from "@/lib/plural";
 
 function StopCard({ run, stop, canAct, isNext, onDone, onChanged }: { run: RunDetail; stop: RunStop; canAct: boolean; isNext: boolean; onDone: (r: unknown) => void; onChanged: () => void }) {
   const p = stop.dropPoint;
@@ -46,8 +47,8 @@ function StopCard({ run, stop, canAct, isNext, onDone, onChanged }: { run: RunDe
               {stop.haul ? (
                 <span className="font-normal text-ink-soft">
                   {" "}
-                  — {stop.haul.bags} bag{stop.haul.bags === 1 ? "" : "s"}
-                  {stop.haul.weightKg !== null ? `, ${stop.haul.weightKg} kg` : ""}, about {stop.haul.estimatedCans} cans (estimate)
+                  — {countOf(stop.haul.bags, "bag")}
+                  {stop.haul.weightKg !== null ? `, ${stop.haul.weightKg} kg` : ""}, about {countOf(stop.haul.estimatedCans, "can")} (estimate)
                 </span>
               ) : null}
             </p>
@@ -86,7 +87,7 @@ export function RunView({ initial, canAct, tileUrl, attribution }: { initial: Ru
         <RunStateBadge state={run.state} />
       </div>
       <p className="text-ink-soft" aria-live="polite" data-testid="run-progress">
-        {run.driveName} · {run.assigneeName ?? "nobody assigned"} · {run.logged} logged, {run.skipped} skipped of {run.stops} stops ·{" "}
+        {run.driveName} · {run.assigneeName ?? "nobody assigned"} · {run.logged} logged, {run.skipped} skipped of {countOf(run.stops, "stop")} ·{" "}
         {run.distanceKm.toFixed(1)} km
       </p>
       {run.state === "done" ? (

@@ -6,6 +6,8 @@ import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
 import { ApiError, fetchJson, fieldErrors, unusualQuestion } from "@/lib/api/client";
 import { ConfirmUnusual } from "@/components/ledger/confirm-unusual";
+import { NumberField } from "@/components/ui/number-field";
+import { NUMBER_SPECS, parseNumberInputs } from "@/lib/forms/number-input";
 
 function newKey(): string {
   // randomUUID needs a secure context; plain-HTTP previews get a random key of the same strength.
@@ -27,6 +29,10 @@ export function StopActions({ runId, stopId, dropPointName, onDone }: Props) {
   const [weight, setWeight] = useState("");
   const [reason, setReason] = useState("");
   const [fields, setFields] = useState<Record<string, string>>({});
+  const edit = (key: string, set: (raw: string) => void) => (raw: string) => {
+    set(raw);
+    setFields(({ [key]: _gone, ...rest }) => rest);
+  };
   // A retry after a dropped connection reuses the key, so the haul is never logged twice;
   // once the server has answered (say, a 422), the corrected entry is a new request with a new key.
   // An unusual number is asked about (409) and that answer is stored under the key, so "Yes" goes with a new one.
@@ -34,9 +40,9 @@ export function StopActions({ runId, stopId, dropPointName, onDone }: Props) {
   const [question, setQuestion] = useState<string | null>(null);
 
   const log = useMutation({
-    mutationFn: async ({ confirmUnusual }: { confirmUnusual: boolean }) => {
-      const body: Record<string, unknown> = { bags: bags.trim() === "" ? 0 : Number(bags) };
-      if (weight.trim() !== "") body.weightKg = Number(weight);
+    mutationFn: async ({ bags, weightKg, confirmUnusual }: { bags: number; weightKg: number | null; confirmUnusual: boolean }) => {
+      const body: Record<string, unknown> = { bags };
+      if (weightKg !== null) body.weightKg = weightKg;
       if (confirmUnusual) body.confirmUnusual = true;
       // One request logs the haul in the ledger and settles the stop together.
       const res = await fetchJson<{ run: unknown }>(`/api/runs/${runId}/stops/${stopId}/haul`, { method: "POST", json: body, headers: { "Idempotency-Key": haulKey } });
@@ -71,13 +77,16 @@ export function StopActions({ runId, stopId, dropPointName, onDone }: Props) {
         noValidate
         onSubmit={(e) => {
           e.preventDefault();
-          setFields({});
-          log.mutate({ confirmUnusual: false });
+          // The same boxes as the Log page's haul form: anything but a number stops here, nothing else is sent.
+          const numbers = parseNumberInputs({ bags: [bags, NUMBER_SPECS.stopBags], weightKg: [weight, NUMBER_SPECS.haulWeightKg] });
+          setFields(numbers.errors as Record<string, string>);
+          if (numbers.values.bags === null || Object.keys(numbers.errors).length > 0) return;
+          log.mutate({ bags: numbers.values.bags, weightKg: numbers.values.weightKg, confirmUnusual: false });
         }}
       >
         <div className="grid grid-cols-2 gap-3">
-          <Field id={`bags-${stopId}`} label="Bags" type="number" min={0} inputMode="numeric" value={bags} onChange={(e) => setBags(e.target.value)} error={fields.bags} />
-          <Field id={`weight-${stopId}`} label="Weight, kg (optional)" type="number" min={0} step="0.1" inputMode="decimal" value={weight} onChange={(e) => setWeight(e.target.value)} error={fields.weightKg} />
+          <NumberField id={`bags-${stopId}`} label="Bags" spec={NUMBER_SPECS.stopBags} value={bags} onChange={edit("bags", setBags)} error={fields.bags} />
+          <NumberField id={`weight-${stopId}`} label="Weight, kg (optional)" spec={NUMBER_SPECS.haulWeightKg} value={weight} onChange={edit("weightKg", setWeight)} error={fields.weightKg} />
         </div>
         {question ? (
           <ConfirmUnusual
@@ -85,7 +94,8 @@ export function StopActions({ runId, stopId, dropPointName, onDone }: Props) {
             pending={log.isPending}
             onYes={() => {
               setQuestion(null);
-              log.mutate({ confirmUnusual: true });
+              const last = log.variables;
+              if (last) log.mutate({ ...last, confirmUnusual: true });
             }}
             onNo={() => {
               setQuestion(null);

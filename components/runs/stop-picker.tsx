@@ -1,13 +1,14 @@
 "use client";
 
 import type { SuggestionRow } from "@/hooks/queries/runs";
+import { countOf } from "@/lib/plural";
 
 function fillLabel(s: SuggestionRow): string {
   const parts: string[] = [];
   if (s.reportedFill !== null) parts.push(`reported ${Math.round(s.reportedFill * 100)} % full`);
   if (s.daysSinceHaul === null) parts.push("never hauled");
   else if (s.daysSinceHaul < 1) parts.push("hauled today");
-  else parts.push(`last haul ${Math.floor(s.daysSinceHaul)} day${Math.floor(s.daysSinceHaul) === 1 ? "" : "s"} ago`);
+  else parts.push(`last haul ${countOf(Math.floor(s.daysSinceHaul), "day")} ago`);
   if (s.expectedFill !== null) parts.push(`expected about ${Math.round(Math.min(s.expectedFill, 9.99) * 100)} % full (estimate)`);
   return parts.join(" · ");
 }
@@ -49,7 +50,7 @@ export function StopPicker({
                 </span>
                 <span className="text-sm text-ink-soft">{fillLabel(s)}</span>
                 <span className="text-sm text-ink-faint">
-                  {s.address} · {s.hours} · bin holds {s.capacityBags} bags
+                  {s.address} · {s.hours} · bin holds {countOf(s.capacityBags, "bag")}
                 </span>
               </span>
             </label>

@@ -60,5 +60,14 @@ export async function seed(knex: Knex): Promise<void> {
     await recordProcessing(volunteer, winter, { from: "washed", to: "opened", quantity: 260, occurredAt: ago(3, 14) }, trx);
     await recordProcessing(volunteer, winter, { from: "opened", to: "punched", quantity: 132, occurredAt: ago(2, 15) }, trx);
     await recordClaim(builder, await unit("Library reading room"), 132, trx);
+
+    // In the story each entry was sent as it happened; the writers stamp the
+    // seeding moment, which would show every line as "sent" today. The
+    // append-only trigger is set aside for this one correction, in this
+    // transaction only.
+    await trx.raw("alter table ledger_lines disable trigger ledger_lines_no_update");
+    await trx.raw("update ledger_lines set recorded_at = occurred_at where group_id = ?", [group.id]);
+    await trx.raw("alter table ledger_lines enable always trigger ledger_lines_no_update");
+    await trx.raw("update movements set recorded_at = occurred_at where group_id = ?", [group.id]);
   });
 }

@@ -4,7 +4,6 @@
 // both as "another host follows"), no backslash or control character anywhere
 // (browsers drop or rewrite them, which can turn a path into a host).
 
-// eslint-disable-next-line no-control-regex
 const UNSAFE = /[\\\u0000-\u001f\u007f]/;
 
 export function isSafePath(target: unknown): target is string {

@@ -1,7 +1,8 @@
 import "server-only";
 import { AppError, notFound } from "@/lib/api/errors";
 import { db } from "@/lib/db";
-import { findDrive, findDropPoint, UUID } from "./queries";
+import { UUID } from "@/lib/api/path";
+import { findDrive, findDropPoint } from "./queries";
 import type { DriveInput, DropPointInput } from "./schemas";
 
 const slugTaken = () =>

@@ -15,7 +15,7 @@ export async function organiserDashboard(groupId: string) {
   return Promise.all(
     drives.map(async (d) => {
       const [progress, fills, pledges] = await Promise.all([
-        progressFor({ id: d.id, startsOn: d.startsOn, sparePercent: spareOf.get(d.id) ?? 5 }, await unitCansOf(d.id, groupId), today()),
+        progressFor({ id: d.id, startsOn: d.startsOn, endsOn: d.endsOn, sparePercent: spareOf.get(d.id) ?? 5 }, await unitCansOf(d.id, groupId), today()),
         listFullBins(groupId, d.id),
         listPledges(groupId, d.id),
       ]);

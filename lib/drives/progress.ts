@@ -60,6 +60,8 @@ export interface DriveProgressInput {
   today: string;
   /** YYYY-MM-DD; a drive younger than the window is not charged for days before it began. */
   startsOn?: string;
+  /** YYYY-MM-DD, the drive's last day; after it no finish is promised. */
+  endsOn?: string;
   sparePercent?: number;
   defaultYield?: number;
   windowDays?: number;
@@ -81,9 +83,23 @@ export interface DriveProgress {
   remaining: number;
   heatersCovered: { covered: number; total: number };
   pace: { cansPerDay: number; windowDays: number };
-  /** YYYY-MM-DD; today when nothing remains, null when the pace is zero. */
+  /** YYYY-MM-DD when the pace says the target will be met; null whenever `finish` is not "expected". */
   expectedFinish: string | null;
+  finish: DriveFinish;
 }
+
+/**
+ * What can honestly be said about when the drive is done. A date is only
+ * promised from a pace, for a drive that has a target, is still running and
+ * has not met it.
+ */
+export type DriveFinish =
+  | { kind: "noTarget" }
+  | { kind: "reached" }
+  | { kind: "ended"; endsOn: string }
+  | { kind: "notStarted"; startsOn: string }
+  | { kind: "noPace"; windowDays: number }
+  | { kind: "expected"; date: string; afterEnd: boolean; endsOn?: string };
 
 export function driveTarget(unitCans: readonly number[], sparePercent = DEFAULT_SPARE_PERCENT): DriveTarget {
   const heaterCans = unitCans.reduce((sum, c) => sum + nonNegative("unit cans", c), 0);
@@ -151,9 +167,8 @@ export function driveProgress(input: DriveProgressInput): DriveProgress {
   const estimatedUnsorted = Math.round(Math.max(0, input.hauledEstimate) * y.value);
   const remaining = Math.max(0, target.cans - goodCans);
   const pace = paceCansPerDay(input.daily, input.today, input.windowDays, input.startsOn);
-  let expectedFinish: string | null = null;
-  if (remaining === 0) expectedFinish = input.today;
-  else if (pace.cansPerDay > 0) expectedFinish = addDays(input.today, Math.ceil(remaining / pace.cansPerDay));
+  const finish = driveFinish(input, target, remaining, pace);
+  const expectedFinish = finish.kind === "expected" ? finish.date : null;
   return {
     target,
     goodCans,
@@ -164,7 +179,19 @@ export function driveProgress(input: DriveProgressInput): DriveProgress {
     heatersCovered: { covered: heatersCovered(input.unitCans, goodCans), total: input.unitCans.length },
     pace,
     expectedFinish,
+    finish,
   };
+}
+
+function driveFinish(input: DriveProgressInput, target: DriveTarget, remaining: number, pace: { cansPerDay: number; windowDays: number }): DriveFinish {
+  if (target.heaters === 0 || target.cans === 0) return { kind: "noTarget" };
+  if (remaining === 0) return { kind: "reached" };
+  if (input.endsOn !== undefined && dayNumber(input.today) > dayNumber(input.endsOn)) return { kind: "ended", endsOn: input.endsOn };
+  if (input.startsOn !== undefined && dayNumber(input.today) < dayNumber(input.startsOn)) return { kind: "notStarted", startsOn: input.startsOn };
+  if (pace.cansPerDay <= 0) return { kind: "noPace", windowDays: input.windowDays ?? DEFAULT_PACE_WINDOW_DAYS };
+  const date = addDays(input.today, Math.ceil(remaining / pace.cansPerDay));
+  const afterEnd = input.endsOn !== undefined && dayNumber(date) > dayNumber(input.endsOn);
+  return { kind: "expected", date, afterEnd, ...(input.endsOn !== undefined ? { endsOn: input.endsOn } : {}) };
 }
 
 // Calendar days as UTC day numbers: no time zone or daylight-saving shift

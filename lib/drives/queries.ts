@@ -1,5 +1,6 @@
 import "server-only";
 import { db } from "@/lib/db";
+import { UUID } from "@/lib/api/path";
 
 export async function listDrives(groupId: string) {
   return db("drives as d")
@@ -45,7 +46,6 @@ export async function findDrive(groupId: string, id: string): Promise<DriveRecor
     .first();
 }
 
-export const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export interface DropPointRecord {
   id: string;

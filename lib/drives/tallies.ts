@@ -5,10 +5,9 @@ import { addDays, DEFAULT_PACE_WINDOW_DAYS, driveProgress, type DriveProgress } 
 
 export type { DropPointTally };
 
-
-export async function progressFor(drive: { id: string; startsOn: string; sparePercent: number }, unitCans: number[], today: string): Promise<DriveProgress> {
+export async function progressFor(drive: { id: string; startsOn: string; endsOn: string; sparePercent: number }, unitCans: number[], today: string): Promise<DriveProgress> {
   const [inputs, daily] = await Promise.all([driveYieldInputs(drive.id), driveGoodDaily(drive.id, addDays(today, -DEFAULT_PACE_WINDOW_DAYS))]);
-  return driveProgress({ unitCans, ...inputs, daily, today, startsOn: drive.startsOn, sparePercent: drive.sparePercent });
+  return driveProgress({ unitCans, ...inputs, daily, today, startsOn: drive.startsOn, endsOn: drive.endsOn, sparePercent: drive.sparePercent });
 }
 
 /** Time of the latest haul at each drop point that has one. */

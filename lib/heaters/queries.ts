@@ -2,6 +2,7 @@ import "server-only";
 import type { Knex } from "knex";
 import { db } from "@/lib/db";
 import { notFound, AppError } from "@/lib/api/errors";
+import { UUID } from "@/lib/api/path";
 import { computeCanGrid } from "./can-grid";
 import type { CanGridInput, LengthUnit } from "./schemas";
 import type { HeaterState } from "./unit-schemas";
@@ -85,7 +86,7 @@ export async function listHeaterUnits(groupId: string, driveId?: string): Promis
 }
 
 export async function getHeaterUnit(groupId: string, id: string): Promise<HeaterUnitRow> {
-  if (!isUuid(id)) throw notFound("That heater unit");
+  if (!UUID.test(id)) throw notFound("That heater unit");
   const row = await unitColumns(db("heater_units as h")).where({ "h.group_id": groupId, "h.id": id }).first();
   if (!row) throw notFound("That heater unit");
   return row;
@@ -160,10 +161,6 @@ export async function createHeaterUnit(
     })
     .returning(["id"]);
   return getHeaterUnit(actor.groupId, row.id);
-}
-
-export function isUuid(id: string): boolean {
-  return /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id);
 }
 
 export async function groupLatitude(groupId: string): Promise<number | null> {

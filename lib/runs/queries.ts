@@ -1,11 +1,9 @@
 import "server-only";
 import type { Knex } from "knex";
 import { db } from "@/lib/db";
-import { AppError, conflict, notFound } from "@/lib/api/errors";
+import { notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
-import { planRoute } from "@/lib/routes/route";
-import type { CreateRunInput, RunState, StopStatus } from "./schemas";
-import { runStateOf } from "./state";
+import type { RunState, StopStatus } from "./schemas";
 
 export interface RunSummary {
   id: string;
@@ -165,129 +163,4 @@ export async function listDrivers(groupId: string) {
     .where("m.group_id", groupId)
     .whereIn("m.role", ["volunteer", "organiser"])
     .orderBy([{ column: "m.role", order: "desc" }, { column: "u.name" }]);
-}
-
-/** Orders the chosen drop points and stores the run; the caller sends the e-mail after commit. */
-export async function createRun(actor: Actor, input: CreateRunInput) {
-  return db.transaction(async (trx) => {
-    const drive = await trx("drives").select("id", "name").where({ id: input.driveId, group_id: actor.group.id }).first();
-    if (!drive) throw notFound("That drive");
-    const points = await trx("drop_points")
-      .select("id", "name", "lat", "lng")
-      .where({ group_id: actor.group.id, drive_id: drive.id })
-      .whereIn("id", input.dropPointIds);
-    if (points.length !== input.dropPointIds.length) {
-      throw new AppError("invalid_input", "Some chosen drop points are not part of this drive.", {
-        fields: { dropPointIds: "Choose drop points of this drive only" },
-      });
-    }
-    const assignee = await trx("memberships as m")
-      .join("users as u", "u.id", "m.user_id")
-      .select("u.id", "u.name", "u.email")
-      .where({ "m.group_id": actor.group.id, "m.user_id": input.assigneeId })
-      .whereIn("m.role", ["volunteer", "organiser"])
-      .first();
-    if (!assignee) {
-      throw new AppError("invalid_input", "That person cannot take this run.", {
-        fields: { assigneeId: "Choose a volunteer or organiser of your group" },
-      });
-    }
-    const plan = planRoute({ start: input.start, stops: points, returnToStart: input.returnToStart });
-    const [run] = await trx("pickup_runs")
-      .insert({
-        group_id: actor.group.id,
-        drive_id: drive.id,
-        planned_on: input.plannedOn,
-        start_lat: input.start.lat,
-        start_lng: input.start.lng,
-        return_to_start: input.returnToStart,
-        distance_km: plan.distanceKm,
-        assignee_id: assignee.id,
-        notes: input.notes,
-        created_by: actor.user.id,
-      })
-      .returning(["id"]);
-    await trx("pickup_run_stops").insert(
-      plan.order.map((pointId, i) => ({
-        run_id: run.id,
-        group_id: actor.group.id,
-        drop_point_id: pointId,
-        position: i + 1,
-        leg_km: plan.legs[i]!.km,
-      })),
-    );
-    const byId = new Map(points.map((p) => [p.id as string, p.name as string]));
-    return { id: run.id as string, drive, assignee, plan, stopNames: plan.order.map((id) => byId.get(id)!) };
-  });
-}
-
-/** Locks the run and returns the stop if the actor may settle it and it is still pending. */
-export async function lockPendingStop(actor: Actor, runId: string, stopId: string, trx: Knex.Transaction) {
-  const run = await trx("pickup_runs")
-    .select("id", "assignee_id", "started_at")
-    .where({ id: runId, group_id: actor.group.id })
-    .forUpdate()
-    .first();
-  if (!run || (actor.role !== "organiser" && run.assignee_id !== actor.user.id)) throw notFound("That pickup run");
-  const stop = await trx("pickup_run_stops")
-    .select("id", "status", "drop_point_id")
-    .where({ id: stopId, run_id: runId, group_id: actor.group.id })
-    .first();
-  if (!stop) throw notFound("That stop");
-  if (stop.status !== "pending") throw conflict(`This stop is already ${stop.status}.`);
-  return { run, stop: { id: stop.id as string, dropPointId: stop.drop_point_id as string } };
-}
-
-const HAUL_TAKEN = "That haul already settles another stop.";
-
-function isUniqueViolation(error: unknown, constraint: string): boolean {
-  const e = error as { code?: string; constraint?: string } | null;
-  return e?.code === "23505" && e.constraint === constraint;
-}
-
-/**
- * Marks one stop logged or skipped, then moves the run's state along. Only the
- * run's volunteer or an organiser may; a stop already settled is a 409.
- */
-export async function resolveStop(
-  actor: Actor,
-  runId: string,
-  stopId: string,
-  change: { status: "skipped"; reason: string } | { status: "logged"; haulId: string },
-  trx: Knex.Transaction,
-  /** What lockPendingStop already returned in this transaction, so it is not locked and read twice. */
-  locked?: Awaited<ReturnType<typeof lockPendingStop>>,
-) {
-  const { run, stop } = locked ?? (await lockPendingStop(actor, runId, stopId, trx));
-  if (change.status === "logged") {
-    // Two runs logging one haul lock different runs; locking the haul makes
-    // the second wait for the first and then see the stop it settled.
-    await trx("hauls").select("id").where({ id: change.haulId, group_id: actor.group.id }).forUpdate().first();
-    const taken = await trx("pickup_run_stops").select("id").where({ haul_id: change.haulId }).first();
-    if (taken) throw conflict(HAUL_TAKEN);
-  }
-  await trx("pickup_run_stops")
-    .where({ id: stopId })
-    .update({
-      status: change.status,
-      skip_reason: change.status === "skipped" ? change.reason : null,
-      haul_id: change.status === "logged" ? change.haulId : null,
-      resolved_by: actor.user.id,
-      resolved_at: trx.fn.now(),
-    })
-    .catch((error: unknown) => {
-      // The unique index is the last word if anything slips past the lock.
-      if (isUniqueViolation(error, "pickup_run_stops_haul_unique")) throw conflict(HAUL_TAKEN);
-      throw error;
-    });
-  const statuses: StopStatus[] = await trx("pickup_run_stops").where({ run_id: runId }).pluck("status");
-  const state = runStateOf(statuses);
-  await trx("pickup_runs")
-    .where({ id: runId })
-    .update({
-      state,
-      started_at: run.started_at ?? trx.fn.now(),
-      finished_at: state === "done" ? trx.fn.now() : null,
-    });
-  return { dropPointId: stop.dropPointId, state };
 }

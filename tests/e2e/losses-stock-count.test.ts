@@ -75,7 +75,7 @@ describe("losses and stock counts in the browser", () => {
     await page.getByLabel("Punched", { exact: true }).fill("2.5");
     await page.getByLabel("Why does it differ?").fill("Shelf recount after the wash day");
     await page.getByRole("button", { name: "Post the difference" }).click();
-    await page.getByText("Whole cans only, like 120.").waitFor();
+    await page.getByText("Enter a whole number of cans, like 120.").waitFor();
     await page.getByLabel("Punched", { exact: true }).fill("");
     await page.getByRole("button", { name: "Post the difference" }).click();
     await page.getByText("Stock count posted as one adjustment: good, not washed −6, washed +1.").waitFor();

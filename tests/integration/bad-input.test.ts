@@ -55,7 +55,7 @@ let g: OwnGroup;
 const extra: Extra = { haulId: "", volunteerId: "", runId: "", stopId: "" };
 const clients = {} as Record<Caller, ApiClient>;
 let endpoints: Endpoint[] = [];
-let uncovered: string[] = [];
+const uncovered: string[] = [];
 
 beforeAll(async () => {
   const db = testDb();

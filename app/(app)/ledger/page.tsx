@@ -12,6 +12,8 @@ import { driveGoodDaily, dropPointTallies } from "@/lib/ledger/balances";
 import { driveChartBasics, listGroupPeople, listLogDrives } from "@/lib/ledger/queries";
 import { groupTimeZone } from "@/lib/ledger/ledger-list";
 import { dailySeries } from "@/lib/ledger/daily-series";
+import { countOf } from "@/lib/plural";
+import { NO_HEATERS } from "@/lib/drives/progress-wording";
 
 export const metadata: Metadata = { title: "Ledger" };
 
@@ -50,7 +52,9 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
         <Card title={`Good cans per day · ${drive.name}`}>
           <GoodCansChart daily={dailyPoints} target={target.cans} />
           <p className="mt-2 text-sm text-ink-soft">
-            Target {target.cans} cans: {target.heaterCans} for {target.heaters} heater units plus {target.spare} spare.
+            {target.heaters > 0
+              ? `Target ${countOf(target.cans, "can")}: ${target.heaterCans} for ${countOf(target.heaters, "heater unit")} plus ${target.spare} spare.`
+              : `${NO_HEATERS}, so the drive has no target yet.`}
           </p>
         </Card>
         <Card title="Yield per drop point">

@@ -2,7 +2,8 @@ import { endpoint } from "@/lib/api/endpoint";
 import { env } from "@/lib/env";
 import { sendMail } from "@/lib/mail/outbox";
 import { runAssignedMail } from "@/lib/runs/mail";
-import { createRun, listRuns } from "@/lib/runs/queries";
+import { createRun } from "@/lib/runs/commands";
+import { listRuns } from "@/lib/runs/queries";
 import { createRunInputSchema } from "@/lib/runs/schemas";
 
 export const dynamic = "force-dynamic";

@@ -7,6 +7,8 @@ import { Field, FormError } from "@/components/ui/field";
 import { fetchJson, ApiError, fieldErrors } from "@/lib/api/client";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { dropPointInput } from "@/lib/drives/schemas";
+import { NumberField } from "@/components/ui/number-field";
+import { NUMBER_SPECS, parseNumberInput } from "@/lib/forms/number-input";
 
 export interface DropPointValues {
   name: string;
@@ -27,7 +29,7 @@ export const emptyDropPoint = (lat = "", lng = ""): DropPointValues => ({
 
 function toBody(v: DropPointValues) {
   const num = (s: string) => (s.trim() === "" ? undefined : Number(s));
-  return { ...v, lat: num(v.lat), lng: num(v.lng), capacityBags: num(v.capacityBags) };
+  return { ...v, lat: num(v.lat), lng: num(v.lng) };
 }
 
 export function DropPointForm({
@@ -52,8 +54,9 @@ export function DropPointForm({
 
   function submit(e: React.FormEvent) {
     e.preventDefault();
-    const parsed = dropPointInput.safeParse(toBody(values));
-    if (!parsed.success) return setLocal(fieldErrorsOf(parsed.error));
+    const capacity = parseNumberInput(values.capacityBags, NUMBER_SPECS.capacityBags);
+    const parsed = dropPointInput.safeParse({ ...toBody(values), capacityBags: capacity.ok ? capacity.value : undefined });
+    if (!parsed.success || !capacity.ok) return setLocal({ ...(parsed.success ? {} : fieldErrorsOf(parsed.error)), ...(capacity.ok ? {} : { capacityBags: capacity.error }) });
     setLocal({});
     mutation.mutate(parsed.data);
   }
@@ -70,7 +73,17 @@ export function DropPointForm({
         <Field id="dp-lng" label="Longitude" inputMode="decimal" value={values.lng} onChange={text("lng")} error={errors.lng} />
       </div>
       <Field id="dp-hours" label="Opening hours" placeholder="Mon–Sat 9:00–17:00" value={values.hours} onChange={text("hours")} error={errors.hours} />
-      <Field id="dp-capacity" label="Bin holds (bags)" type="number" inputMode="numeric" min={1} max={100} value={values.capacityBags} onChange={text("capacityBags")} error={errors.capacityBags} />
+      <NumberField
+        id="dp-capacity"
+        label="Bin holds (bags)"
+        spec={NUMBER_SPECS.capacityBags}
+        value={values.capacityBags}
+        onChange={(raw) => {
+          onChange({ ...values, capacityBags: raw });
+          setLocal(({ capacityBags: _gone, ...rest }) => rest);
+        }}
+        error={errors.capacityBags}
+      />
       <fieldset className="rounded-lg border border-paper-edge p-3">
         <legend className="px-1 font-semibold">Host contact (organisers only, never public)</legend>
         <Field id="dp-host-name" label="Host name" value={values.hostName} onChange={text("hostName")} error={errors.hostName} />

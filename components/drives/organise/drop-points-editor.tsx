@@ -10,6 +10,7 @@ import { FormError } from "@/components/ui/field";
 import { fetchJson } from "@/lib/api/client";
 import type { DropPointRecord } from "@/lib/drives/queries";
 import { DropPointForm, emptyDropPoint, type DropPointValues } from "./drop-point-form";
+import { countOf } from "@/lib/plural";
 
 export function DropPointsEditor({
   driveId,
@@ -89,7 +90,7 @@ export function DropPointsEditor({
             <span>
               <Link href={`/organise/drop-points/${p.id}`} className="font-semibold">{p.name}</Link>
               {p.active ? "" : <span className="text-ink-faint"> · paused</span>}
-              <span className="block text-sm text-ink-soft">{p.address} · {p.hours} · {p.capacityBags} bags</span>
+              <span className="block text-sm text-ink-soft">{p.address} · {p.hours} · {countOf(p.capacityBags, "bag")}</span>
             </span>
           </li>
         ))}

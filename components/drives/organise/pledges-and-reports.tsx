@@ -2,6 +2,7 @@ import Link from "next/link";
 import { Card, EmptyState } from "@/components/ui/card";
 import { LEVEL_LABEL } from "@/lib/drives/fill";
 import { formatDateTime } from "@/lib/format";
+import { countOf } from "@/lib/plural";
 
 interface Pledge { id: string; name: string | null; email: string | null; bags: number; bringOn: string; dropPointName: string }
 interface Report { id: string; level: number; note: string; alerted: boolean; createdAt: Date; dropPointName: string; photoUrl: string | null }
@@ -17,7 +18,7 @@ export function PledgesAndReports({ pledges, reports, points, slug }: { pledges:
           <ul className="divide-y divide-paper-edge" aria-label="Pledges">
             {pledges.map((p) => (
               <li key={p.id} className="py-2">
-                <strong>{p.bags} bag{p.bags === 1 ? "" : "s"}</strong> to {p.dropPointName} on {p.bringOn}
+                <strong>{countOf(p.bags, "bag")}</strong> to {p.dropPointName} on {p.bringOn}
                 <span className="block text-sm text-ink-soft">{p.name || "Anonymous"}{p.email ? ` · ${p.email}` : ""}</span>
               </li>
             ))}

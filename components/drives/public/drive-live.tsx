@@ -10,6 +10,7 @@ import { publicDriveQuery, publicDropPointsQuery, type PublicDriveView, type Pub
 import { DropPointList } from "./drop-point-list";
 import { PledgeSlot } from "./pledge-slot";
 import { DriveProgressBar } from "./progress-bar";
+import { countOf } from "@/lib/plural";
 
 export function DriveLive({
   slug,
@@ -49,7 +50,7 @@ export function DriveLive({
         <p data-testid="popup-fill">Bin: {FILL_SHAPE_LABEL[fillShape(p.fill?.level)]}</p>
         <p>{p.hours}</p>
         <p>
-          {p.tallies.bags} bags in · {p.tallies.goodCans} good cans
+          {countOf(p.tallies.bags, "bag")} in · {countOf(p.tallies.goodCans, "good can")}
         </p>
         <a href={`#point-${p.id}`}>Details and “bin is full”</a>
       </div>

@@ -7,6 +7,7 @@ import { FILL_SHAPE_LABEL, fillShape, LEVEL_LABEL } from "@/lib/drives/fill";
 import type { PublicDropPointView } from "@/lib/drives/query-options";
 import { haversineKm } from "@/lib/routes/great-circle";
 import { formatDateTime } from "@/lib/format";
+import { countOf } from "@/lib/plural";
 
 // The report form brings the upload client with it: load it only when someone
 // opens "Is this bin full?", so the public page stays light.
@@ -80,7 +81,7 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
               <span className="font-semibold">Open:</span> {p.hours || "Ask the organisers"}
             </p>
             <p className="text-sm text-ink-soft" data-testid="tallies">
-              {p.tallies.hauls} hauls · {p.tallies.bags} bags collected · {p.tallies.goodCans} good cans · {p.tallies.rejectedCans} set aside
+              {countOf(p.tallies.hauls, "haul")} · {countOf(p.tallies.bags, "bag")} collected · {countOf(p.tallies.goodCans, "good can")} · {p.tallies.rejectedCans} set aside
             </p>
             <p className={`text-sm font-semibold ${fillShape(p.fill?.level) === "full" ? "text-alarm" : "text-ink-soft"}`} data-testid="fill" data-fill={fillShape(p.fill?.level)}>
               Bin: {FILL_SHAPE_LABEL[fillShape(p.fill?.level)]}

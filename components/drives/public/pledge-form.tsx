@@ -5,6 +5,7 @@ import { useEffect, useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
 import { fetchJson, ApiError, fieldErrors } from "@/lib/api/client";
+import { NUMBER_SPECS, parseNumberInput } from "@/lib/forms/number-input";
 import { LIVE, WAITING } from "./pledge-gate";
 
 type Values = { name: string; email: string; dropPointId: string; bags: string; bringOn: string };
@@ -22,7 +23,9 @@ export function PledgeForm({ slug, points }: { slug: string; points: { id: strin
   });
   // Checked by the server with the pledge schema: its 422 field errors show
   // next to the fields. (Keeping zod out of this public page keeps it light.)
-  const errors = fieldErrors(mutation.error);
+  // The bags box is read on submit like the rest (uncontrolled, see above), with the app's one number rule.
+  const [bagsError, setBagsError] = useState<string | undefined>(undefined);
+  const errors: Record<string, string | undefined> = { ...fieldErrors(mutation.error), ...(bagsError ? { bags: bagsError } : {}) };
 
   useEffect(() => {
     const el = form.current;
@@ -40,7 +43,10 @@ export function PledgeForm({ slug, points }: { slug: string; points: { id: strin
     const read = (k: keyof Values) => String(data.get(k) ?? "");
     const next: Values = { name: read("name"), email: read("email"), dropPointId: read("dropPointId"), bags: read("bags"), bringOn: read("bringOn") };
     setValues(next);
-    mutation.mutate({ ...next, bags: next.bags.trim() === "" ? Number.NaN : Number(next.bags) });
+    const bags = parseNumberInput(next.bags, NUMBER_SPECS.pledgeBags);
+    setBagsError(bags.ok ? undefined : bags.error);
+    if (!bags.ok) return;
+    mutation.mutate({ ...next, bags: bags.value });
   }
 
   if (done) {
@@ -77,7 +83,7 @@ export function PledgeForm({ slug, points }: { slug: string; points: { id: strin
         <p id="pledge-point-error" aria-live="polite" className="text-sm font-semibold text-alarm">{errors.dropPointId ?? ""}</p>
       </div>
       <div className="grid gap-2 sm:grid-cols-2">
-        <Field id="pledge-bags" name="bags" label="About how many bags" type="number" inputMode="numeric" min={1} max={50} defaultValue={values.bags} error={errors.bags} />
+        <Field id="pledge-bags" name="bags" label="About how many bags" type="text" inputMode="numeric" autoComplete="off" defaultValue={values.bags} error={errors.bags} />
         <Field id="pledge-when" name="bringOn" label="When you will bring them" type="date" defaultValue={values.bringOn} error={errors.bringOn} />
         <Field id="pledge-name" name="name" label="Your name (optional)" autoComplete="name" defaultValue={values.name} error={errors.name} />
         <Field id="pledge-email" name="email" label="E-mail for a confirmation (optional)" type="email" autoComplete="email" defaultValue={values.email} error={errors.email} />

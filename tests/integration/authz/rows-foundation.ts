@@ -58,7 +58,7 @@ export const rows: AuthzRow[] = [
   {
     route: "app/api/uploadthing/route.ts",
     method: "POST",
-    path: (f) => `/api/uploadthing?actionType=upload&slug=dropPointPhoto`,
+    path: () => `/api/uploadthing?actionType=upload&slug=dropPointPhoto`,
     body: (f) => ({ files: [{ name: "a.png", size: 10, type: "image/png", lastModified: 0 }], input: { dropPointId: f.demoDropPointId } }),
     expect: { anonymous: [400, 403], volunteer: [400, 403], builder: [400, 403], organiser: 200, otherOrganiser: [400, 403, 404] },
     note: "only organisers of the drop point's group may start an upload",

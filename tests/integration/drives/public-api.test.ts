@@ -16,7 +16,12 @@ const PRIVATE_WORDS = /host|phone|email|e-mail|contact|pledge/i;
 
 function keysDeep(value: unknown, out: string[] = []): string[] {
   if (Array.isArray(value)) value.forEach((v) => keysDeep(v, out));
-  else if (value && typeof value === "object") for (const [k, v] of Object.entries(value)) (out.push(k), keysDeep(v, out));
+  else if (value && typeof value === "object") {
+    for (const [k, v] of Object.entries(value)) {
+      out.push(k);
+      keysDeep(v, out);
+    }
+  }
   return out;
 }
 

@@ -51,6 +51,7 @@ describe("driveProgress", () => {
       heatersCovered: { covered: 2, total: 3 },
       pace: { cansPerDay: 10, windowDays: 14 },
       expectedFinish: "2025-04-06",
+      finish: { kind: "expected", date: "2025-04-06", afterEnd: false },
     });
   });
 
@@ -71,17 +72,20 @@ describe("driveProgress", () => {
     expect(p.expectedFinish).toBeNull();
   });
 
-  it("finishes today once nothing remains, whatever the pace", () => {
+  it("has reached its target once nothing remains, with no finish date to promise", () => {
     const p = driveProgress({ ...example, stages: { ...noStages, good: 500 }, daily: [] });
     expect(p.remaining).toBe(0);
-    expect(p.expectedFinish).toBe("2025-03-15");
+    expect(p.finish).toEqual({ kind: "reached" });
+    expect(p.expectedFinish).toBeNull();
     expect(p.heatersCovered).toEqual({ covered: 3, total: 3 });
   });
 
-  it("counts a drive with no heaters as done", () => {
+  it("has no target, and so no finish, for a drive with no heaters", () => {
     const p = driveProgress({ ...example, unitCans: [] });
     expect(p.target).toEqual({ heaterCans: 0, spare: 0, cans: 0, heaters: 0 });
     expect(p.remaining).toBe(0);
+    expect(p.finish).toEqual({ kind: "noTarget" });
+    expect(p.expectedFinish).toBeNull();
   });
 });
 

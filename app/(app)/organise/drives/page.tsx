@@ -4,6 +4,7 @@ import { ButtonLink } from "@/components/ui/button-link";
 import { Card, EmptyState } from "@/components/ui/card";
 import { requirePageRole } from "@/lib/auth/session";
 import { listDrives } from "@/lib/drives/queries";
+import { countOf } from "@/lib/plural";
 
 export const metadata: Metadata = { title: "Drives" };
 
@@ -25,7 +26,7 @@ export default async function OrganiseDrivesPage() {
               <li key={d.id} className="flex flex-wrap items-baseline justify-between gap-2 py-3">
                 <Link href={`/organise/drives/${d.id}`} className="text-lg font-semibold">{d.name}</Link>
                 <span className="text-ink-faint">
-                  {d.startsOn} to {d.endsOn} · {d.dropPoints} drop points · {d.isPublic ? "public" : "not public"}
+                  {d.startsOn} to {d.endsOn} · {countOf(d.dropPoints, "drop point")} · {d.isPublic ? "public" : "not public"}
                 </span>
               </li>
             ))}

@@ -3,13 +3,12 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { RunView } from "@/components/runs/run-view";
 import { AppError } from "@/lib/api/errors";
+import { UUID } from "@/lib/api/path";
 import { requirePageRole } from "@/lib/auth/session";
 import { env } from "@/lib/env";
 import { getRun } from "@/lib/runs/queries";
 
 export const metadata: Metadata = { title: "Pickup run" };
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export default async function RunPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;

@@ -9,6 +9,7 @@ import { listDriveTargets } from "@/lib/heaters/drive-targets";
 import { formatNumber } from "@/lib/heaters/format";
 import { listHeaterUnits } from "@/lib/heaters/queries";
 import { heaterClaims } from "@/lib/ledger/balances";
+import { countOf } from "@/lib/plural";
 
 export const metadata: Metadata = { title: "Heater units" };
 
@@ -47,7 +48,7 @@ export default async function UnitsPage() {
                     </Link>
                     <span className="flex flex-wrap items-center gap-3 text-ink-soft">
                       <span>
-                        {u.columns} × {u.rows} = {formatNumber(u.cans)} cans · {formatNumber(claims[u.id]?.claimed ?? 0)} claimed ·{" "}
+                        {u.columns} × {u.rows} = {countOf(u.cans, "can", formatNumber)} · {formatNumber(claims[u.id]?.claimed ?? 0)} claimed ·{" "}
                         {formatNumber(claims[u.id]?.builtIn ?? 0)} built in
                       </span>
                       <StateBadge state={u.state} />

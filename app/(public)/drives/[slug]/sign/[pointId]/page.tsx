@@ -5,7 +5,7 @@ import QRCode from "qrcode";
 import { PrintButton } from "@/components/drives/public/print-button";
 import { NOT_WANTED, WANTED } from "@/components/drives/public/wanted-cans";
 import { findPublicDrive, findPublicDropPoint } from "@/lib/drives/public-queries";
-import { UUID } from "@/lib/drives/queries";
+import { UUID } from "@/lib/api/path";
 import { env } from "@/lib/env";
 
 export const dynamic = "force-dynamic";

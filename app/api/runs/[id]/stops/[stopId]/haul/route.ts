@@ -4,7 +4,8 @@ import { invalidInput, notFound } from "@/lib/api/errors";
 import { recordHaul } from "@/lib/ledger/record";
 import { haulInputSchema } from "@/lib/ledger/schemas";
 import { stopPath } from "@/lib/runs/paths";
-import { getRun, lockPendingStop, resolveStop } from "@/lib/runs/queries";
+import { lockPendingStop, resolveStop } from "@/lib/runs/commands";
+import { getRun } from "@/lib/runs/queries";
 import { visibleRun } from "@/lib/runs/resource";
 
 export const dynamic = "force-dynamic";

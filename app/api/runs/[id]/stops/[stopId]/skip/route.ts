@@ -1,7 +1,8 @@
 import { endpoint } from "@/lib/api/endpoint";
 import { db } from "@/lib/db";
 import { stopPath } from "@/lib/runs/paths";
-import { getRun, resolveStop } from "@/lib/runs/queries";
+import { resolveStop } from "@/lib/runs/commands";
+import { getRun } from "@/lib/runs/queries";
 import { visibleRun } from "@/lib/runs/resource";
 import { skipStopInputSchema } from "@/lib/runs/schemas";
 

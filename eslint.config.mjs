@@ -1,0 +1,55 @@
+// The linter `npm test` runs first (scripts/test.sh). Next's own rules (React,
+// hooks, accessibility, TypeScript) plus the rules of this codebase's shape,
+// so they are checked rather than hoped for:
+// - layers: app → components → hooks → lib, never back (lib imports no UI);
+// - no import cycles;
+// - a module under lib/ named *queries*.ts is server-only;
+// - files stay under 250 lines (tests and migrations excepted).
+// tests/unit/lint-rules.test.ts proves each of these fires.
+import nextVitals from "eslint-config-next/core-web-vitals";
+import nextTs from "eslint-config-next/typescript";
+
+const MAX_LINES = 250;
+
+/** Our one local rule: query modules must say `import "server-only"`, so a client bundle that reaches one fails the build. */
+const serverOnlyQueries = {
+  meta: { type: "problem", messages: { missing: 'A query module is server-only: add `import "server-only";` at its top.' }, schema: [] },
+  create(context) {
+    return {
+      Program(node) {
+        const has = node.body.some((s) => s.type === "ImportDeclaration" && s.source.value === "server-only");
+        if (!has) context.report({ node, messageId: "missing" });
+      },
+    };
+  },
+};
+
+const layer = (from, banned, why) => ({
+  files: from,
+  rules: {
+    "no-restricted-imports": ["error", { patterns: banned.map((group) => ({ group: [group], message: why })) }],
+  },
+});
+
+const config = [
+  { ignores: [".next/**", "node_modules/**", "public/**", ".test-results/**", ".pgdata/**", "next-env.d.ts", "bench/**"] },
+  ...nextVitals,
+  ...nextTs,
+  {
+    plugins: { cantrove: { rules: { "server-only-queries": serverOnlyQueries } } },
+    rules: {
+      "import/no-cycle": ["error", { ignoreExternal: true }],
+      "max-lines": ["error", { max: MAX_LINES, skipBlankLines: false, skipComments: false }],
+      // Our own style (STYLE.md) where Next's set is silent or too loose.
+      "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_", caughtErrors: "none" }],
+    },
+  },
+  { files: ["lib/**/*queries*.ts"], rules: { "cantrove/server-only-queries": "error" } },
+  layer(["lib/**"], ["@/app/*", "@/components/*", "@/hooks/*"], "lib/ is the bottom layer: it imports no pages, components or hooks."),
+  layer(["hooks/**"], ["@/app/*", "@/components/*"], "Hooks sit under components: they import lib/ only."),
+  layer(["components/**"], ["@/app/*"], "Components never import pages or route handlers."),
+  // Tests, migrations, seeds and scripts may be long (a table of cases, a schema) and reach any layer.
+  { files: ["tests/**", "db/**", "scripts/**"], rules: { "max-lines": "off", "no-restricted-imports": "off" } },
+];
+
+export default config;
