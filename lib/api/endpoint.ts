@@ -98,7 +98,7 @@ export function bodyOf<B>(request: Request, raw: string, schema?: ZodType<B>): B
   return parsed.data;
 }
 
-async function actorFor(who: Access): Promise<Actor | null> {
+export async function actorFor(who: Access): Promise<Actor | null> {
   // Open routes read no session; the few that care who is asking (accepting an invitation) ask themselves.
   if (who === "anyone") return null;
   if (who === "member") return requireUser();

@@ -19,3 +19,16 @@ export function safeFileName(name: string, type: PhotoType | null): string {
     .slice(0, 60);
   return `${stem || "photo"}.${type ? PHOTO_EXTENSION[type] : "bin"}`;
 }
+
+/** For the file picker's `accept`. */
+export const PHOTO_ACCEPT = PHOTO_TYPES.join(",");
+
+/**
+ * Checked before anything is sent, with the same limits as the file route. The
+ * declared type is only a courtesy here: the server decides by the file's bytes.
+ */
+export function photoProblem(file: File): string | null {
+  if (!(PHOTO_TYPES as readonly string[]).includes(file.type)) return `“${file.name}” is not a JPEG, PNG or WebP photo. Choose one of those.`;
+  if (file.size > PHOTO_MAX_BYTES) return `“${file.name}” is ${(file.size / 1024 / 1024).toFixed(1)} MB; photos can be at most 4 MB. Shrink it or pick another.`;
+  return null;
+}

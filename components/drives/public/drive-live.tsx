@@ -8,7 +8,7 @@ import { FILL_SHAPE_LABEL, fillShape } from "@/lib/drives/fill";
 import { Card } from "@/components/ui/card";
 import { publicDriveQuery, publicDropPointsQuery, type PublicDriveView, type PublicDropPointView } from "@/lib/drives/query-options";
 import { DropPointList } from "./drop-point-list";
-import { PledgeSlot } from "./pledge-slot";
+import { PledgeForm } from "./pledge-form";
 import { DriveProgressBar } from "./progress-bar";
 import { countOf } from "@/lib/plural";
 
@@ -29,8 +29,7 @@ export function DriveLive({
   const points = useQuery({ ...publicDropPointsQuery(slug), initialData: initialPoints });
   const [selected, setSelected] = useState<string | null>(null);
   const list = points.data ?? [];
-  // The pledge form only needs names; keep the same array until those change
-  // (see PledgeSlot: its boundary must not re-render while it waits for code).
+  // The pledge form only needs names; keep the same array until those change.
   const choiceKey = list.map((p) => `${p.id}\t${p.name}`).join("\n");
   // eslint-disable-next-line react-hooks/exhaustive-deps
   const choices = useMemo(() => list.map(({ id, name }) => ({ id, name })), [choiceKey]);
@@ -81,7 +80,7 @@ export function DriveLive({
       </section>
       <DropPointList slug={slug} points={list} selected={selected} />
       <Card title="Pledge some cans">
-        <PledgeSlot slug={slug} points={choices} />
+        <PledgeForm slug={slug} points={choices} />
       </Card>
     </div>
   );

@@ -1,17 +1,14 @@
 "use client";
 
-import { lazy, Suspense, useState } from "react";
-import { Button } from "@/components/ui/button";
-import { LoadBoundary } from "@/components/ui/load-boundary";
+import { useRef, useState } from "react";
+import { Button, buttonClass } from "@/components/ui/button";
 import { FILL_SHAPE_LABEL, fillShape, LEVEL_LABEL } from "@/lib/drives/fill";
 import type { PublicDropPointView } from "@/lib/drives/query-options";
 import { haversineKm } from "@/lib/routes/great-circle";
 import { formatDateTime } from "@/lib/format";
 import { countOf } from "@/lib/plural";
 
-// The report form brings the upload client with it: load it only when someone
-// opens "Is this bin full?", so the public page stays light.
-const FillReportForm = lazy(() => import("./fill-report-form").then((m) => ({ default: m.FillReportForm })));
+import { FillReportForm } from "./fill-report-form";
 
 type Located = PublicDropPointView & { number: number; km?: number };
 
@@ -24,7 +21,6 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
   const [here, setHere] = useState<{ lat: number; lng: number } | null>(null);
   const [locating, setLocating] = useState(false);
   const [locError, setLocError] = useState<string | null>(null);
-  const [reporting, setReporting] = useState<string | null>(null);
   const numbered = sortByDistance(points.map((p, i) => ({ ...p, number: i + 1 })), here);
 
   function locate() {
@@ -95,22 +91,34 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
                 ))}
               </div>
             ) : null}
-            <div className="mt-2">
-              {reporting === p.id ? (
-                <LoadBoundary what="report form">
-                  <Suspense fallback={<p role="status" className="text-ink-faint">Opening the report form…</p>}>
-                    <FillReportForm slug={slug} point={p} onDone={() => setReporting(null)} />
-                  </Suspense>
-                </LoadBoundary>
-              ) : (
-                <Button variant="quiet" onClick={() => setReporting(p.id)} aria-label={`Report how full the bin at ${p.name} is`}>
-                  Is this bin full?
-                </Button>
-              )}
-            </div>
+            <BinReport slug={slug} point={p} />
           </li>
         ))}
       </ol>
     </section>
+  );
+}
+
+// "Is this bin full?" opens the report form in place; a native disclosure, so
+// it opens and the form sends before (or without) the page's JavaScript. The
+// form fetches the upload client only when a photo is to be sent.
+function BinReport({ slug, point }: { slug: string; point: { id: string; name: string } }) {
+  const ref = useRef<HTMLDetailsElement>(null);
+  const [round, setRound] = useState(0);
+  return (
+    <details ref={ref} className="mt-2">
+      <summary aria-label={`Report how full the bin at ${point.name} is`} className={buttonClass("quiet", "mb-2 w-fit cursor-pointer list-none")}>
+        Is this bin full?
+      </summary>
+      <FillReportForm
+        key={round}
+        slug={slug}
+        point={point}
+        onDone={() => {
+          if (ref.current) ref.current.open = false;
+          setRound((n) => n + 1);
+        }}
+      />
+    </details>
   );
 }

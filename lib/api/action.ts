@@ -1,0 +1,132 @@
+import "server-only";
+import { headers } from "next/headers";
+import { unstable_rethrow } from "next/navigation";
+import type { ZodType } from "zod";
+import type { ActionState } from "./action-state";
+import { actorFor, type Access } from "./endpoint";
+import { AppError, invalidInput, type FieldErrors } from "./errors";
+import { toAppError } from "./handler";
+import { consumeLimit, type LimitRule } from "./rate-limit";
+import { assertNoNul } from "./request-guards";
+import type { Actor } from "@/lib/auth/queries";
+import { forgetReads } from "@/lib/cache/read-cache";
+import { numberMessage, parseNumberInput, type NumberSpec } from "@/lib/forms/number-input";
+import { clientAddress } from "@/lib/net/client-address";
+
+// One declaration per server action, the form-side twin of endpoint(): who may
+// call it, how the FormData becomes the same object the JSON route takes, the
+// same zod schema, the same rate limits keyed the same way (the client address
+// server.mjs worked out, or a value from the input), the same error mapping
+// (toAppError) and the same cache clearing afterwards. The answer is an
+// ActionState for useActionState, so a plain <form action={…}> works before
+// (or without) JavaScript and nothing typed is lost on a refusal.
+// Next itself refuses a server action whose Origin is not this host.
+
+type ActorOf<A extends Access> = A extends "anyone" ? Actor | null : Actor;
+
+export interface ActionLimit<I> {
+  rule: LimitRule;
+  by: "client" | ((input: I) => string | null | undefined);
+}
+
+export interface ActionSpec<A extends Access, I, P, R> {
+  who: A;
+  /** The same schema as the route's body. */
+  schema: ZodType<I>;
+  /** Boxes read with the app's number rule (NUMBER_SPECS), or "decimal" for a plain signed number (coordinates). */
+  numbers?: Record<string, NumberSpec | "decimal">;
+  /** Checkboxes: present → true, absent → false. */
+  checkboxes?: readonly string[];
+  /** Hidden fields naming the record (an id, a slug), parsed like endpoint()'s path: a failure is 404. */
+  params?: ZodType<P>;
+  resource?: (actor: Actor, params: P) => Promise<R>;
+  limits?: readonly ActionLimit<I>[];
+  keepsPeople?: boolean;
+  /** Fields never echoed back into the page. */
+  secret?: readonly string[];
+}
+
+export interface ActionContext<A extends Access, I, P, R> {
+  actor: ActorOf<A>;
+  input: I;
+  params: P;
+  resource: R;
+  values: Record<string, string>;
+}
+
+/** FormData's text entries; React's own `$ACTION_…` fields and files are left out. */
+export function formValues(formData: FormData): Record<string, string> {
+  const values: Record<string, string> = {};
+  for (const [key, value] of formData.entries()) {
+    if (typeof value === "string" && !key.startsWith("$ACTION")) values[key] = value;
+  }
+  return values;
+}
+
+/** The FormData step: numbers by the app's number rule, checkboxes as booleans; the rest stays text for zod. */
+export function formInput(values: Record<string, string>, spec: Pick<ActionSpec<Access, unknown, unknown, unknown>, "numbers" | "checkboxes">): Record<string, unknown> {
+  const out: Record<string, unknown> = { ...values };
+  const fields: FieldErrors = {};
+  for (const [key, rule] of Object.entries(spec.numbers ?? {})) {
+    const raw = (values[key] ?? "").trim();
+    if (rule === "decimal") {
+      out[key] = raw === "" || !/^[-−]?\d+(\.\d+)?$/.test(raw) ? undefined : Number(raw.replace("−", "-"));
+      continue;
+    }
+    const parsed = parseNumberInput(raw, rule);
+    if (!parsed.ok) fields[key] = parsed.error || numberMessage(rule);
+    else out[key] = parsed.value ?? undefined;
+  }
+  for (const key of spec.checkboxes ?? []) out[key] = key in values;
+  if (Object.keys(fields).length) throw new AppError("invalid_input", "Some fields need another look.", { fields });
+  return out;
+}
+
+export function action<A extends Access, I, T, P = undefined, R = undefined>(
+  spec: ActionSpec<A, I, P, R>,
+  work: (ctx: ActionContext<A, I, P, R>) => Promise<T>,
+): (previous: unknown, formData: FormData) => Promise<ActionState<T>> {
+  const secret = new Set(spec.secret ?? ["password"]);
+  return async (_previous, formData) => {
+    const values = formValues(formData);
+    try {
+      assertNoNul(values);
+      const actor = (await actorFor(spec.who)) as ActorOf<A>;
+      let params = undefined as P;
+      if (spec.params) {
+        const parsed = spec.params.safeParse(values);
+        if (!parsed.success) throw new AppError("not_found", `${parsed.error.issues[0]?.message || "That record"} was not found.`);
+        params = parsed.data;
+      }
+      const resource = spec.resource ? await spec.resource(actor as Actor, params) : (undefined as R);
+      let numberErrors: FieldErrors = {};
+      let raw: Record<string, unknown> = values;
+      try {
+        raw = formInput(values, spec);
+      } catch (error) {
+        numberErrors = (error as AppError).fields ?? {};
+      }
+      const parsed = spec.schema.safeParse(raw);
+      // Every field's message at once: the number rule's words win for its boxes.
+      if (!parsed.success || Object.keys(numberErrors).length) {
+        const fields = { ...(parsed.success ? {} : invalidInput(parsed.error).fields), ...numberErrors };
+        throw new AppError("invalid_input", "Some fields need another look.", { fields });
+      }
+      const input = parsed.data;
+      const address = clientAddress(await headers());
+      for (const limit of spec.limits ?? []) {
+        const key = limit.by === "client" ? address : limit.by(input);
+        if (key) await consumeLimit(limit.rule, key.toLowerCase());
+      }
+      const data = await work({ actor, input, params, resource, values });
+      return { ok: true, message: null, fields: {}, values: {}, data };
+    } catch (error) {
+      unstable_rethrow(error); // redirect() and notFound() are answers, not failures
+      const refused = toAppError(error);
+      const kept = Object.fromEntries(Object.entries(values).filter(([k]) => !secret.has(k)));
+      return { ok: false, message: refused.message, fields: refused.fields ?? {}, values: kept };
+    } finally {
+      forgetReads(spec.keepsPeople ? "data" : "all");
+    }
+  };
+}
