@@ -3,11 +3,13 @@
 import { useSession } from "next-auth/react";
 import { SessionBoundary } from "@/components/auth/session-boundary";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useActionState, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
 import { fetchJson } from "@/lib/api/client";
-import { acceptInvitationInputSchema, passwordSchema, personNameSchema } from "@/lib/accounts/schemas";
+import { acceptInvitationAction } from "@/lib/accounts/form-actions";
+import { IDLE, typed, type ActionState } from "@/lib/api/action-state";
+import { fieldsMessage } from "./form-message";
 import { ROLE_HOME, type Role } from "@/lib/auth/roles";
 import { useFormFields } from "./use-form-fields";
 
@@ -17,35 +19,16 @@ interface Accepted {
   email: string;
 }
 
-const newPersonSchema = acceptInvitationInputSchema.extend({ name: personNameSchema, password: passwordSchema });
-
-/** A new person: choose a name and password, then sign in. */
+/** A new person: choose a name and password, then sign in. A plain form posting to a server action, so it works before JavaScript. */
 export function AcceptAsNewPerson({ token, email }: { token: string; email: string }) {
-  const router = useRouter();
-  const form = useFormFields();
-  const [pending, setPending] = useState(false);
-
-  async function onSubmit(event: React.FormEvent<HTMLFormElement>) {
-    event.preventDefault();
-    const data = Object.fromEntries(new FormData(event.currentTarget));
-    const input = form.check(newPersonSchema, { ...data, token });
-    if (!input) return;
-    setPending(true);
-    try {
-      await fetchJson<Accepted>("/api/invitations/accept", { method: "POST", body: input });
-      router.push(`/signin?joined=1&email=${encodeURIComponent(email)}`);
-    } catch (error) {
-      form.fail(error);
-      setPending(false);
-    }
-  }
-
+  const [state, send, pending] = useActionState<ActionState<unknown>, FormData>(acceptInvitationAction, IDLE);
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2">
-      <FormError message={form.message} />
-      <Field id="invite-account-email" label="E-mail" value={email} readOnly hint="The address the invitation was sent to." />
-      <Field id="name" label="Your name" autoComplete="name" error={form.fields.name} />
-      <Field id="password" type="password" label="Choose a password" hint="At least 10 characters." autoComplete="new-password" error={form.fields.password} />
+    <form action={send} noValidate className="flex flex-col gap-2">
+      <input type="hidden" name="token" value={token} />
+      <FormError message={fieldsMessage(state) ?? state.fields.token ?? null} />
+      <Field id="invite-account-email" name="" label="E-mail" value={email} readOnly hint="The address the invitation was sent to." />
+      <Field id="name" label="Your name" autoComplete="name" defaultValue={typed(state, "name")} error={state.fields.name} />
+      <Field id="password" type="password" label="Choose a password" hint="At least 10 characters." autoComplete="new-password" error={state.fields.password} />
       <Button type="submit" disabled={pending}>
         {pending ? "Joining…" : "Join the group"}
       </Button>

@@ -1,50 +1,37 @@
 "use client";
 
-import { useState } from "react";
+import { useQueryClient } from "@tanstack/react-query";
+import { useActionState, useEffect, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import { ApiError } from "@/lib/api/client";
-import { invitationInputSchema } from "@/lib/accounts/schemas";
-import { fieldErrorsOf } from "@/lib/api/errors";
+import { IDLE, typed, type ActionState } from "@/lib/api/action-state";
+import { inviteAction } from "@/lib/accounts/form-actions";
 import { ROLE_LABEL, type Role } from "@/lib/auth/roles";
-import { useInvite } from "@/hooks/queries/members";
+import { invitationsQuery } from "@/hooks/queries/members";
+import { fieldsMessage } from "./form-message";
 import { ROLE_HELP, RoleSelect } from "./role-select";
 
 export function InviteForm() {
-  const invite = useInvite();
-  const [email, setEmail] = useState("");
+  const [state, send, pending] = useActionState<ActionState<{ email: string }>, FormData>(inviteAction, IDLE);
   const [role, setRole] = useState<Role>("volunteer");
-  const [fields, setFields] = useState<Record<string, string>>({});
-  const [sentTo, setSentTo] = useState<string | null>(null);
+  const client = useQueryClient();
+  // The pending list below is a react-query read: refresh it after each invitation sent.
+  useEffect(() => {
+    if (state.ok) void client.invalidateQueries({ queryKey: invitationsQuery().queryKey });
+  }, [state, client]);
 
-  async function onSubmit(event: React.FormEvent) {
-    event.preventDefault();
-    setSentTo(null);
-    const parsed = invitationInputSchema.safeParse({ email, role });
-    if (!parsed.success) return setFields(fieldErrorsOf(parsed.error));
-    setFields({});
-    try {
-      await invite.mutateAsync(parsed.data);
-      setSentTo(parsed.data.email);
-      setEmail("");
-    } catch (error) {
-      if (error instanceof ApiError) setFields(error.fields);
-    }
-  }
-
-  const apiError = invite.error instanceof ApiError && !Object.keys(invite.error.fields).length ? invite.error.message : null;
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2" aria-label="Invite someone">
-      <FormError message={apiError} />
-      {sentTo ? <Notice tone="good" title={`Invitation sent to ${sentTo}`}>The link works once and expires in 7 days.</Notice> : null}
-      <Field id="invite-email" name="email" type="email" label="Their e-mail" autoComplete="off" value={email} onChange={(e) => setEmail(e.target.value)} error={fields.email} />
-      <RoleSelect id="invite-role" name="role" label="Role" value={role} onChange={(e) => setRole(e.target.value as Role)} error={fields.role} />
+    <form action={send} noValidate className="flex flex-col gap-2" aria-label="Invite someone">
+      <FormError message={fieldsMessage(state)} />
+      {state.ok && state.data ? <Notice tone="good" title={`Invitation sent to ${state.data.email}`}>The link works once and expires in 7 days.</Notice> : null}
+      <Field id="invite-email" name="email" type="email" label="Their e-mail" autoComplete="off" defaultValue={typed(state, "email")} error={state.fields.email} />
+      <RoleSelect id="invite-role" name="role" label="Role" value={role} onChange={(e) => setRole(e.target.value as Role)} error={state.fields.role} />
       <p className="text-sm text-ink-faint">
         {ROLE_LABEL[role]}: {ROLE_HELP[role]}.
       </p>
-      <Button type="submit" disabled={invite.isPending}>
-        {invite.isPending ? "Sending…" : "Send invitation"}
+      <Button type="submit" disabled={pending}>
+        {pending ? "Sending…" : "Send invitation"}
       </Button>
     </form>
   );

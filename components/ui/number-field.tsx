@@ -15,6 +15,8 @@ interface NumberInputProps {
   error?: string;
   /** Name for the − / + buttons: "Bags: plus 1". */
   name: string;
+  /** The form field's name when posted (a server action's FormData); the id otherwise. */
+  fieldName?: string;
   hintId?: string;
   /** Big − and + buttons for one thumb (bags, cans). */
   steppers?: boolean;
@@ -31,7 +33,7 @@ interface NumberInputProps {
  * the form's `error` while it is wrong. type="text" with inputMode keeps a
  * phone's number pad without the browser dropping what it can't read.
  */
-export function NumberInput({ id, value, onChange, spec, error, name, hintId, steppers = false, step = 1, bigStep, boxClassName }: NumberInputProps) {
+export function NumberInput({ id, value, onChange, spec, error, name, fieldName, hintId, steppers = false, step = 1, bigStep, boxClassName }: NumberInputProps) {
   const typedError = value.trim() === "" ? undefined : numberError(value, spec);
   const shown = typedError ?? error;
   const canStep = stepNumberInput(value, spec, 0) !== null;
@@ -53,7 +55,7 @@ export function NumberInput({ id, value, onChange, spec, error, name, hintId, st
   const box = (
     <input
       id={id}
-      name={id}
+      name={fieldName ?? id}
       type="text"
       inputMode={spec.decimal ? "decimal" : "numeric"}
       autoComplete="off"

@@ -3,7 +3,6 @@
 import { queryOptions, useMutation, useQueryClient } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/api/client";
 import type { Role } from "@/lib/auth/roles";
-import type { InvitationInput } from "@/lib/accounts/schemas";
 
 export interface Member {
   userId: string;
@@ -38,14 +37,6 @@ export const invitationsQuery = () =>
 
 export const myGroupsQuery = () =>
   queryOptions({ queryKey: ["me", "groups"], queryFn: ({ signal }) => fetchJson<MyGroup[]>("/api/me/groups", { signal }) });
-
-export function useInvite() {
-  const client = useQueryClient();
-  return useMutation({
-    mutationFn: (input: InvitationInput) => fetchJson<Invitation>("/api/invitations", { method: "POST", body: input }),
-    onSuccess: () => client.invalidateQueries({ queryKey: invitationsQuery().queryKey }),
-  });
-}
 
 export function useResendInvitation() {
   const client = useQueryClient();

@@ -6,6 +6,9 @@
  */
 export const ALERT_LEVEL = 75;
 
+/** The levels a report may give (percent full). Here, not in schemas.ts, so the public page needs no zod. */
+export const FILL_LEVELS = [0, 25, 50, 75, 100] as const;
+
 export function shouldAlert(level: number, lastAlertAt: Date | null, lastHaulAt: Date | null): boolean {
   if (level < ALERT_LEVEL) return false;
   if (!lastAlertAt) return true;

@@ -65,7 +65,7 @@ const updateDriveRun = action({ who: ["organiser"], params: idPath("That drive")
   revalidatePath(`/organise/drives/${resource.id}`);
   return { id: resource.id };
 });
-export async function updateDriveAction(previous: ActionState<{ id: string }>, formData: FormData) {
+export async function updateDriveAction(previous: ActionState<unknown>, formData: FormData): Promise<ActionState<unknown>> {
   return updateDriveRun(previous, formData);
 }
 

@@ -1,5 +1,8 @@
 import { z } from "zod";
 import { day } from "@/lib/dates";
+import { FILL_LEVELS } from "./fill";
+
+export { FILL_LEVELS };
 
 // One schema per input, shared by the forms (client) and the route handlers.
 
@@ -50,7 +53,6 @@ export const pledgeInput = z.object({
 });
 export type PledgeInput = z.infer<typeof pledgeInput>;
 
-export const FILL_LEVELS = [0, 25, 50, 75, 100] as const;
 export const fillReportInput = z.object({
   level: z.number().int().refine((n) => (FILL_LEVELS as readonly number[]).includes(n), "Choose how full the bin is."),
   note: z.string().trim().max(500, "Keep the note under 500 characters.").default(""),

@@ -94,7 +94,7 @@ describe("organiser sets up a drive; the public uses it", () => {
 
     await page.getByRole("img", { name: "Photo of the bin at Lantern Street bakery" }).waitFor();
     const report = async (withPhoto: boolean) => {
-      await page.getByRole("button", { name: "Report how full the bin at Lantern Street bakery is" }).click();
+      await page.getByLabel("Report how full the bin at Lantern Street bakery is").click();
       await page.getByLabel("Full — no room left").check();
       if (withPhoto) await page.getByLabel("Photo of the bin (optional)").setInputFiles({ name: "full.png", mimeType: "image/png", buffer: pngOf(32) });
       await page.getByRole("button", { name: "Send report" }).click();

@@ -36,8 +36,7 @@ export function DropPointEdit({ point, tileUrl, attribution }: { point: DropPoin
         onMarkerDragEnd={(_id, la, ln) => update({ ...values, lat: String(la), lng: String(ln) })}
       />
       <DropPointForm
-        url={`/api/drop-points/${point.id}`}
-        method="PATCH"
+        target={{ id: point.id }}
         values={values}
         onChange={update}
         submitLabel="Save drop point"

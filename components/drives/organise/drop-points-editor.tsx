@@ -68,8 +68,7 @@ export function DropPointsEditor({
         <section aria-labelledby="new-point-heading" className="rounded-card border-2 border-sun bg-sun-soft/40 p-4">
           <h3 id="new-point-heading" className="mb-2 text-lg">New drop point</h3>
           <DropPointForm
-            url={`/api/drives/${driveId}/drop-points`}
-            method="POST"
+            target={{ driveId }}
             values={draft}
             onChange={setDraft}
             submitLabel="Add drop point"

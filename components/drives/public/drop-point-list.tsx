@@ -1,7 +1,7 @@
 "use client";
 
-import { useRef, useState } from "react";
-import { Button, buttonClass } from "@/components/ui/button";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
 import { FILL_SHAPE_LABEL, fillShape, LEVEL_LABEL } from "@/lib/drives/fill";
 import type { PublicDropPointView } from "@/lib/drives/query-options";
 import { haversineKm } from "@/lib/routes/great-circle";
@@ -99,26 +99,9 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
   );
 }
 
-// "Is this bin full?" opens the report form in place; a native disclosure, so
-// it opens and the form sends before (or without) the page's JavaScript. The
-// form fetches the upload client only when a photo is to be sent.
+// "Is this bin full?" opens the report form in place (see FillReportForm);
+// "Close" after a report brings a fresh, closed one.
 function BinReport({ slug, point }: { slug: string; point: { id: string; name: string } }) {
-  const ref = useRef<HTMLDetailsElement>(null);
   const [round, setRound] = useState(0);
-  return (
-    <details ref={ref} className="mt-2">
-      <summary aria-label={`Report how full the bin at ${point.name} is`} className={buttonClass("quiet", "mb-2 w-fit cursor-pointer list-none")}>
-        Is this bin full?
-      </summary>
-      <FillReportForm
-        key={round}
-        slug={slug}
-        point={point}
-        onDone={() => {
-          if (ref.current) ref.current.open = false;
-          setRound((n) => n + 1);
-        }}
-      />
-    </details>
-  );
+  return <FillReportForm key={round} slug={slug} point={point} onDone={() => setRound((n) => n + 1)} />;
 }

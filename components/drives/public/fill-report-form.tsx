@@ -2,24 +2,49 @@
 
 import { useQueryClient } from "@tanstack/react-query";
 import { useActionState, useEffect, useRef, useState, useSyncExternalStore } from "react";
-import { Button } from "@/components/ui/button";
+import { Button, buttonClass } from "@/components/ui/button";
 import { FormError, RadioGroup, TextareaField } from "@/components/ui/field";
 import { IDLE, typed, type ActionState } from "@/lib/api/action-state";
 import { fillReportAction } from "@/lib/drives/form-actions";
-import { LEVEL_LABEL } from "@/lib/drives/fill";
+import { FILL_LEVELS, LEVEL_LABEL } from "@/lib/drives/fill";
 import { publicDropPointsQuery } from "@/lib/drives/query-options";
-import { FILL_LEVELS } from "@/lib/drives/schemas";
 import { PHOTO_ACCEPT, photoProblem } from "@/lib/uploads/photo-rules";
 
 const LEVELS = FILL_LEVELS.map((l) => ({ value: String(l), label: LEVEL_LABEL[l] }));
 const noop = () => () => undefined;
 
-// A plain form posting to a server action, so a report is sent even before
-// (or without) the page's JavaScript. The photo needs the upload client: the
-// picker shows once React runs, and the client is fetched only when a report
-// with a photo has been stored.
-export function FillReportForm({ slug, point, onDone }: { slug: string; point: { id: string; name: string }; onDone: () => void }) {
+// "Is this bin full?" is a native disclosure holding a plain form that posts to
+// a server action, so it opens and a report is sent even before (or without)
+// the page's JavaScript; it stays open on the page that comes back with the
+// answer. The photo needs the upload client: the picker shows once React runs,
+// and the client is fetched only when a report with a photo has been stored.
+export function FillReportForm(props: { slug: string; point: { id: string; name: string }; onDone: () => void }) {
   const [state, send, pending] = useActionState<ActionState<{ id: string }>, FormData>(fillReportAction, IDLE);
+  return (
+    <details className="mt-2" open={state.ok !== null || undefined}>
+      <summary aria-label={`Report how full the bin at ${props.point.name} is`} className={buttonClass("quiet", "mb-2 w-fit cursor-pointer list-none")}>
+        Is this bin full?
+      </summary>
+      <ReportBody {...props} state={state} send={send} pending={pending} />
+    </details>
+  );
+}
+
+function ReportBody({
+  slug,
+  point,
+  onDone,
+  state,
+  send,
+  pending,
+}: {
+  slug: string;
+  point: { id: string; name: string };
+  onDone: () => void;
+  state: ActionState<{ id: string }>;
+  send: (formData: FormData) => void;
+  pending: boolean;
+}) {
   const live = useSyncExternalStore(noop, () => true, () => false);
   const [error, setError] = useState<string | null>(null);
   const photo = useRef<File | null>(null);

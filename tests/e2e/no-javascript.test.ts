@@ -1,0 +1,103 @@
+import { randomBytes } from "node:crypto";
+import type { Browser } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { launchBrowser, newPage, PHONE } from "@/tests/support/browser";
+import { closeTestDb, testDb } from "@/tests/support/db";
+
+// The browser forms are server actions in plain <form>s: with JavaScript off
+// (or before it arrives) they post and the page comes back with the answer.
+const PAGE = "/drives/larkhollow-winter-2026";
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await closeTestDb();
+});
+
+describe("forms with JavaScript disabled", () => {
+  it("a donor pledges on the public drive page: a refusal keeps what was typed, the pledge is stored and confirmed", async () => {
+    const { context, page } = await newPage(browser, { ...PHONE, javaScriptEnabled: false });
+    try {
+      const donor = `nojs-${randomBytes(3).toString("hex")}@example.test`;
+      await page.goto(PAGE);
+      const point = page.getByLabel("Drop point", { exact: true });
+      await point.selectOption({ index: 1 });
+      const pointId = await point.inputValue();
+      await page.getByLabel("About how many bags").fill("two");
+      await page.getByLabel("When you will bring them").fill("2026-12-11");
+      await page.getByLabel("Your name (optional)").fill("Nell Nojs");
+      await page.getByLabel("E-mail for a confirmation (optional)").fill(donor);
+      await page.getByRole("button", { name: "Send my pledge" }).click();
+
+      // The page came back from the server with the refusal beside the box and everything else as typed.
+      await page.getByText("Enter a whole number of bags, like 3.").waitFor();
+      await expect(page.getByLabel("About how many bags").getAttribute("aria-invalid")).resolves.toBe("true");
+      await expect(page.getByLabel("About how many bags").inputValue()).resolves.toBe("two");
+      await expect(page.getByLabel("Drop point", { exact: true }).inputValue()).resolves.toBe(pointId);
+      await expect(page.getByLabel("E-mail for a confirmation (optional)").inputValue()).resolves.toBe(donor);
+      await expect(page.getByLabel("Your name (optional)").inputValue()).resolves.toBe("Nell Nojs");
+      expect(await testDb()("pledges").where({ email: donor }).count("* as n").first()).toMatchObject({ n: 0 });
+
+      await page.getByLabel("About how many bags").fill("3");
+      await page.getByRole("button", { name: "Send my pledge" }).click();
+      await page.getByText("Thank you — your pledge is in.").waitFor();
+      await page.getByText(`We sent a confirmation to ${donor}.`).waitFor();
+      const rows = await testDb()("pledges").where({ email: donor }).select("bags", "drop_point_id", "name");
+      expect(rows).toEqual([{ bags: 3, drop_point_id: pointId, name: "Nell Nojs" }]);
+    } finally {
+      await context.close();
+    }
+  });
+
+  it("someone at a bin says it is full: the native disclosure opens, the report is stored", async () => {
+    const { context, page } = await newPage(browser, { ...PHONE, javaScriptEnabled: false });
+    try {
+      const note = `nojs-note-${randomBytes(3).toString("hex")}`;
+      await page.goto(PAGE);
+      const item = page.getByTestId("drop-point").first();
+      await item.locator("summary").click();
+      await item.getByRole("button", { name: "Send report" }).click();
+      await item.getByText("Choose how full the bin is.").waitFor();
+      const again = page.getByTestId("drop-point").first();
+      await again.locator("summary").click();
+      await again.getByLabel("Full — no room left").check();
+      await again.getByLabel("Anything else? (optional)").fill(note);
+      await again.getByRole("button", { name: "Send report" }).click();
+      await page.getByText("Thanks — the organisers can see your report.").waitFor();
+      const rows = await testDb()("fill_reports").where({ note }).select("level");
+      expect(rows).toEqual([{ level: 100 }]);
+    } finally {
+      await context.close();
+    }
+  });
+
+  it("a new organiser signs up: a refused password keeps the rest, then the check-your-mail answer shows", async () => {
+    const { context, page } = await newPage(browser, { javaScriptEnabled: false });
+    try {
+      const email = `nojs-founder-${randomBytes(3).toString("hex")}@signup.test`;
+      await page.goto("/signup");
+      await page.getByLabel("Your name").fill("Orla Offline");
+      await page.getByLabel("E-mail").fill(email);
+      await page.getByLabel("Password").fill("short");
+      await page.getByLabel("Your group's name").fill("Quillon Lane Quiet Circle");
+      await page.getByRole("button", { name: "Create group" }).click();
+      await expect(page.getByLabel("Password").getAttribute("aria-invalid")).resolves.toBe("true");
+      // The password is never sent back into the page; the rest is as typed.
+      await expect(page.getByLabel("Password").inputValue()).resolves.toBe("");
+      await expect(page.getByLabel("E-mail").inputValue()).resolves.toBe(email);
+      await expect(page.getByLabel("Your group's name").inputValue()).resolves.toBe("Quillon Lane Quiet Circle");
+      await page.getByLabel("Password").fill("a-long-enough-password");
+      await page.getByRole("button", { name: "Create group" }).click();
+      await page.getByText("Check your e-mail").waitFor();
+      await page.getByText(email).waitFor();
+      expect(new URL(page.url()).pathname).toBe("/signup");
+      const user = await testDb()("users").where({ email }).first();
+      expect(user?.name).toBe("Orla Offline");
+    } finally {
+      await context.close();
+    }
+  });
+});
