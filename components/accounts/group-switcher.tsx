@@ -1,5 +1,6 @@
 "use client";
 
+import { SelectBox } from "@/components/ui/field";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { useSession } from "next-auth/react";
 import { useRouter } from "next/navigation";
@@ -33,19 +34,14 @@ export function GroupSwitcher() {
       <label htmlFor="group-switcher" className="text-ink-soft">
         Active group
       </label>
-      <select
+      <SelectBox
         id="group-switcher"
         value={active?.id}
         disabled={pending}
         onChange={(e) => onChange(e.target.value)}
-        className="min-h-9 max-w-[14rem] rounded-lg border-2 border-ink/40 bg-white px-2 py-1"
-      >
-        {data.map((g) => (
-          <option key={g.id} value={g.id}>
-            {g.name} ({ROLE_LABEL[g.role].toLowerCase()})
-          </option>
-        ))}
-      </select>
+        className="max-w-[14rem] text-sm"
+        options={data.map((g) => ({ value: g.id, label: `${g.name} (${ROLE_LABEL[g.role].toLowerCase()})` }))}
+      />
     </span>
   );
 }

@@ -3,10 +3,11 @@
 import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { FormError } from "@/components/ui/field";
-import { ROLES, ROLE_LABEL, type Role } from "@/lib/auth/roles";
+import { FormError, SelectBox } from "@/components/ui/field";
+import type { Role } from "@/lib/auth/roles";
 import { membersQuery, useChangeRole, useRemoveMember, type Member } from "@/hooks/queries/members";
 import { ListSkeleton } from "./invitation-list";
+import { ROLE_CHOICES } from "./role-select";
 
 export function MemberList({ currentUserId }: { currentUserId: string }) {
   const { data, isPending, error, refetch } = useQuery(membersQuery());
@@ -42,19 +43,13 @@ export function MemberList({ currentUserId }: { currentUserId: string }) {
               <label className="sr-only" htmlFor={`role-${m.userId}`}>
                 Role of {m.name}
               </label>
-              <select
+              <SelectBox
                 id={`role-${m.userId}`}
                 value={m.role}
                 disabled={changeRole.isPending}
                 onChange={(e) => changeRole.mutate({ userId: m.userId, role: e.target.value as Role })}
-                className="min-h-11 rounded-lg border-2 border-ink/40 bg-white px-2 py-2"
-              >
-                {ROLES.map((r) => (
-                  <option key={r} value={r}>
-                    {ROLE_LABEL[r]}
-                  </option>
-                ))}
-              </select>
+                options={ROLE_CHOICES}
+              />
               {confirming === m.userId ? (
                 <>
                   <Button variant="danger" disabled={remove.isPending} onClick={() => remove.mutate(m.userId, { onSettled: () => setConfirming(null) })}>

@@ -1,5 +1,6 @@
 "use client";
 
+import { SelectField } from "@/components/ui/field";
 import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Notice } from "@/components/ui/notice";
@@ -81,14 +82,7 @@ export function ClaimsPanel({ v }: { v: ClaimsView }) {
             variant="secondary"
             run={(q, key) => moveClaimsTo(v.unit.id, moveTo, q, key)}
           >
-            <div className="flex flex-col gap-1">
-              <label htmlFor="move-to" className="font-semibold">Move claimed cans to</label>
-              <select id="move-to" value={moveTo} onChange={(e) => setMoveTo(e.target.value)} className="min-h-11 rounded-lg border-2 border-ink/40 bg-white px-3">
-                {v.otherUnits.map((u) => (
-                  <option key={u.id} value={u.id}>{u.name}</option>
-                ))}
-              </select>
-            </div>
+            <SelectField id="move-to" label="Move claimed cans to" value={moveTo} onChange={(e) => setMoveTo(e.target.value)} options={v.otherUnits.map((u) => ({ value: u.id, label: u.name }))} />
           </QuantityAction>
         </div>
       ) : null}

@@ -4,7 +4,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { Field, FormError } from "@/components/ui/field";
+import { Field, FormError, SelectField } from "@/components/ui/field";
 import { fieldErrors } from "@/lib/api/client";
 import type { CanGridInput } from "@/lib/heaters/schemas";
 import { createHeater, heaterKeys } from "@/hooks/queries/heaters";
@@ -51,24 +51,17 @@ export function SavePlan({ input, choice, planLabel, disabled }: { input: CanGri
       <FormError message={save.error ? (Object.keys(fields).length ? "Some fields need another look." : save.error.message) : null} />
       <p className="text-ink-soft">Saves {planLabel} with the settings above.</p>
       <Field id="unit-name" label="Unit name" hint="The room or building it will warm" value={name} error={fields.name} onChange={(e) => setName(e.target.value)} required />
-      <div className="flex flex-col gap-1">
-        <label htmlFor="unit-drive" className="font-semibold">Count it against the drive</label>
-        <select
-          id="unit-drive"
-          value={driveId}
-          onChange={(e) => {
-            setDriveId(e.target.value);
-            remembered.remember(e.target.value);
-          }}
-          aria-describedby="unit-drive-error"
-          className="min-h-11 rounded-lg border-2 border-ink/40 bg-white px-3"
-        >
-          {drives.map((d) => (
-            <option key={d.id} value={d.id}>{d.name}</option>
-          ))}
-        </select>
-        <p id="unit-drive-error" aria-live="polite" className="text-sm font-semibold text-alarm">{fields.driveId ?? ""}</p>
-      </div>
+      <SelectField
+        id="unit-drive"
+        label="Count it against the drive"
+        value={driveId}
+        onChange={(e) => {
+          setDriveId(e.target.value);
+          remembered.remember(e.target.value);
+        }}
+        error={fields.driveId}
+        options={drives.map((d) => ({ value: d.id, label: d.name }))}
+      />
       {drive ? <DriveBanner drive={drive} today={today} lead="Counting it against" rememberError={remembered.error} /> : null}
       {Object.entries(fields)
         .filter(([k]) => k.startsWith("plan."))

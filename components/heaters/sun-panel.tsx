@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { Field } from "@/components/ui/field";
+import { Field, SelectField } from "@/components/ui/field";
 import { formatNumber } from "@/lib/heaters/format";
 import { CLEAR_DAY_ASSUMPTIONS, clearDayEnergy } from "@/lib/heaters/sun";
 
@@ -34,14 +34,7 @@ export function SunPanel({ apertureAreaM2, efficiency, latitude, today }: { aper
       <h3 id="sun-heading" className="text-base">A clear day on your wall</h3>
       <div className="grid gap-x-4 sm:grid-cols-3">
         <Field id="sun-lat" label="Latitude (°, south negative)" inputMode="decimal" value={lat} error={errors.lat} onChange={(e) => setLat(e.target.value)} />
-        <div className="flex flex-col gap-1">
-          <label htmlFor="sun-bearing" className="font-semibold">Wall faces</label>
-          <select id="sun-bearing" value={bearing} onChange={(e) => setBearing(e.target.value)} className="min-h-11 rounded-lg border-2 border-ink/40 bg-white px-3">
-            {FACINGS.map(([name, deg]) => (
-              <option key={deg} value={String(deg)}>{name} ({deg}°)</option>
-            ))}
-          </select>
-        </div>
+        <SelectField id="sun-bearing" label="Wall faces" value={bearing} onChange={(e) => setBearing(e.target.value)} options={FACINGS.map(([name, deg]) => ({ value: String(deg), label: `${name} (${deg}°)` }))} />
         <Field id="sun-date" type="date" label="Day" value={date} error={errors.date} onChange={(e) => setDate(e.target.value)} />
       </div>
       {day ? (

@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { FormError } from "@/components/ui/field";
+import { FormError, SelectField } from "@/components/ui/field";
 import { NumberField } from "@/components/ui/number-field";
 import { Notice } from "@/components/ui/notice";
 import { fieldErrorsOf } from "@/lib/api/errors";
@@ -70,28 +70,15 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
   return (
     <form onSubmit={onSubmit} className="flex flex-col gap-4" aria-label="Log a haul" noValidate>
       <HaulCaution />
-      <div className="flex flex-col gap-1">
-        <label htmlFor="haul-drop-point" className="font-semibold">
-          Drop point
-        </label>
-        <select
-          id="haul-drop-point"
-          value={dropPointId}
-          onChange={(e) => setDropPointId(e.target.value)}
-          aria-describedby="haul-drop-point-error"
-          className={`min-h-11 rounded-lg border-2 bg-white px-3 ${errors.dropPointId ? "border-alarm" : "border-ink/40"}`}
-        >
-          <option value="">Choose where you picked up…</option>
-          {dropPoints.map((p) => (
-            <option key={p.id} value={p.id}>
-              {p.name}
-            </option>
-          ))}
-        </select>
-        <p id="haul-drop-point-error" aria-live="polite" className="text-sm font-semibold text-alarm">
-          {errors.dropPointId ?? ""}
-        </p>
-      </div>
+      <SelectField
+        id="haul-drop-point"
+        label="Drop point"
+        value={dropPointId}
+        onChange={(e) => setDropPointId(e.target.value)}
+        error={errors.dropPointId}
+        placeholder="Choose where you picked up…"
+        options={dropPoints.map((p) => ({ value: p.id, label: p.name }))}
+      />
       <NumberField id="haul-bags" label="Bags" spec={NUMBER_SPECS.haulBags} steppers value={bags} onChange={edit("bags", setBags)} error={errors.bags} />
       <NumberField
         id="haul-weight"

@@ -2,6 +2,7 @@
 
 import { useState } from "react";
 import { DriveBanner } from "@/components/drives/drive-banner";
+import { SelectField } from "@/components/ui/field";
 import { useRememberDrive } from "@/hooks/queries/current-drive";
 import { HaulForm } from "./haul-form";
 import { SortForm } from "./sort-form";
@@ -35,26 +36,16 @@ export function LogHome({ drives, initialDriveId, initialDropPointId, today }: {
   return (
     <div className="flex flex-col gap-5">
       {drives.length > 1 ? (
-        <div className="flex flex-col gap-1">
-          <label htmlFor="log-drive" className="font-semibold">
-            Drive
-          </label>
-          <select
-            id="log-drive"
-            className="min-h-11 rounded-lg border-2 border-ink/40 bg-white px-3"
-            value={drive.id}
-            onChange={(e) => {
-              setDriveId(e.target.value);
-              remembered.remember(e.target.value);
-            }}
-          >
-            {drives.map((d) => (
-              <option key={d.id} value={d.id}>
-                {d.name}
-              </option>
-            ))}
-          </select>
-        </div>
+        <SelectField
+          id="log-drive"
+          label="Drive"
+          value={drive.id}
+          onChange={(e) => {
+            setDriveId(e.target.value);
+            remembered.remember(e.target.value);
+          }}
+          options={drives.map((d) => ({ value: d.id, label: d.name }))}
+        />
       ) : null}
       <DriveBanner drive={drive} today={today} rememberError={remembered.error} />
       <OutboxList items={outbox.items} refusals={outbox.refusals} onRetry={() => void outbox.retryNow()} onDismiss={outbox.dismissRefusal} onConfirm={outbox.confirmRefusal} />

@@ -1,6 +1,7 @@
 "use client";
 
 import { LOSS_REASON_LABEL, LOSS_REASONS, LOSS_STEP, PROCESS_TO, type LossReason } from "@/lib/ledger/schemas";
+import { SelectField } from "@/components/ui/field";
 import { NumberField } from "@/components/ui/number-field";
 import { NUMBER_SPECS } from "@/lib/forms/number-input";
 
@@ -38,27 +39,14 @@ export function LossFields({
     <fieldset className="flex flex-col gap-2 rounded-lg border-2 border-dashed border-ink/30 p-3">
       <legend className="px-1 font-semibold">Lost on the way</legend>
       <p className="text-sm text-ink-soft">Crushed, torn or bent so badly they can&apos;t be used? They go to the rejects from {from}, not on to {to}.</p>
-      <div className="flex flex-col gap-1">
-        <label htmlFor="processing-lost-reason" className="font-semibold">
-          How were they damaged?
-        </label>
-        <select
-          id="processing-lost-reason"
-          className="min-h-11 rounded-lg border-2 border-ink/40 bg-white px-3"
-          value={reason}
-          onChange={(e) => onReason(e.target.value as LossReason)}
-          aria-describedby="processing-lost-reason-error"
-        >
-          {lossReasonsFor(to).map((r) => (
-            <option key={r} value={r}>
-              {LOSS_REASON_LABEL[r]}
-            </option>
-          ))}
-        </select>
-        <p id="processing-lost-reason-error" aria-live="polite" className="text-sm font-semibold text-alarm">
-          {errors["lost.reason"] ?? ""}
-        </p>
-      </div>
+      <SelectField
+        id="processing-lost-reason"
+        label="How were they damaged?"
+        value={reason}
+        onChange={(e) => onReason(e.target.value as LossReason)}
+        error={errors["lost.reason"]}
+        options={lossReasonsFor(to).map((r) => ({ value: r, label: LOSS_REASON_LABEL[r] }))}
+      />
       <NumberField id="processing-lost" label="Cans lost" spec={NUMBER_SPECS.lostCans} steppers value={quantity} onChange={onQuantity} error={errors["lost.quantity"] ?? errors.lost} />
     </fieldset>
   );

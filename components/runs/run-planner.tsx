@@ -6,7 +6,7 @@ import { useMemo, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, Skeleton } from "@/components/ui/card";
 import { DriveBanner } from "@/components/drives/drive-banner";
-import { Field, FormError } from "@/components/ui/field";
+import { Field, FormError, SelectField } from "@/components/ui/field";
 import { fetchJson, fieldErrors } from "@/lib/api/client";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { createRunInputSchema } from "@/lib/runs/schemas";
@@ -99,20 +99,16 @@ export function RunPlanner(props: PlannerProps) {
     <form onSubmit={submit} noValidate className="grid gap-6 lg:grid-cols-2">
       <div className="flex flex-col gap-4">
         <Card title="1. Drive and stops">
-          <div className="flex flex-col gap-1">
-            <label htmlFor="drive" className="font-semibold">Drive</label>
-            <select
-              id="drive"
-              className={selectClass}
-              value={driveId}
-              onChange={(e) => {
-                setDriveId(e.target.value);
-                remembered.remember(e.target.value);
-              }}
-            >
-              {props.drives.map((d) => <option key={d.id} value={d.id}>{d.name}</option>)}
-            </select>
-          </div>
+          <SelectField
+            id="drive"
+            label="Drive"
+            value={driveId}
+            onChange={(e) => {
+              setDriveId(e.target.value);
+              remembered.remember(e.target.value);
+            }}
+            options={props.drives.map((d) => ({ value: d.id, label: d.name }))}
+          />
           {drive ? (
             <div className="mt-3">
               <DriveBanner drive={drive} today={props.today} lead="Planning for" rememberError={remembered.error} />
@@ -141,14 +137,15 @@ export function RunPlanner(props: PlannerProps) {
             Come back to the start at the end
           </label>
           <Field id="planned-on" className="mt-3" label="Day of the run" type="date" value={plannedOn} onChange={(e) => setPlannedOn(e.target.value)} error={errors.plannedOn} />
-          <div className="flex flex-col gap-1">
-            <label htmlFor="assignee" className="font-semibold">Volunteer</label>
-            <select id="assignee" aria-describedby="assignee-error" aria-invalid={errors.assigneeId ? true : undefined} className={selectClass} value={assigneeId} onChange={(e) => setAssigneeId(e.target.value)}>
-              <option value="">Choose who drives it…</option>
-              {props.drivers.map((d) => <option key={d.id} value={d.id}>{d.name} ({d.role})</option>)}
-            </select>
-            <p id="assignee-error" aria-live="polite" className="text-sm font-semibold text-alarm">{errors.assigneeId ?? ""}</p>
-          </div>
+          <SelectField
+            id="assignee"
+            label="Volunteer"
+            value={assigneeId}
+            onChange={(e) => setAssigneeId(e.target.value)}
+            error={errors.assigneeId}
+            placeholder="Choose who drives it…"
+            options={props.drivers.map((d) => ({ value: d.id, label: `${d.name} (${d.role})` }))}
+          />
           <Field id="notes" label="Notes for the volunteer (optional)" value={notes} onChange={(e) => setNotes(e.target.value)} error={errors.notes} />
         </Card>
       </div>
