@@ -10,7 +10,7 @@ import { consumeLimit, type LimitRule } from "./rate-limit";
 import { assertNoNul } from "./request-guards";
 import type { Actor } from "@/lib/auth/queries";
 import { forgetReads } from "@/lib/cache/read-cache";
-import { numberMessage, parseNumberInput, type NumberSpec } from "@/lib/forms/number-input";
+import { formInput, formValues, type FormShape } from "@/lib/forms/form-data";
 import { clientAddress } from "@/lib/net/client-address";
 
 // One declaration per server action, the form-side twin of endpoint(): who may
@@ -29,14 +29,10 @@ export interface ActionLimit<I> {
   by: "client" | ((input: I) => string | null | undefined);
 }
 
-export interface ActionSpec<A extends Access, I, P, R> {
+export interface ActionSpec<A extends Access, I, P, R> extends FormShape {
   who: A;
   /** The same schema as the route's body. */
   schema: ZodType<I>;
-  /** Boxes read with the app's number rule (NUMBER_SPECS), or "decimal" for a plain signed number (coordinates). */
-  numbers?: Record<string, NumberSpec | "decimal">;
-  /** Checkboxes: present → true, absent → false. */
-  checkboxes?: readonly string[];
   /** Hidden fields naming the record (an id, a slug), parsed like endpoint()'s path: a failure is 404. */
   params?: ZodType<P>;
   resource?: (actor: Actor, params: P) => Promise<R>;
@@ -52,34 +48,6 @@ export interface ActionContext<A extends Access, I, P, R> {
   params: P;
   resource: R;
   values: Record<string, string>;
-}
-
-/** FormData's text entries; React's own `$ACTION_…` fields and files are left out. */
-export function formValues(formData: FormData): Record<string, string> {
-  const values: Record<string, string> = {};
-  for (const [key, value] of formData.entries()) {
-    if (typeof value === "string" && !key.startsWith("$ACTION")) values[key] = value;
-  }
-  return values;
-}
-
-/** The FormData step: numbers by the app's number rule, checkboxes as booleans; the rest stays text for zod. */
-export function formInput(values: Record<string, string>, spec: Pick<ActionSpec<Access, unknown, unknown, unknown>, "numbers" | "checkboxes">): Record<string, unknown> {
-  const out: Record<string, unknown> = { ...values };
-  const fields: FieldErrors = {};
-  for (const [key, rule] of Object.entries(spec.numbers ?? {})) {
-    const raw = (values[key] ?? "").trim();
-    if (rule === "decimal") {
-      out[key] = raw === "" || !/^[-−]?\d+(\.\d+)?$/.test(raw) ? undefined : Number(raw.replace("−", "-"));
-      continue;
-    }
-    const parsed = parseNumberInput(raw, rule);
-    if (!parsed.ok) fields[key] = parsed.error || numberMessage(rule);
-    else out[key] = parsed.value ?? undefined;
-  }
-  for (const key of spec.checkboxes ?? []) out[key] = key in values;
-  if (Object.keys(fields).length) throw new AppError("invalid_input", "Some fields need another look.", { fields });
-  return out;
 }
 
 export function action<A extends Access, I, T, P = undefined, R = undefined>(

@@ -3,7 +3,6 @@ import type { CantroveFileRouter } from "./file-router";
 
 export const { useUploadThing, uploadFiles } = generateReactHelpers<CantroveFileRouter>();
 
-// The picker's checks live in photo-rules.ts (no upload client), so a light form can use them.
 export { PHOTO_ACCEPT, PHOTO_MAX_BYTES, photoProblem } from "./photo-rules";
 
 /** What the server said about an upload it received: null when the photo was taken. */

@@ -48,7 +48,7 @@ describe("public drive page weight", () => {
       // A slow connection: no script of the app ever arrives.
       const held: Route[] = [];
       await page.route("**/_next/static/chunks/**", (route) => void held.push(route));
-      await page.goto(PAGE, { waitUntil: "domcontentloaded" });
+      await page.goto(PAGE, { waitUntil: "commit" });
       const donor = `early-${Date.now().toString(36)}@example.test`;
       const point = page.getByLabel("Drop point", { exact: true });
       await point.selectOption({ index: 2 });
