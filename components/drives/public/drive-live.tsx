@@ -8,9 +8,11 @@ import { FILL_SHAPE_LABEL, fillShape } from "@/lib/drives/fill";
 import { Card } from "@/components/ui/card";
 import { publicDriveQuery, publicDropPointsQuery, type PublicDriveView, type PublicDropPointView } from "@/lib/drives/query-options";
 import { DropPointList } from "./drop-point-list";
-import { PledgeForm } from "./pledge-form";
+import { whenWanted } from "./when-wanted";
 import { DriveProgressBar } from "./progress-bar";
 import { countOf } from "@/lib/plural";
+
+const PledgeForm = whenWanted("pledge form", () => import("./pledge-form").then((m) => m.PledgeForm), true);
 
 export function DriveLive({
   slug,
@@ -29,7 +31,7 @@ export function DriveLive({
   const points = useQuery({ ...publicDropPointsQuery(slug), initialData: initialPoints });
   const [selected, setSelected] = useState<string | null>(null);
   const list = points.data ?? [];
-  // The pledge form only needs names; keep the same array until those change.
+  // The pledge form only needs names; keep the same array until those change (see whenWanted).
   const choiceKey = list.map((p) => `${p.id}\t${p.name}`).join("\n");
   // eslint-disable-next-line react-hooks/exhaustive-deps
   const choices = useMemo(() => list.map(({ id, name }) => ({ id, name })), [choiceKey]);

@@ -1,6 +1,6 @@
 "use client";
 
-import { useState } from "react";
+import { useCallback, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FILL_SHAPE_LABEL, fillShape, LEVEL_LABEL } from "@/lib/drives/fill";
 import type { PublicDropPointView } from "@/lib/drives/query-options";
@@ -8,7 +8,7 @@ import { haversineKm } from "@/lib/routes/great-circle";
 import { formatDateTime } from "@/lib/format";
 import { countOf } from "@/lib/plural";
 
-import { FillReportForm } from "./fill-report-form";
+import { whenWanted } from "./when-wanted";
 
 type Located = PublicDropPointView & { number: number; km?: number };
 
@@ -99,9 +99,11 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
   );
 }
 
-// "Is this bin full?" opens the report form in place (see FillReportForm);
-// "Close" after a report brings a fresh, closed one.
+// "Is this bin full?" (FillReportForm) is fetched when someone touches it; "Close" after a report brings a fresh, closed one.
+const FillReportForm = whenWanted("report form", () => import("./fill-report-form").then((m) => m.FillReportForm));
+
 function BinReport({ slug, point }: { slug: string; point: { id: string; name: string } }) {
   const [round, setRound] = useState(0);
-  return <FillReportForm key={round} slug={slug} point={point} onDone={() => setRound((n) => n + 1)} />;
+  const done = useCallback(() => setRound((n) => n + 1), []);
+  return <FillReportForm key={round} slug={slug} pointId={point.id} pointName={point.name} onDone={done} />;
 }

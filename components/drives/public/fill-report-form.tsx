@@ -18,9 +18,10 @@ const LEVELS = FILL_LEVELS.map((l) => ({ value: String(l), label: LEVEL_LABEL[l]
 // the page's JavaScript; it stays open on the page that comes back with the
 // answer. The photo picker needs the upload client: it is fetched (FillPhoto)
 // only once React runs and someone opens the form.
-export function FillReportForm({ slug, point, onDone }: { slug: string; point: { id: string; name: string }; onDone: () => void }) {
+export function FillReportForm({ slug, pointId, pointName, onDone }: { slug: string; pointId: string; pointName: string; onDone: () => void }) {
+  const point = { id: pointId, name: pointName };
   const [state, send, pending] = useActionState<ActionState<{ id: string }>, FormData>(fillReportAction, IDLE);
-  // Set only by the browser's toggle event, so it is false on the server and before React runs.
+  // Set only once React runs and the disclosure is open, so it is false on the server.
   const [opened, setOpened] = useState(false);
   const queryClient = useQueryClient();
   const reportId = state.ok ? state.data?.id : undefined;
@@ -30,7 +31,15 @@ export function FillReportForm({ slug, point, onDone }: { slug: string; point: {
   }, [reportId, slug, queryClient]);
 
   return (
-    <details className="mt-2" open={state.ok !== null || undefined} onToggle={(e) => e.currentTarget.open && setOpened(true)}>
+    <details
+      className="mt-2"
+      open={state.ok !== null || undefined}
+      onToggle={(e) => e.currentTarget.open && setOpened(true)}
+      // Opened before this code arrived: the toggle event has been and gone.
+      ref={(el) => {
+        if (el?.open) setOpened(true);
+      }}
+    >
       <summary aria-label={`Report how full the bin at ${point.name} is`} className={buttonClass("quiet", "mb-2 w-fit cursor-pointer list-none")}>
         Is this bin full?
       </summary>
