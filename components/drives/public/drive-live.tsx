@@ -1,6 +1,5 @@
 "use client";
 
-import { useQuery } from "@tanstack/react-query";
 import { useMemo, useState } from "react";
 import { DriveMap } from "@/components/map/drive-map";
 import type { MapPoint } from "@/components/map/types";
@@ -8,11 +7,10 @@ import { FILL_SHAPE_LABEL, fillShape } from "@/lib/drives/fill";
 import { Card } from "@/components/ui/card";
 import { publicDriveQuery, publicDropPointsQuery, type PublicDriveView, type PublicDropPointView } from "@/lib/drives/query-options";
 import { DropPointList } from "./drop-point-list";
-import { whenWanted } from "./when-wanted";
+import { PledgeForm } from "./pledge-form";
+import { useLiveQuery } from "@/hooks/queries/live-query";
 import { DriveProgressBar } from "./progress-bar";
 import { countOf } from "@/lib/plural";
-
-const PledgeForm = whenWanted("pledge form", () => import("./pledge-form").then((m) => m.PledgeForm), true);
 
 export function DriveLive({
   slug,
@@ -27,11 +25,11 @@ export function DriveLive({
   tileUrl: string;
   attribution: string;
 }) {
-  const drive = useQuery({ ...publicDriveQuery(slug), initialData: initialDrive });
-  const points = useQuery({ ...publicDropPointsQuery(slug), initialData: initialPoints });
+  const drive = useLiveQuery(publicDriveQuery(slug), initialDrive);
+  const points = useLiveQuery(publicDropPointsQuery(slug), initialPoints);
   const [selected, setSelected] = useState<string | null>(null);
   const list = points.data ?? [];
-  // The pledge form only needs names; keep the same array until those change (see whenWanted).
+  // The pledge form only needs names; keep the same array until those change.
   const choiceKey = list.map((p) => `${p.id}\t${p.name}`).join("\n");
   // eslint-disable-next-line react-hooks/exhaustive-deps
   const choices = useMemo(() => list.map(({ id, name }) => ({ id, name })), [choiceKey]);

@@ -1,6 +1,6 @@
 "use client";
 
-import { useCallback, useState } from "react";
+import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FILL_SHAPE_LABEL, fillShape, LEVEL_LABEL } from "@/lib/drives/fill";
 import type { PublicDropPointView } from "@/lib/drives/query-options";
@@ -8,7 +8,7 @@ import { haversineKm } from "@/lib/routes/great-circle";
 import { formatDateTime } from "@/lib/format";
 import { countOf } from "@/lib/plural";
 
-import { whenWanted } from "./when-wanted";
+import { FillReportForm } from "./fill-report-form";
 
 type Located = PublicDropPointView & { number: number; km?: number };
 
@@ -99,11 +99,8 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
   );
 }
 
-// "Is this bin full?" (FillReportForm) is fetched when someone touches it; "Close" after a report brings a fresh, closed one.
-const FillReportForm = whenWanted("report form", () => import("./fill-report-form").then((m) => m.FillReportForm));
-
+// "Is this bin full?" (FillReportForm); "Close" after a report brings a fresh, closed one.
 function BinReport({ slug, point }: { slug: string; point: { id: string; name: string } }) {
   const [round, setRound] = useState(0);
-  const done = useCallback(() => setRound((n) => n + 1), []);
-  return <FillReportForm key={round} slug={slug} pointId={point.id} pointName={point.name} onDone={done} />;
+  return <FillReportForm key={round} slug={slug} pointId={point.id} pointName={point.name} onDone={() => setRound((n) => n + 1)} />;
 }

@@ -27,7 +27,7 @@ export function FillReportForm({ slug, pointId, pointName, onDone }: { slug: str
   const reportId = state.ok ? state.data?.id : undefined;
   const formId = `report-${point.id}`;
   useEffect(() => {
-    if (reportId) void queryClient.invalidateQueries({ queryKey: publicDropPointsQuery(slug).queryKey });
+    if (reportId) void queryClient.fetchQuery({ ...publicDropPointsQuery(slug), staleTime: 0 }).catch(() => undefined);
   }, [reportId, slug, queryClient]);
 
   return (
