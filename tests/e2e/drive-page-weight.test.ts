@@ -35,12 +35,8 @@ describe("public drive page weight", () => {
       console.log(`[measure] public drive page first-load JS: ${(js / 1000).toFixed(1)} kB compressed`);
       expect(js).toBeGreaterThan(40_000); // Leaflet alone is about this much: the sum is real.
       expect(js).toBeLessThanOrEqual(BUDGET_BYTES);
-      // The pledge form is server-rendered as a plain form posting to a server action; its code comes when it nears the screen.
-      const form = page.getByRole("form", { name: "Pledge cans" });
-      await expect(form.getAttribute("method")).resolves.toMatch(/post/i);
-      const before = await page.evaluate(() => performance.getEntriesByType("resource").length);
-      await form.scrollIntoViewIfNeeded();
-      await expect.poll(() => page.evaluate(() => performance.getEntriesByType("resource").length), { timeout: 15_000 }).toBeGreaterThan(before);
+      // The pledge form is part of that load: a plain form posting to a server action, rendered by the server.
+      await expect(page.getByRole("form", { name: "Pledge cans" }).getAttribute("method")).resolves.toMatch(/post/i);
     } finally {
       await context.close();
     }
