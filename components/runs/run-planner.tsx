@@ -29,7 +29,6 @@ export interface PlannerProps {
   attribution: string;
 }
 
-const selectClass = "min-h-11 rounded-lg border-2 border-ink/40 bg-white px-3 py-2";
 
 export function RunPlanner(props: PlannerProps) {
   const router = useRouter();

@@ -124,7 +124,7 @@ export function TextareaField({ id, label, error, hint, className, ...area }: Te
   );
 }
 
-/** Radio buttons in a fieldset whose legend is the label; controlled (`value` + `onChange`) or not (`defaultValue`). */
+/** Radio buttons in a fieldset whose legend is the label (the radiogroup inside carries aria-invalid and the descriptions); controlled (`value` + `onChange`) or not (`defaultValue`). */
 export function RadioGroup({
   id,
   label,
@@ -138,17 +138,18 @@ export function RadioGroup({
   onChange,
 }: FieldBits & { name: string; options: readonly Choice[]; value?: string; defaultValue?: string; onChange?: (value: string) => void }) {
   return (
-    <fieldset id={id} aria-describedby={describedBy(id, hint)} className={`flex flex-col gap-1 ${className}`}>
-      <legend className="font-semibold">{label}</legend>
+    <fieldset id={id} className={`flex flex-col gap-1 ${className}`}>
+      <legend id={`${id}-label`} className="font-semibold">
+        {label}
+      </legend>
       <Hint id={id} hint={hint} />
-      <div className="mt-1 flex flex-col gap-1">
+      <div role="radiogroup" aria-labelledby={`${id}-label`} aria-describedby={describedBy(id, hint)} aria-invalid={error ? true : undefined} className="mt-1 flex flex-col gap-1">
         {options.map((o) => (
           <label key={o.value} className="flex min-h-11 items-center gap-2">
             <input
               type="radio"
               name={name}
               value={o.value}
-              aria-invalid={error ? true : undefined}
               {...(value !== undefined ? { checked: value === o.value, onChange: () => onChange?.(o.value) } : { defaultChecked: defaultValue === o.value })}
               className="h-5 w-5"
             />
