@@ -93,14 +93,16 @@ describe("organiser sets up a drive; the public uses it", () => {
     expect(confirmation.text).toContain("Harbour chandlery");
 
     await page.getByRole("img", { name: "Photo of the bin at Lantern Street bakery" }).waitFor();
+    // Each drop point has its own report form (a closed disclosure until opened): work inside this one.
+    const bakery = page.getByTestId("drop-point").filter({ hasText: "Lantern Street bakery" });
     const report = async (withPhoto: boolean) => {
-      await page.getByLabel("Report how full the bin at Lantern Street bakery is").click();
-      await page.getByLabel("Full — no room left").check();
-      if (withPhoto) await page.getByLabel("Photo of the bin (optional)").setInputFiles({ name: "full.png", mimeType: "image/png", buffer: pngOf(32) });
-      await page.getByRole("button", { name: "Send report" }).click();
-      await page.getByText("Thanks — the organisers can see your report.").waitFor({ timeout: 30_000 });
-      if (withPhoto) await page.getByText("Your photo is attached.").waitFor();
-      await page.getByRole("button", { name: "Close" }).click();
+      await bakery.getByLabel("Report how full the bin at Lantern Street bakery is").click();
+      await bakery.getByLabel("Full — no room left").check();
+      if (withPhoto) await bakery.getByLabel("Photo of the bin (optional)").setInputFiles({ name: "full.png", mimeType: "image/png", buffer: pngOf(32) });
+      await bakery.getByRole("button", { name: "Send report" }).click();
+      await bakery.getByText("Thanks — the organisers can see your report.").waitFor({ timeout: 30_000 });
+      if (withPhoto) await bakery.getByText("Your photo is attached.").waitFor();
+      await bakery.getByRole("button", { name: "Close" }).click();
     };
     await report(true);
     await report(false);
