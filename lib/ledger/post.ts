@@ -2,7 +2,7 @@ import type { Knex } from "knex";
 import { AppError, conflict, notFound } from "@/lib/api/errors";
 import { needRefusalMessage } from "@/lib/heaters/need";
 import type { LineReason, Stage } from "./schemas";
-import { countOf, noun, plural } from "@/lib/plural";
+import { countOf } from "@/lib/plural";
 
 // The one place ledger lines are written. postMovement hands the movement to
 // ledger_post() in PostgreSQL, which locks the drive (so writes to one drive
@@ -143,7 +143,7 @@ export function ledgerRefusal(error: unknown): AppError | null {
   if (d.kind === "debit" && d.stage) {
     const have = Number(d.available);
     const needed = Number(d.needed);
-    return conflict(`That needs ${countOf(needed, "can")} ${STAGE_LABEL[d.stage]}, but only ${have} ${plural(have, noun("is", "are"))} left.`, { available: have, stage: d.stage });
+    return conflict(`That needs ${countOf(needed, "can")} ${STAGE_LABEL[d.stage]}, but only ${have} left.`, { available: have, stage: d.stage });
   }
   const before = Number(d.available);
   return conflict(`Not enough unclaimed cans: only ${before} left unclaimed. Release a claim first, or claim fewer.`, {
