@@ -1,7 +1,7 @@
 import type { Knex } from "knex";
 import { AppError, conflict, notFound } from "@/lib/api/errors";
 import { needRefusalMessage } from "@/lib/heaters/need";
-import type { LineReason, Stage } from "./schemas";
+import type { LineReason, MovementKind, Stage } from "./schemas";
 import { countOf, noun, plural } from "@/lib/plural";
 
 // The one place ledger lines are written. Every writer ends in one call of a
@@ -48,7 +48,7 @@ export interface MovementSpec {
   groupId: string;
   driveId: string;
   actorId: string;
-  kind: "haul" | "sort" | "processing" | "claim" | "release" | "builtIn" | "recycling" | "reversal" | "stockCount";
+  kind: MovementKind;
   occurredAt?: Date;
   reversesMovementId?: string;
   details?: Record<string, unknown>;
