@@ -7,6 +7,7 @@ import type { Knex } from "knex";
 //   export const up = (knex: Knex) => applyFunctions(knex, "ledger_post.sql");
 export async function applyFunctions(knex: Knex, ...files: string[]): Promise<void> {
   for (const file of files) {
-    await knex.raw(readFileSync(path.join(import.meta.dirname, file), "utf8"));
+    // Knex reads every ? as a binding; a file has none, so each is escaped to stay SQL.
+    await knex.raw(readFileSync(path.join(import.meta.dirname, file), "utf8").replaceAll("?", "\\?"));
   }
 }

@@ -86,7 +86,7 @@ begin
   select coalesce(array_agg(x), '{}') into v_lines from jsonb_populate_recordset(null::ledger_line_in, p->'lines') as x;
 
   -- A stock count's differences hold only while the totals are the ones it was counted against.
-  if p ? 'expect' then
+  if p->'expect' is not null then
     select jsonb_object_agg(b.stage, b.quantity) into v_totals
     from stage_balances b where b.drive_id = v_drive and b.drop_point_id is null and b.heater_unit_id is null;
     v_totals := coalesce(v_totals, '{}'::jsonb);
