@@ -2,7 +2,7 @@ import type { Knex } from "knex";
 import { AppError, conflict, notFound } from "@/lib/api/errors";
 import { needRefusalMessage } from "@/lib/heaters/need";
 import type { LineReason, MovementKind, Stage } from "./schemas";
-import { countOf, noun, plural } from "@/lib/plural";
+import { countOf } from "@/lib/plural";
 
 // The one place ledger lines are written. Every writer ends in one call of a
 // function in db/functions/ (ledger_post, or ledger_haul / ledger_sort /
@@ -161,7 +161,7 @@ export function ledgerRefusal(error: unknown, own?: OwnRefusals): AppError | nul
   if (d.kind === "debit" && d.stage) {
     const have = Number(d.available);
     const needed = Number(d.needed);
-    return conflict(`That needs ${countOf(needed, "can")} ${STAGE_LABEL[d.stage]}, but only ${have} ${plural(have, noun("is", "are"))} left.`, { available: have, stage: d.stage });
+    return conflict(`That needs ${countOf(needed, "can")} ${STAGE_LABEL[d.stage]}, but only ${have} left.`, { available: have, stage: d.stage });
   }
   const before = Number(d.available);
   return conflict(`Not enough unclaimed cans: only ${before} left unclaimed. Release a claim first, or claim fewer.`, {
