@@ -1,10 +1,13 @@
-// Runs once when a server process starts: keeps queued e-mail moving while the
-// mail service comes and goes.
+// Runs once when a server process starts: the job queue's workers (queued
+// e-mail keeps moving while the mail service comes and goes). If the database
+// is not there yet, it tries again until it is.
 export async function register() {
   if (process.env.NEXT_RUNTIME !== "nodejs") return;
-  const { retryDueMail } = await import("@/lib/mail/outbox");
-  const timer = setInterval(() => {
-    retryDueMail().catch(() => undefined);
-  }, Number(process.env.MAIL_RETRY_MS ?? 15_000));
-  timer.unref();
+  const { startMailWork } = await import("@/lib/mail/work");
+  const start = () =>
+    startMailWork().catch((error: Error) => {
+      console.warn("[cantrove] background work not started yet:", error.message);
+      setTimeout(start, 15_000).unref();
+    });
+  void start();
 }

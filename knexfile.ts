@@ -1,4 +1,13 @@
 import type { Knex } from "knex";
+import pg from "pg";
+
+// Rows come back in the types the code means, for every Knex instance (the
+// app's, the CLI's, the tests'): bigint counts and sums and numeric weights as
+// numbers (no ledger total comes near 2^53), calendar dates as "YYYY-MM-DD"
+// text, never a Date at the server's local midnight.
+pg.types.setTypeParser(pg.types.builtins.INT8, (v) => Number(v));
+pg.types.setTypeParser(pg.types.builtins.NUMERIC, (v) => Number(v));
+pg.types.setTypeParser(pg.types.builtins.DATE, (v) => v);
 
 // Used by the knex CLI, the start script and the tests. The app itself builds
 // its one instance in lib/db.ts from the same settings.

@@ -2,12 +2,12 @@ import "server-only";
 import knex, { type Knex } from "knex";
 import { knexConfig } from "@/knexfile";
 
-// One Knex instance per server process, kept on globalThis so development
-// reloads do not open a new pool on every edit.
+// One Knex instance (one pool) per server process, kept on globalThis: the
+// server loads this module once per route bundle (pages and route handlers are
+// bundled apart), and development reloads it on every edit.
 const globalForDb = globalThis as unknown as { cantroveDb?: Knex };
 
-export const db: Knex = globalForDb.cantroveDb ?? knex(knexConfig());
-if (process.env.NODE_ENV !== "production") globalForDb.cantroveDb = db;
+export const db: Knex = (globalForDb.cantroveDb ??= knex(knexConfig()));
 
 export { isDatabaseUnreachable } from "./db-errors";
 

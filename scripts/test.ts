@@ -58,7 +58,7 @@ async function main(): Promise<number> {
     seed: "demo",
     log: (line) => console.log(`[stack] ${line}`),
   });
-  const env: NodeJS.ProcessEnv = { ...process.env, ...stack.env, NODE_ENV: "production", MAIL_RETRY_MS: "2000", TRUSTED_PROXY_HOPS: "1" };
+  const env: NodeJS.ProcessEnv = { ...process.env, ...stack.env, NODE_ENV: "production", TRUSTED_PROXY_HOPS: "1" };
   buildIfStale(root, env, (line) => console.log(`[build] ${line}`));
   server = spawn(...serverCommand(root, ports.app), {
     cwd: root,

@@ -2,7 +2,7 @@
 
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import type { OutboxItem } from "@/lib/ledger/outbox";
+import type { OutboxItem } from "@/lib/ledger/browser-queue";
 import type { Refusal } from "./use-outbox";
 import { countOf, noun } from "@/lib/plural";
 

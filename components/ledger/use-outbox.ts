@@ -2,8 +2,9 @@
 
 import { useCallback, useEffect, useRef, useState } from "react";
 import { useQueryClient } from "@tanstack/react-query";
-import { addToOutbox, classify, confirmedCopy, markAttempt, newOutboxItem, readOutbox, removeFromOutbox, type OutboxItem } from "@/lib/ledger/outbox";
+import { addToOutbox, classify, confirmedCopy, markAttempt, newOutboxItem, readOutbox, removeFromOutbox, type OutboxItem } from "@/lib/ledger/browser-queue";
 import { ledgerKeys } from "@/hooks/queries/ledger";
+import { ApiError, fetchJsonWithHeaders } from "@/lib/api/client";
 
 export type SubmitResult =
   | { kind: "done"; body: unknown }
@@ -21,22 +22,15 @@ export interface Refusal {
 
 const RETRY_MS = 4_000;
 
+/** One try through the app's one fetch wrapper, with the entry's own Idempotency-Key every time. */
 async function send(item: OutboxItem) {
   try {
-    const res = await fetch(item.url, {
-      method: "POST",
-      headers: { "content-type": "application/json", "idempotency-key": item.key },
-      body: JSON.stringify(item.body),
-    });
-    const text = await res.text();
-    let body: unknown = null;
-    try {
-      body = text ? JSON.parse(text) : null;
-    } catch {
-      body = null;
-    }
-    return classify(res.status, body);
+    const res = await fetchJsonWithHeaders(item.url, { method: "POST", body: item.body, headers: { "idempotency-key": item.key } });
+    return classify(res.status, res.body);
   } catch (error) {
+    if (error instanceof ApiError && error.status > 0) {
+      return classify(error.status, { error: { ...error.details, code: error.code, message: error.message, fields: error.fields } });
+    }
     return classify(null, null, (error as Error).message || "No connection");
   }
 }

@@ -1,5 +1,5 @@
 import type { Knex } from "knex";
-import { planRoute } from "../../lib/routes/route";
+import { planRoute } from "../../lib/runs/route-order";
 
 // One planned pickup run of the demo group, given to the demo volunteer: the
 // three winter drop points furthest from the workshop, ordered like the planner would.

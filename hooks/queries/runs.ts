@@ -1,6 +1,6 @@
 import { queryOptions } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/api/client";
-import type { RouteInputRaw } from "@/lib/routes/schemas";
+import type { RouteInputRaw } from "@/lib/runs/route-schemas";
 
 // Shapes as the API sends them (dates as strings).
 export interface RouteAnswer {

@@ -61,3 +61,8 @@ export async function findUserEmail(userId: string): Promise<string | null> {
   const row = await db("users").select("email").where({ id: userId }).first();
   return row?.email ?? null;
 }
+
+/** The group's people by name, for the ledger's person filter. */
+export async function listGroupPeople(groupId: string) {
+  return db("memberships as m").join("users as u", "u.id", "m.user_id").select("u.id", "u.name").where("m.group_id", groupId).orderBy("u.name") as Promise<{ id: string; name: string }[]>;
+}

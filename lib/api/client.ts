@@ -27,8 +27,8 @@ export async function fetchJson<T>(path: string, init: FetchJsonInit = {}): Prom
   return (await fetchJsonWithHeaders<T>(path, init)).body;
 }
 
-/** fetchJson for answers that carry more in headers (the ledger's total and next cursor). */
-export async function fetchJsonWithHeaders<T>(path: string, init: FetchJsonInit = {}): Promise<{ body: T; headers: Headers }> {
+/** fetchJson for answers that carry more in headers (the ledger's total and next cursor) or whose status matters (the offline queue). */
+export async function fetchJsonWithHeaders<T>(path: string, init: FetchJsonInit = {}): Promise<{ body: T; headers: Headers; status: number }> {
   const payload = init.json !== undefined ? init.json : init.body;
   let res: Response;
   try {
@@ -64,7 +64,7 @@ export async function fetchJsonWithHeaders<T>(path: string, init: FetchJsonInit 
       error ?? {},
     );
   }
-  return { body: body as T, headers: res.headers };
+  return { body: body as T, headers: res.headers, status: res.status };
 }
 
 /** The server's question when it asks before recording an unusual number (409, confirm "implausible"), else null. */

@@ -51,12 +51,21 @@ export const notFound = (what = "That record") => new AppError("not_found", `${w
 export const conflict = (message: string, details?: Record<string, unknown>) =>
   new AppError("conflict", message, { details });
 
+const EXPECTED_WORDS: Record<string, string> = { string: "text", number: "a number", int: "a whole number", boolean: "yes or no", array: "a list", object: "a set of fields", date: "a date" };
+
+/** Zod's own wording for a missing or mistyped field ("Invalid input: expected string, received undefined") in words a person can act on; our schemas' own messages are kept. */
+function plainMessage(issue: ZodError["issues"][number]): string {
+  if (issue.code !== "invalid_type" || !issue.message.startsWith("Invalid input")) return issue.message;
+  if (/received undefined$/.test(issue.message)) return "This is needed: fill it in.";
+  return `This should be ${EXPECTED_WORDS[issue.expected] ?? issue.expected}.`;
+}
+
 /** First message per field path, in the shape forms show next to each field. */
 export function fieldErrorsOf(error: ZodError): FieldErrors {
   const fields: FieldErrors = {};
   for (const issue of error.issues) {
     const key = issue.path.length ? issue.path.join(".") : "_";
-    fields[key] ??= issue.message;
+    fields[key] ??= plainMessage(issue);
   }
   return fields;
 }

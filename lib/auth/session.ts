@@ -1,13 +1,12 @@
 import "server-only";
-import { hkdfSync } from "node:crypto";
-import { jwtDecrypt } from "jose";
-import { getToken, type JWT, type JWTDecodeParams } from "next-auth/jwt";
+import { getToken } from "next-auth/jwt";
 import { cookies } from "next/headers";
 import { redirect } from "next/navigation";
 import { loadActor, loadSessionVersion, type Actor } from "./queries";
 import { AppError } from "@/lib/api/errors";
 import { cachedRead } from "@/lib/cache/read-cache";
 import type { Role } from "./roles";
+import { decodeSession } from "./session-token";
 
 // The role is read from the database rather than trusted from the token, so a
 // removed or demoted member loses access at once. The answer rides on the short
@@ -48,25 +47,6 @@ async function readSession(): Promise<{ userId: string; groupId: string | null; 
   // Tokens issued before session versions existed carry none: they are over too.
   const sessionVersion = typeof token?.sessionVersion === "number" ? token.sessionVersion : -1;
   return { userId, groupId, sessionVersion };
-}
-
-// next-auth's own decode derives the same key with HKDF on every call (a trip
-// through libuv's thread pool per request); derive it once per secret instead.
-// Same derivation (HKDF-SHA256, empty salt, next-auth's info string), same JWE check.
-const sessionKeys = new Map<string, Uint8Array>();
-function sessionKey(secret: string): Uint8Array {
-  let key = sessionKeys.get(secret);
-  if (!key) {
-    key = new Uint8Array(hkdfSync("sha256", secret, "", "NextAuth.js Generated Encryption Key", 32));
-    sessionKeys.set(secret, key);
-  }
-  return key;
-}
-
-async function decodeSession({ token, secret }: JWTDecodeParams): Promise<JWT | null> {
-  if (!token) return null;
-  const { payload } = await jwtDecrypt(token, sessionKey(String(secret)), { clockTolerance: 15 });
-  return payload as JWT;
 }
 
 export async function requireUser(): Promise<Actor> {

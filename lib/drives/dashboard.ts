@@ -4,12 +4,21 @@ import { listDrives, listPledges } from "./queries";
 import { listFullBins } from "./fill-queries";
 import { unitCansOf } from "./public-queries";
 import { progressFor } from "./tallies";
+import { driveTiming, type DriveTiming } from "./current-drive";
+import { groupToday } from "./current-drive-queries";
 
-const today = () => new Date().toISOString().slice(0, 10);
+const TIMING_ORDER: Record<DriveTiming, number> = { running: 0, upcoming: 1, ended: 2 };
 
 /** What the organiser's home shows: each drive's progress, and what needs attention. */
 export async function organiserDashboard(groupId: string) {
-  const drives = await listDrives(groupId);
+  const [all, day] = await Promise.all([listDrives(groupId), groupToday(groupId)]);
+  const today = () => day;
+  // What is running first, then what starts soonest, then what ended most recently.
+  const drives = [...all].sort((a, b) => {
+    const [ta, tb] = [driveTiming(a, day), driveTiming(b, day)];
+    if (ta !== tb) return TIMING_ORDER[ta] - TIMING_ORDER[tb];
+    return ta === "upcoming" ? a.startsOn.localeCompare(b.startsOn) : b.endsOn.localeCompare(a.endsOn);
+  });
   const spare = await db("drives").select("id", "spare_percent").where({ group_id: groupId });
   const spareOf = new Map(spare.map((d) => [d.id as string, Number(d.spare_percent)]));
   return Promise.all(

@@ -1,5 +1,6 @@
 import "server-only";
 import { db } from "@/lib/db";
+import { notFound } from "@/lib/api/errors";
 import { UUID } from "@/lib/api/path";
 import { CURRENT_FILL_LATERAL } from "./fill";
 
@@ -124,3 +125,12 @@ export async function findPublicDropPoint(driveId: string, id: string) {
   if (!UUID.test(id)) return undefined;
   return db("drop_points").select("id", "group_id as groupId", "name", "hours", "fill_cleared_at as fillClearedAt").where({ id, drive_id: driveId, active: true }).first();
 }
+
+/** A public drive's id by its slug; 404 when there is none. */
+export async function publicDriveId(slug: string): Promise<string> {
+  const drive = await db("drives").select("id").where({ slug, is_public: true }).first();
+  if (!drive) throw notFound("That drive");
+  return drive.id;
+}
+
+// The organiser's ledger list lives in ./ledger-list (paging, order, undo links).

@@ -120,3 +120,19 @@ export async function listFillReports(groupId: string, driveId: string, limit = 
     .orderBy("f.created_at", "desc")
     .limit(limit);
 }
+
+/** Drives with their dates and active drop points, for the entry forms; latest end first (pages choose with pageDrive). */
+export async function listLogDrives(groupId: string) {
+  const drives = await db("drives")
+    .select("id", "name", db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`), db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`))
+    .where({ group_id: groupId })
+    .orderBy([{ column: "ends_on", order: "desc" }, { column: "name" }]);
+  const points = await db("drop_points").select("id", "name", "drive_id").where({ group_id: groupId, active: true }).orderBy("name");
+  return drives.map((d) => ({
+    id: d.id as string,
+    name: d.name as string,
+    startsOn: d.startsOn as string,
+    endsOn: d.endsOn as string,
+    dropPoints: points.filter((p) => p.drive_id === d.id).map((p) => ({ id: p.id as string, name: p.name as string })),
+  }));
+}

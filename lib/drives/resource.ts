@@ -1,7 +1,7 @@
 import "server-only";
 import { notFound } from "@/lib/api/errors";
 import type { Resolver } from "@/lib/api/endpoint";
-import { publicDriveId } from "@/lib/ledger/queries";
+import { publicDriveId } from "@/lib/drives/public-queries";
 import { findDrive, findDropPoint, type DriveRecord, type DropPointRecord } from "./queries";
 
 // How routes resolve the drives and drop points they act on (endpoint's `resource`):

@@ -3,7 +3,9 @@ import type { Knex } from "knex";
 import { db } from "@/lib/db";
 import { notFound, AppError } from "@/lib/api/errors";
 import { UUID } from "@/lib/api/path";
+import { heaterClaims } from "@/lib/ledger/balances";
 import { computeCanGrid } from "./can-grid";
+import { unitNeed } from "./need";
 import type { CanGridInput, LengthUnit } from "./schemas";
 import type { HeaterState } from "./unit-schemas";
 
@@ -166,4 +168,36 @@ export async function createHeaterUnit(
 export async function groupLatitude(groupId: string): Promise<number | null> {
   const row = await db("groups").select("workshop_lat").where({ id: groupId }).first();
   return row?.workshop_lat ?? null;
+}
+
+/** The contract's `GET /api/heaters`, plus each unit's need (cans + its spare share) and what it still needs. */
+export async function listHeatersWithClaims(groupId: string) {
+  const [units, claims] = await Promise.all([
+    db("heater_units as h")
+      .leftJoin("drives as d", function () {
+        this.on("d.id", "=", "h.drive_id").andOn("d.group_id", "=", "h.group_id");
+      })
+      .select("h.id", "h.name", "h.drive_id", "h.builder_id", "h.cans", "h.state", db.raw("coalesce(d.spare_percent, 0)::float as spare_percent"))
+      .where("h.group_id", groupId)
+      .orderBy("h.created_at"),
+    heaterClaims(groupId),
+  ]);
+  return units.map((u) => {
+    const claimed = claims[u.id]?.claimed ?? 0;
+    const builtIn = claims[u.id]?.builtIn ?? 0;
+    const n = unitNeed(u.cans as number, Number(u.spare_percent), claimed, builtIn);
+    return {
+      id: u.id as string,
+      name: u.name as string,
+      driveId: u.drive_id as string | null,
+      builderId: u.builder_id as string | null,
+      cans: u.cans as number,
+      claimed,
+      builtIn,
+      state: u.state as string,
+      spare: n.spare,
+      need: n.need,
+      remaining: n.remaining,
+    };
+  });
 }

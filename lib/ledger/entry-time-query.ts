@@ -21,3 +21,10 @@ export async function resolveEntryTime(
   if (!row) throw notFound("That drive");
   return entryTime(value, given.happenedAt ? "happenedAt" : given.legacyField, row.startsOn as string);
 }
+
+/** resolveEntryTime when the caller has already read the drive's start (YYYY-MM-DD) with its other rows. */
+export function entryTimeOf(given: { happenedAt?: string; legacy?: string; legacyField: string }, startsOn: string): Date {
+  const value = given.happenedAt ?? given.legacy;
+  if (!value) return new Date();
+  return entryTime(value, given.happenedAt ? "happenedAt" : given.legacyField, startsOn);
+}

@@ -1,16 +1,18 @@
 import type { Knex } from "knex";
 import { AppError, conflict, notFound } from "@/lib/api/errors";
 import { needRefusalMessage } from "@/lib/heaters/need";
-import type { LineReason, Stage } from "./schemas";
-import { countOf, noun, plural } from "@/lib/plural";
+import type { LineReason, MovementKind, Stage } from "./schemas";
+import { countOf } from "@/lib/plural";
 
-// The one place ledger lines are written. postMovement hands the movement to
-// ledger_post() in PostgreSQL, which locks the drive (so writes to one drive
-// run one after another and checks see settled balances), checks the debits,
-// then writes the lines and the running totals, all in one round trip, so the
-// lock is held for microseconds rather than a dozen network round trips. A
-// refusal comes back as a message that says what is left. The CHECK
-// (quantity >= 0) on the totals is the last line of defence.
+// The one place ledger lines are written. Every writer ends in one call of a
+// function in db/functions/ (ledger_post, or ledger_haul / ledger_sort /
+// ledger_reverse / ledger_unit, which call it): the function locks the drive
+// (so writes to one drive run one after another and checks see settled
+// balances), re-checks what the writer read before, then writes the rows, the
+// lines and every running total before it returns, so the drive's lock is held
+// only inside the database, never across a network round trip. A refusal comes
+// back as a message that says what is left. The CHECK (quantity >= 0) on the
+// totals is the last line of defence.
 
 export type Trx = Knex.Transaction;
 
@@ -46,7 +48,7 @@ export interface MovementSpec {
   groupId: string;
   driveId: string;
   actorId: string;
-  kind: "haul" | "sort" | "processing" | "claim" | "release" | "builtIn" | "recycling" | "reversal" | "stockCount";
+  kind: MovementKind;
   occurredAt?: Date;
   reversesMovementId?: string;
   details?: Record<string, unknown>;
@@ -56,14 +58,7 @@ export interface MovementSpec {
   movementId?: string;
 }
 
-/** Runs `fn` in the caller's transaction when there is one, else in a new one. */
-// (No "server-only" here or in write*.ts/reverse.ts: the demo seed runs these in
-// plain Node with its own transaction. record.ts is the server's entry point.)
-export function inTx<T>(conn: Knex | Trx, fn: (trx: Trx) => Promise<T>): Promise<T> {
-  return (conn as Trx).isTransaction ? fn(conn as Trx) : conn.transaction(fn);
-}
-
-/** Locks the drive for ledger writes; another group's drive is 404. */
+/** Locks the drive for a caller that changes other rows under it first (a unit's state move); another group's drive is 404. */
 export async function lockDrive(trx: Trx, groupId: string, driveId: string): Promise<{ id: string; name: string }> {
   const row = await trx("drives").select("id", "name").where({ id: driveId, group_id: groupId }).forNoKeyUpdate().first();
   if (!row) throw notFound("That drive");
@@ -74,33 +69,41 @@ export function isoDay(d: Date): string {
   return d.toISOString().slice(0, 10);
 }
 
-/** One call of ledger_post, ready to run alone or inside another statement. */
+/** One call of a ledger function, ready to run alone or inside another statement. */
 export interface LedgerCall {
   sql: string;
   bindings: [string];
 }
 
-export async function postMovement(trx: Trx, m: MovementSpec, lines: LineSpec[]): Promise<{ movementId: string; lineIds: string[] }> {
-  return runLedgerCall(trx, ledgerPostCall(m, lines));
+/** A writer's own refusals (CT409 detail kinds raised by its function), as the messages people see. */
+export type OwnRefusals = Record<string, (detail: Record<string, unknown>) => AppError>;
+
+export async function postMovement(conn: Knex | Trx, m: MovementSpec, lines: LineSpec[]): Promise<{ movementId: string; lineIds: string[] }> {
+  return runLedgerCall(conn, ledgerPostCall(m, lines));
 }
 
-export async function runLedgerCall(conn: Knex | Trx, call: LedgerCall): Promise<{ movementId: string; lineIds: string[] }> {
+export async function runLedgerCall(conn: Knex | Trx, call: LedgerCall, own?: OwnRefusals): Promise<{ movementId: string; lineIds: string[] }> {
+  const r = await runLedgerFunction<{ movementId: string; lineIds: (string | number)[] }>(conn, call, own);
+  return { movementId: r.movementId, lineIds: r.lineIds.map(String) };
+}
+
+/** Runs the call (one round trip) and returns the function's JSON answer; its refusals become AppErrors. */
+export async function runLedgerFunction<T>(conn: Knex | Trx, call: LedgerCall, own?: OwnRefusals): Promise<T> {
   try {
     const { rows } = await conn.raw(`select ${call.sql} as r`, call.bindings);
-    const r = rows[0].r as { movementId: string; lineIds: (string | number)[] };
-    return { movementId: r.movementId, lineIds: r.lineIds.map(String) };
+    return rows[0].r as T;
   } catch (error) {
-    throw ledgerRefusal(error) ?? error;
+    throw ledgerRefusal(error, own) ?? error;
   }
 }
 
-export function ledgerPostCall(m: MovementSpec, lines: LineSpec[]): LedgerCall {
+/** The payload every ledger function takes (see db/functions/ledger_post.sql), with a writer's own fields in `extra`. */
+export function ledgerPayload(m: MovementSpec, lines: LineSpec[], extra: Record<string, unknown> = {}) {
   for (const line of lines) {
     if (!Number.isInteger(line.quantity) || line.quantity <= 0) throw new AppError("internal", "A ledger line needs a positive whole quantity.");
   }
   const occurredAt = m.occurredAt ?? new Date();
-  // One round trip: ledger_post (db/migrations/*_ledger_post_function.ts) locks the drive, checks, writes lines and totals.
-  const payload = {
+  return {
     groupId: m.groupId,
     driveId: m.driveId,
     actorId: m.actorId,
@@ -125,16 +128,31 @@ export function ledgerPostCall(m: MovementSpec, lines: LineSpec[]): LedgerCall {
       reversesId: l.reversesId ?? null,
       countedDay: l.countedDay ?? null,
     })),
+    ...extra,
   };
-  return { sql: "ledger_post(?::jsonb)", bindings: [JSON.stringify(payload)] };
 }
 
+/** `fn` is one of db/functions' ledger functions; the payload is ledgerPayload's. */
+export function ledgerCall(fn: "ledger_post" | "ledger_haul" | "ledger_sort" | "ledger_reverse" | "ledger_unit", payload: object): LedgerCall {
+  return { sql: `${fn}(?::jsonb)`, bindings: [JSON.stringify(payload)] };
+}
+
+export function ledgerPostCall(m: MovementSpec, lines: LineSpec[], extra?: Record<string, unknown>): LedgerCall {
+  return ledgerCall("ledger_post", ledgerPayload(m, lines, extra));
+}
+
+const NOT_FOUND_LABEL: Record<string, string> = { drive: "That drive", dropPoint: "That drop point", haul: "One of those hauls" };
+
 /** The function's refusals as the messages people see; anything else is not ours to translate. */
-export function ledgerRefusal(error: unknown): AppError | null {
+export function ledgerRefusal(error: unknown, own?: OwnRefusals): AppError | null {
   const e = error as { code?: string; detail?: string };
-  if (e?.code === "CT404") return notFound("That drive");
+  if (e?.code === "CT404") {
+    const what = (JSON.parse(e.detail || "{}") as { what?: string }).what ?? "drive";
+    return notFound(NOT_FOUND_LABEL[what] ?? "That record");
+  }
   if (e?.code !== "CT409") return null;
   const d = JSON.parse(e.detail ?? "{}") as { kind: string; stage?: Stage; needed?: number; available?: number; remaining?: number; cans?: number; spare?: number };
+  if (own && Object.hasOwn(own, d.kind)) return own[d.kind](d as Record<string, unknown>);
   if (d.kind === "need") {
     // From the unit-need trigger (migration 20261203030000): the claim would pass cans + spare.
     const n = { remaining: Number(d.remaining), cans: Number(d.cans), spare: Number(d.spare) };
@@ -143,29 +161,10 @@ export function ledgerRefusal(error: unknown): AppError | null {
   if (d.kind === "debit" && d.stage) {
     const have = Number(d.available);
     const needed = Number(d.needed);
-    return conflict(`That needs ${countOf(needed, "can")} ${STAGE_LABEL[d.stage]}, but only ${have} ${plural(have, noun("is", "are"))} left.`, { available: have, stage: d.stage });
+    return conflict(`That needs ${countOf(needed, "can")} ${STAGE_LABEL[d.stage]}, but only ${have} left.`, { available: have, stage: d.stage });
   }
   const before = Number(d.available);
   return conflict(`Not enough unclaimed cans: only ${before} left unclaimed. Release a claim first, or claim fewer.`, {
     available: Math.max(0, before),
   });
-}
-
-export async function bumpDropPoint(
-  trx: Trx,
-  groupId: string,
-  driveId: string,
-  dropPointId: string,
-  delta: Partial<Record<"hauls" | "bags" | "good_cans" | "rejected_cans", number>>,
-): Promise<void> {
-  const v = { hauls: 0, bags: 0, good_cans: 0, rejected_cans: 0, ...delta };
-  await trx.raw(
-    `insert into drop_point_tallies (drop_point_id, group_id, drive_id) values (?, ?, ?) on conflict (drop_point_id) do nothing`,
-    [dropPointId, groupId, driveId],
-  );
-  await trx.raw(
-    `update drop_point_tallies set hauls = hauls + ?, bags = bags + ?, good_cans = good_cans + ?, rejected_cans = rejected_cans + ?
-     where drop_point_id = ?`,
-    [v.hauls, v.bags, v.good_cans, v.rejected_cans, dropPointId],
-  );
 }

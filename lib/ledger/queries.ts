@@ -1,8 +1,6 @@
 import "server-only";
 import { db } from "@/lib/db";
 import { notFound } from "@/lib/api/errors";
-import { unitNeed } from "@/lib/heaters/need";
-import { heaterClaims } from "./balances";
 
 export async function listHauls(groupId: string, driveId: string, opts: { open?: boolean } = {}) {
   const drive = await db("drives").select("id").where({ id: driveId, group_id: groupId }).first();
@@ -32,45 +30,6 @@ export async function listHauls(groupId: string, driveId: string, opts: { open?:
   }));
 }
 
-/** The contract's `GET /api/heaters`, plus each unit's need (cans + its spare share) and what it still needs. */
-export async function listHeatersWithClaims(groupId: string) {
-  const [units, claims] = await Promise.all([
-    db("heater_units as h")
-      .leftJoin("drives as d", function () {
-        this.on("d.id", "=", "h.drive_id").andOn("d.group_id", "=", "h.group_id");
-      })
-      .select("h.id", "h.name", "h.drive_id", "h.builder_id", "h.cans", "h.state", db.raw("coalesce(d.spare_percent, 0)::float as spare_percent"))
-      .where("h.group_id", groupId)
-      .orderBy("h.created_at"),
-    heaterClaims(groupId),
-  ]);
-  return units.map((u) => {
-    const claimed = claims[u.id]?.claimed ?? 0;
-    const builtIn = claims[u.id]?.builtIn ?? 0;
-    const n = unitNeed(u.cans as number, Number(u.spare_percent), claimed, builtIn);
-    return {
-      id: u.id as string,
-      name: u.name as string,
-      driveId: u.drive_id as string | null,
-      builderId: u.builder_id as string | null,
-      cans: u.cans as number,
-      claimed,
-      builtIn,
-      state: u.state as string,
-      spare: n.spare,
-      need: n.need,
-      remaining: n.remaining,
-    };
-  });
-}
-
-export async function publicDriveId(slug: string): Promise<string> {
-  const drive = await db("drives").select("id").where({ slug, is_public: true }).first();
-  if (!drive) throw notFound("That drive");
-  return drive.id;
-}
-
-// The organiser's ledger list lives in ./ledger-list (paging, order, undo links).
 export { listLedger } from "./ledger-list";
 export type { LedgerRow } from "./ledger-row";
 
@@ -98,26 +57,6 @@ export async function listMyEntries(groupId: string, userId: string, limit = 15)
     estimated: Number(r.estimated),
     undone: r.reversed_by !== null,
   }));
-}
-
-/** Drives with their dates and active drop points, for the entry forms; latest end first (pages choose with pageDrive). */
-export async function listLogDrives(groupId: string) {
-  const drives = await db("drives")
-    .select("id", "name", db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`), db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`))
-    .where({ group_id: groupId })
-    .orderBy([{ column: "ends_on", order: "desc" }, { column: "name" }]);
-  const points = await db("drop_points").select("id", "name", "drive_id").where({ group_id: groupId, active: true }).orderBy("name");
-  return drives.map((d) => ({
-    id: d.id as string,
-    name: d.name as string,
-    startsOn: d.startsOn as string,
-    endsOn: d.endsOn as string,
-    dropPoints: points.filter((p) => p.drive_id === d.id).map((p) => ({ id: p.id as string, name: p.name as string })),
-  }));
-}
-
-export async function listGroupPeople(groupId: string) {
-  return db("memberships as m").join("users as u", "u.id", "m.user_id").select("u.id", "u.name").where("m.group_id", groupId).orderBy("u.name") as Promise<{ id: string; name: string }[]>;
 }
 
 /** What the organiser's charts need about one drive: its start, spare and the cans of its units. */

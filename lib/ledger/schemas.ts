@@ -29,10 +29,17 @@ export const LOSS_STEP: Record<LossReason, (typeof PROCESS_TO)[number]> = { dama
 export const TALLY_REASONS = [...REJECT_REASONS, ...LOSS_REASONS] as const;
 export type TallyReason = (typeof TALLY_REASONS)[number];
 /** A ledger line's reason: a reject's or loss's, or `stockCount` on the lines of a stock count's adjustment. */
-export type LineReason = TallyReason | "stockCount";
+export const LINE_REASONS = [...TALLY_REASONS, "stockCount"] as const;
+export type LineReason = (typeof LINE_REASONS)[number];
 
+// The one list of stages, reasons (above) and movement kinds. The database's CHECK
+// constraints allow exactly these (tests/integration/ledger-codes.test.ts); a new
+// code is added here and in a migration that widens those checks.
 export const STAGES = ["hauled", "good", "washed", "opened", "punched", "claimed", "builtIn", "rejected", "recycled"] as const;
 export type Stage = (typeof STAGES)[number];
+
+export const MOVEMENT_KINDS = ["haul", "sort", "processing", "claim", "release", "builtIn", "recycling", "reversal", "stockCount"] as const;
+export type MovementKind = (typeof MOVEMENT_KINDS)[number];
 
 export const PROCESS_FROM = ["good", "washed", "opened"] as const;
 export const PROCESS_TO = ["washed", "opened", "punched"] as const;

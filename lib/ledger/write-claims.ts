@@ -1,71 +1,57 @@
 import type { Knex } from "knex";
 import { conflict, notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
-import { inTx, lockDrive, postMovement, type Trx } from "./post";
+import { ledgerCall, ledgerPayload, runLedgerFunction, type LineSpec, type OwnRefusals } from "./post";
 
 // Claims reserve processed cans (good, washed, opened or punched) of a drive
 // for one heater unit; the drive's unclaimed cans can never go below zero.
 // Building in consumes punched cans and the same number from the unit's claim.
+// The unit is read first; ledger_unit (db/functions/ledger_writers.sql) then
+// locks the drive and the unit, checks the unit is still on that drive (and
+// not installed, for a claim), posts the lines and moves the unit's state.
 
 type Conn = Knex | Knex.Transaction;
+type Action = "claim" | "release" | "builtIn";
 
-async function lockedUnit(trx: Trx, actor: Actor, heaterUnitId: string) {
-  const unit = await trx("heater_units").select("id", "drive_id", "name").where({ id: heaterUnitId, group_id: actor.group.id }).first();
+const REFUSALS: OwnRefusals = {
+  unitMoved: () => conflict("The unit moved to another drive meanwhile; try again."),
+  unitInstalled: () => conflict("This unit is already installed; it takes no more cans."),
+};
+
+async function postForUnit(actor: Actor, heaterUnitId: string, action: Action, lines: (unitId: string) => LineSpec[], conn: Conn) {
+  const unit = await conn("heater_units").select("id", "drive_id", "state").where({ id: heaterUnitId, group_id: actor.group.id }).first();
   if (!unit) throw notFound("That heater unit");
   if (!unit.drive_id) throw conflict("This unit is not counted against a drive yet; add it to a drive before claiming cans.");
-  // Drive first, then the unit: every writer takes locks in this order.
-  await lockDrive(trx, actor.group.id, unit.drive_id);
-  const locked = await trx("heater_units").select("id", "drive_id", "name", "state").where({ id: unit.id }).forNoKeyUpdate().first();
-  if (!locked || locked.drive_id !== unit.drive_id) throw conflict("The unit moved to another drive meanwhile; try again.");
-  return locked as { id: string; drive_id: string; name: string; state: string };
+  if (action === "claim" && unit.state === "installed") throw REFUSALS.unitInstalled({});
+  const payload = ledgerPayload(
+    { groupId: actor.group.id, driveId: unit.drive_id, actorId: actor.user.id, kind: action, details: { heaterUnitId: unit.id } },
+    lines(unit.id),
+    { unit: { id: unit.id, action } },
+  );
+  const r = await runLedgerFunction<{ movementId: string; state: string; claimed: number | string; builtIn: number | string }>(conn, ledgerCall("ledger_unit", payload), REFUSALS);
+  return { movementId: r.movementId, heaterUnitId: unit.id as string, driveId: unit.drive_id as string, state: r.state, claimed: Number(r.claimed), builtIn: Number(r.builtIn) };
 }
 
 export async function recordClaim(actor: Actor, heaterUnitId: string, quantity: number, conn: Conn, note?: string) {
-  return inTx(conn, async (trx) => {
-    const unit = await lockedUnit(trx, actor, heaterUnitId);
-    if (unit.state === "installed") throw conflict("This unit is already installed; it takes no more cans.");
-    const { movementId } = await postMovement(
-      trx,
-      { groupId: actor.group.id, driveId: unit.drive_id, actorId: actor.user.id, kind: "claim", details: { heaterUnitId: unit.id } },
-      [{ from: null, to: "claimed", quantity, heaterUnitId: unit.id, note }],
-    );
-    const state = unit.state === "planned" ? "claiming" : unit.state;
-    if (state !== unit.state) await trx("heater_units").where({ id: unit.id }).update({ state });
-    return { movementId, heaterUnitId: unit.id, driveId: unit.drive_id, quantity, state, ...(await unitTotals(trx, unit.id)) };
-  });
+  const r = await postForUnit(actor, heaterUnitId, "claim", (id) => [{ from: null, to: "claimed", quantity, heaterUnitId: id, note }], conn);
+  return { movementId: r.movementId, heaterUnitId: r.heaterUnitId, driveId: r.driveId, quantity, state: r.state, claimed: r.claimed, builtIn: r.builtIn };
 }
 
 export async function releaseClaim(actor: Actor, heaterUnitId: string, quantity: number, conn: Conn, note?: string) {
-  return inTx(conn, async (trx) => {
-    const unit = await lockedUnit(trx, actor, heaterUnitId);
-    const { movementId } = await postMovement(
-      trx,
-      { groupId: actor.group.id, driveId: unit.drive_id, actorId: actor.user.id, kind: "release", details: { heaterUnitId: unit.id } },
-      [{ from: "claimed", to: null, quantity, heaterUnitId: unit.id, note }],
-    );
-    return { movementId, heaterUnitId: unit.id, driveId: unit.drive_id, quantity, state: unit.state, ...(await unitTotals(trx, unit.id)) };
-  });
+  const r = await postForUnit(actor, heaterUnitId, "release", (id) => [{ from: "claimed", to: null, quantity, heaterUnitId: id, note }], conn);
+  return { movementId: r.movementId, heaterUnitId: r.heaterUnitId, driveId: r.driveId, quantity, state: r.state, claimed: r.claimed, builtIn: r.builtIn };
 }
 
 export async function recordBuiltIn(actor: Actor, heaterUnitId: string, quantity: number, conn: Conn, note?: string) {
-  return inTx(conn, async (trx) => {
-    const unit = await lockedUnit(trx, actor, heaterUnitId);
-    const { movementId } = await postMovement(
-      trx,
-      { groupId: actor.group.id, driveId: unit.drive_id, actorId: actor.user.id, kind: "builtIn", details: { heaterUnitId: unit.id } },
-      [
-        { from: "claimed", to: null, quantity, heaterUnitId: unit.id, note },
-        { from: "punched", to: "builtIn", quantity, heaterUnitId: unit.id, note },
-      ],
-    );
-    const state = unit.state === "planned" || unit.state === "claiming" ? "building" : unit.state;
-    if (state !== unit.state) await trx("heater_units").where({ id: unit.id }).update({ state });
-    return { movementId, heaterUnitId: unit.id, driveId: unit.drive_id, quantity, state, ...(await unitTotals(trx, unit.id)) };
-  });
-}
-
-async function unitTotals(trx: Trx, heaterUnitId: string): Promise<{ claimed: number; builtIn: number }> {
-  const rows = await trx("stage_balances").select("stage", "quantity").where({ heater_unit_id: heaterUnitId });
-  const of = (stage: string) => Number(rows.find((r) => r.stage === stage)?.quantity ?? 0);
-  return { claimed: of("claimed"), builtIn: of("builtIn") };
+  const r = await postForUnit(
+    actor,
+    heaterUnitId,
+    "builtIn",
+    (id) => [
+      { from: "claimed", to: null, quantity, heaterUnitId: id, note },
+      { from: "punched", to: "builtIn", quantity, heaterUnitId: id, note },
+    ],
+    conn,
+  );
+  return { movementId: r.movementId, heaterUnitId: r.heaterUnitId, driveId: r.driveId, quantity, state: r.state, claimed: r.claimed, builtIn: r.builtIn };
 }

@@ -4,162 +4,116 @@ import { AppError, conflict, notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
 import { estimateHaulCans } from "./estimate";
 import { allocate } from "./allocate";
-import { loadCalibration, calibrationDelta, applyCalibration } from "./calibration";
-import { resolveEntryTime } from "./entry-time-query";
+import { calibrationDelta, calibrationOfRow } from "./calibration";
+import { entryTimeOf, resolveEntryTime } from "./entry-time-query";
 import { askUnlessConfirmed, checkHaul, checkSort } from "./plausibility";
-import { bumpDropPoint, inTx, ledgerPostCall, lockDrive, postMovement, runLedgerCall, type LedgerCall, type LineSpec } from "./post";
+import { ledgerCall, ledgerPayload, ledgerPostCall, postMovement, runLedgerCall, runLedgerFunction, type LedgerCall, type LineSpec, type OwnRefusals } from "./post";
 import { REJECT_REASONS, UNDER_ONE_CAN, type HaulInput, type LossReason, type ProcessingInput, type RecyclingInput, type SortInput } from "./schemas";
 
-// Writers of the ledger. Each is one transaction (or joins the caller's, as
-// the Idempotency-Key helper does). ledger_post locks the drive and checks the
-// group itself; a writer that reads other rows first (hauls, sorts) locks the
-// drive before those reads with lockDrive.
+// Writers of the ledger. Each reads what it needs first, without a lock, then
+// makes one call of a ledger function (db/functions/), which locks the drive,
+// re-checks what could have changed meanwhile and writes everything; so the
+// drive's lock is held only inside the database. A writer joins the caller's
+// transaction when given one (the Idempotency-Key helper's), else each
+// statement commits on its own.
 
 type Conn = Knex | Knex.Transaction;
 
 export async function recordHaul(actor: Actor, driveId: string, input: HaulInput, conn: Conn) {
-  return inTx(conn, async (trx) => {
-    const groupId = actor.group.id;
-    await lockDrive(trx, groupId, driveId);
-    const point = await trx("drop_points").select("id", "name", "capacity_bags").where({ id: input.dropPointId, drive_id: driveId, group_id: groupId }).first();
-    if (!point) throw notFound("That drop point");
-    const hauledAt = await resolveEntryTime(trx, { groupId, driveId }, { happenedAt: input.happenedAt, legacy: input.hauledAt, legacyField: "hauledAt" });
-    const calibration = await loadCalibration(trx, groupId);
-    const est = estimateHaulCans({ bags: input.bags, weightKg: input.weightKg ?? null }, calibration);
-    // The schema's minimum uses the default can mass; a group whose counted cans
-    // are heavier can still estimate a light weight at no cans.
-    if (input.weightKg && est.cans === 0) throw new AppError("invalid_input", "Some fields need another look.", { fields: { weightKg: UNDER_ONE_CAN } });
-    const byBags = estimateHaulCans({ bags: input.bags }, calibration);
-    const weighed = est.method === "weight";
-    askUnlessConfirmed(checkHaul({ bags: input.bags, capacityBags: point.capacity_bags, cansByWeight: weighed ? est.cans : null, cansPerBag: byBags.perUnit }), input.confirmUnusual);
+  const groupId = actor.group.id;
+  // The drive, the drop point and the group's calibration in one read.
+  const { rows } = await conn.raw(
+    `select to_char(d.starts_on, 'YYYY-MM-DD') as "startsOn", p.id as point_id, p.name as point_name, p.capacity_bags, c.*
+     from drives d
+     left join drop_points p on p.id = ? and p.drive_id = d.id and p.group_id = d.group_id
+     left join group_calibration c on c.group_id = d.group_id
+     where d.id = ? and d.group_id = ?`,
+    [input.dropPointId, driveId, groupId],
+  );
+  const row = rows[0];
+  if (!row) throw notFound("That drive");
+  if (!row.point_id) throw notFound("That drop point");
+  const hauledAt = entryTimeOf({ happenedAt: input.happenedAt, legacy: input.hauledAt, legacyField: "hauledAt" }, row.startsOn);
+  // Calibration is the group's, across drives; the estimate uses it as it stood when the haul arrived.
+  const calibration = calibrationOfRow(row);
+  const est = estimateHaulCans({ bags: input.bags, weightKg: input.weightKg ?? null }, calibration);
+  // The schema's minimum uses the default can mass; a group whose counted cans
+  // are heavier can still estimate a light weight at no cans.
+  if (input.weightKg && est.cans === 0) throw new AppError("invalid_input", "Some fields need another look.", { fields: { weightKg: UNDER_ONE_CAN } });
+  const byBags = estimateHaulCans({ bags: input.bags }, calibration);
+  const weighed = est.method === "weight";
+  askUnlessConfirmed(checkHaul({ bags: input.bags, capacityBags: row.capacity_bags, cansByWeight: weighed ? est.cans : null, cansPerBag: byBags.perUnit }), input.confirmUnusual);
 
-    const [movement] = await trx("movements")
-      .insert({ group_id: groupId, drive_id: driveId, kind: "haul", recorded_by: actor.user.id, occurred_at: hauledAt, details: "{}" })
-      .returning("id");
-    const [haul] = await trx("hauls")
-      .insert({
-        group_id: groupId,
-        drive_id: driveId,
-        drop_point_id: point.id,
-        movement_id: movement.id,
-        bags: input.bags,
-        weight_kg: input.weightKg ?? null,
-        estimated_cans: est.cans,
-        estimate_method: est.method,
-        estimate_per_unit: est.perUnit,
-        estimate_counted_hauls: est.basis.countedHauls,
-        hauled_at: hauledAt,
-        recorded_by: actor.user.id,
-      })
-      .returning(["id", "hauled_at"]);
-    if (est.cans > 0) {
-      await postLinesOnly(trx, movement.id, { groupId, driveId, actorId: actor.user.id, occurredAt: hauledAt }, [
-        { from: null, to: "hauled", quantity: est.cans, dropPointId: point.id, isEstimate: true, haulId: haul.id, note: input.note },
-      ]);
-    }
-    await bumpDropPoint(trx, groupId, driveId, point.id, { hauls: 1, bags: input.bags });
-    return {
-      id: haul.id as string,
-      movementId: movement.id as string,
-      driveId,
-      dropPointId: point.id as string,
-      dropPointName: point.name as string,
-      bags: input.bags,
-      weightKg: input.weightKg ?? null,
-      estimatedCans: est.cans,
-      estimate: { method: est.method, perUnit: est.perUnit, countedHauls: est.basis.countedHauls, calibrated: est.basis.calibrated },
-      hauledAt: new Date(haul.hauled_at).toISOString(),
-    };
-  });
+  const haulId = randomUUID();
+  const movementId = randomUUID();
+  const lines: LineSpec[] = est.cans > 0 ? [{ from: null, to: "hauled", quantity: est.cans, dropPointId: row.point_id, isEstimate: true, haulId, note: input.note }] : [];
+  const haul = {
+    id: haulId,
+    dropPointId: row.point_id,
+    bags: input.bags,
+    weightKg: input.weightKg ?? null,
+    estimatedCans: est.cans,
+    method: est.method,
+    perUnit: est.perUnit,
+    countedHauls: est.basis.countedHauls,
+  };
+  await runLedgerFunction(conn, ledgerCall("ledger_haul", ledgerPayload({ groupId, driveId, actorId: actor.user.id, kind: "haul", occurredAt: hauledAt, movementId }, lines, { haul })));
+  return {
+    id: haulId,
+    movementId,
+    driveId,
+    dropPointId: row.point_id as string,
+    dropPointName: row.point_name as string,
+    bags: input.bags,
+    weightKg: input.weightKg ?? null,
+    estimatedCans: est.cans,
+    estimate: { method: est.method, perUnit: est.perUnit, countedHauls: est.basis.countedHauls, calibrated: est.basis.calibrated },
+    hauledAt: hauledAt.toISOString(),
+  };
 }
 
-/**
- * A haul's movement row is written before the haul (the haul refers to it),
- * so its lines go through postMovement's checks with the movement already in place.
- */
-async function postLinesOnly(
-  trx: Knex.Transaction,
-  movementId: string,
-  m: { groupId: string; driveId: string; actorId: string; occurredAt: Date },
-  lines: LineSpec[],
-) {
-  return postMovement(trx, { ...m, kind: "haul", existingMovementId: movementId }, lines);
-}
+const SORT_REFUSALS: OwnRefusals = {
+  haulUndone: () => conflict("One of those hauls was undone; leave it out of the sort."),
+  haulSorted: () => conflict("One of those hauls is already sorted; each haul is counted once."),
+};
 
 export async function recordSort(actor: Actor, driveId: string, input: SortInput, conn: Conn) {
-  return inTx(conn, async (trx) => {
-    const groupId = actor.group.id;
-    await lockDrive(trx, groupId, driveId);
-    const hauls = await trx("hauls")
-      .select("id", "drop_point_id", "bags", "weight_kg", "estimated_cans", "sort_id", "reversed_at")
-      .whereIn("id", input.haulIds)
-      .andWhere({ group_id: groupId, drive_id: driveId })
-      .orderBy("hauled_at");
-    if (hauls.length !== input.haulIds.length) throw notFound("One of those hauls");
-    if (hauls.some((h) => h.reversed_at)) throw conflict("One of those hauls was undone; leave it out of the sort.");
-    if (hauls.some((h) => h.sort_id)) throw conflict("One of those hauls is already sorted; each haul is counted once.");
+  const groupId = actor.group.id;
+  const { rows } = await conn.raw(
+    `select to_char(d.starts_on, 'YYYY-MM-DD') as "startsOn",
+            coalesce((select json_agg(json_build_object('id', h.id, 'drop_point_id', h.drop_point_id, 'bags', h.bags, 'weight_kg', h.weight_kg,
+                                                        'estimated_cans', h.estimated_cans, 'sort_id', h.sort_id, 'reversed_at', h.reversed_at)
+                                      order by h.hauled_at)
+                      from hauls h where h.id = any (?::uuid[]) and h.group_id = d.group_id and h.drive_id = d.id), '[]') as hauls
+     from drives d where d.id = ? and d.group_id = ?`,
+    [input.haulIds, driveId, groupId],
+  );
+  if (!rows[0]) throw notFound("That drive");
+  const hauls = rows[0].hauls as { id: string; drop_point_id: string; bags: number; weight_kg: number | null; estimated_cans: number; sort_id: string | null; reversed_at: string | null }[];
+  if (hauls.length !== input.haulIds.length) throw notFound("One of those hauls");
+  if (hauls.some((h) => h.reversed_at)) throw SORT_REFUSALS.haulUndone({});
+  if (hauls.some((h) => h.sort_id)) throw SORT_REFUSALS.haulSorted({});
 
-    const rejected = Object.fromEntries(REJECT_REASONS.map((r) => [r, input.rejected[r] ?? 0])) as Record<string, number>;
-    const rejectedTotal = Object.values(rejected).reduce((s, n) => s + n, 0);
-    const counted = input.good + rejectedTotal;
-    const bags = hauls.reduce((s, h) => s + h.bags, 0);
-    const allWeighed = hauls.every((h) => h.weight_kg !== null);
-    const weightKg = allWeighed ? hauls.reduce((s, h) => s + Number(h.weight_kg), 0) : null;
-    const estimated = hauls.reduce((s, h) => s + h.estimated_cans, 0);
-    askUnlessConfirmed(checkSort({ counted, estimated, bags, hauls: hauls.length }), input.confirmUnusual);
-    const sortedAt = await resolveEntryTime(trx, { groupId, driveId }, { happenedAt: input.happenedAt, legacy: input.sortedAt, legacyField: "sortedAt" });
-    const details = { good: input.good, rejected, counted, haulCount: hauls.length, bags, weightKg };
+  const rejected = Object.fromEntries(REJECT_REASONS.map((r) => [r, input.rejected[r] ?? 0])) as Record<string, number>;
+  const rejectedTotal = Object.values(rejected).reduce((s, n) => s + n, 0);
+  const counted = input.good + rejectedTotal;
+  const bags = hauls.reduce((s, h) => s + h.bags, 0);
+  const allWeighed = hauls.every((h) => h.weight_kg !== null);
+  const weightKg = allWeighed ? hauls.reduce((s, h) => s + Number(h.weight_kg), 0) : null;
+  const estimated = hauls.reduce((s, h) => s + h.estimated_cans, 0);
+  askUnlessConfirmed(checkSort({ counted, estimated, bags, hauls: hauls.length }), input.confirmUnusual);
+  const sortedAt = entryTimeOf({ happenedAt: input.happenedAt, legacy: input.sortedAt, legacyField: "sortedAt" }, rows[0].startsOn);
+  const details = { good: input.good, rejected, counted, haulCount: hauls.length, bags, weightKg };
 
-    const weights = hauls.map((h) => (h.estimated_cans > 0 ? h.estimated_cans : 1));
-    const goodShare = allocate(input.good, weights);
-    const rejectShares = Object.fromEntries(REJECT_REASONS.map((r) => [r, allocate(rejected[r], weights)]));
+  const weights = hauls.map((h) => (h.estimated_cans > 0 ? h.estimated_cans : 1));
+  const goodShare = allocate(input.good, weights);
+  const rejectShares = Object.fromEntries(REJECT_REASONS.map((r) => [r, allocate(rejected[r], weights)]));
 
-    const { movementId, sortId } = await postSort(trx, { groupId, driveId, actor, sortedAt, details, note: input.note }, hauls, goodShare, rejectShares);
-    await trx("hauls").whereIn("id", input.haulIds).update({ sort_id: sortId });
-    await applyCalibration(trx, groupId, calibrationDelta(details), 1);
-    return {
-      id: sortId,
-      movementId,
-      driveId,
-      haulIds: input.haulIds,
-      good: input.good,
-      rejected,
-      counted,
-      closedEstimate: estimated,
-      yield: counted > 0 ? input.good / counted : null,
-      sortedAt: sortedAt.toISOString(),
-    };
-  });
-}
-
-async function postSort(
-  trx: Knex.Transaction,
-  s: { groupId: string; driveId: string; actor: Actor; sortedAt: Date; details: { good: number; rejected: Record<string, number>; counted: number; haulCount: number; bags: number; weightKg: number | null }; note?: string },
-  hauls: { id: string; drop_point_id: string; estimated_cans: number }[],
-  goodShare: number[],
-  rejectShares: Record<string, number[]>,
-) {
-  const [movement] = await trx("movements")
-    .insert({ group_id: s.groupId, drive_id: s.driveId, kind: "sort", recorded_by: s.actor.user.id, occurred_at: s.sortedAt, details: JSON.stringify(s.details) })
-    .returning("id");
-  const [sort] = await trx("sorts")
-    .insert({
-      group_id: s.groupId,
-      drive_id: s.driveId,
-      movement_id: movement.id,
-      good: s.details.good,
-      rejected: JSON.stringify(s.details.rejected),
-      counted: s.details.counted,
-      haul_count: s.details.haulCount,
-      bags: s.details.bags,
-      weight_kg: s.details.weightKg,
-      sorted_at: s.sortedAt,
-      recorded_by: s.actor.user.id,
-    })
-    .returning("id");
+  const sortId = randomUUID();
+  const movementId = randomUUID();
   const lines: LineSpec[] = [];
   hauls.forEach((h, i) => {
-    const base = { dropPointId: h.drop_point_id, haulId: h.id, sortId: sort.id as string, note: s.note };
+    const base = { dropPointId: h.drop_point_id, haulId: h.id, sortId, note: input.note };
     if (h.estimated_cans > 0) lines.push({ ...base, from: "hauled", to: null, quantity: h.estimated_cans, isEstimate: true });
     if (goodShare[i] > 0) lines.push({ ...base, from: null, to: "good", quantity: goodShare[i] });
     for (const r of REJECT_REASONS) {
@@ -167,8 +121,21 @@ async function postSort(
       if (n > 0) lines.push({ ...base, from: null, to: "rejected", quantity: n, reason: r });
     }
   });
-  await postMovement(trx, { groupId: s.groupId, driveId: s.driveId, actorId: s.actor.user.id, kind: "sort", occurredAt: s.sortedAt, existingMovementId: movement.id }, lines);
-  return { movementId: movement.id as string, sortId: sort.id as string };
+  const sort = { id: sortId, haulIds: input.haulIds, good: input.good, rejected, counted, haulCount: hauls.length, bags, weightKg, calibration: calibrationDelta(details) };
+  const payload = ledgerPayload({ groupId, driveId, actorId: actor.user.id, kind: "sort", occurredAt: sortedAt, movementId, details }, lines, { sort });
+  await runLedgerFunction(conn, ledgerCall("ledger_sort", payload), SORT_REFUSALS);
+  return {
+    id: sortId,
+    movementId,
+    driveId,
+    haulIds: input.haulIds,
+    good: input.good,
+    rejected,
+    counted,
+    closedEstimate: estimated,
+    yield: counted > 0 ? input.good / counted : null,
+    sortedAt: sortedAt.toISOString(),
+  };
 }
 
 export type ProcessingResult = {
@@ -228,14 +195,12 @@ export async function drivesHolesPerCan(conn: Conn, groupId: string, driveId: st
 }
 
 export async function recordRecycling(actor: Actor, driveId: string, input: RecyclingInput, conn: Conn) {
-  return inTx(conn, async (trx) => {
-    const groupId = actor.group.id;
-    const occurredAt = input.occurredAt ? new Date(input.occurredAt) : new Date();
-    const details = { weightKg: input.weightKg ?? null, moneyReceived: input.moneyReceived ?? null };
-    const { movementId } = await postMovement(trx, { groupId, driveId, actorId: actor.user.id, kind: "recycling", occurredAt, details }, [
-      { from: "rejected", to: "recycled", quantity: input.quantity, note: input.note },
-    ]);
-    return { movementId, driveId, quantity: input.quantity, ...details, occurredAt: occurredAt.toISOString() };
-  });
+  const groupId = actor.group.id;
+  const occurredAt = input.occurredAt ? new Date(input.occurredAt) : new Date();
+  const details = { weightKg: input.weightKg ?? null, moneyReceived: input.moneyReceived ?? null };
+  const { movementId } = await postMovement(conn, { groupId, driveId, actorId: actor.user.id, kind: "recycling", occurredAt, details }, [
+    { from: "rejected", to: "recycled", quantity: input.quantity, note: input.note },
+  ]);
+  return { movementId, driveId, quantity: input.quantity, ...details, occurredAt: occurredAt.toISOString() };
 }
 

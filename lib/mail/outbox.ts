@@ -2,6 +2,7 @@ import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
 import { db } from "@/lib/db";
 import { env } from "@/lib/env";
+import { jobs, QUEUES } from "@/lib/jobs/queue";
 
 export interface OutgoingMail {
   groupId: string | null;
@@ -26,7 +27,24 @@ function transport(): Transporter {
   return transporter;
 }
 
-async function deliver(id: number): Promise<boolean> {
+/** After a failed attempt: 30 s, 1 min, 2 min… up to an hour, so a mail service outage is ridden out. */
+export function retryDelaySeconds(attempts: number): number {
+  return Math.min(3600, 30 * 2 ** (attempts - 1));
+}
+
+/** Puts the next try of one e-mail on the job queue; at most one waiting try per e-mail (the queue is "stately"). */
+async function queueRetry(id: number, delaySeconds: number): Promise<void> {
+  try {
+    const boss = await jobs();
+    await boss.send(QUEUES.mailDeliver, { outboxId: id }, { startAfter: delaySeconds, singletonKey: `outbox-${id}` });
+  } catch (error) {
+    // The database is away too: the row stays queued and the sweep puts it back on the queue later.
+    console.warn("[cantrove] could not queue a mail retry:", (error as Error).message);
+  }
+}
+
+/** One attempt at sending a queued e-mail; a failure records why and queues the next attempt. */
+export async function deliver(id: number): Promise<boolean> {
   const row = await db("outbox").where({ id }).first();
   if (!row || row.status !== "queued") return row?.status === "sent";
   try {
@@ -42,21 +60,22 @@ async function deliver(id: number): Promise<boolean> {
     return true;
   } catch (error) {
     const attempts = row.attempts + 1;
-    // Back off 30 s, 1 min, 2 min… so a mail service outage is ridden out.
-    const delaySeconds = Math.min(3600, 30 * 2 ** (attempts - 1));
+    const failed = attempts >= MAX_ATTEMPTS;
+    const delaySeconds = retryDelaySeconds(attempts);
     await db("outbox")
       .where({ id })
       .update({
         attempts,
         last_error: (error as Error).message.slice(0, 500),
-        status: attempts >= MAX_ATTEMPTS ? "failed" : "queued",
+        status: failed ? "failed" : "queued",
         next_attempt_at: db.raw(`now() + interval '${delaySeconds} seconds'`),
       });
+    if (!failed) await queueRetry(id, delaySeconds);
     return false;
   }
 }
 
-/** Queues a message and tries to send it at once; false means it is queued for a retry. */
+/** Queues a message and tries to send it at once; false means a retry is queued. */
 export async function sendMail(mail: OutgoingMail): Promise<{ id: number; sent: boolean }> {
   const [row] = await db("outbox")
     .insert({
@@ -66,7 +85,7 @@ export async function sendMail(mail: OutgoingMail): Promise<{ id: number; sent: 
       text_body: mail.text,
       html_body: mail.html ?? null,
       kind: mail.kind ?? "notice",
-      // Keeps the retry timer away while this first attempt runs.
+      // Keeps the sweep away while this first attempt runs.
       next_attempt_at: db.raw("now() + interval '60 seconds'"),
     })
     .returning("id");
@@ -74,26 +93,20 @@ export async function sendMail(mail: OutgoingMail): Promise<{ id: number; sent: 
   return { id, sent: await deliver(id) };
 }
 
-/** Sends what is due; called on a timer by instrumentation.ts. */
-export async function retryDueMail(limit = 20): Promise<number> {
-  // Claim the due rows first so two app servers never send the same message.
-  const due: { id: string }[] = await db("outbox")
-    .update({ next_attempt_at: db.raw("now() + interval '120 seconds'") })
-    .whereIn(
-      "id",
-      db("outbox")
-        .select("id")
-        .where("status", "queued")
-        .andWhere("next_attempt_at", "<=", db.fn.now())
-        .orderBy("id")
-        .limit(limit)
-        .forUpdate()
-        .skipLocked(),
-    )
-    .returning("id");
-  let sent = 0;
-  for (const { id } of due) if (await deliver(Number(id))) sent += 1;
-  return sent;
+/**
+ * Queued e-mail whose next attempt is long overdue — its retry never reached
+ * the job queue (a server stopped between the failure and the queueing, or the
+ * database was away) — goes back on the queue. Run at start and on a schedule.
+ */
+export async function sweepMail(limit = 100): Promise<number> {
+  const overdue: { id: string }[] = await db("outbox")
+    .select("id")
+    .where("status", "queued")
+    .andWhere("next_attempt_at", "<=", db.raw("now() - interval '1 minute'"))
+    .orderBy("id")
+    .limit(limit);
+  for (const { id } of overdue) await queueRetry(Number(id), 0);
+  return overdue.length;
 }
 
 export async function listOutbox(groupId: string, limit = 100) {

@@ -3,7 +3,7 @@ import type { Knex } from "knex";
 import { db } from "@/lib/db";
 import { AppError, conflict, notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
-import { planRoute } from "@/lib/routes/route";
+import { planRoute } from "@/lib/runs/route-order";
 import type { CreateRunInput, StopStatus } from "./schemas";
 import { runStateOf } from "./state";
 

@@ -3,7 +3,7 @@
  */
 import { z } from "zod";
 import { day } from "@/lib/dates";
-import { MAX_ROUTE_STOPS } from "@/lib/routes/schemas";
+import { MAX_ROUTE_STOPS } from "@/lib/runs/route-schemas";
 
 export const RUN_STATES = ["planned", "under_way", "done"] as const;
 export type RunState = (typeof RUN_STATES)[number];

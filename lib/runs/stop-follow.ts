@@ -7,7 +7,8 @@ import { runStateOf } from "./state";
 // A run's stops follow what happened in the ledger and on the road: a stop
 // whose haul is undone is pending again, a skipped stop can be put back, and
 // the run's state is recomputed from its stops in the same transaction.
-// No "server-only" here: the ledger's reversal (also used by scripts) calls it.
+// A haul's undo reopens its stop in the database (ledger_reverse, db/functions/ledger_writers.sql),
+// by the same rule as runStateOf.
 
 /** Sets the run's state from its stops; `finished_at` only while it is done. */
 export async function refreshRunState(trx: Knex.Transaction, runId: string) {
@@ -17,17 +18,6 @@ export async function refreshRunState(trx: Knex.Transaction, runId: string) {
     .where({ id: runId })
     .update({ state, finished_at: state === "done" ? trx.raw("coalesce(finished_at, now())") : null });
   return state;
-}
-
-/** The stop a reversed haul settled goes back to pending (and its run to not done). */
-export async function reopenStopOfHaul(trx: Knex.Transaction, groupId: string, haulId: string): Promise<{ runId: string; stopId: string } | null> {
-  const [stop] = await trx("pickup_run_stops")
-    .where({ haul_id: haulId, group_id: groupId })
-    .update({ status: "pending", haul_id: null, skip_reason: null, resolved_by: null, resolved_at: null })
-    .returning(["id", "run_id"]);
-  if (!stop) return null;
-  await refreshRunState(trx, stop.run_id);
-  return { runId: stop.run_id as string, stopId: stop.id as string };
 }
 
 /** Puts a skipped stop back on the run. The run's volunteer or an organiser only; a stop not skipped is 409. */

@@ -42,7 +42,7 @@ describe("public drive map", () => {
   });
 
   it("sorts the list by distance when the visitor shares a location", async () => {
-    // Standing at the harbour: the Quayside hall is nearest (haversine, lib/routes/great-circle.ts).
+    // Standing at the harbour: the Quayside hall is nearest (haversine, lib/runs/great-circle.ts).
     const { context, page } = await newPage(browser, { ...PHONE, geolocation: { latitude: 47.1930, longitude: -7.9970 }, permissions: ["geolocation"] });
     await page.goto("/drives/larkhollow-winter-2026");
     await page.getByRole("button", { name: "Sort by distance from me" }).click();

@@ -35,7 +35,7 @@ beforeAll(async () => {
   });
   server = spawn(...serverCommand(root, ports.app), {
     cwd: root,
-    env: { ...process.env, ...stack.env, NODE_ENV: "production", MAIL_RETRY_MS: "500" },
+    env: { ...process.env, ...stack.env, NODE_ENV: "production", MAIL_POLL_SECONDS: "0.5" },
     stdio: "ignore",
   });
   await waitForHealthy(`${appUrl}/api/health`, 60_000);
@@ -142,13 +142,16 @@ describe("faults", () => {
     const mail: MailFake = await startMailFake({ dir: mailDir, smtpPort: ports.smtp, apiPort: ports.mailApi });
     stack.mail = mail;
     {
-      // The first retry is due 30 s after the failed attempt; the app's timer (MAIL_RETRY_MS) picks it up.
+      // The first retry is due 30 s after the failed attempt, as a job on the queue (pg-boss) that the app works.
       const deadline = Date.now() + 60_000;
       while (Date.now() < deadline && !readMail(mailDir).some((m) => m.to.includes(to))) await new Promise((r) => setTimeout(r, 500));
       const delivered = readMail(mailDir).filter((m) => m.to.includes(to));
       expect(delivered).toHaveLength(1);
       expect(delivered[0].subject).toContain("Your pledge");
       expect((await db("outbox").where({ to_address: to }).first()).status).toBe("sent");
+      // It went by the job queue: the retry job for this e-mail ran and completed.
+      const retries = await db.raw("select state from pgboss.job where name = 'mail-deliver' and data->>'outboxId' = ?", [String(queued.id)]);
+      expect(retries.rows.map((r: { state: string }) => r.state)).toContain("completed");
     }
   }, 90_000);
 

@@ -5,7 +5,7 @@ import { setupServer } from "msw/node";
 import type { ReactNode } from "react";
 import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from "vitest";
 import { useOutbox, type SubmitResult } from "@/components/ledger/use-outbox";
-import { OUTBOX_STORAGE_KEY } from "@/lib/ledger/outbox";
+import { OUTBOX_STORAGE_KEY } from "@/lib/ledger/browser-queue";
 
 // The volunteer's queue against a mocked API, with a fake clock: an entry made
 // offline at T and sent at T + 60 s carries T; an unusual number asked about by

@@ -3,7 +3,7 @@ import { EmptyState } from "@/components/ui/card";
 import { LogHome } from "@/components/ledger/log-home";
 import { requirePageRole } from "@/lib/auth/session";
 import { pageDrive } from "@/lib/drives/current-drive-queries";
-import { listLogDrives } from "@/lib/ledger/queries";
+import { listLogDrives } from "@/lib/drives/queries";
 
 export const metadata: Metadata = { title: "Log" };
 

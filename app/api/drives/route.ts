@@ -1,5 +1,5 @@
 import { endpoint } from "@/lib/api/endpoint";
-import { createDrive } from "@/lib/drives/actions";
+import { createDrive } from "@/lib/drives/commands";
 import { listDrives } from "@/lib/drives/queries";
 import { driveInput } from "@/lib/drives/schemas";
 

@@ -1,7 +1,7 @@
 import { endpoint } from "@/lib/api/endpoint";
 import { createHeaterUnit } from "@/lib/heaters/queries";
 import { heaterCreateInputSchema } from "@/lib/heaters/unit-schemas";
-import { listHeatersWithClaims } from "@/lib/ledger/queries";
+import { listHeatersWithClaims } from "@/lib/heaters/queries";
 
 export const dynamic = "force-dynamic";
 

@@ -109,4 +109,11 @@ describe("the drive a page opens on", () => {
     expect(bannerName(log)).toBe(runningName);
     expect(log).not.toContain(f.demoDriveId);
   });
+
+  it("lists the running drive first on the organiser's dashboard, before next season's", async () => {
+    const page = await html(organiser, "/dashboard");
+    const at = (name: string) => page.indexOf(`>${name}</a>`);
+    expect(at(runningName)).toBeGreaterThan(-1);
+    expect(at(futureName)).toBeGreaterThan(at(runningName));
+  });
 });

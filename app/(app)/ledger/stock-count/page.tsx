@@ -6,7 +6,7 @@ import { DriveBanner } from "@/components/drives/drive-banner";
 import { DriveLinks } from "@/components/drives/drive-links";
 import { requirePageRole } from "@/lib/auth/session";
 import { pageDrive } from "@/lib/drives/current-drive-queries";
-import { listLogDrives } from "@/lib/ledger/queries";
+import { listLogDrives } from "@/lib/drives/queries";
 
 export const metadata: Metadata = { title: "Stock count" };
 

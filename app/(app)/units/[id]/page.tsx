@@ -16,7 +16,7 @@ import { listDriveTargets } from "@/lib/heaters/drive-targets";
 import { formatLength } from "@/lib/heaters/format";
 import { getHeaterUnit, listHeaterUnits, planOf } from "@/lib/heaters/queries";
 import { driveStock } from "@/lib/ledger/balances";
-import { listHeatersWithClaims } from "@/lib/ledger/queries";
+import { listHeatersWithClaims } from "@/lib/heaters/queries";
 import { unitRefusal } from "@/lib/heaters/builder-rule";
 import { resolveCanGridInput } from "@/lib/heaters/schemas";
 import { allowedMoves } from "@/lib/heaters/states";

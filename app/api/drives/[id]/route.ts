@@ -1,6 +1,6 @@
 import { endpoint } from "@/lib/api/endpoint";
 import { idPath } from "@/lib/api/path";
-import { updateDrive } from "@/lib/drives/actions";
+import { updateDrive } from "@/lib/drives/commands";
 import { ownDrive } from "@/lib/drives/resource";
 import { driveInput } from "@/lib/drives/schemas";
 

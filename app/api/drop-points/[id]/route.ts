@@ -1,6 +1,6 @@
 import { endpoint } from "@/lib/api/endpoint";
 import { idPath } from "@/lib/api/path";
-import { updateDropPoint } from "@/lib/drives/actions";
+import { updateDropPoint } from "@/lib/drives/commands";
 import { ownDropPoint } from "@/lib/drives/resource";
 import { dropPointPatch } from "@/lib/drives/schemas";
 

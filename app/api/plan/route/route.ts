@@ -1,6 +1,6 @@
 import { endpoint } from "@/lib/api/endpoint";
-import { planRoute } from "@/lib/routes/route";
-import { routeInputSchema } from "@/lib/routes/schemas";
+import { planRoute } from "@/lib/runs/route-order";
+import { routeInputSchema } from "@/lib/runs/route-schemas";
 
 export const dynamic = "force-dynamic";
 

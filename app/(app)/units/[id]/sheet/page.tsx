@@ -15,7 +15,7 @@ import { getHeaterUnit, planOf } from "@/lib/heaters/queries";
 import { resolveCanGridInput } from "@/lib/heaters/schemas";
 import { HEATER_STATE_LABEL } from "@/lib/heaters/unit-schemas";
 import { unitNeed } from "@/lib/heaters/need";
-import { listHeatersWithClaims } from "@/lib/ledger/queries";
+import { listHeatersWithClaims } from "@/lib/heaters/queries";
 import { UnitFigures } from "@/components/heaters/unit-figures";
 
 export const metadata: Metadata = { title: "Build sheet" };

@@ -1,6 +1,6 @@
 import { endpoint } from "@/lib/api/endpoint";
 import { idPath } from "@/lib/api/path";
-import { createDropPoint } from "@/lib/drives/actions";
+import { createDropPoint } from "@/lib/drives/commands";
 import { listDropPoints } from "@/lib/drives/queries";
 import { ownDrive } from "@/lib/drives/resource";
 import { dropPointInput } from "@/lib/drives/schemas";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { MAX_ROUTE_STOPS, routeInputSchema } from "@/lib/routes/schemas";
+import { MAX_ROUTE_STOPS, routeInputSchema } from "@/lib/runs/route-schemas";
 
 function issues(input: unknown): Record<string, string> {
   const result = routeInputSchema.safeParse(input);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { addToOutbox, classify, confirmedCopy, markAttempt, newOutboxItem, readOutbox, removeFromOutbox, type OutboxItem } from "@/lib/ledger/outbox";
+import { addToOutbox, classify, confirmedCopy, markAttempt, newOutboxItem, readOutbox, removeFromOutbox, type OutboxItem } from "@/lib/ledger/browser-queue";
 
 function memory() {
   const m = new Map<string, string>();

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import turfDistance from "@turf/distance";
-import { EARTH_RADIUS_KM, distanceMatrix, haversineKm, type LatLng } from "@/lib/routes/great-circle";
+import { EARTH_RADIUS_KM, distanceMatrix, haversineKm, type LatLng } from "@/lib/runs/great-circle";
 
 const turfKm = (a: LatLng, b: LatLng) => turfDistance([a.lng, a.lat], [b.lng, b.lat], { units: "kilometers" });
 const dms = (d: number, m: number, s: number) => d + m / 60 + s / 3600;

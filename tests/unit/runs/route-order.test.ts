@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import turfDistance from "@turf/distance";
-import { EXACT_STOP_LIMIT, planRoute, type RouteStop } from "@/lib/routes/route";
-import type { LatLng } from "@/lib/routes/great-circle";
+import { EXACT_STOP_LIMIT, planRoute, type RouteStop } from "@/lib/runs/route-order";
+import type { LatLng } from "@/lib/runs/great-circle";
 
 // mulberry32: a tiny seeded generator so every random case reproduces.
 function mulberry32(seed: number): () => number {
