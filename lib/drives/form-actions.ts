@@ -11,7 +11,7 @@ import type { ActionState } from "@/lib/api/action-state";
 import { idPath, slugPath, slugSegment, uuidSegment } from "@/lib/api/path";
 import { NUMBER_SPECS, type NumberSpec } from "@/lib/forms/number-input";
 import { noun } from "@/lib/plural";
-import { createDrive, createDropPoint, updateDrive, updateDropPoint } from "./actions";
+import { createDrive, createDropPoint, updateDrive, updateDropPoint } from "./commands";
 import { PUBLIC_LIMITS } from "./limits";
 import { createFillReport, createPledge } from "./public-actions";
 import { ownDrive, ownDropPoint } from "./resource";
