@@ -19,6 +19,10 @@ const nextConfig = {
   serverExternalPackages: ["knex", "pg", "nodemailer", "bcryptjs"],
   poweredByHeader: false,
   reactStrictMode: true,
+  // Browsers that ask for /favicon.ico without reading the page get the mark (app/icon.svg).
+  async rewrites() {
+    return [{ source: "/favicon.ico", destination: "/icon.svg" }];
+  },
   async headers() {
     return [
       { source: "/:path*", headers: securityHeaders },
