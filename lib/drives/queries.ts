@@ -1,6 +1,9 @@
 import "server-only";
 import { db } from "@/lib/db";
 import { UUID } from "@/lib/api/path";
+import type { DropPointRecord } from "./types";
+
+export type { DropPointRecord };
 
 export async function listDrives(groupId: string) {
   return db("drives as d")
@@ -44,22 +47,6 @@ export async function findDrive(groupId: string, id: string): Promise<DriveRecor
     )
     .where({ id, group_id: groupId })
     .first();
-}
-
-
-export interface DropPointRecord {
-  id: string;
-  driveId: string;
-  name: string;
-  address: string;
-  lat: number;
-  lng: number;
-  hours: string;
-  hostName: string;
-  hostPhone: string;
-  hostEmail: string;
-  capacityBags: number;
-  active: boolean;
 }
 
 const dropPointColumns = [
