@@ -1,6 +1,6 @@
 "use client";
 
-import { queryOptions, useMutation, useQueryClient } from "@tanstack/react-query";
+import { queryOptions, useMutation, useQueryClient, type QueryClient } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/api/client";
 import type { RouteInputRaw } from "@/lib/runs/route-schemas";
 import type { RouteAnswer, RunDetail, SuggestionRow } from "@/lib/runs/types";
@@ -17,6 +17,15 @@ export const runKeys = {
   suggestions: (driveId: string) => [...runKeys.all, "suggestions", driveId] as const,
   route: (input: RouteInputRaw) => [...runKeys.all, "route", input] as const,
 };
+
+/**
+ * Marks the runs' reads stale after a write. The planner's route is left
+ * alone: it is a pure computation over the coordinates sent (its key holds
+ * them all), so no write can make it wrong.
+ */
+function refreshRuns(client: QueryClient) {
+  return client.invalidateQueries({ queryKey: runKeys.all, predicate: (query) => query.queryKey[1] !== "route" });
+}
 
 export const runQueries = {
   detail: (id: string) => queryOptions({ queryKey: runKeys.detail(id), queryFn: ({ signal }) => fetchJson<RunDetail>(`/api/runs/${id}`, { signal }) }),
@@ -40,7 +49,7 @@ export function useCreateRun(after: After<{ id: string }, unknown> = {}) {
   return useMutation({
     mutationFn: (body: unknown) => fetchJson<{ id: string }>("/api/runs", { method: "POST", json: body }),
     onSuccess: async (run, body) => {
-      await client.invalidateQueries({ queryKey: runKeys.all });
+      await refreshRuns(client);
       await after.onSuccess?.(run, body);
     },
     onError: (error, body) => after.onError?.(error, body),
@@ -54,7 +63,7 @@ function useStopWrite<TVars>(runId: string, send: (vars: TVars) => Promise<unkno
     mutationFn: send,
     onSuccess: async (run, vars) => {
       client.setQueryData(runKeys.detail(runId), run as RunDetail);
-      void client.invalidateQueries({ queryKey: runKeys.all });
+      void refreshRuns(client);
       await after.onSuccess?.(run, vars);
     },
     onError: (error, vars) => after.onError?.(error, vars),
@@ -98,6 +107,6 @@ export function useUndoStopHaul(movementId: string, idempotencyKey: string) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: () => fetchJson(`/api/movements/${movementId}/reversal`, { method: "POST", json: {}, headers: { "Idempotency-Key": idempotencyKey } }),
-    onSuccess: () => void client.invalidateQueries({ queryKey: runKeys.all }),
+    onSuccess: () => void refreshRuns(client),
   });
 }

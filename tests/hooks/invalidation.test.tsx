@@ -56,6 +56,7 @@ function setup() {
     members: memberKeys.list(),
     run: runKeys.detail("run1"),
     runs: runKeys.list(),
+    route: runKeys.route({ start: { lat: 51.5, lng: -0.1 }, stops: [{ id: "p1", lat: 51.51, lng: -0.11 }], returnToStart: false }),
   };
   for (const key of Object.values(seeded)) client.setQueryData(key, []);
   const stale = () => Object.fromEntries(Object.entries(seeded).map(([name, key]) => [name, client.getQueryState(key)?.isInvalidated ?? false]));
@@ -74,7 +75,7 @@ describe("mutation hooks invalidate their own domain's keys", () => {
     expect(stockCalls).toBe(2);
     // Without a reason and a key of its own, the undo is keyed by its movement (a second click is the same undo).
     expect(undone).toEqual([{ movementId: "m1", key: "undo-m1", body: null }]);
-    expect(stale()).toEqual({ ledgerMine: true, ledgerHauls: true, ledgerList: true, heaters: false, invitations: false, members: false, run: false, runs: false });
+    expect(stale()).toEqual({ ledgerMine: true, ledgerHauls: true, ledgerList: true, heaters: false, invitations: false, members: false, run: false, runs: false, route: false });
   });
 
   it("a refused undo refreshes nothing", async () => {
@@ -91,7 +92,7 @@ describe("mutation hooks invalidate their own domain's keys", () => {
     const { wrapper, stale } = setup();
     const { result } = renderHook(() => useMoveHeater("u1"), { wrapper });
     await act(() => result.current.mutateAsync("building"));
-    expect(stale()).toEqual({ ledgerMine: true, ledgerHauls: true, ledgerList: true, heaters: true, invitations: false, members: false, run: false, runs: false });
+    expect(stale()).toEqual({ ledgerMine: true, ledgerHauls: true, ledgerList: true, heaters: true, invitations: false, members: false, run: false, runs: false, route: false });
   });
 
   it("revoking an invitation refreshes the invitations only, not the member list", async () => {
@@ -101,11 +102,11 @@ describe("mutation hooks invalidate their own domain's keys", () => {
     expect(stale()).toMatchObject({ invitations: true, members: false, ledgerMine: false, heaters: false });
   });
 
-  it("a stop write puts the run's answer in its cache and refreshes the runs", async () => {
+  it("a stop write puts the run's answer in its cache and refreshes the runs, but not the planner's route (a pure computation)", async () => {
     const { client, wrapper, stale } = setup();
     const { result } = renderHook(() => useUnskipStop("run1", "s1"), { wrapper });
     await act(() => result.current.mutateAsync());
     expect(client.getQueryData(runKeys.detail("run1"))).toEqual({ id: "run1", state: "under_way", stopList: [] });
-    expect(stale()).toMatchObject({ run: true, runs: true, ledgerMine: false, heaters: false, invitations: false });
+    expect(stale()).toMatchObject({ run: true, runs: true, route: false, ledgerMine: false, heaters: false, invitations: false });
   });
 });
