@@ -5,7 +5,7 @@ import { useMemo } from "react";
 import { Button, buttonClass } from "@/components/ui/button";
 import { EmptyState, Skeleton } from "@/components/ui/card";
 import { ledgerQueries } from "@/hooks/queries/ledger";
-import type { LogDrive } from "./log-home";
+import type { LogDrive } from "@/lib/drives/types";
 import { LedgerFilters } from "./ledger-table-filters";
 import { LedgerLine } from "./ledger-table-row";
 import { useLedgerFilters } from "./ledger-table-url";

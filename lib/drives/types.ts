@@ -55,3 +55,34 @@ export interface FullBin {
   level: number;
   reportedAt: string;
 }
+
+/** A pledge on the organiser's drive page (rendered on the server, so the dates are Dates). */
+export interface DrivePledge {
+  id: string;
+  name: string | null;
+  email: string | null;
+  bags: number;
+  bringOn: string;
+  dropPointName: string;
+  createdAt: Date;
+}
+
+/** A "bin is full" report on the organiser's drive page. */
+export interface DriveFillReport {
+  id: string;
+  level: number;
+  note: string;
+  alerted: boolean;
+  createdAt: Date;
+  dropPointName: string;
+  photoUrl: string | null;
+}
+
+/** A drive as the entry forms and the ledger's filters offer it, with its active drop points. */
+export interface LogDrive {
+  id: string;
+  name: string;
+  startsOn: string;
+  endsOn: string;
+  dropPoints: { id: string; name: string }[];
+}
