@@ -13,8 +13,6 @@ import { RecentEntries } from "./recent-entries";
 import { useOutbox } from "./use-outbox";
 import type { LogDrive } from "@/lib/drives/types";
 
-export type { LogDrive };
-
 const TABS = [
   { id: "haul", label: "Log a haul" },
   { id: "sort", label: "Log a sort" },
