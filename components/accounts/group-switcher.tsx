@@ -1,19 +1,19 @@
 "use client";
 
 import { SelectBox } from "@/components/ui/field";
-import { useQuery, useQueryClient } from "@tanstack/react-query";
+import { useQuery } from "@tanstack/react-query";
 import { useSession } from "next-auth/react";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { ROLE_HOME, ROLE_LABEL } from "@/lib/auth/roles";
-import { myGroupsQuery } from "@/hooks/queries/members";
+import { memberQueries, useGroupSwitched } from "@/hooks/queries/members";
 
 /** Shown only to people in more than one group; switching lands on that group's home for their role there. */
 export function GroupSwitcher() {
-  const { data } = useQuery(myGroupsQuery());
+  const { data } = useQuery(memberQueries.myGroups());
   const { update } = useSession();
   const router = useRouter();
-  const client = useQueryClient();
+  const refreshAll = useGroupSwitched();
   const [pending, setPending] = useState(false);
   if (!data || data.length < 2) return null;
   const active = data.find((g) => g.active);
@@ -23,7 +23,7 @@ export function GroupSwitcher() {
     if (!target) return;
     setPending(true);
     await update({ groupId });
-    await client.invalidateQueries();
+    await refreshAll();
     router.push(ROLE_HOME[target.role]);
     router.refresh();
     setPending(false);

@@ -5,12 +5,12 @@ import { Button } from "@/components/ui/button";
 import { EmptyState, Skeleton } from "@/components/ui/card";
 import { FormError } from "@/components/ui/field";
 import { ROLE_LABEL } from "@/lib/auth/roles";
-import { invitationsQuery, useResendInvitation, useRevokeInvitation } from "@/hooks/queries/members";
+import { memberQueries, useResendInvitation, useRevokeInvitation } from "@/hooks/queries/members";
 
 const day = (iso: string) => new Date(iso).toLocaleDateString(undefined, { day: "numeric", month: "short" });
 
 export function InvitationList() {
-  const { data, isPending, error, refetch } = useQuery(invitationsQuery());
+  const { data, isPending, error, refetch } = useQuery(memberQueries.invitations());
   const resend = useResendInvitation();
   const revoke = useRevokeInvitation();
 

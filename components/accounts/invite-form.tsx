@@ -1,6 +1,5 @@
 "use client";
 
-import { useQueryClient } from "@tanstack/react-query";
 import { useActionState, useEffect, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
@@ -8,18 +7,18 @@ import { Notice } from "@/components/ui/notice";
 import { IDLE, typed, type ActionState } from "@/lib/api/action-state";
 import { inviteAction } from "@/lib/accounts/form-actions";
 import { ROLE_LABEL, type Role } from "@/lib/auth/roles";
-import { invitationsQuery } from "@/hooks/queries/members";
+import { useInvitationSent } from "@/hooks/queries/members";
 import { fieldsMessage } from "./form-message";
 import { ROLE_HELP, RoleSelect } from "./role-select";
 
 export function InviteForm() {
   const [state, send, pending] = useActionState<ActionState<{ email: string }>, FormData>(inviteAction, IDLE);
   const [role, setRole] = useState<Role>("volunteer");
-  const client = useQueryClient();
+  const invitationSent = useInvitationSent();
   // The pending list below is a react-query read: refresh it after each invitation sent.
   useEffect(() => {
-    if (state.ok) void client.invalidateQueries({ queryKey: invitationsQuery().queryKey });
-  }, [state, client]);
+    if (state.ok) void invitationSent();
+  }, [state, invitationSent]);
 
   return (
     <form action={send} noValidate className="flex flex-col gap-2" aria-label="Invite someone">

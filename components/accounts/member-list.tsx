@@ -5,12 +5,12 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormError, SelectBox } from "@/components/ui/field";
 import type { Role } from "@/lib/auth/roles";
-import { membersQuery, useChangeRole, useRemoveMember, type Member } from "@/hooks/queries/members";
+import { memberQueries, useChangeRole, useRemoveMember, type Member } from "@/hooks/queries/members";
 import { ListSkeleton } from "./invitation-list";
 import { ROLE_CHOICES } from "./role-select";
 
 export function MemberList({ currentUserId }: { currentUserId: string }) {
-  const { data, isPending, error, refetch } = useQuery(membersQuery());
+  const { data, isPending, error, refetch } = useQuery(memberQueries.list());
   const changeRole = useChangeRole();
   const remove = useRemoveMember();
   const [confirming, setConfirming] = useState<string | null>(null);

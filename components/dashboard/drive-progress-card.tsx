@@ -1,6 +1,6 @@
 import Link from "next/link";
 import { Card } from "@/components/ui/card";
-import type { FullBin } from "@/lib/drives/fill-queries";
+import type { FullBin } from "@/lib/drives/types";
 import { FullBins } from "./full-bins";
 import type { DriveProgress } from "@/lib/drives/progress";
 import { finishText, heatersCoveredText, paceText } from "@/lib/drives/progress-wording";

@@ -1,13 +1,12 @@
 "use client";
 
-import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { fetchJson } from "@/lib/api/client";
+import { useClearFullBin } from "@/hooks/queries/drive-writes";
 import { LEVEL_LABEL, timeAgo } from "@/lib/drives/fill";
-import type { FullBin } from "@/lib/drives/fill-queries";
+import type { FullBin } from "@/lib/drives/types";
 import { formatDateTime } from "@/lib/format";
 import { countOf } from "@/lib/plural";
 
@@ -15,8 +14,7 @@ import { countOf } from "@/lib/plural";
 export function FullBins({ bins }: { bins: FullBin[] }) {
   const router = useRouter();
   const [cleared, setCleared] = useState<string[]>([]);
-  const clear = useMutation({
-    mutationFn: (b: FullBin) => fetchJson(`/api/drop-points/${b.dropPointId}/fill-clear`, { method: "POST", body: { asOf: b.reportedAt } }),
+  const clear = useClearFullBin({
     onSuccess: (_data, b) => {
       setCleared((c) => [...c, `${b.dropPointId}@${b.reportedAt}`]);
       router.refresh();

@@ -6,9 +6,10 @@ import { useState } from "react";
 import { Notice } from "@/components/ui/notice";
 import { formatNumber } from "@/lib/heaters/format";
 import { needRefusalMessage } from "@/lib/heaters/need";
-import { heatersQuery, moveClaimsTo, postClaimAction, type HeaterSummary } from "@/hooks/queries/heaters";
-import { stockQuery } from "@/hooks/queries/ledger";
-import type { DriveStock } from "@/lib/ledger/schemas";
+import { heaterQueries, moveClaimsTo, postClaimAction } from "@/hooks/queries/heaters";
+import { ledgerQueries } from "@/hooks/queries/ledger";
+import type { HeaterSummary } from "@/lib/heaters/types";
+import type { DriveStock } from "@/lib/ledger/types";
 import { QuantityAction } from "./quantity-action";
 import { UnitFigures } from "./unit-figures";
 import { countOf } from "@/lib/plural";
@@ -28,8 +29,8 @@ export interface ClaimsView {
 /** Cans claimed for the unit and built into it, live, with the ledger actions that change them. */
 export function ClaimsPanel({ v }: { v: ClaimsView }) {
   // Live figures: both reads start from the server's render and refresh after every action.
-  const unit = useQuery({ ...heatersQuery(), select: (list) => list.find((u) => u.id === v.unit.id) }).data ?? v.unit;
-  const stock = useQuery({ ...stockQuery(v.driveId), initialData: v.stock }).data;
+  const unit = useQuery({ ...heaterQueries.list(), select: (list) => list.find((u) => u.id === v.unit.id) }).data ?? v.unit;
+  const stock = useQuery({ ...ledgerQueries.stock(v.driveId), initialData: v.stock }).data;
   const [moveTo, setMoveTo] = useState(v.otherUnits[0]?.id ?? "");
   return (
     <div className="flex flex-col gap-4">

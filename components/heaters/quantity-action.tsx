@@ -1,6 +1,5 @@
 "use client";
 
-import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
@@ -9,8 +8,7 @@ import { NumberField } from "@/components/ui/number-field";
 import { NUMBER_SPECS, parseNumberInput } from "@/lib/forms/number-input";
 import { countOf } from "@/lib/plural";
 import { ApiError } from "@/lib/api/client";
-import { heaterKeys } from "@/hooks/queries/heaters";
-import { ledgerKeys } from "@/hooks/queries/ledger";
+import { useHeaterMovement } from "@/hooks/queries/heaters";
 
 /**
  * A small form: how many cans, one button; the server's 409 or 422 shows next
@@ -39,20 +37,17 @@ export function QuantityAction({
   children?: ReactNode;
 }) {
   const router = useRouter();
-  const queryClient = useQueryClient();
   // Untouched, the field follows the server's suggestion as balances change.
   const [typed, setTyped] = useState<string | null>(null);
   const text = typed ?? String(initial);
   const [done, setDone] = useState<string | null>(null);
   const [refused, setRefused] = useState<string | null>(null);
   const [emptyError, setEmptyError] = useState<string | undefined>(undefined);
-  const action = useMutation({
-    mutationFn: (quantity: number) => run(quantity, crypto.randomUUID()),
-    onSuccess: async (_data, quantity) => {
+  const action = useHeaterMovement(run, {
+    onSuccess: (_data, quantity) => {
       setDone(`${submitLabel}: ${countOf(quantity, "can")} recorded.`);
       setTyped(null);
-      // The unit's figures and the drive's stock are react-query reads; the rest of the page is the server's.
-      await Promise.all([queryClient.invalidateQueries({ queryKey: heaterKeys.all }), queryClient.invalidateQueries({ queryKey: ledgerKeys.all })]);
+      // The unit's figures and the drive's stock are react-query reads (refreshed by the hook); the rest of the page is the server's.
       router.refresh();
     },
   });

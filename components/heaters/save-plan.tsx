@@ -1,13 +1,12 @@
 "use client";
 
-import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError, SelectField } from "@/components/ui/field";
 import { fieldErrors } from "@/lib/api/client";
 import type { CanGridInput } from "@/lib/heaters/schemas";
-import { createHeater, heaterKeys } from "@/hooks/queries/heaters";
+import { useCreateHeater } from "@/hooks/queries/heaters";
 import { useRememberDrive } from "@/hooks/queries/current-drive";
 import { DriveBanner } from "@/components/drives/drive-banner";
 import type { DriveSpan } from "@/lib/drives/current-drive";
@@ -23,18 +22,11 @@ export interface DriveChoice {
 export function SavePlan({ input, choice, planLabel, disabled }: { input: CanGridInput; choice: DriveChoice; planLabel: string; disabled: boolean }) {
   const { drives, today } = choice;
   const router = useRouter();
-  const queryClient = useQueryClient();
   const [name, setName] = useState("");
   const [driveId, setDriveId] = useState(choice.initialId ?? drives[0]?.id ?? "");
   const remembered = useRememberDrive();
   const drive = drives.find((d) => d.id === driveId);
-  const save = useMutation({
-    mutationFn: () => createHeater({ name, driveId, plan: input }),
-    onSuccess: async (unit) => {
-      await queryClient.invalidateQueries({ queryKey: heaterKeys.all });
-      router.push(`/units/${unit.id}`);
-    },
-  });
+  const save = useCreateHeater({ onSuccess: (unit) => router.push(`/units/${unit.id}`) });
   const fields = fieldErrors(save.error);
   if (drives.length === 0) {
     return <p className="text-ink-soft">Your group has no drive yet. An organiser sets one up first; then save the plan to it.</p>;
@@ -45,7 +37,7 @@ export function SavePlan({ input, choice, planLabel, disabled }: { input: CanGri
       noValidate
       onSubmit={(e) => {
         e.preventDefault();
-        save.mutate();
+        save.mutate({ name, driveId, plan: input });
       }}
     >
       <FormError message={save.error ? (Object.keys(fields).length ? "Some fields need another look." : save.error.message) : null} />

@@ -1,11 +1,9 @@
 "use client";
 
-import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/ui/field";
-import { moveHeater, heaterKeys } from "@/hooks/queries/heaters";
-import { ledgerKeys } from "@/hooks/queries/ledger";
+import { useMoveHeater } from "@/hooks/queries/heaters";
 import { formatNumber } from "@/lib/heaters/format";
 import { HEATER_STATE_LABEL, stateIndexOf, type HeaterState } from "@/lib/heaters/unit-schemas";
 import { countOf } from "@/lib/plural";
@@ -13,14 +11,7 @@ import { countOf } from "@/lib/plural";
 /** Buttons for the state moves this person may make; the server checks the same rule. */
 export function StateMover({ id, state, moves, refusal }: { id: string; state: HeaterState; moves: HeaterState[]; refusal?: string | null }) {
   const router = useRouter();
-  const queryClient = useQueryClient();
-  const move = useMutation({
-    mutationFn: (to: HeaterState) => moveHeater(id, to),
-    onSuccess: async () => {
-      await Promise.all([queryClient.invalidateQueries({ queryKey: heaterKeys.all }), queryClient.invalidateQueries({ queryKey: ledgerKeys.all })]);
-      router.refresh();
-    },
-  });
+  const move = useMoveHeater(id, { onSuccess: () => router.refresh() });
   const released = move.data?.released ?? 0;
   const done = move.data ? (
     <p role="status" className="font-semibold text-moss-deep">

@@ -3,7 +3,7 @@
 import { SelectField } from "@/components/ui/field";
 import { STAGES } from "@/lib/ledger/schemas";
 import { capitalise, stageLabel } from "@/lib/ledger/labels";
-import type { LogDrive } from "./log-home";
+import type { LogDrive } from "@/lib/drives/types";
 import type { LedgerFilterKey } from "./ledger-table-url";
 
 const select = "min-h-11 rounded-lg border-2 border-ink/40 bg-white px-2";

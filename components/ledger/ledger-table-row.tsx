@@ -1,10 +1,8 @@
 "use client";
 
-import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { fetchJson } from "@/lib/api/client";
-import { ledgerKeys } from "@/hooks/queries/ledger";
+import { useUndoMovement } from "@/hooks/queries/ledger";
 import { formatDateTime } from "@/lib/format";
 import { entryLabel, kindLabel, lineLabel, moveLabel, reasonLabel } from "@/lib/ledger/labels";
 import { sentLabel } from "@/lib/ledger/entry-time";
@@ -60,16 +58,8 @@ export function LedgerLine({ r, siblings, showDrive, timeZone }: { r: LedgerRow;
 }
 
 function UndoForm({ row, lines, onClose }: { row: LedgerRow; lines: string[]; onClose: () => void }) {
-  const client = useQueryClient();
   const [reason, setReason] = useState("");
-  const undo = useMutation({
-    mutationFn: () =>
-      fetchJson(`/api/movements/${row.movementId}/reversal`, { method: "POST", body: { reason }, headers: { "idempotency-key": crypto.randomUUID() } }),
-    onSuccess: () => {
-      client.invalidateQueries({ queryKey: ledgerKeys.all });
-      onClose();
-    },
-  });
+  const undo = useUndoMovement({ onSuccess: () => onClose() });
   const which = lines.length > 1 ? `lines ${lines.join(", ")}` : lineLabel(row.id);
   return (
     <form
@@ -77,7 +67,7 @@ function UndoForm({ row, lines, onClose }: { row: LedgerRow; lines: string[]; on
       className="flex flex-col gap-2"
       onSubmit={(e) => {
         e.preventDefault();
-        if (reason.trim()) undo.mutate();
+        if (reason.trim()) undo.mutate({ movementId: row.movementId, reason, idempotencyKey: crypto.randomUUID() });
       }}
     >
       <p className="font-semibold">

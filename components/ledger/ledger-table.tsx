@@ -4,10 +4,8 @@ import { useInfiniteQuery } from "@tanstack/react-query";
 import { useMemo } from "react";
 import { Button, buttonClass } from "@/components/ui/button";
 import { EmptyState, Skeleton } from "@/components/ui/card";
-import { fetchJsonWithHeaders } from "@/lib/api/client";
-import { ledgerKeys } from "@/hooks/queries/ledger";
-import { NEXT_CURSOR_HEADER, TOTAL_HEADER, type LedgerPage, type LedgerRow } from "@/lib/ledger/ledger-row";
-import type { LogDrive } from "./log-home";
+import { ledgerQueries } from "@/hooks/queries/ledger";
+import type { LogDrive } from "@/lib/drives/types";
 import { LedgerFilters } from "./ledger-table-filters";
 import { LedgerLine } from "./ledger-table-row";
 import { useLedgerFilters } from "./ledger-table-url";
@@ -15,20 +13,9 @@ import { countOf } from "@/lib/plural";
 
 const fmt = (n: number) => n.toLocaleString("en-GB");
 
-async function fetchPage(query: string, cursor: string | null): Promise<LedgerPage> {
-  const qs = cursor ? `${query}${query ? "&" : ""}cursor=${cursor}` : query;
-  const { body, headers } = await fetchJsonWithHeaders<LedgerRow[]>(`/api/ledger?${qs}`);
-  return { rows: body, total: Number(headers.get(TOTAL_HEADER) ?? body.length), nextCursor: headers.get(NEXT_CURSOR_HEADER) };
-}
-
 export function LedgerTable({ drives, people, initialDriveId, timeZone }: { drives: LogDrive[]; people: { id: string; name: string }[]; initialDriveId: string; timeZone: string }) {
   const { filters, set, query } = useLedgerFilters(initialDriveId);
-  const pages = useInfiniteQuery({
-    queryKey: ledgerKeys.list(filters as Record<string, string>),
-    queryFn: ({ pageParam }) => fetchPage(query, pageParam),
-    initialPageParam: null as string | null,
-    getNextPageParam: (last) => last.nextCursor,
-  });
+  const pages = useInfiniteQuery(ledgerQueries.list(filters as Record<string, string>, query));
   const rows = useMemo(() => pages.data?.pages.flatMap((p) => p.rows) ?? [], [pages.data]);
   const total = pages.data?.pages[0]?.total ?? 0;
   // The lines of one movement are undone together; the confirmation names them all.

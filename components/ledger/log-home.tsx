@@ -11,14 +11,7 @@ import { StockCard } from "./stock-card";
 import { OutboxList } from "./outbox-list";
 import { RecentEntries } from "./recent-entries";
 import { useOutbox } from "./use-outbox";
-
-export interface LogDrive {
-  id: string;
-  name: string;
-  startsOn: string;
-  endsOn: string;
-  dropPoints: { id: string; name: string }[];
-}
+import type { LogDrive } from "@/lib/drives/types";
 
 const TABS = [
   { id: "haul", label: "Log a haul" },

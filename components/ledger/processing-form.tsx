@@ -7,7 +7,7 @@ import { FormError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { LOSS_REASON_LABEL, processingInputSchema, type LossReason } from "@/lib/ledger/schemas";
-import { stockQuery } from "@/hooks/queries/ledger";
+import { ledgerQueries } from "@/hooks/queries/ledger";
 import { ProcessingCaution } from "./cautions";
 import { NumberField } from "@/components/ui/number-field";
 import { NUMBER_SPECS, parseNumberInput, parseNumberInputs } from "@/lib/forms/number-input";
@@ -23,7 +23,7 @@ const STEPS = [
 ] as const;
 
 export function ProcessingForm({ driveId, submit }: { driveId: string; submit: Submit }) {
-  const stock = useQuery(stockQuery(driveId));
+  const stock = useQuery(ledgerQueries.stock(driveId));
   const [stepIndex, setStepIndex] = useState(0);
   const [quantityText, setQuantity] = useState("");
   const [lostText, setLost] = useState("0");

@@ -1,12 +1,11 @@
 "use client";
 
 import { useState } from "react";
-import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useQuery } from "@tanstack/react-query";
 import { Button } from "@/components/ui/button";
 import { Card, EmptyState, Skeleton } from "@/components/ui/card";
 import { FormError } from "@/components/ui/field";
-import { fetchJson } from "@/lib/api/client";
-import { ledgerKeys, myEntriesQuery, type MyEntry } from "@/hooks/queries/ledger";
+import { ledgerQueries, useUndoMovement, type MyEntry } from "@/hooks/queries/ledger";
 import { formatDateTime } from "@/lib/format";
 import { countOf } from "@/lib/plural";
 
@@ -35,18 +34,9 @@ function describe(e: MyEntry): string {
 }
 
 export function RecentEntries() {
-  const qc = useQueryClient();
-  const entries = useQuery(myEntriesQuery());
+  const entries = useQuery(ledgerQueries.mine());
   const [error, setError] = useState<string | null>(null);
-  const undo = useMutation({
-    mutationFn: (movementId: string) =>
-      fetchJson(`/api/movements/${movementId}/reversal`, { method: "POST", headers: { "idempotency-key": `undo-${movementId}` } }),
-    onSuccess: () => {
-      setError(null);
-      return qc.invalidateQueries({ queryKey: ledgerKeys.all });
-    },
-    onError: (e: Error) => setError(e.message),
-  });
+  const undo = useUndoMovement({ onSuccess: () => setError(null), onError: (e) => setError(e.message) });
   return (
     <Card title="Your recent entries">
       <FormError message={error} />
@@ -67,7 +57,7 @@ export function RecentEntries() {
                 </span>
               </span>
               {e.undone ? null : (
-                <Button type="button" variant="secondary" disabled={undo.isPending} onClick={() => undo.mutate(e.movementId)} aria-label={`Undo ${describe(e)}`}>
+                <Button type="button" variant="secondary" disabled={undo.isPending} onClick={() => undo.mutate({ movementId: e.movementId })} aria-label={`Undo ${describe(e)}`}>
                   Undo
                 </Button>
               )}

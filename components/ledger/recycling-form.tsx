@@ -1,17 +1,16 @@
 "use client";
 
 import { useState } from "react";
-import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useQuery } from "@tanstack/react-query";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/ui/field";
 import { NumberField } from "@/components/ui/number-field";
 import { NUMBER_SPECS, parseNumberInputs, type NumberSpec } from "@/lib/forms/number-input";
 import { countOf, noun } from "@/lib/plural";
 import { Notice } from "@/components/ui/notice";
-import { fetchJson } from "@/lib/api/client";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { recyclingInputSchema } from "@/lib/ledger/schemas";
-import { ledgerKeys, stockQuery } from "@/hooks/queries/ledger";
+import { ledgerQueries, useRecordRecycling } from "@/hooks/queries/ledger";
 
 // Money is not a count or a weight; a decimal with "." or "," like 12.50, with no sign or letters.
 const MONEY: NumberSpec = {
@@ -25,17 +24,14 @@ const MONEY: NumberSpec = {
 
 /** Rejected cans taken to a scrap dealer or recycling point, with weight and money if any. */
 export function RecyclingForm({ driveId }: { driveId: string }) {
-  const qc = useQueryClient();
-  const stock = useQuery(stockQuery(driveId));
+  const stock = useQuery(ledgerQueries.stock(driveId));
   const [form, setForm] = useState({ quantity: "", weightKg: "", moneyReceived: "" });
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [done, setDone] = useState<string | null>(null);
-  const save = useMutation({
-    mutationFn: (body: { quantity: number }) => fetchJson(`/api/drives/${driveId}/recycling`, { method: "POST", json: body, headers: { "idempotency-key": crypto.randomUUID() } }),
+  const save = useRecordRecycling(driveId, {
     onSuccess: (_res, body) => {
       setDone(`Recorded ${countOf(body.quantity, "can")} taken to recycling.`);
       setForm({ quantity: "", weightKg: "", moneyReceived: "" });
-      return qc.invalidateQueries({ queryKey: ledgerKeys.all });
     },
   });
 

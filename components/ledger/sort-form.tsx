@@ -8,7 +8,7 @@ import { FormError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { REJECT_REASON_LABEL, REJECT_REASONS, sortInputSchema, type RejectReason } from "@/lib/ledger/schemas";
-import { openHaulsQuery } from "@/hooks/queries/ledger";
+import { ledgerQueries } from "@/hooks/queries/ledger";
 import { SortCaution } from "./cautions";
 import { ConfirmUnusual } from "./confirm-unusual";
 import { NumberField } from "@/components/ui/number-field";
@@ -26,7 +26,7 @@ const valueOf = (raw: string) => {
 };
 
 export function SortForm({ driveId, submit }: { driveId: string; submit: Submit }) {
-  const hauls = useQuery(openHaulsQuery(driveId));
+  const hauls = useQuery(ledgerQueries.openHauls(driveId));
   const [chosen, setChosen] = useState<string[]>([]);
   const [goodText, setGood] = useState("0");
   const [rejected, setRejected] = useState(zeroRejects);

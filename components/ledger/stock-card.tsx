@@ -2,7 +2,7 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { Card, Skeleton } from "@/components/ui/card";
-import { stockQuery } from "@/hooks/queries/ledger";
+import { ledgerQueries } from "@/hooks/queries/ledger";
 
 const ROWS = [
   ["hauled", "Hauled, not sorted (estimate)"],
@@ -14,7 +14,7 @@ const ROWS = [
 ] as const;
 
 export function StockCard({ driveId }: { driveId: string }) {
-  const stock = useQuery(stockQuery(driveId));
+  const stock = useQuery(ledgerQueries.stock(driveId));
   return (
     <Card title="Cans on hand">
       {stock.isPending ? (

@@ -1,46 +1,37 @@
 "use client";
 
 import { useState } from "react";
-import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useQuery } from "@tanstack/react-query";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { Skeleton } from "@/components/ui/card";
-import { fetchJson } from "@/lib/api/client";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { NUMBER_SPECS, parseNumberInput } from "@/lib/forms/number-input";
 import { NumberInput } from "@/components/ui/number-field";
 import { plural } from "@/lib/plural";
-import { ledgerKeys, stockQuery } from "@/hooks/queries/ledger";
-import { COUNTABLE_LABEL, COUNTABLE_STAGES, countDifferences, stockCountInputSchema, type CountableStage, type StockCountLine } from "@/lib/ledger/stock-count-schema";
+import { ledgerQueries, usePostStockCount, useUndoMovement } from "@/hooks/queries/ledger";
+import type { PostedStockCount } from "@/lib/ledger/types";
+import { COUNTABLE_LABEL, COUNTABLE_STAGES, countDifferences, stockCountInputSchema, type CountableStage } from "@/lib/ledger/stock-count-schema";
 
-type Posted = { movementId: string; lines: StockCountLine[] };
 const signed = (n: number) => (n > 0 ? `+${n}` : `−${-n}`);
 
 // What is physically on hand, typed beside each running total; the differences
 // are posted as one adjustment entry with a reason. A box left empty is not counted.
 export function StockCountForm({ driveId }: { driveId: string }) {
-  const qc = useQueryClient();
-  const stock = useQuery(stockQuery(driveId));
+  const stock = useQuery(ledgerQueries.stock(driveId));
   const [typed, setTyped] = useState<Partial<Record<CountableStage, string>>>({});
   const [reason, setReason] = useState("");
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const [posted, setPosted] = useState<Posted | null>(null);
-  const refresh = () => qc.invalidateQueries({ queryKey: ledgerKeys.all });
-  const post = useMutation({
-    mutationFn: (body: unknown) => fetchJson<Posted>(`/api/drives/${driveId}/stock-counts`, { method: "POST", json: body, headers: { "idempotency-key": crypto.randomUUID() } }),
+  const [posted, setPosted] = useState<PostedStockCount | null>(null);
+  const post = usePostStockCount(driveId, {
     onSuccess: (body) => {
       setPosted(body);
       setTyped({});
       setReason("");
-      return refresh();
     },
-    onError: () => refresh(),
   });
-  const undo = useMutation({
-    mutationFn: (movementId: string) => fetchJson(`/api/movements/${movementId}/reversal`, { method: "POST", headers: { "idempotency-key": `undo-${movementId}` } }),
-    onSuccess: () => refresh(),
-  });
+  const undo = useUndoMovement();
 
   if (stock.isPending) return <Skeleton className="h-64 w-full" />;
   if (stock.isError) return <p className="text-alarm">Could not load the running totals: {stock.error.message}</p>;
@@ -126,7 +117,7 @@ export function StockCountForm({ driveId }: { driveId: string }) {
           {undo.isSuccess ? (
             <p>Undone: the running totals are back to what they were.</p>
           ) : (
-            <Button type="button" variant="secondary" disabled={undo.isPending} onClick={() => undo.mutate(posted.movementId)}>
+            <Button type="button" variant="secondary" disabled={undo.isPending} onClick={() => undo.mutate({ movementId: posted.movementId })}>
               Undo this count
             </Button>
           )}

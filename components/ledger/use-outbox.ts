@@ -1,9 +1,8 @@
 "use client";
 
 import { useCallback, useEffect, useRef, useState } from "react";
-import { useQueryClient } from "@tanstack/react-query";
 import { addToOutbox, classify, confirmedCopy, markAttempt, newOutboxItem, readOutbox, removeFromOutbox, type OutboxItem } from "@/lib/ledger/browser-queue";
-import { ledgerKeys } from "@/hooks/queries/ledger";
+import { useLedgerChanged } from "@/hooks/queries/ledger";
 import { ApiError, fetchJsonWithHeaders } from "@/lib/api/client";
 
 export type SubmitResult =
@@ -37,7 +36,7 @@ async function send(item: OutboxItem) {
 
 /** Entries go to localStorage first, then to the server; unacknowledged ones are retried with the same key. */
 export function useOutbox() {
-  const qc = useQueryClient();
+  const ledgerChanged = useLedgerChanged();
   const [items, setItems] = useState<OutboxItem[]>([]);
   const [refusals, setRefusals] = useState<Refusal[]>([]);
   const busy = useRef(false);
@@ -50,9 +49,9 @@ export function useOutbox() {
       }
       setItems(removeFromOutbox(localStorage, item.key));
       if (outcome.kind === "refused") setRefusals((r) => [...r, { key: item.key, label: item.label, message: outcome.message, question: outcome.question, item }]);
-      void qc.invalidateQueries({ queryKey: ledgerKeys.all });
+      void ledgerChanged();
     },
-    [qc],
+    [ledgerChanged],
   );
 
   const flush = useCallback(async () => {
@@ -107,7 +106,7 @@ export function useOutbox() {
         return { kind: "queued", message: "No connection: saved on this phone and will be sent when you are back online." };
       }
       setItems(removeFromOutbox(localStorage, item.key));
-      void qc.invalidateQueries({ queryKey: ledgerKeys.all });
+      void ledgerChanged();
       if (outcome.kind === "refused") {
         const { message, fields, question } = outcome;
         return { kind: "refused", message, fields, question, ...(question ? { confirm: () => attempt(confirmedCopy(item, crypto.randomUUID())) } : {}) };
@@ -116,7 +115,7 @@ export function useOutbox() {
     };
     return attempt(first);
     },
-    [flush, qc],
+    [flush, ledgerChanged],
   );
 
   const submit = useCallback(

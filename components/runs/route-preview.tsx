@@ -1,7 +1,8 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
-import { runQueries, type SuggestionRow } from "@/hooks/queries/runs";
+import { runQueries } from "@/hooks/queries/runs";
+import type { SuggestionRow } from "@/lib/runs/types";
 import { Skeleton } from "@/components/ui/card";
 import { RouteMap } from "./route-map";
 

@@ -2,18 +2,8 @@ import Link from "next/link";
 import { EmptyState } from "@/components/ui/card";
 import { RUN_STATE_LABEL, type RunState } from "@/lib/runs/schemas";
 import { countOf } from "@/lib/plural";
+import type { RunSummary } from "@/lib/runs/types";
 
-export interface RunListItem {
-  id: string;
-  driveName: string;
-  plannedOn: string;
-  state: RunState;
-  distanceKm: number;
-  assigneeName: string | null;
-  stops: number;
-  logged: number;
-  skipped: number;
-}
 
 const BADGE: Record<RunState, string> = {
   planned: "bg-paper-deep text-ink-soft",
@@ -25,7 +15,7 @@ export function RunStateBadge({ state }: { state: RunState }) {
   return <span className={`rounded px-2 py-0.5 text-sm font-semibold ${BADGE[state]}`}>{RUN_STATE_LABEL[state]}</span>;
 }
 
-export function RunList({ runs, empty }: { runs: RunListItem[]; empty: string }) {
+export function RunList({ runs, empty }: { runs: RunSummary[]; empty: string }) {
   if (runs.length === 0) return <EmptyState title={empty} />;
   return (
     <ul className="divide-y divide-paper-edge">

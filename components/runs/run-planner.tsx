@@ -1,16 +1,17 @@
 "use client";
 
-import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useQuery } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, Skeleton } from "@/components/ui/card";
 import { DriveBanner } from "@/components/drives/drive-banner";
 import { Field, FormError, SelectField } from "@/components/ui/field";
-import { fetchJson, fieldErrors } from "@/lib/api/client";
+import { fieldErrors } from "@/lib/api/client";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { createRunInputSchema } from "@/lib/runs/schemas";
-import { runQueries, type SuggestionRow } from "@/hooks/queries/runs";
+import { runQueries, useCreateRun } from "@/hooks/queries/runs";
+import type { SuggestionRow } from "@/lib/runs/types";
 import { useRememberDrive } from "@/hooks/queries/current-drive";
 import type { DriveSpan } from "@/lib/drives/current-drive";
 import { StopPicker } from "./stop-picker";
@@ -32,7 +33,6 @@ export interface PlannerProps {
 
 export function RunPlanner(props: PlannerProps) {
   const router = useRouter();
-  const queryClient = useQueryClient();
   const [driveId, setDriveId] = useState(props.initialDriveId);
   const remembered = useRememberDrive();
   const drive = props.drives.find((d) => d.id === driveId) ?? props.drives[0];
@@ -60,14 +60,7 @@ export function RunPlanner(props: PlannerProps) {
   }, [lat, lng]);
   const chosen = (suggestions.data ?? []).filter((s) => selection.ids.has(s.id));
 
-  const create = useMutation({
-    mutationFn: (body: unknown) => fetchJson<{ id: string }>("/api/runs", { method: "POST", json: body }),
-    onSuccess: async (run) => {
-      await queryClient.invalidateQueries({ queryKey: runQueries.all() });
-      router.push(`/runs/${run.id}`);
-    },
-    onError: (error) => setErrors(fieldErrors(error)),
-  });
+  const create = useCreateRun({ onSuccess: (run) => router.push(`/runs/${run.id}`), onError: (error) => setErrors(fieldErrors(error)) });
 
   function submit(event: React.FormEvent) {
     event.preventDefault();

@@ -1,16 +1,16 @@
 "use client";
 
-import { useQuery, useQueryClient } from "@tanstack/react-query";
+import { useQuery } from "@tanstack/react-query";
 import { runQueries } from "@/hooks/queries/runs";
 import { Notice } from "@/components/ui/notice";
-import type { RunDetail, RunStop } from "@/lib/runs/queries";
+import type { RunDetail, RunStop } from "@/lib/runs/types";
 import { RunStateBadge } from "./run-list";
 import { RouteMap } from "./route-map";
 import { StopActions } from "./stop-actions";
 import { UndoStopHaul, UnskipStop } from "./stop-undo";
 import { countOf } from "@/lib/plural";
 
-function StopCard({ run, stop, canAct, isNext, onDone, onChanged }: { run: RunDetail; stop: RunStop; canAct: boolean; isNext: boolean; onDone: (r: unknown) => void; onChanged: () => void }) {
+function StopCard({ run, stop, canAct, isNext }: { run: RunDetail; stop: RunStop; canAct: boolean; isNext: boolean }) {
   const p = stop.dropPoint;
   return (
     <li
@@ -52,15 +52,15 @@ function StopCard({ run, stop, canAct, isNext, onDone, onChanged }: { run: RunDe
                 </span>
               ) : null}
             </p>
-            {canAct && stop.haul ? <UndoStopHaul movementId={stop.haul.movementId} dropPointName={p.name} onDone={onChanged} /> : null}
+            {canAct && stop.haul ? <UndoStopHaul movementId={stop.haul.movementId} dropPointName={p.name} /> : null}
           </>
         ) : stop.status === "skipped" ? (
           <>
             <p className="font-semibold text-ink-soft">Skipped — “{stop.skipReason}”</p>
-            {canAct ? <UnskipStop runId={run.id} stopId={stop.id} dropPointName={p.name} onDone={onDone} /> : null}
+            {canAct ? <UnskipStop runId={run.id} stopId={stop.id} dropPointName={p.name} /> : null}
           </>
         ) : canAct ? (
-          <StopActions runId={run.id} stopId={stop.id} dropPointName={p.name} onDone={onDone} />
+          <StopActions runId={run.id} stopId={stop.id} dropPointName={p.name} />
         ) : (
           <p className="text-ink-soft">Waiting for the volunteer.</p>
         )}
@@ -70,15 +70,8 @@ function StopCard({ run, stop, canAct, isNext, onDone, onChanged }: { run: RunDe
 }
 
 export function RunView({ initial, canAct, tileUrl, attribution }: { initial: RunDetail; canAct: boolean; tileUrl: string; attribution: string }) {
-  const queryClient = useQueryClient();
-  const options = runQueries.detail<RunDetail>(initial.id);
-  const { data: run } = useQuery({ ...options, initialData: initial });
-  const onDone = (updated: unknown) => {
-    queryClient.setQueryData(options.queryKey, updated as RunDetail);
-    void queryClient.invalidateQueries({ queryKey: runQueries.all() });
-  };
-  // After an undo in the ledger the run is read again: the stop it reopened comes back pending.
-  const onChanged = () => void queryClient.invalidateQueries({ queryKey: runQueries.all() });
+  // The stop actions' hooks put each answer in this read's cache, and read it again after an undo.
+  const { data: run } = useQuery({ ...runQueries.detail(initial.id), initialData: initial });
   const next = run.stopList.find((s) => s.status === "pending");
   return (
     <div className="flex flex-col gap-4">
@@ -108,7 +101,7 @@ export function RunView({ initial, canAct, tileUrl, attribution }: { initial: Ru
       />
       <ol className="flex flex-col gap-3">
         {run.stopList.map((s) => (
-          <StopCard key={s.id} run={run} stop={s} canAct={canAct} isNext={s.id === next?.id} onDone={onDone} onChanged={onChanged} />
+          <StopCard key={s.id} run={run} stop={s} canAct={canAct} isNext={s.id === next?.id} />
         ))}
       </ol>
     </div>

@@ -1,10 +1,10 @@
 "use client";
 
-import { useMutation } from "@tanstack/react-query";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
-import { ApiError, fetchJson, fieldErrors, unusualQuestion } from "@/lib/api/client";
+import { ApiError, fieldErrors, unusualQuestion } from "@/lib/api/client";
+import { useLogStopHaul, useSkipStop } from "@/hooks/queries/runs";
 import { ConfirmUnusual } from "@/components/ledger/confirm-unusual";
 import { NumberField } from "@/components/ui/number-field";
 import { NUMBER_SPECS, parseNumberInputs } from "@/lib/forms/number-input";
@@ -19,11 +19,10 @@ interface Props {
   runId: string;
   stopId: string;
   dropPointName: string;
-  onDone: (run: unknown) => void;
 }
 
 /** Log a haul at this stop (a ledger movement, then the stop points at it), or skip it with a reason. */
-export function StopActions({ runId, stopId, dropPointName, onDone }: Props) {
+export function StopActions({ runId, stopId, dropPointName }: Props) {
   const [mode, setMode] = useState<"idle" | "log" | "skip">("idle");
   const [bags, setBags] = useState("");
   const [weight, setWeight] = useState("");
@@ -39,27 +38,15 @@ export function StopActions({ runId, stopId, dropPointName, onDone }: Props) {
   const [haulKey, setHaulKey] = useState(newKey);
   const [question, setQuestion] = useState<string | null>(null);
 
-  const log = useMutation({
-    mutationFn: async ({ bags, weightKg, confirmUnusual }: { bags: number; weightKg: number | null; confirmUnusual: boolean }) => {
-      const body: Record<string, unknown> = { bags };
-      if (weightKg !== null) body.weightKg = weightKg;
-      if (confirmUnusual) body.confirmUnusual = true;
-      // One request logs the haul in the ledger and settles the stop together.
-      const res = await fetchJson<{ run: unknown }>(`/api/runs/${runId}/stops/${stopId}/haul`, { method: "POST", json: body, headers: { "Idempotency-Key": haulKey } });
-      return res.run;
-    },
-    onSuccess: onDone,
+  // One request logs the haul in the ledger and settles the stop together; the hook puts the run's new state in the cache.
+  const log = useLogStopHaul(runId, stopId, {
     onError: (e) => {
       setFields(fieldErrors(e));
       setQuestion(unusualQuestion(e));
       if (e instanceof ApiError && e.status !== 0) setHaulKey(newKey());
     },
   });
-  const skip = useMutation({
-    mutationFn: () => fetchJson(`/api/runs/${runId}/stops/${stopId}/skip`, { method: "POST", json: { reason } }),
-    onSuccess: onDone,
-    onError: (e) => setFields(fieldErrors(e)),
-  });
+  const skip = useSkipStop(runId, stopId, { onError: (e) => setFields(fieldErrors(e)) });
 
   if (mode === "idle") {
     return (
@@ -81,7 +68,7 @@ export function StopActions({ runId, stopId, dropPointName, onDone }: Props) {
           const numbers = parseNumberInputs({ bags: [bags, NUMBER_SPECS.stopBags], weightKg: [weight, NUMBER_SPECS.haulWeightKg] });
           setFields(numbers.errors as Record<string, string>);
           if (numbers.values.bags === null || Object.keys(numbers.errors).length > 0) return;
-          log.mutate({ bags: numbers.values.bags, weightKg: numbers.values.weightKg, confirmUnusual: false });
+          log.mutate({ bags: numbers.values.bags, weightKg: numbers.values.weightKg, confirmUnusual: false, idempotencyKey: haulKey });
         }}
       >
         <div className="grid grid-cols-2 gap-3">
@@ -95,7 +82,7 @@ export function StopActions({ runId, stopId, dropPointName, onDone }: Props) {
             onYes={() => {
               setQuestion(null);
               const last = log.variables;
-              if (last) log.mutate({ ...last, confirmUnusual: true });
+              if (last) log.mutate({ ...last, confirmUnusual: true, idempotencyKey: haulKey });
             }}
             onNo={() => {
               setQuestion(null);
@@ -120,7 +107,7 @@ export function StopActions({ runId, stopId, dropPointName, onDone }: Props) {
       onSubmit={(e) => {
         e.preventDefault();
         setFields({});
-        skip.mutate();
+        skip.mutate(reason);
       }}
     >
       <Field id={`reason-${stopId}`} label="Why skip this stop?" hint="For example: closed, bin already emptied, no parking." value={reason} onChange={(e) => setReason(e.target.value)} error={fields.reason} />

@@ -1,6 +1,6 @@
 "use client";
 
-import type { SuggestionRow } from "@/hooks/queries/runs";
+import type { SuggestionRow } from "@/lib/runs/types";
 import { countOf } from "@/lib/plural";
 
 function fillLabel(s: SuggestionRow): string {

@@ -1,10 +1,9 @@
 "use client";
 
-import { useMutation } from "@tanstack/react-query";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/ui/field";
-import { fetchJson } from "@/lib/api/client";
+import { useUndoStopHaul, useUnskipStop } from "@/hooks/queries/runs";
 
 function newKey(): string {
   if (typeof crypto.randomUUID === "function") return crypto.randomUUID();
@@ -12,11 +11,8 @@ function newKey(): string {
 }
 
 /** A skipped stop goes back on the run, pending, to be logged or skipped again. */
-export function UnskipStop({ runId, stopId, dropPointName, onDone }: { runId: string; stopId: string; dropPointName: string; onDone: (run: unknown) => void }) {
-  const unskip = useMutation({
-    mutationFn: () => fetchJson(`/api/runs/${runId}/stops/${stopId}/unskip`, { method: "POST", json: {} }),
-    onSuccess: onDone,
-  });
+export function UnskipStop({ runId, stopId, dropPointName }: { runId: string; stopId: string; dropPointName: string }) {
+  const unskip = useUnskipStop(runId, stopId);
   return (
     <div className="mt-2 flex flex-col gap-1">
       <Button type="button" variant="secondary" aria-label={`Put ${dropPointName} back on the run`} disabled={unskip.isPending} onClick={() => unskip.mutate()}>
@@ -31,13 +27,11 @@ export function UnskipStop({ runId, stopId, dropPointName, onDone }: { runId: st
  * Undoes the stop's haul in the ledger (a reversing entry; both stay in its
  * history), which puts the stop back to pending so the right haul can be logged.
  */
-export function UndoStopHaul({ movementId, dropPointName, onDone }: { movementId: string; dropPointName: string; onDone: () => void }) {
+export function UndoStopHaul({ movementId, dropPointName }: { movementId: string; dropPointName: string }) {
   const [asking, setAsking] = useState(false);
   const [key] = useState(newKey);
-  const undo = useMutation({
-    mutationFn: () => fetchJson(`/api/movements/${movementId}/reversal`, { method: "POST", json: {}, headers: { "Idempotency-Key": key } }),
-    onSuccess: onDone,
-  });
+  // After the undo the run is read again (by the hook): the stop it reopened comes back pending.
+  const undo = useUndoStopHaul(movementId, key);
   if (!asking) {
     return (
       <Button type="button" variant="quiet" className="mt-2" onClick={() => setAsking(true)}>

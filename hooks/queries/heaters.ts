@@ -1,57 +1,78 @@
-import { queryOptions } from "@tanstack/react-query";
+"use client";
+
+import { queryOptions, useMutation, useQueryClient } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/api/client";
 import type { HeaterCreateInput, HeaterState } from "@/lib/heaters/unit-schemas";
+import type { ClaimAction, ClaimResult, HeaterSummary, SavedHeater } from "@/lib/heaters/types";
+import { ledgerKeys, type After } from "./ledger";
 
-// Keys and calls for heater units; mutations invalidate through `heaterKeys`.
+export type { ClaimAction, HeaterSummary, SavedHeater };
+
+// The heater domain's keys, reads and writes. Every key starts with
+// "heaters"; a write that moves cans also refreshes the ledger's reads.
 export const heaterKeys = {
   all: ["heaters"] as const,
-  detail: (id: string) => ["heaters", id] as const,
-  list: () => ["heaters", "list"] as const,
+  list: () => [...heaterKeys.all, "list"] as const,
+  detail: (id: string) => [...heaterKeys.all, "detail", id] as const,
 };
 
-/** One entry of `GET /api/heaters`: the contract's fields plus the unit's need. */
-export interface HeaterSummary {
-  id: string;
-  name: string;
-  driveId: string | null;
-  builderId: string | null;
-  cans: number;
-  claimed: number;
-  builtIn: number;
-  state: HeaterState;
-  spare: number;
-  need: number;
-  remaining: number;
-}
+export const heaterQueries = {
+  list: () => queryOptions({ queryKey: heaterKeys.list(), queryFn: () => fetchJson<HeaterSummary[]>("/api/heaters") }),
+};
 
-export const heatersQuery = () => queryOptions({ queryKey: heaterKeys.list(), queryFn: () => fetchJson<HeaterSummary[]>("/api/heaters") });
-
-export interface SavedHeater {
-  id: string;
-  name: string;
-  cans: number;
-  state: HeaterState;
-}
-
-export function createHeater(input: HeaterCreateInput) {
-  return fetchJson<SavedHeater>("/api/heaters", { method: "POST", json: input });
-}
-
-export function moveHeater(id: string, state: HeaterState) {
-  return fetchJson<SavedHeater & { released: number }>(`/api/heaters/${id}/state`, { method: "POST", json: { state } });
-}
-
-export type ClaimAction = "claims" | "releases" | "built-in";
-
-/** A ledger movement for the unit; a fresh Idempotency-Key per submit so a retried request never doubles. */
 export function postClaimAction(id: string, action: ClaimAction, quantity: number, key: string) {
-  return fetchJson<{ movementId: string; claimed: number; builtIn: number }>(`/api/heaters/${id}/${action}`, {
-    method: "POST",
-    json: { quantity },
-    headers: { "Idempotency-Key": key },
-  });
+  return fetchJson<ClaimResult>(`/api/heaters/${id}/${action}`, { method: "POST", json: { quantity }, headers: { "Idempotency-Key": key } });
 }
 
 export function moveClaimsTo(id: string, toHeaterId: string, quantity: number, key: string) {
   return fetchJson<unknown>(`/api/heaters/${id}/claim-moves`, { method: "POST", json: { toHeaterId, quantity }, headers: { "Idempotency-Key": key } });
+}
+
+function useRefreshUnitsAndStock() {
+  const client = useQueryClient();
+  return () => Promise.all([client.invalidateQueries({ queryKey: heaterKeys.all }), client.invalidateQueries({ queryKey: ledgerKeys.all })]);
+}
+
+/** Saves a plan as a unit (POST /api/heaters). */
+export function useCreateHeater(after: After<SavedHeater, HeaterCreateInput> = {}) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (input: HeaterCreateInput) => fetchJson<SavedHeater>("/api/heaters", { method: "POST", json: input }),
+    onSuccess: async (unit, input) => {
+      await client.invalidateQueries({ queryKey: heaterKeys.all });
+      await after.onSuccess?.(unit, input);
+    },
+    onError: (error, input) => after.onError?.(error, input),
+  });
+}
+
+/** Moves a unit to another state; installing gives its unbuilt claims back (`released`). */
+export function useMoveHeater(id: string, after: After<SavedHeater & { released: number }, HeaterState> = {}) {
+  const refresh = useRefreshUnitsAndStock();
+  return useMutation({
+    mutationFn: (state: HeaterState) => fetchJson<SavedHeater & { released: number }>(`/api/heaters/${id}/state`, { method: "POST", json: { state } }),
+    onSuccess: async (data, state) => {
+      await refresh();
+      await after.onSuccess?.(data, state);
+    },
+    onError: (error, state) => after.onError?.(error, state),
+  });
+}
+
+/**
+ * A ledger movement for a unit (claim, release, built in, move claims): `run`
+ * sends it with a fresh Idempotency-Key per submit, so a retried request never
+ * doubles. The unit's figures and the drive's stock are read again, then
+ * `after.onSuccess` runs (so a router.refresh there sees the new figures).
+ */
+export function useHeaterMovement(run: (quantity: number, key: string) => Promise<unknown>, after: After<unknown, number> = {}) {
+  const refresh = useRefreshUnitsAndStock();
+  return useMutation({
+    mutationFn: (quantity: number) => run(quantity, crypto.randomUUID()),
+    onSuccess: async (data, quantity) => {
+      await refresh();
+      await after.onSuccess?.(data, quantity);
+    },
+    onError: (error, quantity) => after.onError?.(error, quantity),
+  });
 }

@@ -1,48 +1,35 @@
 "use client";
 
 import { queryOptions, useMutation, useQueryClient } from "@tanstack/react-query";
+import { useCallback } from "react";
 import { fetchJson } from "@/lib/api/client";
 import type { Role } from "@/lib/auth/roles";
+import type { Invitation, Member, MyGroup } from "@/lib/accounts/types";
 
-export interface Member {
-  userId: string;
-  name: string;
-  email: string;
-  role: Role;
-  joinedAt: string;
-}
+export type { Invitation, Member, MyGroup };
 
-export interface Invitation {
-  id: string;
-  email: string;
-  role: Role;
-  sentAt: string;
-  expiresAt: string;
-  expired: boolean;
-}
+// The accounts domain's keys, reads and writes. Every key starts with
+// "members"; each mutation refreshes the keys it changes.
+export const memberKeys = {
+  all: ["members"] as const,
+  list: () => [...memberKeys.all, "list"] as const,
+  detail: (userId: string) => [...memberKeys.all, "detail", userId] as const,
+  invitations: () => [...memberKeys.all, "invitations"] as const,
+  myGroups: () => [...memberKeys.all, "me", "groups"] as const,
+};
 
-export interface MyGroup {
-  id: string;
-  slug: string;
-  name: string;
-  role: Role;
-  active: boolean;
-}
-
-export const membersQuery = () =>
-  queryOptions({ queryKey: ["members"], queryFn: ({ signal }) => fetchJson<Member[]>("/api/members", { signal }) });
-
-export const invitationsQuery = () =>
-  queryOptions({ queryKey: ["invitations"], queryFn: ({ signal }) => fetchJson<Invitation[]>("/api/invitations", { signal }) });
-
-export const myGroupsQuery = () =>
-  queryOptions({ queryKey: ["me", "groups"], queryFn: ({ signal }) => fetchJson<MyGroup[]>("/api/me/groups", { signal }) });
+export const memberQueries = {
+  list: () => queryOptions({ queryKey: memberKeys.list(), queryFn: ({ signal }) => fetchJson<Member[]>("/api/members", { signal }) }),
+  invitations: () =>
+    queryOptions({ queryKey: memberKeys.invitations(), queryFn: ({ signal }) => fetchJson<Invitation[]>("/api/invitations", { signal }) }),
+  myGroups: () => queryOptions({ queryKey: memberKeys.myGroups(), queryFn: ({ signal }) => fetchJson<MyGroup[]>("/api/me/groups", { signal }) }),
+};
 
 export function useResendInvitation() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (id: string) => fetchJson<Invitation>(`/api/invitations/${id}/resend`, { method: "POST" }),
-    onSuccess: () => client.invalidateQueries({ queryKey: invitationsQuery().queryKey }),
+    onSuccess: () => client.invalidateQueries({ queryKey: memberKeys.invitations() }),
   });
 }
 
@@ -50,8 +37,14 @@ export function useRevokeInvitation() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (id: string) => fetchJson<{ revoked: true }>(`/api/invitations/${id}`, { method: "DELETE" }),
-    onSuccess: () => client.invalidateQueries({ queryKey: invitationsQuery().queryKey }),
+    onSuccess: () => client.invalidateQueries({ queryKey: memberKeys.invitations() }),
   });
+}
+
+/** The invite form is a server action; after one is sent, the pending list (a react-query read) is refreshed. */
+export function useInvitationSent() {
+  const client = useQueryClient();
+  return useCallback(() => client.invalidateQueries({ queryKey: memberKeys.invitations() }), [client]);
 }
 
 export function useChangeRole() {
@@ -59,7 +52,7 @@ export function useChangeRole() {
   return useMutation({
     mutationFn: ({ userId, role }: { userId: string; role: Role }) =>
       fetchJson<Member>(`/api/members/${userId}`, { method: "PATCH", body: { role } }),
-    onSuccess: () => client.invalidateQueries({ queryKey: membersQuery().queryKey }),
+    onSuccess: () => client.invalidateQueries({ queryKey: memberKeys.list() }),
   });
 }
 
@@ -67,6 +60,12 @@ export function useRemoveMember() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (userId: string) => fetchJson<{ removed: true }>(`/api/members/${userId}`, { method: "DELETE" }),
-    onSuccess: () => client.invalidateQueries({ queryKey: membersQuery().queryKey }),
+    onSuccess: () => client.invalidateQueries({ queryKey: memberKeys.list() }),
   });
+}
+
+/** After the session moves to another group every cached read belongs to the old one: all are refreshed. */
+export function useGroupSwitched() {
+  const client = useQueryClient();
+  return useCallback(() => client.invalidateQueries(), [client]);
 }

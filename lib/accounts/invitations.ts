@@ -11,15 +11,8 @@ import { BCRYPT_COST } from "./queries";
 import { invitationMail } from "./mail-text";
 import { INVITATION_DAYS, hashToken, newToken } from "./tokens";
 import type { AcceptInvitationInput, InvitationInput } from "./schemas";
+import type { Invitation } from "./types";
 
-export interface PendingInvitation {
-  id: string;
-  email: string;
-  role: Role;
-  sentAt: string;
-  expiresAt: string;
-  expired: boolean;
-}
 
 const PENDING_COLUMNS = [
   "id",
@@ -32,7 +25,7 @@ const PENDING_COLUMNS = [
 
 const open = (q: Knex.QueryBuilder) => q.whereNull("accepted_at").whereNull("revoked_at");
 
-export async function listPendingInvitations(groupId: string): Promise<PendingInvitation[]> {
+export async function listPendingInvitations(groupId: string): Promise<Invitation[]> {
   return db("invitations").select(PENDING_COLUMNS).where({ group_id: groupId }).modify(open).orderBy("sent_at", "desc");
 }
 
@@ -42,7 +35,7 @@ async function mailInvitation(actor: Actor, email: string, role: Role, token: st
   await sendMail({ groupId: actor.group.id, to: email, kind: "invitation", ...mail });
 }
 
-export async function createInvitation(actor: Actor, input: InvitationInput): Promise<PendingInvitation> {
+export async function createInvitation(actor: Actor, input: InvitationInput): Promise<Invitation> {
   const member = await db("memberships as m")
     .join("users as u", "u.id", "m.user_id")
     .where({ "m.group_id": actor.group.id, "u.email": input.email })
@@ -71,7 +64,7 @@ export async function createInvitation(actor: Actor, input: InvitationInput): Pr
 }
 
 /** A fresh link and a fresh 7 days; the old link stops working. */
-export async function resendInvitation(actor: Actor, id: string): Promise<PendingInvitation> {
+export async function resendInvitation(actor: Actor, id: string): Promise<Invitation> {
   const { token, hash } = newToken();
   const [row] = await db("invitations")
     .update({ token_hash: hash, sent_at: db.fn.now(), expires_at: db.raw(`now() + interval '${INVITATION_DAYS} days'`) })

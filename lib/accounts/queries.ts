@@ -3,18 +3,13 @@ import { db } from "@/lib/db";
 import { conflict, notFound } from "@/lib/api/errors";
 import { endSessions } from "@/lib/auth/queries";
 import type { Role } from "@/lib/auth/roles";
+import type { Member } from "./types";
 
 export const BCRYPT_COST = 10;
 
-export interface MemberRow {
-  userId: string;
-  name: string;
-  email: string;
-  role: Role;
-  joinedAt: string;
-}
+export type { Member } from "./types";
 
-export async function listMembers(groupId: string): Promise<MemberRow[]> {
+export async function listMembers(groupId: string): Promise<Member[]> {
   return db("memberships as m")
     .join("users as u", "u.id", "m.user_id")
     .select("u.id as userId", "u.name", "u.email", "m.role", "m.created_at as joinedAt")
@@ -22,7 +17,7 @@ export async function listMembers(groupId: string): Promise<MemberRow[]> {
     .orderByRaw("case m.role when 'organiser' then 0 when 'builder' then 1 else 2 end, u.name");
 }
 
-export async function findMember(groupId: string, userId: string): Promise<MemberRow> {
+export async function findMember(groupId: string, userId: string): Promise<Member> {
   const row = await db("memberships as m")
     .join("users as u", "u.id", "m.user_id")
     .select("u.id as userId", "u.name", "u.email", "m.role", "m.created_at as joinedAt")

@@ -2,6 +2,7 @@ import "server-only";
 import type { Knex } from "knex";
 import { db } from "@/lib/db";
 import type { Role } from "./roles";
+import type { Membership } from "@/lib/accounts/types";
 
 export interface Actor {
   user: { id: string; email: string; name: string };
@@ -39,7 +40,7 @@ export async function loadActor(userId: string, groupId?: string | null): Promis
   };
 }
 
-export async function listMemberships(userId: string) {
+export async function listMemberships(userId: string): Promise<Membership[]> {
   return db("memberships as m")
     .join("groups as g", "g.id", "m.group_id")
     .select("g.id", "g.slug", "g.name", "m.role")

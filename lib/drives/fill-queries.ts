@@ -2,13 +2,9 @@ import "server-only";
 import { db } from "@/lib/db";
 import { notFound } from "@/lib/api/errors";
 import { ALERT_LEVEL, CURRENT_FILL_LATERAL } from "./fill";
+import type { FullBin } from "./types";
 
-export interface FullBin {
-  dropPointId: string;
-  dropPointName: string;
-  level: number;
-  reportedAt: string;
-}
+export type { FullBin };
 
 /** Every active drop point of the drive whose current fill is at the alert level or above, once each, longest waiting first. */
 export async function listFullBins(groupId: string, driveId: string): Promise<FullBin[]> {

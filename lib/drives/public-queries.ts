@@ -3,6 +3,9 @@ import { db } from "@/lib/db";
 import { notFound } from "@/lib/api/errors";
 import { UUID } from "@/lib/api/path";
 import { CURRENT_FILL_LATERAL } from "./fill";
+import type { PublicDropPointRow, PublicDropPointWithTallies } from "./types";
+
+export type { PublicDropPointRow, PublicDropPointWithTallies };
 
 export interface PublicDriveSummary {
   slug: string;
@@ -59,26 +62,6 @@ export async function findPublicDrive(slug: string): Promise<PublicDriveRow | un
 export async function unitCansOf(driveId: string, groupId: string): Promise<number[]> {
   const rows = await db("heater_units").select("cans").where({ drive_id: driveId, group_id: groupId }).orderBy([{ column: "created_at" }, { column: "name" }]);
   return rows.map((r) => Number(r.cans));
-}
-
-export interface PublicDropPointRow {
-  id: string;
-  name: string;
-  address: string;
-  lat: number;
-  lng: number;
-  hours: string;
-  capacityBags: number;
-  fillLevel: number | null;
-  fillReportedAt: string | null;
-  /** The bin's fill now: its newest report since the last haul or clear (lib/drives/fill.ts); null when none. */
-  fill: { level: number; reportedAt: string } | null;
-  photos: string[];
-}
-
-// Only public columns are selected: host name, phone and e-mail never leave.
-export interface PublicDropPointWithTallies extends PublicDropPointRow {
-  tallies: { hauls: number; bags: number; goodCans: number; rejectedCans: number };
 }
 
 /**

@@ -3,10 +3,11 @@ import "server-only";
 import { notFound } from "@/lib/api/errors";
 import { findPublicDrive, listPublicDropPointsWithTallies, unitCansOf } from "./public-queries";
 import { progressFor } from "./tallies";
+import type { PublicDriveView, PublicDropPointView } from "./types";
 
 const today = () => new Date().toISOString().slice(0, 10);
 
-export async function publicDrive(slug: string) {
+export async function publicDrive(slug: string): Promise<PublicDriveView> {
   const drive = await findPublicDrive(slug);
   if (!drive) throw notFound("That drive");
   const p = await progressFor(drive, await unitCansOf(drive.id, drive.groupId), today());
@@ -30,12 +31,10 @@ export async function publicDrive(slug: string) {
     },
   };
 }
-export type PublicDrive = Awaited<ReturnType<typeof publicDrive>>;
 
-export async function publicDropPoints(slug: string) {
+export async function publicDropPoints(slug: string): Promise<PublicDropPointView[]> {
   const points = await cachedRead(`public-drop-points:${slug}`, () => listPublicDropPointsWithTallies(slug));
   // No rows: either a drive with no active drop point, or no such public drive.
   if (points.length === 0 && !(await findPublicDrive(slug))) throw notFound("That drive");
   return points;
 }
-export type PublicDropPoint = Awaited<ReturnType<typeof publicDropPoints>>[number];

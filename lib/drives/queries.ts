@@ -1,6 +1,9 @@
 import "server-only";
 import { db } from "@/lib/db";
 import { UUID } from "@/lib/api/path";
+import type { DriveFillReport, DrivePledge, DropPointRecord, LogDrive } from "./types";
+
+export type { DropPointRecord };
 
 export async function listDrives(groupId: string) {
   return db("drives as d")
@@ -46,22 +49,6 @@ export async function findDrive(groupId: string, id: string): Promise<DriveRecor
     .first();
 }
 
-
-export interface DropPointRecord {
-  id: string;
-  driveId: string;
-  name: string;
-  address: string;
-  lat: number;
-  lng: number;
-  hours: string;
-  hostName: string;
-  hostPhone: string;
-  hostEmail: string;
-  capacityBags: number;
-  active: boolean;
-}
-
 const dropPointColumns = [
   "id",
   "drive_id as driveId",
@@ -93,7 +80,7 @@ export async function listDropPointPhotos(groupId: string, dropPointId: string) 
     .orderBy("created_at");
 }
 
-export async function listPledges(groupId: string, driveId: string) {
+export async function listPledges(groupId: string, driveId: string): Promise<DrivePledge[]> {
   return db("pledges as pl")
     .join("drop_points as p", "p.id", "pl.drop_point_id")
     .select(
@@ -109,7 +96,7 @@ export async function listPledges(groupId: string, driveId: string) {
     .orderBy([{ column: "pl.bring_on" }, { column: "pl.created_at" }]);
 }
 
-export async function listFillReports(groupId: string, driveId: string, limit = 30) {
+export async function listFillReports(groupId: string, driveId: string, limit = 30): Promise<DriveFillReport[]> {
   return db("fill_reports as f")
     .join("drop_points as p", "p.id", "f.drop_point_id")
     .leftJoin("files as fi", function () {
@@ -122,7 +109,7 @@ export async function listFillReports(groupId: string, driveId: string, limit = 
 }
 
 /** Drives with their dates and active drop points, for the entry forms; latest end first (pages choose with pageDrive). */
-export async function listLogDrives(groupId: string) {
+export async function listLogDrives(groupId: string): Promise<LogDrive[]> {
   const drives = await db("drives")
     .select("id", "name", db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`), db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`))
     .where({ group_id: groupId })

@@ -8,11 +8,12 @@ import { computeCanGrid } from "./can-grid";
 import { unitNeed } from "./need";
 import type { CanGridInput, LengthUnit } from "./schemas";
 import type { HeaterState } from "./unit-schemas";
+import type { HeaterSummary, SavedHeater } from "./types";
 
 // Every query takes the acting group and filters by it in SQL: another
 // group's unit is simply not found.
 
-export interface HeaterUnitRow {
+export interface HeaterUnitRow extends SavedHeater {
   id: string;
   name: string;
   driveId: string | null;
@@ -171,7 +172,7 @@ export async function groupLatitude(groupId: string): Promise<number | null> {
 }
 
 /** The contract's `GET /api/heaters`, plus each unit's need (cans + its spare share) and what it still needs. */
-export async function listHeatersWithClaims(groupId: string) {
+export async function listHeatersWithClaims(groupId: string): Promise<HeaterSummary[]> {
   const [units, claims] = await Promise.all([
     db("heater_units as h")
       .leftJoin("drives as d", function () {
@@ -194,7 +195,7 @@ export async function listHeatersWithClaims(groupId: string) {
       cans: u.cans as number,
       claimed,
       builtIn,
-      state: u.state as string,
+      state: u.state as HeaterState,
       spare: n.spare,
       need: n.need,
       remaining: n.remaining,

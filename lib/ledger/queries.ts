@@ -1,8 +1,9 @@
 import "server-only";
 import { db } from "@/lib/db";
 import { notFound } from "@/lib/api/errors";
+import type { MyEntry, OpenHaul } from "./types";
 
-export async function listHauls(groupId: string, driveId: string, opts: { open?: boolean } = {}) {
+export async function listHauls(groupId: string, driveId: string, opts: { open?: boolean } = {}): Promise<OpenHaul[]> {
   const drive = await db("drives").select("id").where({ id: driveId, group_id: groupId }).first();
   if (!drive) throw notFound("That drive");
   const rows = await db("hauls as h")
@@ -34,7 +35,7 @@ export { listLedger } from "./ledger-list";
 export type { LedgerRow } from "./ledger-row";
 
 /** A person's own recent entries, each with whether it was undone (for the volunteer's "undo"). */
-export async function listMyEntries(groupId: string, userId: string, limit = 15) {
+export async function listMyEntries(groupId: string, userId: string, limit = 15): Promise<MyEntry[]> {
   const rows = await db("movements as m")
     .leftJoin("movements as r", "r.reverses_movement_id", "m.id")
     .join("drives as d", "d.id", "m.drive_id")

@@ -3,6 +3,7 @@ import { AppError, conflict, notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
 import { ledgerPostCall, runLedgerCall, type LineSpec, type OwnRefusals } from "./post";
 import { COUNTABLE_LABEL, COUNTABLE_STAGES, countDifferences, type CountableStage, type StockCountInput } from "./stock-count-schema";
+import type { PostedStockCount } from "./types";
 
 // A stock count (PRODUCT.md "Stock count"): what is physically on hand per
 // stage, posted as ONE movement of kind `stockCount` that moves each stage's
@@ -32,7 +33,7 @@ function overClaimed(processedAfter: number, claimed: number) {
   );
 }
 
-export async function recordStockCount(actor: Actor, driveId: string, input: StockCountInput, conn: Conn) {
+export async function recordStockCount(actor: Actor, driveId: string, input: StockCountInput, conn: Conn): Promise<PostedStockCount> {
   const groupId = actor.group.id;
   // Read without a lock; ledger_post checks under the drive's lock that the counted stages still hold these totals.
   const { rows } = await conn.raw(

@@ -3,21 +3,9 @@ import type { Knex } from "knex";
 import { db } from "@/lib/db";
 import { notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
-import type { RunState, StopStatus } from "./schemas";
+import type { RunDetail, RunStop, RunSummary } from "./types";
 
-export interface RunSummary {
-  id: string;
-  driveId: string;
-  driveName: string;
-  plannedOn: string;
-  state: RunState;
-  distanceKm: number;
-  assigneeId: string | null;
-  assigneeName: string | null;
-  stops: number;
-  logged: number;
-  skipped: number;
-}
+export type { RunDetail, RunStop, RunSummary };
 
 const summaryColumns = (k: Knex) => [
   "r.id",
@@ -44,40 +32,6 @@ export async function listRuns(actor: Actor): Promise<RunSummary[]> {
       if (actor.role !== "organiser") q.andWhere("r.assignee_id", actor.user.id);
     })
     .orderBy([{ column: "r.planned_on", order: "desc" }, { column: "r.created_at", order: "desc" }]);
-}
-
-export interface RunStop {
-  id: string;
-  position: number;
-  legKm: number;
-  status: StopStatus;
-  skipReason: string | null;
-  haulId: string | null;
-  resolvedAt: string | null;
-  /** `movementId` is the ledger entry to undo (POST /api/movements/{id}/reversal), which reopens the stop. */
-  haul: { bags: number; weightKg: number | null; estimatedCans: number; movementId: string } | null;
-  dropPoint: {
-    id: string;
-    name: string;
-    address: string;
-    lat: number;
-    lng: number;
-    hours: string;
-    accessNotes: string;
-    hostName: string | null;
-    hostPhone: string | null;
-    hostEmail: string | null;
-    capacityBags: number;
-  };
-}
-
-export interface RunDetail extends RunSummary {
-  driveSlug: string;
-  start: { lat: number; lng: number };
-  returnToStart: boolean;
-  notes: string;
-  createdByName: string | null;
-  stopList: RunStop[];
 }
 
 /** One run of the acting group; a volunteer may only open the runs given to them (else 404). */

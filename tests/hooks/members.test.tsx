@@ -5,7 +5,7 @@ import { setupServer } from "msw/node";
 import type { ReactNode } from "react";
 import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
 import { ApiError } from "@/lib/api/client";
-import { membersQuery, useChangeRole, type Member } from "@/hooks/queries/members";
+import { memberQueries, useChangeRole, type Member } from "@/hooks/queries/members";
 
 // The members hooks against a mocked API (msw intercepts fetch), the way the
 // members page uses them: list, error JSON, a slow answer, and a mutation that
@@ -56,7 +56,7 @@ function wrapper() {
 
 describe("members hooks", () => {
   it("loads the group's members", async () => {
-    const { result } = renderHook(() => useQuery(membersQuery()), { wrapper: wrapper() });
+    const { result } = renderHook(() => useQuery(memberQueries.list()), { wrapper: wrapper() });
     await waitFor(() => expect(result.current.isSuccess).toBe(true));
     expect(result.current.data?.map((m) => m.name)).toEqual(["Mara Quillon", "Tobin Ashgrove"]);
   });
@@ -68,7 +68,7 @@ describe("members hooks", () => {
         return HttpResponse.json(members.slice(0, 1));
       }),
     );
-    const { result } = renderHook(() => useQuery(membersQuery()), { wrapper: wrapper() });
+    const { result } = renderHook(() => useQuery(memberQueries.list()), { wrapper: wrapper() });
     await new Promise((r) => setTimeout(r, 150));
     expect(result.current.isPending).toBe(true);
     expect(result.current.data).toBeUndefined();
@@ -81,7 +81,7 @@ describe("members hooks", () => {
         HttpResponse.json({ error: { code: "forbidden", message: "This needs the organiser role; you are signed in as volunteer." } }, { status: 403 }),
       ),
     );
-    const { result } = renderHook(() => useQuery(membersQuery()), { wrapper: wrapper() });
+    const { result } = renderHook(() => useQuery(memberQueries.list()), { wrapper: wrapper() });
     await waitFor(() => expect(result.current.isError).toBe(true));
     const error = result.current.error as ApiError;
     expect(error).toBeInstanceOf(ApiError);
@@ -91,13 +91,13 @@ describe("members hooks", () => {
 
   it("reports a network failure in words, not a stack", async () => {
     server.use(http.get("*/api/members", () => HttpResponse.error()));
-    const { result } = renderHook(() => useQuery(membersQuery()), { wrapper: wrapper() });
+    const { result } = renderHook(() => useQuery(memberQueries.list()), { wrapper: wrapper() });
     await waitFor(() => expect(result.current.isError).toBe(true));
     expect(result.current.error).toMatchObject({ status: 0, code: "network" });
   });
 
   it("changes a role and refreshes the list; a refused change keeps the list as it was", async () => {
-    const { result } = renderHook(() => ({ list: useQuery(membersQuery()), change: useChangeRole() }), { wrapper: wrapper() });
+    const { result } = renderHook(() => ({ list: useQuery(memberQueries.list()), change: useChangeRole() }), { wrapper: wrapper() });
     await waitFor(() => expect(result.current.list.isSuccess).toBe(true));
     expect(listCalls).toBe(1);
 

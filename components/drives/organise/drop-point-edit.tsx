@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { DriveMap } from "@/components/map/drive-map";
-import type { DropPointRecord } from "@/lib/drives/queries";
+import type { DropPointRecord } from "@/lib/drives/types";
 import { DropPointForm, type DropPointValues } from "./drop-point-form";
 
 export function DropPointEdit({ point, tileUrl, attribution }: { point: DropPointRecord; tileUrl: string; attribution: string }) {

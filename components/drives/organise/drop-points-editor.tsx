@@ -1,14 +1,13 @@
 "use client";
 
-import { useMutation } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { DriveMap } from "@/components/map/drive-map";
 import type { MapPoint } from "@/components/map/types";
 import { FormError } from "@/components/ui/field";
-import { fetchJson } from "@/lib/api/client";
-import type { DropPointRecord } from "@/lib/drives/queries";
+import { useMoveDropPoint } from "@/hooks/queries/drive-writes";
+import type { DropPointRecord } from "@/lib/drives/types";
 import { DropPointForm, emptyDropPoint, type DropPointValues } from "./drop-point-form";
 import { countOf } from "@/lib/plural";
 
@@ -27,10 +26,7 @@ export function DropPointsEditor({
 }) {
   const router = useRouter();
   const [draft, setDraft] = useState<DropPointValues | null>(null);
-  const move = useMutation({
-    mutationFn: (v: { id: string; lat: number; lng: number }) => fetchJson(`/api/drop-points/${v.id}`, { method: "PATCH", body: { lat: v.lat, lng: v.lng } }),
-    onSuccess: () => router.refresh(),
-  });
+  const move = useMoveDropPoint({ onSuccess: () => router.refresh() });
   const mapPoints: MapPoint[] = points.map((p) => ({
     id: p.id,
     name: p.name,

@@ -3,11 +3,10 @@ import { Card, EmptyState } from "@/components/ui/card";
 import { LEVEL_LABEL } from "@/lib/drives/fill";
 import { formatDateTime } from "@/lib/format";
 import { countOf } from "@/lib/plural";
+import type { DriveFillReport, DrivePledge } from "@/lib/drives/types";
 
-interface Pledge { id: string; name: string | null; email: string | null; bags: number; bringOn: string; dropPointName: string }
-interface Report { id: string; level: number; note: string; alerted: boolean; createdAt: Date; dropPointName: string; photoUrl: string | null }
 
-export function PledgesAndReports({ pledges, reports, points, slug }: { pledges: Pledge[]; reports: Report[]; points: { id: string; name: string }[]; slug: string }) {
+export function PledgesAndReports({ pledges, reports, points, slug }: { pledges: DrivePledge[]; reports: DriveFillReport[]; points: { id: string; name: string }[]; slug: string }) {
   const when = (d: Date) => formatDateTime(d, "UTC");
   return (
     <>

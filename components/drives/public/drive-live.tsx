@@ -5,7 +5,8 @@ import { DriveMap } from "@/components/map/drive-map";
 import type { MapPoint } from "@/components/map/types";
 import { FILL_SHAPE_LABEL, fillShape } from "@/lib/drives/fill";
 import { Card } from "@/components/ui/card";
-import { publicDriveQuery, publicDropPointsQuery, type PublicDriveView, type PublicDropPointView } from "@/lib/drives/query-options";
+import { driveQueries } from "@/hooks/queries/drives";
+import type { PublicDriveView, PublicDropPointView } from "@/lib/drives/types";
 import { DropPointList } from "./drop-point-list";
 import { PledgeForm } from "./pledge-form";
 import { useLiveQuery } from "@/hooks/queries/live-query";
@@ -25,8 +26,8 @@ export function DriveLive({
   tileUrl: string;
   attribution: string;
 }) {
-  const drive = useLiveQuery(publicDriveQuery(slug), initialDrive);
-  const points = useLiveQuery(publicDropPointsQuery(slug), initialPoints);
+  const drive = useLiveQuery(driveQueries.public(slug), initialDrive);
+  const points = useLiveQuery(driveQueries.publicDropPoints(slug), initialPoints);
   const [selected, setSelected] = useState<string | null>(null);
   const list = points.data ?? [];
   // The pledge form only needs names; keep the same array until those change.

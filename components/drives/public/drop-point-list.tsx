@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FILL_SHAPE_LABEL, fillShape, LEVEL_LABEL } from "@/lib/drives/fill";
-import type { PublicDropPointView } from "@/lib/drives/query-options";
+import type { PublicDropPointView } from "@/lib/drives/types";
 import { haversineKm } from "@/lib/runs/great-circle";
 import { formatDateTime } from "@/lib/format";
 import { countOf } from "@/lib/plural";

@@ -1,14 +1,13 @@
 "use client";
 
 import { lazy, Suspense, useActionState, useEffect, useState } from "react";
-import { useQueryClient } from "@tanstack/react-query";
 import { Button, buttonClass } from "@/components/ui/button";
 import { FormError, RadioGroup, TextareaField } from "@/components/ui/field";
 import { LoadBoundary } from "@/components/ui/load-boundary";
 import { IDLE, typed, type ActionState } from "@/lib/api/action-state";
 import { fillReportAction } from "@/lib/drives/form-actions";
 import { FILL_LEVELS, LEVEL_LABEL } from "@/lib/drives/fill";
-import { publicDropPointsQuery } from "@/lib/drives/query-options";
+import { useBinReported } from "@/hooks/queries/drives";
 
 const FillPhoto = lazy(() => import("./fill-photo").then((m) => ({ default: m.FillPhoto })));
 const LEVELS = FILL_LEVELS.map((l) => ({ value: String(l), label: LEVEL_LABEL[l] }));
@@ -23,12 +22,12 @@ export function FillReportForm({ slug, pointId, pointName, onDone }: { slug: str
   const [state, send, pending] = useActionState<ActionState<{ id: string }>, FormData>(fillReportAction, IDLE);
   // Set only once React runs and the disclosure is open, so it is false on the server.
   const [opened, setOpened] = useState(false);
-  const queryClient = useQueryClient();
+  const binReported = useBinReported(slug);
   const reportId = state.ok ? state.data?.id : undefined;
   const formId = `report-${point.id}`;
   useEffect(() => {
-    if (reportId) void queryClient.fetchQuery({ ...publicDropPointsQuery(slug), staleTime: 0 }).catch(() => undefined);
-  }, [reportId, slug, queryClient]);
+    if (reportId) binReported();
+  }, [reportId, binReported]);
 
   return (
     <details

@@ -1,4 +1,4 @@
-import type { PublicDriveView } from "@/lib/drives/query-options";
+import type { PublicDriveView } from "@/lib/drives/types";
 import { NO_HEATERS, remainingText } from "@/lib/drives/progress-wording";
 import { countOf, noun, plural } from "@/lib/plural";
 

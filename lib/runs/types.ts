@@ -1,0 +1,81 @@
+import type { RunState, StopStatus } from "./schemas";
+
+// The pickup-run endpoints' answers, as both sides see them: the server's
+// queries declare they return these, and the client's hooks read them. Safe
+// in the client (no server imports).
+
+export interface RunSummary {
+  id: string;
+  driveId: string;
+  driveName: string;
+  plannedOn: string;
+  state: RunState;
+  distanceKm: number;
+  assigneeId: string | null;
+  assigneeName: string | null;
+  stops: number;
+  logged: number;
+  skipped: number;
+}
+
+export interface RunStop {
+  id: string;
+  position: number;
+  legKm: number;
+  status: StopStatus;
+  skipReason: string | null;
+  haulId: string | null;
+  resolvedAt: string | null;
+  /** `movementId` is the ledger entry to undo (POST /api/movements/{id}/reversal), which reopens the stop. */
+  haul: { bags: number; weightKg: number | null; estimatedCans: number; movementId: string } | null;
+  dropPoint: {
+    id: string;
+    name: string;
+    address: string;
+    lat: number;
+    lng: number;
+    hours: string;
+    accessNotes: string;
+    hostName: string | null;
+    hostPhone: string | null;
+    hostEmail: string | null;
+    capacityBags: number;
+  };
+}
+
+export interface RunDetail extends RunSummary {
+  driveSlug: string;
+  start: { lat: number; lng: number };
+  returnToStart: boolean;
+  notes: string;
+  createdByName: string | null;
+  stopList: RunStop[];
+}
+
+/**
+ * One drop point as the planner offers it (GET /api/runs/suggestions), as JSON:
+ * the server's PlannerPoint with its dates as ISO strings.
+ */
+export interface SuggestionRow {
+  id: string;
+  name: string;
+  address: string;
+  lat: number;
+  lng: number;
+  hours: string;
+  capacityBags: number;
+  lastHaulAt: string | null;
+  daysSinceHaul: number | null;
+  bagsPerDay: number | null;
+  expectedFill: number | null;
+  reportedFill: number | null;
+  reportedFull: boolean;
+  suggested: boolean;
+}
+
+/** The answer of POST /api/plan/route: stops in visiting order and the legs between them. */
+export interface RouteAnswer {
+  order: string[];
+  distanceKm: number;
+  legs: { from: string | null; to: string | null; distanceKm: number }[];
+}
