@@ -55,6 +55,8 @@ const EXPECTED_WORDS: Record<string, string> = { string: "text", number: "a numb
 
 /** Zod's own wording for a missing or mistyped field ("Invalid input: expected string, received undefined") in words a person can act on; our schemas' own messages are kept. */
 function plainMessage(issue: ZodError["issues"][number]): string {
+  // The unknown keys are whatever the sender made up: never echo them.
+  if (issue.code === "unrecognized_keys") return "Remove the fields this form does not have.";
   if (issue.code !== "invalid_type" || !issue.message.startsWith("Invalid input")) return issue.message;
   if (/received undefined$/.test(issue.message)) return "This is needed: fill it in.";
   return `This should be ${EXPECTED_WORDS[issue.expected] ?? issue.expected}.`;

@@ -40,12 +40,15 @@ export function assertJsonContent(request: Request, raw: string): void {
   throw new AppError("unsupported_media_type", "Send the request body as JSON (Content-Type: application/json).");
 }
 
+const SAFE_PATH = /^[A-Za-z][A-Za-z0-9]{0,40}(\.[A-Za-z0-9]{1,40}){0,4}$/;
+
 /** PostgreSQL cannot store NUL in text, and no person types one: refuse it wherever it hides. */
 export function assertNoNul(value: unknown, path = ""): void {
   if (typeof value === "string") {
     if (value.includes("\u0000")) {
       throw new AppError("invalid_input", "Some fields need another look.", {
-        fields: { [path || "_"]: "Remove the invisible NUL character from this text." },
+        // A path is named only when it is one of ours in shape: a key someone made up is never echoed back.
+        fields: { [SAFE_PATH.test(path) ? path : "_"]: "Remove the invisible NUL character from this text." },
       });
     }
   } else if (Array.isArray(value)) {

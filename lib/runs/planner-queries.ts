@@ -3,15 +3,9 @@ import { db } from "@/lib/db";
 import { notFound } from "@/lib/api/errors";
 import { rankSuggestions, type HaulSample, type Suggestion } from "./suggest";
 import { recentHauls, latestFillReports } from "./activity-queries";
+import type { PlannerPlace } from "./types";
 
-export interface PlannerPoint extends Suggestion {
-  name: string;
-  address: string;
-  lat: number;
-  lng: number;
-  hours: string;
-  capacityBags: number;
-}
+export interface PlannerPoint extends Suggestion, PlannerPlace {}
 
 export async function plannerDrives(groupId: string) {
   return db("drives")

@@ -1,4 +1,5 @@
 import type { RunState, StopStatus } from "./schemas";
+import type { Suggestion } from "./suggest";
 
 // The pickup-run endpoints' answers, as both sides see them: the server's
 // queries declare they return these, and the client's hooks read them. Safe
@@ -52,26 +53,21 @@ export interface RunDetail extends RunSummary {
   stopList: RunStop[];
 }
 
-/**
- * One drop point as the planner offers it (GET /api/runs/suggestions), as JSON:
- * the server's PlannerPoint with its dates as ISO strings.
- */
-export interface SuggestionRow {
-  id: string;
+/** Where a drop point is and what it holds, as the planner shows it. */
+export interface PlannerPlace {
   name: string;
   address: string;
   lat: number;
   lng: number;
   hours: string;
   capacityBags: number;
-  lastHaulAt: string | null;
-  daysSinceHaul: number | null;
-  bagsPerDay: number | null;
-  expectedFill: number | null;
-  reportedFill: number | null;
-  reportedFull: boolean;
-  suggested: boolean;
 }
+
+/**
+ * One drop point as the planner offers it (GET /api/runs/suggestions), as JSON:
+ * the server's PlannerPoint with its dates as ISO strings.
+ */
+export type SuggestionRow = PlannerPlace & Omit<Suggestion, "lastHaulAt"> & { lastHaulAt: string | null };
 
 /** The answer of POST /api/plan/route: stops in visiting order and the legs between them. */
 export interface RouteAnswer {

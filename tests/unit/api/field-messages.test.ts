@@ -32,3 +32,12 @@ describe("field messages", () => {
     expect(errorsFor({ name: "", slug: "s", bags: 1, isPublic: true }).name).toBe("Give the drive a name.");
   });
 });
+
+describe("made-up keys", () => {
+  it("are never echoed back in a field message", () => {
+    const strict = z.object({ name: z.string() }).strict();
+    const result = strict.safeParse({ name: "Spring", "$$; select pg_sleep(5); $$": "x" });
+    if (result.success) throw new Error("expected a refusal");
+    expect(JSON.stringify(fieldErrorsOf(result.error))).not.toContain("pg_sleep");
+  });
+});

@@ -64,6 +64,15 @@ describe("assertNoNul", () => {
       expect((error as AppError).fields).toEqual({ "notes.text": expect.stringMatching(/NUL/) });
     }
   });
+
+  it("never names a made-up key in its answer", () => {
+    try {
+      assertNoNul({ "$$; select pg_sleep(5); $$": "\u0000" });
+      throw new Error("expected a refusal");
+    } catch (error) {
+      expect((error as AppError).fields).toEqual({ _: expect.stringMatching(/NUL/) });
+    }
+  });
 });
 
 // SQLSTATE values from the PostgreSQL manual, appendix A "PostgreSQL Error Codes".
