@@ -4,7 +4,7 @@ import type { Knex } from "knex";
 import type { ZodType } from "zod";
 import { AppError, invalidInput, notFound } from "./errors";
 import { toErrorResponse } from "./handler";
-import { withIdempotency, withIdempotentStatement, type PreparedStatement } from "./idempotency";
+import { withIdempotency, withIdempotentStatement, withKeyedAnswer, type PreparedStatement } from "./idempotency";
 import { assertJsonContent, assertNoNul, assertSameOrigin } from "./request-guards";
 import { consumeLimit, type LimitRule } from "./rate-limit";
 import { requireRole, requireUser } from "@/lib/auth/session";
@@ -135,6 +135,13 @@ function wrap<A extends Access, P, Q, B, R>(
   };
 }
 
+/** A handler's answer in the form kept under an Idempotency-Key. */
+async function stored(result: unknown, status: number): Promise<{ status: number; body: unknown }> {
+  if (!(result instanceof Response)) return { status, body: result ?? null };
+  const text = await result.text();
+  return { status: result.status, body: text ? JSON.parse(text) : null };
+}
+
 function respond(result: unknown, status: number): Response {
   return result instanceof Response ? result : NextResponse.json(result ?? null, { status });
 }
@@ -145,6 +152,14 @@ export function endpoint<A extends Access, P = Record<string, never>, Q = undefi
   handler: (ctx: EndpointContext<A, P, Q, B, R>) => Promise<Work<T>>,
 ) {
   return wrap(spec, async (pre) => {
+    // A signed-in POST with an Idempotency-Key keeps its first answer under the key (CONTRACT).
+    if (pre.request.method === "POST" && pre.actor && pre.request.headers.has("idempotency-key")) {
+      return withKeyedAnswer(pre.request, pre.actor as Actor, async (raw) => {
+        const body = bodyOf(pre.request, raw, spec.body);
+        await applyLimits(pre.request, spec.limits ?? [], { params: pre.params, body });
+        return stored(await handler({ ...pre, body, raw }), spec.status ?? 200);
+      });
+    }
     const raw = spec.body ? await pre.request.text() : "";
     const body = bodyOf(pre.request, raw, spec.body);
     await applyLimits(pre.request, spec.limits ?? [], { params: pre.params, body });

@@ -7,7 +7,7 @@ import { db } from "@/lib/db";
 import { AppError, conflict, errorBody, invalidInput } from "./errors";
 import type { Actor } from "@/lib/auth/queries";
 
-// The Idempotency-Key rule for every POST: the same key and body from the same
+// The Idempotency-Key rule for every signed-in POST: the same key and body from the same
 // person returns the first answer and changes nothing; the same key with
 // another body (or another endpoint) is 409. The key row is written in the
 // same transaction as the work, so a crash can never leave the work done
@@ -91,6 +91,43 @@ export async function withIdempotency(request: Request, actor: Actor, work: Idem
   });
 
   return answer(result);
+}
+
+/**
+ * The same rule for a signed-in POST whose work is not a ledger write (a new
+ * drive, an invitation, a run…): its work runs in its own transactions, so the
+ * key is claimed first (committed, with no answer yet), the work runs, and its
+ * answer is stored under the key. A repeat while the first is still running
+ * is told to retry; a failure of ours (5xx) gives the key back so a retry can
+ * do the work. No connection is held while the work runs.
+ */
+export async function withKeyedAnswer(request: Request, actor: Actor, work: (rawBody: string) => Promise<IdempotentResult>): Promise<Response> {
+  const r = await readKeyedRequest(request);
+  if (!r.key) throw new Error("withKeyedAnswer needs an Idempotency-Key");
+  const claimed = await db("idempotency_keys")
+    .insert({ actor_id: actor.user.id, key: r.key, method: r.method, path: r.path, body_hash: r.bodyHash })
+    .onConflict(["actor_id", "key"])
+    .ignore()
+    .returning("key");
+  if (claimed.length === 0) {
+    const first = await db("idempotency_keys").where({ actor_id: actor.user.id, key: r.key }).first();
+    if (first && first.status === null && first.method === r.method && first.path === r.path && first.body_hash === r.bodyHash) {
+      throw conflict("The first request with this Idempotency-Key is still being handled. Try again in a moment.");
+    }
+    return answer(await replay(db, actor, r));
+  }
+  let outcome: IdempotentResult;
+  try {
+    outcome = await work(r.raw);
+  } catch (error) {
+    if (!(error instanceof AppError) || error.status >= 500) {
+      await db("idempotency_keys").where({ actor_id: actor.user.id, key: r.key }).delete();
+      throw error;
+    }
+    outcome = { status: error.status, body: errorBody(error) };
+  }
+  await db("idempotency_keys").where({ actor_id: actor.user.id, key: r.key }).update({ status: outcome.status, response: JSON.stringify(outcome.body) });
+  return answer({ ...outcome, replayed: false });
 }
 
 /** Work that is one SQL call whose answer is known before it runs. */

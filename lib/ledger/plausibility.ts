@@ -36,9 +36,8 @@ export const BIN_OVERFILL_FACTOR = 3;
 
 /**
  * A weighed haul whose cans per bag (weight → cans at the group's calibrated
- * cans per kg, divided by bags) is more than 3× or under a third of the
- * group's calibrated cans per bag is more than 4× or under a quarter of it
- * is asked about. Common practice, no published source. Wider than for sorts
+ * cans per kg, divided by bags) is more than 4× or under a quarter of the
+ * group's calibrated cans per bag is asked about. Common practice, no published source. Wider than for sorts
  * because the uncalibrated cans per bag is deliberately low (a packed bag
  * holds well over twice DEFAULT_CANS_PER_BAG), so a full bag weighed is
  * already 2–3× the bag figure.
