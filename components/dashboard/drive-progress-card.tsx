@@ -5,6 +5,7 @@ import { FullBins } from "./full-bins";
 import type { DriveProgress } from "@/lib/drives/progress";
 import { finishText, heatersCoveredText, paceText } from "@/lib/drives/progress-wording";
 import { countOf } from "@/lib/plural";
+import { spanText } from "@/lib/drives/current-drive";
 
 interface Props {
   drive: { id: string; slug: string; name: string; startsOn: string; endsOn: string; isPublic: boolean; dropPoints: number; heaterUnits: number };
@@ -23,7 +24,7 @@ export function DriveProgressCard({ drive, progress, fullBins, pledges }: Props)
         <span className="flex flex-wrap items-baseline justify-between gap-2">
           <Link href={`/organise/drives/${drive.id}`}>{drive.name}</Link>
           <span className="text-base font-normal text-ink-faint">
-            {drive.startsOn} to {drive.endsOn}
+            {spanText(drive)}
             {drive.isPublic ? (
               <>
                 {" "}

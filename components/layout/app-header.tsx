@@ -34,9 +34,10 @@ export function AppHeader({ groupName, role, userName }: { groupName: string; ro
           <span className="font-semibold text-ink">{groupName}</span> · {ROLE_LABEL[role]} · {userName}
         </div>
       </div>
-      <nav aria-label="Group" className="mx-auto flex max-w-5xl flex-wrap items-center gap-4 px-4 pb-3 font-semibold">
+      <nav aria-label="Group" className="mx-auto flex max-w-5xl flex-wrap items-center gap-x-4 px-4 pb-2 font-semibold">
         {NAV[role].map((item) => (
-          <Link key={item.href} href={item.href}>
+          // At least 44 px tall: a finger, not a mouse pointer, is the usual way in on a phone.
+          <Link key={item.href} href={item.href} className="inline-flex min-h-11 items-center">
             {item.label}
           </Link>
         ))}

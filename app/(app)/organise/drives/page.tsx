@@ -5,6 +5,7 @@ import { Card, EmptyState } from "@/components/ui/card";
 import { requirePageRole } from "@/lib/auth/session";
 import { listDrives } from "@/lib/drives/queries";
 import { countOf } from "@/lib/plural";
+import { spanText } from "@/lib/drives/current-drive";
 
 export const metadata: Metadata = { title: "Drives" };
 
@@ -26,7 +27,7 @@ export default async function OrganiseDrivesPage() {
               <li key={d.id} className="flex flex-wrap items-baseline justify-between gap-2 py-3">
                 <Link href={`/organise/drives/${d.id}`} className="text-lg font-semibold">{d.name}</Link>
                 <span className="text-ink-faint">
-                  {d.startsOn} to {d.endsOn} · {countOf(d.dropPoints, "drop point")} · {d.isPublic ? "public" : "not public"}
+                  {spanText(d)} · {countOf(d.dropPoints, "drop point")} · {d.isPublic ? "public" : "not public"}
                 </span>
               </li>
             ))}

@@ -1,0 +1,34 @@
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser } from "playwright-core";
+import { launchBrowser, newPage, PHONE, signInAs } from "@/tests/support/browser";
+import { DEMO } from "@/tests/support/env";
+
+// WCAG 2.2, success criterion 2.5.5 "Target Size (Enhanced)": targets of at
+// least 44 by 44 CSS pixels. Checked on the signed-in header's links on a phone,
+// and the dashboard's drive dates read as words, not ISO codes.
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+describe("the signed-in header on a phone", () => {
+  it("gives every navigation link a target at least 44 px tall, and dates in words", async () => {
+    const { context, page } = await newPage(browser, PHONE);
+    await signInAs(page, DEMO.organiser);
+    await page.goto("/dashboard");
+    const links = page.getByRole("navigation", { name: "Group" }).getByRole("link");
+    const count = await links.count();
+    expect(count).toBeGreaterThanOrEqual(6);
+    for (let i = 0; i < count; i++) {
+      const box = await links.nth(i).boundingBox();
+      expect(box?.height, await links.nth(i).innerText()).toBeGreaterThanOrEqual(44);
+    }
+    const main = await page.locator("main").innerText();
+    expect(main).toMatch(/\d{1,2} [A-Z][a-z]{2} \d{4} – \d{1,2} [A-Z][a-z]{2} \d{4}/);
+    expect(main).not.toMatch(/\d{4}-\d{2}-\d{2} to \d{4}-\d{2}-\d{2}/);
+    await context.close();
+  });
+});
