@@ -31,4 +31,17 @@ describe("the signed-in header on a phone", () => {
     expect(main).not.toMatch(/\d{4}-\d{2}-\d{2} to \d{4}-\d{2}-\d{2}/);
     await context.close();
   });
+
+  it("gives the public map's zoom buttons targets of at least 44 × 44 px", async () => {
+    const { context, page } = await newPage(browser, PHONE);
+    await page.goto("/drives/larkhollow-winter-2026");
+    const zoomIn = page.getByRole("button", { name: "Zoom in" });
+    await zoomIn.waitFor();
+    for (const name of ["Zoom in", "Zoom out"]) {
+      const box = await page.getByRole("button", { name }).boundingBox();
+      expect(box?.width, name).toBeGreaterThanOrEqual(44);
+      expect(box?.height, name).toBeGreaterThanOrEqual(44);
+    }
+    await context.close();
+  });
 });
