@@ -29,6 +29,7 @@ export type NumberParse = { ok: true; value: number | null } | { ok: false; erro
 // Digits only; a decimal may have one "." or "," with digits after it ("4.5", "4,5", ",5").
 const WHOLE = /^\d+$/;
 const DECIMAL = /^(?:\d+(?:[.,]\d+)?|[.,]\d+)$/;
+const THOUSANDS_OR_DECIMAL = /^[1-9]\d{0,2},\d{3}$/;
 // Spaces a phone keyboard or a paste can add around the number.
 const EDGE_SPACE = /^[\s\u00a0\u202f]+|[\s\u00a0\u202f]+$/g;
 
@@ -45,6 +46,10 @@ export function parseNumberInput(raw: string, spec: NumberSpec): NumberParse {
   const text = raw.replace(EDGE_SPACE, "");
   if (text === "") return spec.required ? { ok: false, error: numberMessage(spec) } : { ok: true, value: null };
   if (!(spec.decimal ? DECIMAL : WHOLE).test(text)) return { ok: false, error: numberMessage(spec) };
+  // "1,234" is a thousands separator to some and a decimal comma to others: ask, never guess.
+  if (spec.decimal && THOUSANDS_OR_DECIMAL.test(text)) {
+    return { ok: false, error: `Is that ${text.replace(",", "")} or ${text.replace(",", ".")}? Type it without the comma, or with a dot for the decimals.` };
+  }
   const value = Number(text.replace(",", "."));
   if (!Number.isFinite(value) || (!spec.decimal && !Number.isSafeInteger(value))) {
     return { ok: false, error: spec.max !== undefined ? `Enter no more than ${amount(spec.max, spec)}.` : numberMessage(spec) };

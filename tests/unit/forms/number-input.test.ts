@@ -75,6 +75,14 @@ describe("a decimal box (weight in kg)", () => {
     expect(parseNumberInput(raw, kg)).toEqual({ ok: false, error: KG_MESSAGE });
   });
 
+  it("asks about \"1,234\" instead of reading it as 1.234 or 1234", () => {
+    const p = parseNumberInput("1,234", { ...kg, max: undefined });
+    expect(p.ok).toBe(false);
+    expect(p.ok ? "" : p.error).toMatch(/1234 or 1\.234/);
+    expect(parseNumberInput("1,23", kg)).toEqual({ ok: true, value: 1.23 });
+    expect(parseNumberInput("0,250", kg)).toEqual({ ok: true, value: 0.25 });
+  });
+
   it("is optional: empty is no weight", () => {
     expect(parseNumberInput("", kg)).toEqual({ ok: true, value: null });
   });
