@@ -4,16 +4,7 @@ import { AppError } from "@/lib/api/errors";
 import type { HaulSample } from "./suggest";
 import { RECENT_HAULS } from "./suggest";
 
-// Hauls belong to the ledger and fill reports to the drop-point area; runs only
-// read them. Until the fill-report table exists, suggestions rest on hauls alone.
-const present = new Set<string>();
-async function tableExists(name: string): Promise<boolean> {
-  if (present.has(name)) return true;
-  const row = await db.raw("select to_regclass(?) as t", [`public.${name}`]);
-  const exists = row.rows[0]?.t !== null;
-  if (exists) present.add(name);
-  return exists;
-}
+// Hauls belong to the ledger and fill reports to the drop-point area; runs only read them.
 
 /** The last few hauls of each drop point, newest first. */
 export async function recentHauls(groupId: string, dropPointIds: string[]): Promise<Map<string, HaulSample[]>> {
@@ -48,7 +39,7 @@ export async function latestFillReports(
   dropPointIds: string[],
 ): Promise<Map<string, { fraction: number; at: Date }>> {
   const out = new Map<string, { fraction: number; at: Date }>();
-  if (dropPointIds.length === 0 || !(await tableExists("fill_reports"))) return out;
+  if (dropPointIds.length === 0) return out;
   const rows = await db("fill_reports")
     .distinctOn("drop_point_id")
     .select("drop_point_id", db.raw("level / 100.0 as fraction"), "created_at as at")
