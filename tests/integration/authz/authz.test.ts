@@ -22,7 +22,7 @@ function routeFiles(dir: string): string[] {
   return readdirSync(dir).flatMap((entry) => {
     const full = path.join(dir, entry);
     if (statSync(full).isDirectory()) return routeFiles(full);
-    return entry === "route.ts" ? [path.relative(root, full)] : [];
+    return /^route(\.bench)?\.ts$/.test(entry) ? [path.relative(root, full)] : [];
   });
 }
 
