@@ -45,7 +45,8 @@ export async function confirmPasswordReset(token: string, password: string): Pro
       .where({ id: reset.user_id });
     await endSessions(reset.user_id, trx);
     await trx("password_resets").update({ used_at: trx.fn.now() }).where({ user_id: reset.user_id }).whereNull("used_at");
-    return (await trx("users").select("email").where({ id: reset.user_id }).first()).email as string;
+    // password_resets.user_id is a foreign key: the person is there.
+    return (await trx("users").select("email").where({ id: reset.user_id }).first())!.email;
   });
   await clearSignInTries(email);
 }

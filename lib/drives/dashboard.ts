@@ -20,7 +20,7 @@ export async function organiserDashboard(groupId: string) {
     return ta === "upcoming" ? a.startsOn.localeCompare(b.startsOn) : b.endsOn.localeCompare(a.endsOn);
   });
   const spare = await db("drives").select("id", "spare_percent").where({ group_id: groupId });
-  const spareOf = new Map(spare.map((d) => [d.id as string, Number(d.spare_percent)]));
+  const spareOf = new Map(spare.map((d) => [d.id, d.spare_percent]));
   return Promise.all(
     drives.map(async (d) => {
       const [progress, fills, pledges] = await Promise.all([
