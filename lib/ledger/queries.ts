@@ -12,7 +12,7 @@ type HaulListRow = Pick<
 export async function listHauls(groupId: string, driveId: string, opts: { open?: boolean } = {}): Promise<OpenHaul[]> {
   const drive = await db("drives").select("id").where({ id: driveId, group_id: groupId }).first();
   if (!drive) throw notFound("That drive");
-  // A join: the row type is said here (the columns of "hauls" as types/knex-tables.d.ts has them).
+  // A join: the row type is said here (the columns of "hauls" as types/tables/*.d.ts has them).
   const rows: HaulListRow[] = await db("hauls as h")
     .join("drop_points as p", "p.id", "h.drop_point_id")
     .select("h.id", "h.movement_id", "h.drop_point_id", "p.name as drop_point_name", "h.bags", "h.weight_kg", "h.estimated_cans", "h.estimate_method", "h.estimate_counted_hauls", "h.hauled_at", "h.sort_id")

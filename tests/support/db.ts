@@ -4,7 +4,7 @@ import knex, { type Knex } from "knex";
 let instance: TestDb | undefined;
 
 /**
- * The app's table reads are typed (types/knex-tables.d.ts, which assumes knexfile.ts's
+ * The app's table reads are typed (types/tables/*.d.ts, which assumes knexfile.ts's
  * type parsers). A test's own connection may run without them (bigint as text) and
  * reads rows it has just written, where a missing row fails the test at its first
  * use, so its table reads stay untyped: this call signature is tried before Knex's.
