@@ -43,15 +43,8 @@ export interface RunDetail extends RunSummary {
   stopList: RunStop[];
 }
 
-/** Where a drop point is and what it holds, as the planner shows it. */
-export interface PlannerPlace {
-  name: string;
-  address: string;
-  lat: number;
-  lng: number;
-  hours: string;
-  capacityBags: number;
-}
+/** Where a drop point is and what it holds, as the planner shows it (its id comes with the suggestion). */
+export type PlannerPlace = Omit<DropPointPlace, "id">;
 
 /**
  * One drop point as the planner offers it (GET /api/runs/suggestions), as JSON:
