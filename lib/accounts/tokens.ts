@@ -14,10 +14,8 @@ export function hashToken(token: string): string {
 }
 
 /** A mailed link's row (password reset, address proof) while it still works: unused and unexpired, locked until the transaction ends. */
-export function openLinkRow(trx: Knex.Transaction, table: "password_resets", token: string): Promise<Tables["password_resets"] | undefined>;
-export function openLinkRow(trx: Knex.Transaction, table: "email_verifications", token: string): Promise<Tables["email_verifications"] | undefined>;
-export function openLinkRow(trx: Knex.Transaction, table: string, token: string) {
-  return trx(table).where({ token_hash: hashToken(token) }).whereNull("used_at").andWhere("expires_at", ">", trx.fn.now()).forUpdate().first();
+export function openLinkRow(trx: Knex.Transaction, table: "password_resets" | "email_verifications", token: string): Promise<Tables["password_resets"] | undefined> {
+  return trx<Tables["password_resets"]>(table).where({ token_hash: hashToken(token) }).whereNull("used_at").andWhere("expires_at", ">", trx.fn.now()).forUpdate().first();
 }
 
 export const INVITATION_DAYS = 7;

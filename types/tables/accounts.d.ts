@@ -51,15 +51,8 @@ declare module "knex/types/tables" {
     accepted_by: string | null;
     revoked_at: Date | null;
   }
-  interface PasswordResetsRow {
-    id: string;
-    user_id: string;
-    token_hash: string;
-    created_at: Date;
-    expires_at: Date;
-    used_at: Date | null;
-  }
-  interface EmailVerificationsRow {
+  /** A mailed link's row: password_resets and email_verifications have the same columns. */
+  interface MailedLinkRow {
     id: string;
     user_id: string;
     token_hash: string;
@@ -115,8 +108,8 @@ declare module "knex/types/tables" {
     groups: GroupsRow;
     memberships: MembershipsRow;
     invitations: InvitationsRow;
-    password_resets: PasswordResetsRow;
-    email_verifications: EmailVerificationsRow;
+    password_resets: MailedLinkRow;
+    email_verifications: MailedLinkRow;
     rate_limits: RateLimitsRow;
     idempotency_keys: IdempotencyKeysRow;
     outbox: OutboxRow;
