@@ -4,6 +4,7 @@
 // - layers: app → components → hooks → lib, never back (lib imports no UI);
 // - no import cycles;
 // - a module under lib/ named *queries*.ts is server-only;
+// - the computations (PURE below) import no database, Next.js or server-only code;
 // - files stay under 250 lines (tests and migrations excepted).
 // tests/unit/lint-rules.test.ts proves each of these fires.
 import nextVitals from "eslint-config-next/core-web-vitals";
@@ -31,6 +32,15 @@ const layer = (from, banned, why) => ({
   },
 });
 
+/** The computations: plain functions of their inputs, so unit tests and the browser can run them. */
+const PURE = [
+  "drives/progress", "drives/progress-wording", "drives/fill", "heaters/can-grid", "heaters/heat", "heaters/sun",
+  "heaters/materials", "heaters/need", "heaters/states", "heaters/build-steps", "ledger/estimate", "ledger/allocate",
+  "ledger/daily-series", "ledger/plausibility", "ledger/entry-time", "map/tiles", "runs/great-circle",
+  "runs/route-order", "runs/state", "runs/suggest",
+];
+const IMPURE = ["@/lib/db", "knex", "pg", "next/*", "server-only", "@/lib/**/*queries*", "@/lib/**/commands", "@/lib/auth/queries", "@/lib/auth/options", "@/lib/auth/session*", "@/lib/auth/require*", "@/lib/api/endpoint", "@/lib/api/handler", "@/lib/api/action", "@/lib/api/idempotency", "@/lib/api/rate-limit*"];
+
 const config = [
   { ignores: [".next/**", "node_modules/**", "public/**", ".test-results/**", ".pgdata/**", "next-env.d.ts", "bench/**"] },
   ...nextVitals,
@@ -48,6 +58,15 @@ const config = [
   layer(["lib/**"], ["@/app/*", "@/components/*", "@/hooks/*"], "lib/ is the bottom layer: it imports no pages, components or hooks."),
   layer(["hooks/**"], ["@/app/*", "@/components/*"], "Hooks sit under components: they import lib/ only."),
   layer(["components/**"], ["@/app/*"], "Components never import pages or route handlers."),
+  {
+    files: PURE.map((name) => `lib/**/${name.split("/")[1]}.ts`),
+    rules: {
+      "no-restricted-imports": [
+        "error",
+        { patterns: [...IMPURE, "@/app/*", "@/components/*", "@/hooks/*"].map((group) => ({ group: [group], message: "A computation is pure: no database, Next.js, session or request code." })) },
+      ],
+    },
+  },
   // Tests, migrations, seeds and scripts may be long (a table of cases, a schema) and reach any layer.
   { files: ["tests/**", "db/**", "scripts/**"], rules: { "max-lines": "off", "no-restricted-imports": "off" } },
 ];

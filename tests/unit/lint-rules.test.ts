@@ -50,6 +50,13 @@ describe("the linter's rules of shape", { timeout: 60_000 }, () => {
     expect(await rulesFor("lib/sample-queries.ts", 'import "server-only";\n\nexport const q = 1;\n')).toEqual([]);
   });
 
+  it("refuses a computation that reaches the database or Next.js", async () => {
+    expect(await rulesFor("lib/heaters/can-grid.ts", 'import { db } from "@/lib/db";\n\nexport const d = db;\n')).toContain("no-restricted-imports");
+    expect(await rulesFor("lib/drives/progress.ts", 'import { headers } from "next/headers";\n\nexport const h = headers;\n')).toContain("no-restricted-imports");
+    // The same import outside the list of computations is allowed.
+    expect(await rulesFor("lib/drives/lint-sample.ts", 'import { db } from "@/lib/db";\n\nexport const d = db;\n')).toEqual([]);
+  });
+
   it("refuses an import cycle", async () => {
     // Both files exist before either is linted: the import plugin keeps what it resolved for a while.
     writeSample("lib/cycle/b.ts", 'import { a } from "./a";\n\nexport const b = (): unknown => a;\n');
