@@ -5,6 +5,7 @@
 // - no import cycles;
 // - a module under lib/ named *queries*.ts is server-only;
 // - the computations (PURE below) import no database, Next.js or server-only code;
+// - the browser side fetches only through lib/api/client.ts;
 // - files stay under 250 lines (tests and migrations excepted).
 // tests/unit/lint-rules.test.ts proves each of these fires.
 import nextVitals from "eslint-config-next/core-web-vitals";
@@ -66,6 +67,11 @@ const config = [
         { patterns: [...IMPURE, "@/app/*", "@/components/*", "@/hooks/*"].map((group) => ({ group: [group], message: "A computation is pure: no database, Next.js, session or request code." })) },
       ],
     },
+  },
+  // The browser side talks to the API through lib/api/client.ts only (one error shape, one network message).
+  {
+    files: ["app/**/*.tsx", "components/**", "hooks/**"],
+    rules: { "no-restricted-globals": ["error", { name: "fetch", message: "Use fetchJson / fetchJsonWithHeaders from @/lib/api/client." }] },
   },
   // Tests, migrations, seeds and scripts may be long (a table of cases, a schema) and reach any layer.
   { files: ["tests/**", "db/**", "scripts/**"], rules: { "max-lines": "off", "no-restricted-imports": "off" } },

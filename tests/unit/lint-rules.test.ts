@@ -57,6 +57,11 @@ describe("the linter's rules of shape", { timeout: 60_000 }, () => {
     expect(await rulesFor("lib/drives/lint-sample.ts", 'import { db } from "@/lib/db";\n\nexport const d = db;\n')).toEqual([]);
   });
 
+  it("refuses a component that calls fetch itself instead of the one fetch wrapper", async () => {
+    expect(await rulesFor("components/lint-sample.tsx", 'export const load = () => fetch("/api/me");\n')).toContain("no-restricted-globals");
+    expect(await rulesFor("components/lint-sample.tsx", 'import { fetchJson } from "@/lib/api/client";\n\nexport const load = () => fetchJson("/api/me");\n')).toEqual([]);
+  });
+
   it("refuses an import cycle", async () => {
     // Both files exist before either is linted: the import plugin keeps what it resolved for a while.
     writeSample("lib/cycle/b.ts", 'import { a } from "./a";\n\nexport const b = (): unknown => a;\n');
