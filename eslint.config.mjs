@@ -6,6 +6,7 @@
 // - a module under lib/ named *queries*.ts is server-only;
 // - the computations (PURE below) import no database, Next.js or server-only code;
 // - the browser side fetches only through lib/api/client.ts;
+// - a rule is switched off for one line only, with ` -- reason`;
 // - files stay under 250 lines (tests and migrations excepted).
 // tests/unit/lint-rules.test.ts proves each of these fires.
 import nextVitals from "eslint-config-next/core-web-vitals";
@@ -21,6 +22,24 @@ const serverOnlyQueries = {
       Program(node) {
         const has = node.body.some((s) => s.type === "ImportDeclaration" && s.source.value === "server-only");
         if (!has) context.report({ node, messageId: "missing" });
+      },
+    };
+  },
+};
+
+/** A rule is switched off for one line only, and says why: `// eslint-disable-next-line rule -- reason`. */
+const disableWithReason = {
+  meta: { type: "problem", messages: { reason: "Say why after ` -- `, and switch the rule off for one line only (eslint-disable-next-line / -line)." }, schema: [] },
+  create(context) {
+    return {
+      Program() {
+        for (const comment of context.sourceCode.getAllComments()) {
+          const text = comment.value.trim();
+          if (!/^eslint-disable/.test(text)) continue;
+          const oneLine = /^eslint-disable-(next-)?line\b/.test(text);
+          const why = /\s--\s*\S/.test(text);
+          if (!oneLine || !why) context.report({ loc: comment.loc, messageId: "reason" });
+        }
       },
     };
   },
@@ -47,8 +66,9 @@ const config = [
   ...nextVitals,
   ...nextTs,
   {
-    plugins: { cantrove: { rules: { "server-only-queries": serverOnlyQueries } } },
+    plugins: { cantrove: { rules: { "server-only-queries": serverOnlyQueries, "disable-with-reason": disableWithReason } } },
     rules: {
+      "cantrove/disable-with-reason": "error",
       "import/no-cycle": ["error", { ignoreExternal: true }],
       "max-lines": ["error", { max: MAX_LINES, skipBlankLines: false, skipComments: false }],
       // Our own style (STYLE.md) where Next's set is silent or too loose.

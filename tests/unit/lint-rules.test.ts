@@ -62,6 +62,13 @@ describe("the linter's rules of shape", { timeout: 60_000 }, () => {
     expect(await rulesFor("components/lint-sample.tsx", 'import { fetchJson } from "@/lib/api/client";\n\nexport const load = () => fetchJson("/api/me");\n')).toEqual([]);
   });
 
+  it("refuses a switched-off rule without a reason, or for a whole file", async () => {
+    const line = "export const f = (x: any) => x;\n";
+    expect(await rulesFor("lib/lint-sample.ts", `// eslint-disable-next-line @typescript-eslint/no-explicit-any\n${line}`)).toContain("cantrove/disable-with-reason");
+    expect(await rulesFor("lib/lint-sample.ts", `/* eslint-disable @typescript-eslint/no-explicit-any -- reason */\n${line}`)).toContain("cantrove/disable-with-reason");
+    expect(await rulesFor("lib/lint-sample.ts", `// eslint-disable-next-line @typescript-eslint/no-explicit-any -- why it is fine here\n${line}`)).toEqual([]);
+  });
+
   it("refuses an import cycle", async () => {
     // Both files exist before either is linted: the import plugin keeps what it resolved for a while.
     writeSample("lib/cycle/b.ts", 'import { a } from "./a";\n\nexport const b = (): unknown => a;\n');

@@ -32,7 +32,7 @@ export function DriveLive({
   const list = points.data ?? [];
   // The pledge form only needs names; keep the same array until those change.
   const choiceKey = list.map((p) => `${p.id}\t${p.name}`).join("\n");
-  // eslint-disable-next-line react-hooks/exhaustive-deps
+  // eslint-disable-next-line react-hooks/exhaustive-deps -- choiceKey stands for the names and ids of list
   const choices = useMemo(() => list.map(({ id, name }) => ({ id, name })), [choiceKey]);
   const centre = list.length
     ? { lat: list.reduce((s, p) => s + p.lat, 0) / list.length, lng: list.reduce((s, p) => s + p.lng, 0) / list.length }
