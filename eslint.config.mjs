@@ -6,6 +6,8 @@
 // - a module under lib/ named *queries*.ts is server-only;
 // - the computations (PURE below) import no database, Next.js or server-only code;
 // - the browser side fetches only through lib/api/client.ts;
+// - the ledger's tables are written only by the database functions, and ledger lines are not read
+//   (summed) outside lib/ledger's list;
 // - a rule is switched off for one line only, with ` -- reason`;
 // - files stay under 250 lines (tests and migrations excepted).
 // tests/unit/lint-rules.test.ts proves each of these fires.
@@ -61,6 +63,21 @@ const PURE = [
 ];
 const IMPURE = ["@/lib/db", "knex", "pg", "next/*", "server-only", "@/lib/**/*queries*", "@/lib/**/commands", "@/lib/auth/queries", "@/lib/auth/options", "@/lib/auth/session*", "@/lib/auth/require*", "@/lib/api/endpoint", "@/lib/api/handler", "@/lib/api/action", "@/lib/api/idempotency", "@/lib/api/rate-limit*"];
 
+/** The ledger's running totals: written only by the database functions in db/functions/. */
+const TOTALS = "stage_balances|reject_tallies|drop_point_tallies|drive_daily_good|group_calibration|ledger_lines|movements";
+const writesTotals = {
+  selector: `CallExpression[callee.property.name=/^(insert|update|upsert|del|delete|increment|decrement|merge|truncate)$/] > MemberExpression Literal[value=/^(${TOTALS})( as \\w+)?$/]`,
+  message: "The ledger and its running totals are written only by the database functions (db/functions/, through lib/ledger/post.ts).",
+};
+const readsLines = {
+  selector: "CallExpression[callee.name=/^(db|trx|knex)$/] > Literal[value=/^ledger_lines( as \\w+)?$/]",
+  message: "Balances come from the running totals; ledger lines are listed only by lib/ledger/ledger-list.ts.",
+};
+const ledgerRules = [
+  { files: ["app/**", "components/**", "hooks/**", "lib/**"], ignores: ["lib/bench/**"], rules: { "no-restricted-syntax": ["error", writesTotals, readsLines] } },
+  { files: ["lib/ledger/ledger-list.ts"], rules: { "no-restricted-syntax": ["error", writesTotals] } },
+];
+
 const config = [
   { ignores: [".next/**", "node_modules/**", "public/**", ".test-results/**", ".pgdata/**", "next-env.d.ts", "bench/**"] },
   ...nextVitals,
@@ -88,6 +105,7 @@ const config = [
       ],
     },
   },
+  ...ledgerRules,
   // The browser side talks to the API through lib/api/client.ts only (one error shape, one network message).
   {
     files: ["app/**/*.tsx", "components/**", "hooks/**"],

@@ -69,6 +69,13 @@ describe("the linter's rules of shape", { timeout: 60_000 }, () => {
     expect(await rulesFor("lib/lint-sample.ts", `// eslint-disable-next-line @typescript-eslint/no-explicit-any -- why it is fine here\n${line}`)).toEqual([]);
   });
 
+  it("refuses a write to the ledger's totals and a sum over ledger lines outside the database functions", async () => {
+    const head = 'import { db } from "@/lib/db";\n\n';
+    expect(await rulesFor("lib/lint-sample.ts", `${head}export const w = () => db("stage_balances").where({ stage: "good" }).update({ quantity: 1 });\n`)).toContain("no-restricted-syntax");
+    expect(await rulesFor("lib/lint-sample.ts", `${head}export const s = () => db("ledger_lines as l").sum("quantity");\n`)).toContain("no-restricted-syntax");
+    expect(await rulesFor("lib/lint-sample.ts", `${head}export const r = () => db("stage_balances").where({ stage: "good" }).first("quantity");\n`)).toEqual([]);
+  });
+
   it("refuses an import cycle", async () => {
     // Both files exist before either is linted: the import plugin keeps what it resolved for a while.
     writeSample("lib/cycle/b.ts", 'import { a } from "./a";\n\nexport const b = (): unknown => a;\n');
