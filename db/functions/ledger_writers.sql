@@ -72,7 +72,7 @@ begin
 end
 $$;
 
--- A run's state follows its stops, by the rule of lib/runs/state.ts runStateOf: done when none
+-- A run's state follows its stops (the one place this rule lives): done when none
 -- is pending, under way when some is not, else planned; finished_at only while it is done.
 -- v_starts: a stop was just settled, so the run has started (started_at kept once set).
 -- The caller holds the run's row (or the drive's lock, for an undo). Answers { state, stops, logged, skipped }.

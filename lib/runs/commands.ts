@@ -6,8 +6,8 @@ import type { Actor } from "@/lib/auth/queries";
 import { recordHaulAtStop } from "@/lib/ledger/record";
 import { haulInputSchema } from "@/lib/ledger/schemas";
 import { planRoute } from "@/lib/runs/route-order";
-import type { CreateRunInput, StopStatus } from "./schemas";
-import { runStateOf } from "./state";
+import type { CreateRunInput } from "./schemas";
+import { followStops } from "./stop-follow";
 import type { RunDetail, RunStop } from "./types";
 
 // The pickup runs' writes: a new run, and settling its stops. Reads are in queries.ts.
@@ -130,7 +130,7 @@ export async function resolveStop(
   change: { status: "skipped"; reason: string } | { status: "logged"; haulId: string },
   trx: Knex.Transaction,
 ) {
-  const { run, stop } = await lockPendingStop(actor, runId, stopId, trx);
+  const { stop } = await lockPendingStop(actor, runId, stopId, trx);
   if (change.status === "logged") {
     // Two runs logging one haul lock different runs; locking the haul makes
     // the second wait for the first and then see the stop it settled.
@@ -152,14 +152,6 @@ export async function resolveStop(
       if (isUniqueViolation(error, "pickup_run_stops_haul_unique")) throw conflict(HAUL_TAKEN);
       throw error;
     });
-  const statuses: StopStatus[] = await trx("pickup_run_stops").where({ run_id: runId }).pluck("status");
-  const state = runStateOf(statuses);
-  await trx("pickup_runs")
-    .where({ id: runId })
-    .update({
-      state,
-      started_at: run.started_at ?? trx.fn.now(),
-      finished_at: state === "done" ? trx.fn.now() : null,
-    });
+  const state = await followStops(trx, runId, true);
   return { dropPointId: stop.dropPointId, state };
 }
