@@ -29,6 +29,22 @@ export async function listPublicDrives(): Promise<PublicDriveSummary[]> {
     .orderBy([{ column: "starts_on", order: "desc" }, { column: "name" }]);
 }
 
+/** The landing page's list: every public drive with its group's name and the group's own calendar day now. */
+export async function listPublicDrivesWithDay(): Promise<(PublicDriveSummary & { groupName: string; today: string })[]> {
+  return db("drives as d")
+    .join("groups as g", "g.id", "d.group_id")
+    .select(
+      "d.slug",
+      "d.name",
+      "g.name as groupName",
+      db.raw(`to_char(d.starts_on, 'YYYY-MM-DD') as "startsOn"`),
+      db.raw(`to_char(d.ends_on, 'YYYY-MM-DD') as "endsOn"`),
+      db.raw(`to_char((now() at time zone g.time_zone)::date, 'YYYY-MM-DD') as "today"`),
+    )
+    .where({ "d.is_public": true })
+    .orderBy([{ column: "d.name" }]);
+}
+
 export interface PublicDriveRow extends PublicDriveSummary {
   id: string;
   groupId: string;
