@@ -45,6 +45,12 @@ export async function listPublicDrivesWithDay(): Promise<(PublicDriveSummary & {
     .orderBy([{ column: "d.name" }]);
 }
 
+/** The time zone of the group running a public drive (for showing times as the group reads them). */
+export async function publicDriveTimeZone(slug: string): Promise<string> {
+  const row = await db("drives as d").join("groups as g", "g.id", "d.group_id").select("g.time_zone as timeZone").where({ "d.slug": slug, "d.is_public": true }).first();
+  return (row?.timeZone as string | undefined) ?? "UTC";
+}
+
 export interface PublicDriveRow extends PublicDriveSummary {
   id: string;
   groupId: string;
