@@ -1,4 +1,5 @@
 import { geoUri, osmUrl } from "@/lib/map/directions";
+import { binPagePath } from "@/lib/drives/bin-page";
 
 const LINK = "inline-flex min-h-11 items-center rounded-lg border-2 border-ink/30 bg-white px-3 py-1 font-semibold no-underline hover:border-ink";
 
@@ -21,7 +22,7 @@ export function PointLinks({ slug, point, onBinPage = false }: { slug: string; p
         Pledge cans here
       </a>
       {onBinPage ? null : (
-        <a className={LINK} href={`/drives/${slug}/bins/${point.id}`}>
+        <a className={LINK} href={binPagePath(slug, point.id)}>
           This bin’s page
         </a>
       )}
