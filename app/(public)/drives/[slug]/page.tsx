@@ -17,7 +17,8 @@ type Props = { params: Promise<{ slug: string }>; searchParams?: Promise<{ point
 
 async function load(slug: string) {
   try {
-    return await Promise.all([publicDrive(slug), publicDropPoints(slug), publicDriveTimeZone(slug)]);
+    const readAt = new Date().getTime();
+    return [...(await Promise.all([publicDrive(slug), publicDropPoints(slug), publicDriveTimeZone(slug)])), readAt] as const;
   } catch (error) {
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;
@@ -39,8 +40,7 @@ function formatDate(d: string) {
 
 export default async function PublicDrivePage({ params, searchParams }: Props) {
   const { slug } = await params;
-  const readAt = Date.now();
-  const [drive, points, timeZone] = await load(slug);
+  const [drive, points, timeZone, readAt] = await load(slug);
   const tiles = tileConfig();
   // "Pledge cans here" links carry ?point=<id>; anything not one of this drive's points is ignored.
   const asked = (await searchParams)?.point;
