@@ -1,6 +1,7 @@
 import type { CanGridResult } from "@/lib/heaters/can-grid";
 import { formatLength } from "@/lib/heaters/format";
 import type { ResolvedCanGridInput } from "@/lib/heaters/schemas";
+import { SheetOutline } from "./sheet-outline";
 
 /**
  * The build sheet's drawing, to scale and dimensioned: the glazing sheet, the
@@ -46,25 +47,13 @@ export function GridDimensions({ plan, grid }: { plan: ResolvedCanGridInput; gri
   const rowLines = grid.rows <= 60 ? Array.from({ length: grid.rows - 1 }, (_, r) => bottom - (r + 1) * L) : [];
   return (
     <figure className="flex flex-col gap-1">
-      <svg role="img" aria-label={`Dimensioned grid: ${grid.columns} columns by ${grid.rows} rows`} viewBox={`0 0 ${W + x0 + gap * 2} ${boxH + y0 + gap * 1.5}`} className="mx-auto max-h-[30rem] w-full print:max-h-[120mm]">
+      <svg role="img" aria-label={`Dimensioned grid: ${grid.columns} columns by ${grid.rows} rows`} viewBox={`0 0 ${W + x0 + gap * 2} ${boxH + y0 + gap * 1.5}`} className="mx-auto max-h-[30rem] w-full print:max-h-[95mm]">
         <defs>
           <marker id="dim-end" viewBox="0 0 10 10" refX="5" refY="5" markerWidth="6" markerHeight="6" orient="auto-start-reverse">
             <path d="M0,0 L10,5 L0,10 z" fill="#1f1b16" />
           </marker>
         </defs>
-        {outside > 0 ? (
-          <>
-            <rect x={x0} y={y0} width={W} height={m} fill="#e2d5bf" stroke="#6b6156" strokeDasharray={`${stroke * 6}`} strokeWidth={stroke} />
-            <rect x={x0} y={sheetY + H} width={W} height={m} fill="#e2d5bf" stroke="#6b6156" strokeDasharray={`${stroke * 6}`} strokeWidth={stroke} />
-          </>
-        ) : null}
-        <rect x={x0} y={sheetY} width={W} height={H} fill="#f3ebdd" stroke="#1f1b16" strokeWidth={stroke * 2} />
-        {full ? (
-          <>
-            <rect x={x0} y={sheetY} width={W} height={m} fill="#e2d5bf" />
-            <rect x={x0} y={sheetY + H - m} width={W} height={m} fill="#e2d5bf" />
-          </>
-        ) : null}
+        <SheetOutline x={x0} y={sheetY} width={W} height={H} manifold={m} full={full} stroke={stroke} dash={stroke * 6} />
         {Array.from({ length: grid.columns }, (_, c) => (
           <rect key={c} x={left + c * d + stroke} y={bottom - gridH} width={d - 2 * stroke} height={gridH} rx={d / 6} fill="#3b342c" />
         ))}

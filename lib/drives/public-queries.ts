@@ -15,12 +15,11 @@ export interface PublicDriveSummary {
 }
 
 // Dates leave as plain YYYY-MM-DD strings, never shifted by a time zone.
-export const publicDriveColumns = () => [
-  "slug",
-  "name",
-  db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`),
-  db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`),
-];
+const spanColumns = (table = "") => {
+  const t = table ? `${table}.` : "";
+  return [db.raw(`to_char(${t}starts_on, 'YYYY-MM-DD') as "startsOn"`), db.raw(`to_char(${t}ends_on, 'YYYY-MM-DD') as "endsOn"`)];
+};
+export const publicDriveColumns = () => ["slug", "name", ...spanColumns()];
 
 export async function listPublicDrives(): Promise<PublicDriveSummary[]> {
   return db("drives")
@@ -37,8 +36,7 @@ export async function listPublicDrivesWithDay(): Promise<(PublicDriveSummary & {
       "d.slug",
       "d.name",
       "g.name as groupName",
-      db.raw(`to_char(d.starts_on, 'YYYY-MM-DD') as "startsOn"`),
-      db.raw(`to_char(d.ends_on, 'YYYY-MM-DD') as "endsOn"`),
+      ...spanColumns("d"),
       db.raw(`to_char((now() at time zone g.time_zone)::date, 'YYYY-MM-DD') as "today"`),
     )
     .where({ "d.is_public": true })

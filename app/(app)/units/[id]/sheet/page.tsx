@@ -55,7 +55,7 @@ export default async function BuildSheetPage({ params }: Props) {
 
       <section className="break-inside-avoid">
         <h2 className="mb-2 text-xl">Can grid</h2>
-        <div className="grid gap-4 md:grid-cols-[1fr_20rem] print:grid-cols-[1fr_78mm]">
+        <div className="grid gap-4 md:grid-cols-[1fr_20rem] print:grid-cols-[1fr_90mm]">
           <GridFigures grid={grid} />
           <GridDimensions plan={resolved} grid={grid} />
         </div>

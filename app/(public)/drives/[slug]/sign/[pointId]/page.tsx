@@ -39,10 +39,10 @@ export default async function SignPage({ params, searchParams }: { params: Promi
           header, footer, .no-print { display: none !important; }
           html, body { background: #fff !important; }
           .sign { border: none !important; box-shadow: none !important; padding: 0 !important; width: ${size.width}; height: ${size.height};
-                  overflow: hidden; break-inside: avoid; font-size: 15pt; gap: 5mm !important; }
+                  overflow: hidden; break-inside: avoid; font-size: 17pt; gap: 6mm !important; }
           .sign h1 { font-size: 36pt; }
-          .sign .sign-point { font-size: 24pt; }
-          .sign .sign-qr { width: 62mm; height: 62mm; }
+          .sign .sign-point { font-size: ${point.name.length > 50 ? 18 : 24}pt; }
+          .sign .sign-qr { width: 72mm; height: 72mm; }
         }`}</style>
       <div className="no-print mb-4 flex flex-wrap items-center gap-3">
         <span className="font-semibold">Paper:</span>
