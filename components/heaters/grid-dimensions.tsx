@@ -47,7 +47,7 @@ export function GridDimensions({ plan, grid }: { plan: ResolvedCanGridInput; gri
   const rowLines = grid.rows <= 60 ? Array.from({ length: grid.rows - 1 }, (_, r) => bottom - (r + 1) * L) : [];
   return (
     <figure className="flex flex-col gap-1">
-      <svg role="img" aria-label={`Dimensioned grid: ${grid.columns} columns by ${grid.rows} rows`} viewBox={`0 0 ${W + x0 + gap * 2} ${boxH + y0 + gap * 1.5}`} className="mx-auto max-h-[30rem] w-full print:max-h-[95mm]">
+      <svg role="img" aria-label={`Dimensioned grid: ${grid.columns} columns by ${grid.rows} rows`} viewBox={`0 0 ${W + x0 + gap * 2} ${boxH + y0 + gap * 1.5}`} className="mx-auto max-h-[30rem] w-full print:max-h-[105mm]">
         <defs>
           <marker id="dim-end" viewBox="0 0 10 10" refX="5" refY="5" markerWidth="6" markerHeight="6" orient="auto-start-reverse">
             <path d="M0,0 L10,5 L0,10 z" fill="#1f1b16" />

@@ -76,8 +76,10 @@ describe("the build sheet", () => {
       // 13 columns × 14 rows of 66 mm × 122 mm cans (the fixture's unit): 858 mm across, 1708 mm up.
       expect(first).toContain("13 × 66 mm = 858 mm");
       expect(first).toContain("14 × 122 mm = 1,708 mm");
-      const letter = await page.pdf({ format: "Letter", printBackground: true });
-      expect((await pdfPages(new Uint8Array(letter))).length).toBeLessThanOrEqual(2);
+      const letter = await page.pdf({ format: "Letter", printBackground: true, path: path.join(shots, "build-sheet-letter.pdf") });
+      const letterPages = await pdfPages(new Uint8Array(letter));
+      expect(letterPages.length).toBeLessThanOrEqual(2);
+      expect(letterPages[0]).toContain("Materials");
     } finally {
       await context.close();
     }

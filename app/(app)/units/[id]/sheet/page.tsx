@@ -53,18 +53,20 @@ export default async function BuildSheetPage({ params }: Props) {
         </p>
       </header>
 
-      <section className="break-inside-avoid">
-        <h2 className="mb-2 text-xl">Can grid</h2>
-        <div className="grid gap-4 md:grid-cols-[1fr_20rem] print:grid-cols-[1fr_90mm]">
-          <GridFigures grid={grid} />
-          <GridDimensions plan={resolved} grid={grid} />
+      {/* Figures and live counts beside the drawing, so materials still fit on page 1 of A4 or Letter. */}
+      <div className="grid gap-4 md:grid-cols-[1fr_20rem] print:grid-cols-[1fr_85mm]">
+        <div className="flex flex-col gap-4">
+          <section className="break-inside-avoid">
+            <h2 className="mb-2 text-xl">Can grid</h2>
+            <GridFigures grid={grid} />
+          </section>
+          <section className="break-inside-avoid" data-testid="sheet-cans">
+            <h2 className="mb-2 text-xl">Cans for this unit</h2>
+            <UnitFigures c={counts} printedAt={printedAt} />
+          </section>
         </div>
-      </section>
-
-      <section className="break-inside-avoid" data-testid="sheet-cans">
-        <h2 className="mb-2 text-xl">Cans for this unit</h2>
-        <UnitFigures c={counts} printedAt={printedAt} />
-      </section>
+        <GridDimensions plan={resolved} grid={grid} />
+      </div>
 
       <section className="break-inside-avoid">
         <h2 className="mb-2 text-xl">Materials</h2>
