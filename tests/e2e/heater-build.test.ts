@@ -56,6 +56,9 @@ describe("a builder plans, saves, claims, builds and prints a heater unit", () =
     const before = await driveTarget();
 
     await page.goto("/plan");
+    // Signed in, the planner keeps the group's navigation, not the visitor's header.
+    await expect(page.getByRole("navigation", { name: "Group" }).getByRole("link", { name: "My units" }).count()).resolves.toBe(1);
+    await expect(page.getByRole("link", { name: "Sign in", exact: true }).count()).resolves.toBe(0);
     await page.locator("#sheet-1-width").fill("30");
     await page.locator("#sheet-1-height").fill("60");
     // Common practice, no published source: 11 × 12 = 132 cans and 528 holes.

@@ -75,6 +75,50 @@ describe("forms with JavaScript disabled", () => {
     }
   });
 
+  it("a donor follows a drop point's “Pledge cans here” link: the form opens on that point, and the pledge goes to it", async () => {
+    const { context, page } = await newPage(browser, { ...PHONE, javaScriptEnabled: false });
+    try {
+      const donor = `nojs-here-${randomBytes(3).toString("hex")}@example.test`;
+      await page.goto(PAGE);
+      const item = page.getByTestId("drop-point").nth(2);
+      const pointId = (await item.getAttribute("id"))!.replace(/^point-/, "");
+      // Directions in the visitor's own map app, with no tracking parameters.
+      const osm = new URL((await item.getByRole("link", { name: "Open in OpenStreetMap" }).getAttribute("href"))!);
+      expect([...osm.searchParams.keys()]).toEqual(["mlat", "mlon"]);
+      expect(await item.getByRole("link", { name: "Directions (map app)" }).getAttribute("href")).toMatch(/^geo:-?\d+(\.\d+)?,-?\d+(\.\d+)?$/);
+      await item.getByRole("link", { name: "Pledge cans here" }).click();
+      await page.waitForURL((url) => url.searchParams.get("point") === pointId && url.hash === "#pledge");
+      await expect(page.getByLabel("Drop point", { exact: true }).inputValue()).resolves.toBe(pointId);
+      await page.getByLabel("About how many bags").fill("2");
+      await page.getByLabel("When you will bring them").fill("2026-12-12");
+      await page.getByLabel("E-mail for a confirmation (optional)").fill(donor);
+      await page.getByRole("button", { name: "Send my pledge" }).click();
+      await page.getByText("Thank you — your pledge is in.").waitFor();
+      const rows = await testDb()("pledges").where({ email: donor }).select("drop_point_id");
+      expect(rows).toEqual([{ drop_point_id: pointId }]);
+    } finally {
+      await context.close();
+    }
+  });
+
+  it("on a bin's own page, “it is full” is one tap", async () => {
+    const { context, page } = await newPage(browser, { ...PHONE, javaScriptEnabled: false });
+    try {
+      await page.goto(PAGE);
+      const item = page.getByTestId("drop-point").first();
+      const pointId = (await item.getAttribute("id"))!.replace(/^point-/, "");
+      await item.getByRole("link", { name: "This bin’s page" }).click();
+      await page.waitForURL(`**${PAGE}/bins/${pointId}`);
+      const before = new Date();
+      await page.getByRole("button", { name: /^It is full/ }).click();
+      await page.getByText("Thank you — the organisers can see your report").waitFor();
+      const rows = await testDb()("fill_reports").where({ drop_point_id: pointId }).where("created_at", ">=", new Date(before.getTime() - 5_000)).select("level");
+      expect(rows.map((r) => r.level)).toContain(100);
+    } finally {
+      await context.close();
+    }
+  });
+
   it("a new organiser signs up: a refused password keeps the rest, then the check-your-mail answer shows", async () => {
     const { context, page } = await newPage(browser, { javaScriptEnabled: false });
     try {
