@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
 import { newPage, signInAs, browserForFile } from "@/tests/support/browser";
 import { DEMO } from "@/tests/support/env";
-import { demoFixture, type DemoFixture } from "@/tests/support/fixtures";
+import { demoFixtureForFile } from "@/tests/support/fixtures";
 import { testDb } from "@/tests/support/db";
 import { pdfText } from "@/tests/support/pdf-text";
 
@@ -12,10 +12,9 @@ import { pdfText } from "@/tests/support/pdf-text";
 // put the unit on the wall, which gives its unbuilt claims back.
 const browser = browserForFile();
 let page: Page;
-let f: DemoFixture;
+const f = demoFixtureForFile();
 
 beforeAll(async () => {
-  f = await demoFixture();
   ({ page } = await newPage(browser()));
 });
 

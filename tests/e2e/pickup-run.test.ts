@@ -1,10 +1,10 @@
-import { beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
 import { PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
 import { DEMO } from "@/tests/support/env";
 import { ApiClient } from "@/tests/support/http";
 import { testDb } from "@/tests/support/db";
-import { demoFixture, type DemoFixture } from "@/tests/support/fixtures";
+import { demoFixtureForFile } from "@/tests/support/fixtures";
 import { waitForMail } from "@/tests/support/mail";
 
 // The pickup-run journey: an organiser plans a run over demo drop points and
@@ -13,11 +13,7 @@ const WANTED = ["Hilltop Corner Shop", "Millbrook School gate", "Quayside Commun
 const SHOTS = process.env.CANTROVE_SCREENSHOTS;
 
 const browser = browserForFile();
-let f: DemoFixture;
-
-beforeAll(async () => {
-  f = await demoFixture();
-});
+const f = demoFixtureForFile();
 
 const tallies = async () =>
   (await new ApiClient().json<Record<string, { hauls: number; bags: number }>>("GET", `/api/public/drives/${f.demoDriveSlug}/tallies`)).body;

@@ -1,5 +1,6 @@
 import { randomUUID } from "node:crypto";
-import { testDb } from "./db";
+import { afterAll, beforeAll } from "vitest";
+import { closeTestDb, testDb } from "./db";
 import { signedIn, type ApiClient } from "./http";
 
 // A group of its own for a ledger test: its balances and calibration start at
@@ -60,6 +61,20 @@ export async function freshGroup(label = "ledger"): Promise<FreshGroup> {
       return clients.get(who)!;
     },
   };
+}
+
+/**
+ * A fresh group for the whole test file: registers a beforeAll that fills the
+ * returned object in (so it can be a const read inside tests and later hooks)
+ * and an afterAll that closes the test database's pool.
+ */
+export function freshGroupForFile(label: string): FreshGroup {
+  const g = {} as FreshGroup;
+  beforeAll(async () => {
+    Object.assign(g, await freshGroup(label));
+  });
+  afterAll(closeTestDb);
+  return g;
 }
 
 /**

@@ -1,14 +1,5 @@
 import { describe, expect, it } from "vitest";
-import {
-  DEFAULT_YIELD,
-  addDays,
-  countGoodCans,
-  driveProgress,
-  driveTarget,
-  heatersCovered,
-  observedYield,
-  paceCansPerDay,
-} from "@/lib/drives/progress";
+import { DEFAULT_YIELD, addDays, countGoodCans, driveProgress, driveTarget, heatersCovered, observedYield, paceCansPerDay } from "@/lib/drives/progress";
 import { example, noStages } from "./progress-example";
 
 // `example` is the drive worked by hand in progress-example.ts.
