@@ -1,5 +1,4 @@
-import { afterAll, beforeAll } from "vitest";
-import { closeTestDb, testDb } from "./db";
+import { forTheFile, testDb } from "./db";
 
 // Ids of the demo scenario's records, looked up by their invented names so
 // tests never hard-code generated ids.
@@ -40,16 +39,5 @@ export async function demoFixture(): Promise<DemoFixture> {
   };
 }
 
-/**
- * The demo fixture for the whole test file: registers a beforeAll that fills
- * the returned object in (so it can be a const read inside tests and later
- * hooks) and an afterAll that closes the test database's pool.
- */
-export function demoFixtureForFile(): DemoFixture {
-  const f = {} as DemoFixture;
-  beforeAll(async () => {
-    Object.assign(f, await demoFixture());
-  });
-  afterAll(closeTestDb);
-  return f;
-}
+/** The demo fixture for the whole test file (see forTheFile in db.ts). */
+export const demoFixtureForFile = (): DemoFixture => forTheFile(demoFixture);

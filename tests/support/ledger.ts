@@ -1,6 +1,5 @@
 import { randomUUID } from "node:crypto";
-import { afterAll, beforeAll } from "vitest";
-import { closeTestDb, testDb } from "./db";
+import { forTheFile, testDb } from "./db";
 import { signedIn, type ApiClient } from "./http";
 
 // A group of its own for a ledger test: its balances and calibration start at
@@ -63,19 +62,8 @@ export async function freshGroup(label = "ledger"): Promise<FreshGroup> {
   };
 }
 
-/**
- * A fresh group for the whole test file: registers a beforeAll that fills the
- * returned object in (so it can be a const read inside tests and later hooks)
- * and an afterAll that closes the test database's pool.
- */
-export function freshGroupForFile(label: string): FreshGroup {
-  const g = {} as FreshGroup;
-  beforeAll(async () => {
-    Object.assign(g, await freshGroup(label));
-  });
-  afterAll(closeTestDb);
-  return g;
-}
+/** A fresh group for the whole test file (see forTheFile in db.ts). */
+export const freshGroupForFile = (label: string): FreshGroup => forTheFile(() => freshGroup(label));
 
 /**
  * Hauls 2 bags at a drop point and sorts them to exactly `good` good cans; returns the two bodies.
