@@ -1,20 +1,14 @@
 import path from "node:path";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { launchBrowser, newPage, PHONE, signInAs } from "@/tests/support/browser";
+import { describe, expect, it } from "vitest";
+import { newPage, PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
 import { DEMO } from "@/tests/support/env";
 
 const shots = path.resolve(import.meta.dirname, "../../.test-results");
-let browser: Browser;
-
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => browser?.close());
+const browser = browserForFile();
 
 describe("landing page", () => {
   it("names Cantrove, lists public drives, and fits a phone without sideways scrolling", async () => {
-    const { context, page } = await newPage(browser, PHONE);
+    const { context, page } = await newPage(browser(), PHONE);
     const requests: string[] = [];
     page.on("request", (r) => requests.push(r.url()));
     await page.goto("/");
@@ -60,8 +54,7 @@ describe("landing page", () => {
 
 describe("signing in", () => {
   it("takes the organiser to the dashboard and shows captured mail on the sent-mail page", async () => {
-    const { context, page } = await newPage(browser);
-    await signInAs(page, DEMO.organiser);
+    const { context, page } = await signedInPage(browser(), DEMO.organiser);
     expect(new URL(page.url()).pathname).toBe("/dashboard");
     await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("Larkhollow Warm Rooms Circle");
     await page.getByRole("link", { name: "Sent mail" }).click();
@@ -71,7 +64,7 @@ describe("signing in", () => {
   });
 
   it("says so when the password is wrong and stays on the form", async () => {
-    const { context, page } = await newPage(browser);
+    const { context, page } = await newPage(browser());
     await page.goto("/signin");
     await page.getByLabel("E-mail").fill(DEMO.organiser);
     await page.getByLabel("Password").fill("wrong-password");

@@ -1,25 +1,17 @@
 import { randomBytes } from "node:crypto";
-import type { Browser } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, newPage, PHONE } from "@/tests/support/browser";
-import { closeTestDb, testDb } from "@/tests/support/db";
+import { describe, expect, it } from "vitest";
+import { newPage, PHONE, browserForFile } from "@/tests/support/browser";
+import { testDb } from "@/tests/support/db";
 
 // The browser forms are server actions in plain <form>s: with JavaScript off
 // (or before it arrives) they post and the page comes back with the answer.
 const PAGE = "/drives/larkhollow-winter-2026";
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await closeTestDb();
-});
+const browser = browserForFile();
 
 describe("forms with JavaScript disabled", () => {
   it("a donor pledges on the public drive page: a refusal keeps what was typed, the pledge is stored and confirmed", async () => {
-    const { context, page } = await newPage(browser, { ...PHONE, javaScriptEnabled: false });
+    const { context, page } = await newPage(browser(), { ...PHONE, javaScriptEnabled: false });
     try {
       const donor = `nojs-${randomBytes(3).toString("hex")}@example.test`;
       await page.goto(PAGE);
@@ -53,7 +45,7 @@ describe("forms with JavaScript disabled", () => {
   });
 
   it("someone at a bin says it is full: the native disclosure opens, the report is stored", async () => {
-    const { context, page } = await newPage(browser, { ...PHONE, javaScriptEnabled: false });
+    const { context, page } = await newPage(browser(), { ...PHONE, javaScriptEnabled: false });
     try {
       const note = `nojs-note-${randomBytes(3).toString("hex")}`;
       await page.goto(PAGE);
@@ -120,7 +112,7 @@ describe("forms with JavaScript disabled", () => {
   });
 
   it("a new organiser signs up: a refused password keeps the rest, then the check-your-mail answer shows", async () => {
-    const { context, page } = await newPage(browser, { javaScriptEnabled: false });
+    const { context, page } = await newPage(browser(), { javaScriptEnabled: false });
     try {
       const email = `nojs-founder-${randomBytes(3).toString("hex")}@signup.test`;
       await page.goto("/signup");

@@ -1,23 +1,21 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launchBrowser, newPage } from "@/tests/support/browser";
+import { beforeAll, describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { newPage, browserForFile } from "@/tests/support/browser";
 import { ApiClient } from "@/tests/support/http";
 import { areaToM2, formatArea, formatLength, formatM2, formatNumber, formatPercent } from "@/lib/heaters/format";
 import { clearDayEnergy } from "@/lib/heaters/sun";
 
 // The planner page computes in the browser; it must show exactly what the API
 // answers for the same input. No account needed.
-let browser: Browser;
+const browser = browserForFile();
 let page: Page;
 const api = new ApiClient();
 
 type Grid = { columns: number; rows: number; cans: number; holes: number; slack: { width: number; height: number }; apertureArea: number; unit: "mm" | "in" };
 
 beforeAll(async () => {
-  browser = await launchBrowser();
-  ({ page } = await newPage(browser));
+  ({ page } = await newPage(browser()));
 });
-afterAll(async () => browser?.close());
 
 const figure = (id: string) => page.locator(`[data-figure="${id}"]`).first().innerText();
 
