@@ -68,7 +68,7 @@ describe("forms with JavaScript disabled", () => {
   });
 
   it("a donor follows a drop point's “Pledge cans here” link: the form opens on that point, and the pledge goes to it", async () => {
-    const { context, page } = await newPage(browser, { ...PHONE, javaScriptEnabled: false });
+    const { context, page } = await newPage(browser(), { ...PHONE, javaScriptEnabled: false });
     try {
       const donor = `nojs-here-${randomBytes(3).toString("hex")}@example.test`;
       await page.goto(PAGE);
@@ -94,7 +94,7 @@ describe("forms with JavaScript disabled", () => {
   });
 
   it("on a bin's own page, “it is full” is one tap", async () => {
-    const { context, page } = await newPage(browser, { ...PHONE, javaScriptEnabled: false });
+    const { context, page } = await newPage(browser(), { ...PHONE, javaScriptEnabled: false });
     try {
       await page.goto(PAGE);
       const item = page.getByTestId("drop-point").first();
