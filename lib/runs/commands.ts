@@ -130,11 +130,15 @@ export async function resolveStop(
   change: { status: "skipped"; reason: string } | { status: "logged"; haulId: string },
   trx: Knex.Transaction,
 ) {
-  const { stop } = await lockPendingStop(actor, runId, stopId, trx);
   if (change.status === "logged") {
     // Two runs logging one haul lock different runs; locking the haul makes
-    // the second wait for the first and then see the stop it settled.
+    // the second wait for the first and then see the stop it settled. The haul
+    // is locked before the run, the order an undo takes them in (ledger_reverse:
+    // drive, haul, then the run of the stop it reopens), so the two cannot deadlock.
     await trx("hauls").select("id").where({ id: change.haulId, group_id: actor.group.id }).forUpdate().first();
+  }
+  const { stop } = await lockPendingStop(actor, runId, stopId, trx);
+  if (change.status === "logged") {
     const taken = await trx("pickup_run_stops").select("id").where({ haul_id: change.haulId }).first();
     if (taken) throw conflict(HAUL_TAKEN);
   }
