@@ -24,6 +24,28 @@ export async function listPublicDrives(): Promise<PublicDriveSummary[]> {
     .orderBy([{ column: "starts_on", order: "desc" }, { column: "name" }]);
 }
 
+/** The landing page's list: every public drive with its group's name and the group's own calendar day now. */
+export async function listPublicDrivesWithDay(): Promise<(PublicDriveSummary & { groupName: string; today: string })[]> {
+  return db("drives as d")
+    .join("groups as g", "g.id", "d.group_id")
+    .select(
+      "d.slug",
+      "d.name",
+      "g.name as groupName",
+      "d.starts_on as startsOn",
+      "d.ends_on as endsOn",
+      db.raw(`(now() at time zone g.time_zone)::date as "today"`),
+    )
+    .where({ "d.is_public": true })
+    .orderBy([{ column: "d.name" }]);
+}
+
+/** The time zone of the group running a public drive (for showing times as the group reads them). */
+export async function publicDriveTimeZone(slug: string): Promise<string> {
+  const row = await db("drives as d").join("groups as g", "g.id", "d.group_id").select("g.time_zone as timeZone").where({ "d.slug": slug, "d.is_public": true }).first();
+  return (row?.timeZone as string | undefined) ?? "UTC";
+}
+
 export interface PublicDriveRow extends PublicDriveSummary {
   id: string;
   groupId: string;

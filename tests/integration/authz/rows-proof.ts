@@ -1,11 +1,11 @@
+import { everyone, row } from "./row";
 import type { AuthzRow } from "./types";
 
 export const rows: AuthzRow[] = [
   {
+    ...row("GET", "bench/naive-stock/[id]", (f) => `/api/bench/naive-stock/${f.demoDriveId}`, everyone(404), {
+      note: "the benchmark's naive reference is built (and answers) only with CANTROVE_BENCH=1",
+    }),
     route: "app/api/bench/naive-stock/[id]/route.bench.ts",
-    method: "GET",
-    path: (f) => `/api/bench/naive-stock/${f.demoDriveId}`,
-    expect: { anonymous: 404, volunteer: 404, builder: 404, organiser: 404, otherOrganiser: 404 },
-    note: "the benchmark's naive reference is built (and answers) only with CANTROVE_BENCH=1",
   },
 ];
