@@ -60,7 +60,7 @@ describe("when the database goes away", () => {
     expect(await health()).toEqual({ status: 200, body: { status: "ok", db: "up" } });
     const page = await browser().newPage();
     await page.goto(`${appUrl}/`);
-    await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toContain("Empty cans in");
+    await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toContain("Find a drop point near you");
 
     stopClusterAt(stack.cluster!.dataDir);
     expect(await health()).toEqual({ status: 503, body: { status: "degraded", db: "down" } });
@@ -82,7 +82,7 @@ describe("when the database goes away", () => {
     // Pooled connections that died with the old server must not leak errors into pages.
     for (let i = 0; i < 5; i++) expect((await fetch(`${appUrl}/api/public/drives`)).status).toBe(200);
     await page.goto(`${appUrl}/`);
-    await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toContain("Empty cans in");
+    await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toContain("Find a drop point near you");
     await page.close();
   }, 120_000);
 });
