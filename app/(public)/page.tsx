@@ -66,7 +66,7 @@ export default async function LandingPage() {
           <ul className="divide-y divide-paper-edge">
             {drives.map((d) => (
               <li key={d.slug} className="flex flex-wrap items-baseline justify-between gap-2 py-3">
-                <Link href={`/drives/${d.slug}`} className="text-lg font-semibold">
+                <Link href={`/drives/${d.slug}`} className="tap text-lg font-semibold">
                   {d.name}
                 </Link>
                 <span className="text-ink-faint">{formatRange(d.startsOn, d.endsOn)}</span>

@@ -46,7 +46,7 @@ export function SunPanel({ apertureAreaM2, efficiency, latitude, today }: { aper
         </dl>
       ) : null}
       <details className="text-sm text-ink-soft">
-        <summary className="cursor-pointer font-semibold text-ink">What the clear-day figure assumes</summary>
+        <summary className="min-h-11 cursor-pointer py-2.5 font-semibold text-ink">What the clear-day figure assumes</summary>
         <ul className="mt-2 list-disc pl-5">
           {CLEAR_DAY_ASSUMPTIONS.map((a) => (
             <li key={a}>{a}</li>

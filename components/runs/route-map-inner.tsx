@@ -11,9 +11,10 @@ const MARKER_COLOUR = { pending: "#a8431a", logged: "#2f6a4a", skipped: "#6b6156
 function numberIcon(n: number, status: keyof typeof MARKER_COLOUR) {
   return L.divIcon({
     className: "",
-    html: `<span style="display:flex;align-items:center;justify-content:center;width:28px;height:28px;border-radius:999px;border:2px solid #fff;background:${MARKER_COLOUR[status]};color:#fff;font-weight:700;font-size:14px;box-shadow:0 1px 3px rgba(0,0,0,.4)">${n}</span>`,
-    iconSize: [28, 28],
-    iconAnchor: [14, 14],
+    // The 28 px disc centred in a 44 × 44 px transparent target (WCAG 2.5.5).
+    html: `<span style="display:flex;align-items:center;justify-content:center;width:44px;height:44px"><span style="display:flex;align-items:center;justify-content:center;width:28px;height:28px;border-radius:999px;border:2px solid #fff;background:${MARKER_COLOUR[status]};color:#fff;font-weight:700;font-size:14px;box-shadow:0 1px 3px rgba(0,0,0,.4)">${n}</span></span>`,
+    iconSize: [44, 44],
+    iconAnchor: [22, 22],
   });
 }
 

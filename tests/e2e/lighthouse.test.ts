@@ -111,15 +111,16 @@ function problems(s: Scores): string[] {
 }
 
 /** What Lighthouse blames, so a failure says where to look. */
+const ALWAYS_SHOWN = ["layout-shifts", "largest-contentful-paint-element", "unused-javascript", "font-display", "unsized-images", "bootup-time", "mainthread-work-breakdown"];
 function blame(lhr: Result): string[] {
   const lines: string[] = [];
   for (const id of ["accessibility", "best-practices", "performance"] as const) {
     for (const ref of lhr.categories[id].auditRefs) {
       const a = lhr.audits[ref.id];
-      if (ref.weight === 0 && id === "performance" && !["layout-shifts", "largest-contentful-paint-element", "unused-javascript"].includes(ref.id)) continue;
-      if (a.score === null || a.score >= 0.9) continue;
+      const shown = ALWAYS_SHOWN.includes(ref.id) ? a.score !== 1 : ref.weight > 0 && a.score !== null && a.score < 0.9;
+      if (!shown) continue;
       const items = ((a.details as { items?: Record<string, unknown>[] } | undefined)?.items ?? []).slice(0, 4);
-      const what = items.map((item) => JSON.stringify(item).slice(0, 220)).join(" | ");
+      const what = items.map((item) => JSON.stringify(item).slice(0, 300)).join(" | ");
       lines.push(`  ${id}/${ref.id} (${a.displayValue ?? a.score}): ${what}`);
     }
   }
