@@ -5,6 +5,7 @@ import L from "leaflet";
 import { useEffect, useMemo } from "react";
 import { CircleMarker, MapContainer, Marker, Polyline, TileLayer, Tooltip, useMap } from "react-leaflet";
 import type { RouteMapProps } from "./route-map";
+import { ROUTE_MAP_BOX } from "./route-map-box";
 
 const MARKER_COLOUR = { pending: "#a8431a", logged: "#2f6a4a", skipped: "#6b6156" } as const;
 
@@ -43,7 +44,7 @@ export default function RouteMapInner({ start, stops, returnToStart, tileUrl, at
       zoom={14}
       fadeAnimation={false}
       scrollWheelZoom={false}
-      className={className ?? "h-72 w-full rounded-card border border-paper-edge sm:h-96"}
+      className={className ?? ROUTE_MAP_BOX}
       aria-label="Map of the route"
     >
       <TileLayer url={tileUrl} attribution={attribution} />

@@ -119,7 +119,10 @@ function blame(lhr: Result): string[] {
       const a = lhr.audits[ref.id];
       const shown = ALWAYS_SHOWN.includes(ref.id) ? a.score !== 1 : ref.weight > 0 && a.score !== null && a.score < 0.9;
       if (!shown) continue;
-      const items = ((a.details as { items?: Record<string, unknown>[] } | undefined)?.items ?? []).slice(0, 4);
+      // A "list" holds tables (the LCP element, its phases); a table holds rows.
+      const rows = (d: unknown): Record<string, unknown>[] =>
+        ((d as { items?: Record<string, unknown>[] } | undefined)?.items ?? []).flatMap((item) => (item.type === "table" ? rows(item) : [item]));
+      const items = rows(a.details).slice(0, 4);
       const what = items.map((item) => JSON.stringify(item).slice(0, 300)).join(" | ");
       lines.push(`  ${id}/${ref.id} (${a.displayValue ?? a.score}): ${what}`);
     }
