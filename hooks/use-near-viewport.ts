@@ -5,8 +5,7 @@ import { useEffect, useRef, useState } from "react";
 /**
  * True once the element comes within `margin` of the viewport (and stays
  * true): heavy parts below the fold (maps, charts) load when a person scrolls
- * towards them instead of competing with the first screen. Where the browser
- * has no IntersectionObserver it is true at once.
+ * towards them instead of competing with the first screen.
  */
 export function useNearViewport<T extends Element>(margin = "400px"): [React.RefObject<T | null>, boolean] {
   const ref = useRef<T | null>(null);
@@ -14,7 +13,6 @@ export function useNearViewport<T extends Element>(margin = "400px"): [React.Ref
   useEffect(() => {
     const el = ref.current;
     if (near || !el) return;
-    if (typeof IntersectionObserver === "undefined") return setNear(true);
     const observer = new IntersectionObserver((entries) => {
       if (entries.some((e) => e.isIntersecting)) setNear(true);
     }, { rootMargin: margin });
