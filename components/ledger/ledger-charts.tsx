@@ -1,16 +1,26 @@
 "use client";
 
 import dynamic from "next/dynamic";
+import { useNearViewport } from "@/hooks/use-near-viewport";
 import type { DailyPoint } from "@/lib/ledger/daily-series";
 import type { YieldPoint } from "./ledger-charts-plots";
 
 export type { DailyPoint, YieldPoint };
 
 // The frames are rendered by the server at their final size; the drawing
-// (recharts) arrives on demand into a box of fixed height, so nothing moves
-// when it does. A chart measures its box in the browser anyway, so the server
-// could not draw it.
+// (recharts) arrives on demand, once its box is near the screen, into a box of
+// fixed height, so nothing moves when it does. A chart measures its box in the
+// browser anyway, so the server could not draw it.
 const placeholder = () => <div className="h-full w-full rounded bg-paper-deep/60" />;
+
+function PlotBox({ label, children }: { label: string; children: React.ReactNode }) {
+  const [ref, near] = useNearViewport<HTMLDivElement>("200px");
+  return (
+    <div ref={ref} className="h-64 w-full" role="img" aria-label={label}>
+      {near ? children : placeholder()}
+    </div>
+  );
+}
 const GoodCansPlot = dynamic(() => import("./ledger-charts-plots"), { ssr: false, loading: placeholder });
 const YieldPlot = dynamic(() => import("./ledger-charts-plots").then((m) => m.YieldPlot), { ssr: false, loading: placeholder });
 
@@ -19,9 +29,9 @@ export function GoodCansChart({ daily, target }: { daily: DailyPoint[]; target: 
   const top = Math.max(target, daily[daily.length - 1]?.cumulative ?? 0);
   return (
     <figure>
-      <div className="h-64 w-full" role="img" aria-label={`Good cans per day and in total, against a target of ${target} cans`}>
+      <PlotBox label={`Good cans per day and in total, against a target of ${target} cans`}>
         <GoodCansPlot daily={daily} target={target} top={top} />
-      </div>
+      </PlotBox>
       <figcaption className="mt-1 text-sm text-ink-faint">Bars: good cans counted each day. Line: running total. Dashed: the drive&apos;s target.</figcaption>
     </figure>
   );
@@ -33,9 +43,9 @@ export function YieldChart({ points }: { points: YieldPoint[] }) {
   if (sorted.length === 0) return <p className="text-ink-soft">No drop point has sorted cans yet.</p>;
   return (
     <figure>
-      <div className="h-64 w-full" role="img" aria-label="Yield per drop point: the share of counted cans that were good">
+      <PlotBox label="Yield per drop point: the share of counted cans that were good">
         <YieldPlot points={sorted} />
-      </div>
+      </PlotBox>
       <figcaption className="mt-1 text-sm text-ink-faint">Yield = good ÷ (good + rejected), from sorted hauls only.</figcaption>
     </figure>
   );

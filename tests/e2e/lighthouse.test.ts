@@ -4,6 +4,7 @@ import os from "node:os";
 import path from "node:path";
 import lighthouse, { type Flags, type Result } from "lighthouse";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { CHROMIUM_FLAGS } from "@/tests/support/browser";
 import { APP_URL } from "@/tests/support/env";
 import { signedIn } from "@/tests/support/http";
 import { freePort } from "@/tests/support/ports";
@@ -22,18 +23,6 @@ const MAX_LCP_MS = 2500;
 const RUNS = 3;
 const BUDGET_MS = 230_000;
 
-// Debian's chromium, never a downloaded one; nothing reaches past loopback.
-const CHROMIUM_FLAGS = [
-  "--headless",
-  "--no-sandbox",
-  "--disable-gpu",
-  "--disable-quic",
-  "--disable-background-networking",
-  "--disable-component-update",
-  "--disable-sync",
-  "--no-first-run",
-];
-
 let chromium: ChildProcess;
 let port: number;
 let profile: string;
@@ -43,6 +32,7 @@ const started = Date.now();
 beforeAll(async () => {
   port = await freePort();
   profile = mkdtempSync(path.join(os.tmpdir(), "cantrove-lh-"));
+  // Debian's chromium (never a downloaded one), with background networking off: nothing leaves loopback.
   chromium = spawn(process.env.CHROME_PATH ?? "/usr/bin/chromium", [...CHROMIUM_FLAGS, `--remote-debugging-port=${port}`, `--user-data-dir=${profile}`, "about:blank"], {
     stdio: ["ignore", "ignore", "pipe"],
   });
@@ -89,6 +79,10 @@ async function audit(url: string, role: Role): Promise<Scores> {
   const lhr = result.lhr;
   if (lhr.runtimeError) throw new Error(`Lighthouse could not load ${url}: ${lhr.runtimeError.message}`);
   if (new URL(lhr.finalDisplayedUrl).pathname !== new URL(url).pathname) throw new Error(`${url} ended on ${lhr.finalDisplayedUrl}: signed out?`);
+  // Every request the page made stayed on this machine (the app, and the upload fake's photos on another port).
+  const requests = (lhr.audits["network-requests"].details as { items?: { url: string }[] } | undefined)?.items ?? [];
+  const away = requests.map((r) => r.url).filter((u) => /^(https?|wss?):/.test(u) && !["127.0.0.1", "localhost", "[::1]"].includes(new URL(u).hostname));
+  if (requests.length === 0 || away.length) throw new Error(`${url}: requests left loopback or none were recorded: ${away.join(", ")}`);
   return {
     performance: lhr.categories.performance.score ?? 0,
     accessibility: lhr.categories.accessibility.score ?? 0,
