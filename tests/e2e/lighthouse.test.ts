@@ -131,14 +131,25 @@ describe("Lighthouse on a mid-range phone", () => {
   for (const screen of SCREENS) {
     it(`${screen.path} as ${screen.role}: perf ≥ 95, a11y and best practices 100, CLS ≤ 0.05, LCP ≤ 2.5 s`, { timeout: 150_000 }, async () => {
       let best: Scores | null = null;
+      let lastError: unknown = null;
       for (let run = 1; run <= RUNS; run++) {
-        const scores = await audit(APP_URL + screen.path, screen.role);
+        let scores: Scores;
+        try {
+          scores = await audit(APP_URL + screen.path, screen.role);
+        } catch (error) {
+          // A trace that could not be recorded (NO_NAVSTART on a busy machine) is one run lost, not a verdict.
+          if (!/could not load/.test(String(error))) throw error;
+          console.log(`[lighthouse] ${screen.path} (${screen.role}) run ${run}: ${String(error)}`);
+          lastError = error;
+          continue;
+        }
         console.log(`[lighthouse] ${screen.path} (${screen.role}) run ${run}: ${format(scores)}`);
         if (!best || problems(scores).length < problems(best).length || (problems(scores).length === problems(best).length && scores.performance > best.performance)) best = scores;
         if (problems(best).length === 0 || Date.now() - started > BUDGET_MS) break;
       }
-      const failed = problems(best!);
-      if (failed.length) console.log(`[lighthouse] ${screen.path} blamed:\n${blame(best!.lhr).join("\n")}`);
+      if (!best) throw lastError;
+      const failed = problems(best);
+      if (failed.length) console.log(`[lighthouse] ${screen.path} blamed:\n${blame(best.lhr).join("\n")}`);
       expect(failed, `${screen.path} as ${screen.role}`).toEqual([]);
     });
   }
