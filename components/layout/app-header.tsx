@@ -41,7 +41,8 @@ export function AppHeader({ groupName, role, userName }: { groupName: string; ro
             {item.label}
           </Link>
         ))}
-        <span className="ml-auto flex flex-wrap items-center gap-3">
+        {/* Never squeezed to its narrowest (each word on its own line) and widened later: that moved the page. */}
+        <span className="ml-auto flex shrink-0 flex-wrap items-center gap-3 whitespace-nowrap">
           <GroupSwitcher />
           <SignOutButton />
         </span>
