@@ -64,8 +64,8 @@ export function SignInForm() {
         {pending ? "Signing in…" : "Sign in"}
       </Button>
       <p className="mt-2 flex flex-wrap justify-between gap-2 text-sm">
-        <Link href="/forgot">Forgot your password?</Link>
-        <Link href="/signup">Start a new group</Link>
+        <Link href="/forgot" className="tap">Forgot your password?</Link>
+        <Link href="/signup" className="tap">Start a new group</Link>
       </p>
     </form>
   );

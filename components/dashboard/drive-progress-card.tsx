@@ -22,7 +22,7 @@ export function DriveProgressCard({ drive, progress, fullBins, pledges }: Props)
     <Card
       title={
         <span className="flex flex-wrap items-baseline justify-between gap-2">
-          <Link href={`/organise/drives/${drive.id}`}>{drive.name}</Link>
+          <Link href={`/organise/drives/${drive.id}`} className="tap">{drive.name}</Link>
           <span className="text-base font-normal text-ink-faint">
             {spanText(drive)}
             {drive.isPublic ? (

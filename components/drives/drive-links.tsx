@@ -21,7 +21,7 @@ export function DriveLinks({ drives, currentId, path, param }: { drives: { id: s
           href={href(d.id)}
           aria-current={d.id === currentId ? "page" : undefined}
           aria-busy={busy === d.id || undefined}
-          className={d.id === currentId ? "font-bold text-ink" : ""}
+          className={`tap ${d.id === currentId ? "font-bold text-ink" : ""}`}
           onClick={async (e) => {
             if (e.metaKey || e.ctrlKey || e.shiftKey || e.altKey || e.button !== 0) return;
             e.preventDefault();

@@ -17,7 +17,8 @@ export function GlazingComparison({ options }: { options: GlazingOption[] }) {
           {formatPercent(best.coverage)} of the sheet behind cans.
         </p>
       ) : null}
-      <div className="overflow-x-auto">
+      {/* Wider than a phone: focusable, so the table can be scrolled from the keyboard. */}
+      <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Glazing options compared">
         <table className="w-full min-w-[44rem] border-collapse text-left">
           <caption className="sr-only">Glazing options compared</caption>
           <thead>

@@ -79,7 +79,7 @@ export function HeatPanel({ apertureAreaM2, latitude, today }: { apertureAreaM2:
         ))}
       </div>
       <details className="text-sm text-ink-soft">
-        <summary className="cursor-pointer font-semibold text-ink">What this estimate assumes</summary>
+        <summary className="min-h-11 cursor-pointer py-2.5 font-semibold text-ink">What this estimate assumes</summary>
         <ul className="mt-2 list-disc pl-5">
           <li>Efficiency η = η0 − a1·(room − outdoors)/sunlight, never below zero: a straight-line collector model.</li>
           <li>The headline uses the highest clear-day sunlight on the chosen wall and day; the rest of the day gives less.</li>

@@ -61,7 +61,7 @@ export function SunFigures({ day, heatKWh }: { day: ClearDayEnergy; heatKWh: num
         <Figure id="day-heat" label="Heat for the room (estimate)" value={heatKWh === null ? "—" : `${formatNumber(heatKWh, 2)} kWh`} />
       </dl>
       <details className="text-sm text-ink-soft">
-        <summary className="cursor-pointer font-semibold text-ink">What the clear-day figure assumes</summary>
+        <summary className="min-h-11 cursor-pointer py-2.5 font-semibold text-ink">What the clear-day figure assumes</summary>
         <ul className="mt-2 list-disc pl-5">
           {CLEAR_DAY_ASSUMPTIONS.map((a) => (
             <li key={a}>{a}</li>

@@ -37,11 +37,12 @@ export function AppHeader({ groupName, role, userName }: { groupName: string; ro
       <nav aria-label="Group" className="mx-auto flex max-w-5xl flex-wrap items-center gap-x-4 px-4 pb-2 font-semibold">
         {NAV[role].map((item) => (
           // At least 44 px tall: a finger, not a mouse pointer, is the usual way in on a phone.
-          <Link key={item.href} href={item.href} className="inline-flex min-h-11 items-center">
+          <Link key={item.href} href={item.href} className="tap justify-center">
             {item.label}
           </Link>
         ))}
-        <span className="ml-auto flex flex-wrap items-center gap-3">
+        {/* Never squeezed to its narrowest (each word on its own line) and widened later: that moved the page. */}
+        <span className="ml-auto flex shrink-0 flex-wrap items-center gap-3 whitespace-nowrap">
           <GroupSwitcher />
           <SignOutButton />
         </span>

@@ -20,7 +20,7 @@ export function BrandMark({ size = 32 }: { size?: number }) {
  */
 export function Brand({ link: Anchor = "a" }: { link?: ElementType }) {
   return (
-    <Anchor href="/" className="flex items-center gap-2 text-xl font-bold text-ink no-underline">
+    <Anchor href="/" className="tap flex gap-2 text-xl font-bold text-ink no-underline">
       <BrandMark />
       <span>Cantrove</span>
     </Anchor>

@@ -9,8 +9,8 @@ export function PublicHeader() {
       <div className="mx-auto flex max-w-5xl flex-wrap items-center justify-between gap-3 px-4 py-3">
         <Brand />
         <nav aria-label="Main" className="flex flex-wrap items-center gap-4 font-semibold">
-          <a href="/plan">Plan a heater</a>
-          <a href="/signin">Sign in</a>
+          <a href="/plan" className="tap">Plan a heater</a>
+          <a href="/signin" className="tap">Sign in</a>
         </nav>
       </div>
     </header>

@@ -20,7 +20,8 @@ export function useInBrowser(): boolean {
 
 export function DriveMap(props: MapProps) {
   const inBrowser = useInBrowser();
-  const placeholder = <Skeleton className="h-80 w-full" />;
+  // The map's own box (className, h-80 by default), so nothing moves when it arrives.
+  const placeholder = <Skeleton className={`w-full ${props.className ?? "h-80"}`} />;
   if (!inBrowser) return placeholder;
   return (
     <LoadBoundary what="map">

@@ -8,14 +8,17 @@ import { DEMO_TILE_BBOX, MAX_ZOOM, MIN_ZOOM } from "@/lib/map/tiles";
 import type { MapPoint, MapProps } from "./types";
 import { fillGlyphSvg } from "./fill-glyph";
 
-// Pins are drawn with CSS, so no marker image has to be found by the bundler.
+// Pins are drawn with CSS (.cantrove-pin in app/globals.css, so the shape's
+// styles are not part of this page's JavaScript), and no marker image has to be
+// found by the bundler. The 30 px pin sits in a 44 × 44 px box, the target a
+// finger gets (WCAG 2.5.5); the anchor stays on the pin's tip.
 function pinIcon(tone: MapPoint["tone"], label?: string, fill?: MapPoint["fill"]) {
   const colour = tone === "draft" ? "#8a5a00" : tone === "paused" ? "#6b6156" : tone === "you" ? "#204a33" : "#a8431a";
   return L.divIcon({
     className: "cantrove-pin",
-    html: `<span style="position:relative;display:block;width:30px;height:30px" data-fill="${fill ?? "none"}"><span style="display:flex;align-items:center;justify-content:center;width:30px;height:30px;border-radius:50% 50% 50% 0;transform:rotate(-45deg);background:${colour};border:2px solid #fff;box-shadow:0 1px 4px rgba(0,0,0,.4)"><span style="transform:rotate(45deg);color:#fff;font-weight:700;font-size:13px">${label ?? ""}</span></span>${fillGlyphSvg(fill)}</span>`,
-    iconSize: [30, 30],
-    iconAnchor: [15, 30],
+    html: `<span data-fill="${fill ?? "none"}"><span style="background:${colour}"><span>${label ?? ""}</span></span>${fillGlyphSvg(fill)}</span>`,
+    iconSize: [44, 44],
+    iconAnchor: [22, 30],
     popupAnchor: [0, -28],
   });
 }

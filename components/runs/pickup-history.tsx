@@ -16,7 +16,7 @@ export function PickupHistory({ points }: { points: HistoryPoint[] }) {
       {points.map((p) => (
         <li key={p.id}>
           <details className="rounded-lg border border-paper-edge bg-white p-3">
-            <summary className="cursor-pointer font-semibold">
+            <summary className="min-h-11 cursor-pointer py-2.5 font-semibold">
               {p.name} <span className="font-normal text-ink-faint">· {p.driveName} · {countOf(p.history.length, "visit")} on runs</span>
             </summary>
             {p.history.length === 0 ? (

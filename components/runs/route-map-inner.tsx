@@ -5,15 +5,17 @@ import L from "leaflet";
 import { useEffect, useMemo } from "react";
 import { CircleMarker, MapContainer, Marker, Polyline, TileLayer, Tooltip, useMap } from "react-leaflet";
 import type { RouteMapProps } from "./route-map";
+import { ROUTE_MAP_BOX } from "./route-map-box";
 
 const MARKER_COLOUR = { pending: "#a8431a", logged: "#2f6a4a", skipped: "#6b6156" } as const;
 
 function numberIcon(n: number, status: keyof typeof MARKER_COLOUR) {
   return L.divIcon({
     className: "",
-    html: `<span style="display:flex;align-items:center;justify-content:center;width:28px;height:28px;border-radius:999px;border:2px solid #fff;background:${MARKER_COLOUR[status]};color:#fff;font-weight:700;font-size:14px;box-shadow:0 1px 3px rgba(0,0,0,.4)">${n}</span>`,
-    iconSize: [28, 28],
-    iconAnchor: [14, 14],
+    // The 28 px disc centred in a 44 × 44 px transparent target (WCAG 2.5.5).
+    html: `<span style="display:flex;align-items:center;justify-content:center;width:44px;height:44px"><span style="display:flex;align-items:center;justify-content:center;width:28px;height:28px;border-radius:999px;border:2px solid #fff;background:${MARKER_COLOUR[status]};color:#fff;font-weight:700;font-size:14px;box-shadow:0 1px 3px rgba(0,0,0,.4)">${n}</span></span>`,
+    iconSize: [44, 44],
+    iconAnchor: [22, 22],
   });
 }
 
@@ -41,7 +43,7 @@ export default function RouteMapInner({ start, stops, returnToStart, tileUrl, at
       zoom={14}
       fadeAnimation={false}
       scrollWheelZoom={false}
-      className={className ?? "h-72 w-full rounded-card border border-paper-edge sm:h-96"}
+      className={className ?? ROUTE_MAP_BOX}
       aria-label="Map of the route"
     >
       <TileLayer url={tileUrl} attribution={attribution} />

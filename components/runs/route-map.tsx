@@ -1,7 +1,8 @@
 "use client";
 
-import dynamic from "next/dynamic";
-import { Skeleton } from "@/components/ui/card";
+import { lazy, Suspense } from "react";
+import { useNearViewport } from "@/hooks/use-near-viewport";
+import { ROUTE_MAP_BOX } from "./route-map-box";
 
 export interface RouteMapProps {
   start: { lat: number; lng: number };
@@ -13,12 +14,20 @@ export interface RouteMapProps {
   className?: string;
 }
 
-// Leaflet touches `window` on import, so the map only ever renders in the browser.
-const Inner = dynamic(() => import("./route-map-inner"), {
-  ssr: false,
-  loading: () => <Skeleton className="h-72 w-full sm:h-96" />,
-});
+// Leaflet touches `window` on import, so the map only ever renders in the
+// browser, and its code (Leaflet is the largest part of these pages) loads once
+// the map is near the screen. The placeholder has the map's own box, so
+// nothing moves when the map arrives.
+const Inner = lazy(() => import("./route-map-inner"));
 
 export function RouteMap(props: RouteMapProps) {
-  return <Inner {...props} />;
+  const [ref, near] = useNearViewport<HTMLDivElement>();
+  const box = props.className ?? ROUTE_MAP_BOX;
+  const placeholder = <div ref={ref} aria-hidden="true" className={`animate-pulse bg-paper-deep ${box}`} />;
+  if (!near) return placeholder;
+  return (
+    <Suspense fallback={placeholder}>
+      <Inner {...props} />
+    </Suspense>
+  );
 }

@@ -3,8 +3,29 @@
 import { useQuery } from "@tanstack/react-query";
 import { runQueries } from "@/hooks/queries/runs";
 import type { SuggestionRow } from "@/lib/runs/types";
-import { Skeleton } from "@/components/ui/card";
 import { RouteMap } from "./route-map";
+import { ROUTE_MAP_BOX } from "./route-map-box";
+
+const bar = "inline-block h-4 animate-pulse rounded bg-paper-deep align-middle";
+
+/** The route's lines while it is worked out: the same rows and map box, so nothing below moves when it arrives. */
+function RouteSkeleton({ stops, returnToStart }: { stops: number; returnToStart: boolean }) {
+  return (
+    <div className="flex flex-col gap-3" aria-busy="true" aria-hidden="true">
+      <p className="text-lg">
+        <span className={`${bar} w-48`} />
+      </p>
+      <div className={`animate-pulse bg-paper-deep ${ROUTE_MAP_BOX}`} />
+      <ol className="flex flex-col gap-1">
+        {Array.from({ length: stops + 1 + (returnToStart ? 1 : 0) }, (_, i) => (
+          <li key={i}>
+            <span className={`${bar} w-2/3`} />
+          </li>
+        ))}
+      </ol>
+    </div>
+  );
+}
 
 export function RoutePreview({
   start,
@@ -29,7 +50,7 @@ export function RoutePreview({
   if (!ready) {
     return <p className="text-ink-soft">Choose a start point and at least one drop point to see the route.</p>;
   }
-  if (route.isPending) return <Skeleton className="h-72 w-full" />;
+  if (route.isPending) return <RouteSkeleton stops={stops.length} returnToStart={returnToStart} />;
   if (route.isError) return <p role="alert" className="font-semibold text-alarm">{route.error.message}</p>;
   const byId = new Map(stops.map((s) => [s.id, s]));
   const ordered = route.data.order.map((id) => byId.get(id)!).filter(Boolean);

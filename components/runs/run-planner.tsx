@@ -124,7 +124,7 @@ export function RunPlanner(props: PlannerProps) {
             <Field id="start-lat" label="Start latitude" inputMode="decimal" value={lat} onChange={(e) => setLat(e.target.value)} error={errors["start.lat"] ?? errors.start} />
             <Field id="start-lng" label="Start longitude" inputMode="decimal" value={lng} onChange={(e) => setLng(e.target.value)} error={errors["start.lng"]} />
           </div>
-          <label className="mt-1 flex items-center gap-2">
+          <label className="mt-1 flex min-h-11 items-center gap-2">
             <input type="checkbox" className="h-5 w-5 accent-ember" checked={returnToStart} onChange={(e) => setReturnToStart(e.target.checked)} />
             Come back to the start at the end
           </label>

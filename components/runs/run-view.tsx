@@ -35,8 +35,8 @@ function StopCard({ run, stop, canAct, isNext }: { run: RunDetail; stop: RunStop
         <dt className="font-semibold">Host</dt>
         <dd>
           {p.hostName ?? "—"}
-          {p.hostPhone ? <> · <a href={`tel:${p.hostPhone.replace(/\s+/g, "")}`}>{p.hostPhone}</a></> : null}
-          {p.hostEmail ? <> · <a href={`mailto:${p.hostEmail}`}>{p.hostEmail}</a></> : null}
+          {p.hostPhone ? <> · <a className="tap" href={`tel:${p.hostPhone.replace(/\s+/g, "")}`}>{p.hostPhone}</a></> : null}
+          {p.hostEmail ? <> · <a className="tap" href={`mailto:${p.hostEmail}`}>{p.hostEmail}</a></> : null}
         </dd>
       </dl>
       <div className="mt-3">

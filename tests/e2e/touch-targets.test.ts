@@ -1,6 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { newPage, PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
 import { DEMO } from "@/tests/support/env";
+import { screensByRole } from "./pages/screens";
+import { RoleSessions } from "./pages/visit";
+import { smallTargets } from "./pages/targets";
 
 // WCAG 2.2, success criterion 2.5.5 "Target Size (Enhanced)": targets of at
 // least 44 by 44 CSS pixels. Checked on the signed-in header's links on a phone,
@@ -35,5 +38,27 @@ describe("the signed-in header on a phone", () => {
       expect(box?.height, name).toBeGreaterThanOrEqual(44);
     }
     await context.close();
+  });
+});
+
+// Every clickable thing on every screen, for each role that uses it, on a
+// 390 px wide phone. WCAG 2.5.5's "Inline" exception is taken: a link inside a
+// sentence or block of running text is exempt (see pages/targets.ts).
+describe("every screen's targets on a 390 px phone", () => {
+  it("has no clickable element smaller than 44 × 44 px", { timeout: 240_000 }, async () => {
+    const sessions = new RoleSessions(browser, { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
+    const found: string[] = [];
+    try {
+      for (const screen of await screensByRole()) {
+        const page = await sessions.open(screen);
+        const { measured, small } = await smallTargets(page);
+        expect(measured, `${screen.path}: targets were found and measured`).toBeGreaterThan(3);
+        console.log(`[touch] ${screen.path} (${screen.role}): ${measured} targets, ${small.length} too small`);
+        for (const t of small) found.push(`${screen.path} (${screen.role}) ${t}`);
+      }
+    } finally {
+      await sessions.close();
+    }
+    expect(found).toEqual([]);
   });
 });

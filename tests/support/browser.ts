@@ -5,20 +5,19 @@ import { APP_URL, DEMO_PASSWORD } from "./env";
 
 // Debian's chromium, never a downloaded browser; background networking off so
 // nothing leaves loopback.
+export const CHROMIUM_FLAGS = [
+  "--headless",
+  "--no-sandbox",
+  "--disable-gpu",
+  "--disable-quic",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+  "--no-first-run",
+];
+
 export async function launchBrowser(): Promise<Browser> {
-  return chromium.launch({
-    executablePath: "/usr/bin/chromium",
-    args: [
-      "--headless",
-      "--no-sandbox",
-      "--disable-gpu",
-      "--disable-quic",
-      "--disable-background-networking",
-      "--disable-component-update",
-      "--disable-sync",
-      "--no-first-run",
-    ],
-  });
+  return chromium.launch({ executablePath: "/usr/bin/chromium", args: CHROMIUM_FLAGS });
 }
 
 /**

@@ -70,6 +70,11 @@ export class ApiClient {
     return res.status;
   }
 
+  /** The cookies held, as a Cookie header (for a browser told to send them, such as Lighthouse's). */
+  cookie(): string {
+    return this.cookieHeader();
+  }
+
   hasSession(): boolean {
     return [...this.cookies.keys()].some((k) => k.includes("session-token"));
   }

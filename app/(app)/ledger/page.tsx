@@ -64,7 +64,7 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
         </Card>
       </div>
       <p>
-        <a href={`/ledger/stock-count?drive=${drive.id}`}>Count what is on hand (stock count)</a>
+        <a href={`/ledger/stock-count?drive=${drive.id}`} className="tap">Count what is on hand (stock count)</a>
       </p>
       <Card title="Rejects taken to recycling">
         <RecyclingForm driveId={drive.id} />

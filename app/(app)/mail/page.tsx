@@ -40,7 +40,7 @@ export default async function SentMailPage() {
           {captured.map((m) => (
             <Card key={m.id}>
               <details>
-                <summary className="cursor-pointer">
+                <summary className="min-h-11 cursor-pointer py-2.5">
                   <span className="font-semibold">{m.subject}</span>{" "}
                   <span className="text-ink-faint">
                     to {m.to.join(", ")} · {new Date(m.receivedAt).toLocaleString("en-GB")}

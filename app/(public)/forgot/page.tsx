@@ -14,7 +14,7 @@ export default function ForgotPage() {
         <ForgotForm />
       </Card>
       <p className="mt-4">
-        <Link href="/signin">Back to sign in</Link>
+        <Link href="/signin" className="tap">Back to sign in</Link>
       </p>
     </main>
   );

@@ -39,7 +39,7 @@ export function FillReportForm({ slug, pointId, pointName, onDone }: { slug: str
         if (el?.open) setOpened(true);
       }}
     >
-      <summary aria-label={`Report how full the bin at ${point.name} is`} className={buttonClass("quiet", "mb-2 w-fit cursor-pointer list-none")}>
+      <summary aria-label={`Is this bin full? Report how full the bin at ${point.name} is`} className={buttonClass("quiet", "mb-2 w-fit cursor-pointer list-none")}>
         Is this bin full?
       </summary>
       <div className="flex flex-col gap-2 rounded-lg bg-paper-deep p-3">

@@ -18,7 +18,7 @@ export default async function StockCountPage({ searchParams }: { searchParams: P
   return (
     <main className="mx-auto flex max-w-3xl flex-col gap-5">
       <p>
-        <a href={drive ? `/ledger?drive=${drive.id}` : "/ledger"}>← Ledger</a>
+        <a href={drive ? `/ledger?drive=${drive.id}` : "/ledger"} className="tap">← Ledger</a>
       </p>
       <h1 className="text-3xl">Stock count{drive ? ` · ${drive.name}` : ""}</h1>
       {!drive ? (

@@ -25,7 +25,7 @@ export default async function OrganiseDrivesPage() {
           <ul className="divide-y divide-paper-edge">
             {drives.map((d) => (
               <li key={d.id} className="flex flex-wrap items-baseline justify-between gap-2 py-3">
-                <Link href={`/organise/drives/${d.id}`} className="text-lg font-semibold">{d.name}</Link>
+                <Link href={`/organise/drives/${d.id}`} className="tap text-lg font-semibold">{d.name}</Link>
                 <span className="text-ink-faint">
                   {spanText(d)} · {countOf(d.dropPoints, "drop point")} · {d.isPublic ? "public" : "not public"}
                 </span>

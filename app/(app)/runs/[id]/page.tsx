@@ -20,7 +20,7 @@ export default async function RunPage({ params }: { params: Promise<{ id: string
   });
   return (
     <main className="flex flex-col gap-4">
-      <p><Link href="/runs">← Pickup runs</Link></p>
+      <p><Link href="/runs" className="tap">← Pickup runs</Link></p>
       <RunView
         initial={run}
         canAct={actor.role === "organiser" || run.assigneeId === actor.user.id}

@@ -43,7 +43,7 @@ export default async function UnitsPage() {
                 .filter((u) => u.driveId === d.id)
                 .map((u) => (
                   <li key={u.id} className="flex flex-wrap items-center justify-between gap-2 py-3">
-                    <Link href={`/units/${u.id}`} className="font-semibold">
+                    <Link href={`/units/${u.id}`} className="tap font-semibold">
                       {u.name}
                     </Link>
                     <span className="flex flex-wrap items-center gap-3 text-ink-soft">

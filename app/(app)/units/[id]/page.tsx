@@ -44,7 +44,7 @@ export default async function UnitPage({ params }: Props) {
   return (
     <main className="flex flex-col gap-5">
       <p>
-        <Link href="/units">← All heater units</Link>
+        <Link href="/units" className="tap">← All heater units</Link>
       </p>
       <div className="flex flex-wrap items-center justify-between gap-3">
         <div>

@@ -30,7 +30,7 @@ export default async function EditDrivePage({ params }: { params: Promise<{ id: 
   return (
     <main className="flex flex-col gap-6">
       <div>
-        <p><Link href="/organise/drives">← All drives</Link></p>
+        <p><Link href="/organise/drives" className="tap">← All drives</Link></p>
         <h1 className="text-3xl">{drive.name}</h1>
         {drive.isPublic ? <p><Link href={`/drives/${drive.slug}`}>Open the public page</Link></p> : <p className="text-ink-faint">Not public</p>}
       </div>

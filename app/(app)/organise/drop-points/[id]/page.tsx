@@ -20,7 +20,7 @@ export default async function DropPointPage({ params }: { params: Promise<{ id: 
   return (
     <main className="flex flex-col gap-6">
       <div>
-        <p><Link href={`/organise/drives/${point.driveId}`}>← {drive?.name ?? "Drive"}</Link></p>
+        <p><Link href={`/organise/drives/${point.driveId}`} className="tap">← {drive?.name ?? "Drive"}</Link></p>
         <h1 className="text-3xl">{point.name}</h1>
         {drive ? <p><Link href={`/drives/${drive.slug}/sign/${point.id}`}>Print a sign for this drop point</Link></p> : null}
       </div>

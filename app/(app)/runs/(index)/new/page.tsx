@@ -36,7 +36,7 @@ export default async function NewRunPage({ searchParams }: { searchParams: Promi
   ]);
   return (
     <main className="flex flex-col gap-4">
-      <p><Link href="/runs">← Pickup runs</Link></p>
+      <p><Link href="/runs" className="tap">← Pickup runs</Link></p>
       <h1 className="text-3xl">Plan a pickup run</h1>
       <RunPlanner
         drives={drives.map((d) => ({ id: d.id, name: d.name, startsOn: d.startsOn, endsOn: d.endsOn }))}

@@ -41,7 +41,7 @@ export default async function BuildSheetPage({ params }: Props) {
   return (
     <main className="build-sheet flex flex-col gap-5 print:gap-3">
       <div className="no-print flex flex-wrap items-center justify-between gap-3">
-        <Link href={`/units/${unit.id}`}>← Back to the unit</Link>
+        <Link href={`/units/${unit.id}`} className="tap">← Back to the unit</Link>
         <PrintButton />
       </div>
       <header>

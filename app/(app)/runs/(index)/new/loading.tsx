@@ -1,2 +1,0 @@
-// The same placeholder as the section's list page.
-export { default } from "../loading";

@@ -1,0 +1,23 @@
+"use client";
+
+import { useEffect, useRef, useState } from "react";
+
+/**
+ * True once the element comes within `margin` of the viewport (and stays
+ * true): heavy parts below the fold (maps, charts) load when a person scrolls
+ * towards them instead of competing with the first screen.
+ */
+export function useNearViewport<T extends Element>(margin = "400px"): [React.RefObject<T | null>, boolean] {
+  const ref = useRef<T | null>(null);
+  const [near, setNear] = useState(false);
+  useEffect(() => {
+    const el = ref.current;
+    if (near || !el) return;
+    const observer = new IntersectionObserver((entries) => {
+      if (entries.some((e) => e.isIntersecting)) setNear(true);
+    }, { rootMargin: margin });
+    observer.observe(el);
+    return () => observer.disconnect();
+  }, [near, margin]);
+  return [ref, near];
+}
