@@ -129,4 +129,18 @@ export const rows: AuthzRow[] = [
     path: () => "/api/me/groups",
     expect: { anonymous: 401, volunteer: 200, builder: 200, organiser: 200, otherOrganiser: 200 },
   },
+  {
+    route: "app/api/group/look/route.ts",
+    method: "GET",
+    path: () => "/api/group/look",
+    expect: { anonymous: 401, volunteer: 200, builder: 200, organiser: 200, otherOrganiser: 200 },
+  },
+  {
+    route: "app/api/group/look/route.ts",
+    method: "PUT",
+    path: () => "/api/group/look",
+    body: () => ({ timeZone: "Not/AZone", locale: "xx", units: "cubits" }),
+    expect: { ...ORGANISERS_ONLY, organiser: 422, otherOrganiser: 422 },
+    note: "Each organiser acts on their own group only; the invalid body keeps every group's look as it is.",
+  },
 ];

@@ -1,0 +1,73 @@
+import type { Look } from "./look";
+
+// Every date and time people read, in one style: "2 Dec 2026" for a day,
+// "2 Dec 2026, 13:55" for a moment, "1 Nov 2026 – 31 Jan 2027" for a span
+// (en-GB; other locales get their own order from Intl/CLDR). Machine columns
+// (the CSV's ISO UTC, <time dateTime>) keep ISO; everything shown goes through here.
+
+const cache = new Map<string, Intl.DateTimeFormat>();
+
+function dtf(locale: string, options: Intl.DateTimeFormatOptions): Intl.DateTimeFormat {
+  const key = `${locale}|${JSON.stringify(options)}`;
+  let f = cache.get(key);
+  if (!f) {
+    f = new Intl.DateTimeFormat(locale, options);
+    cache.set(key, f);
+  }
+  return f;
+}
+
+const DAY_SHAPE = /^(\d{4})-(\d{2})-(\d{2})$/;
+
+/** A calendar day ("2026-12-02") as an instant at noon UTC, formatted in UTC: the day never shifts with a zone. */
+function dayInstant(day: string): Date {
+  const m = DAY_SHAPE.exec(day);
+  if (!m) return new Date(day);
+  return new Date(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3]), 12));
+}
+
+type Locale = Pick<Look, "locale">;
+type Clock = Pick<Look, "locale" | "timeZone">;
+
+/** "2 Dec 2026": a calendar day. */
+export function formatDay(day: string, look: Locale): string {
+  return dtf(look.locale, { dateStyle: "medium", timeZone: "UTC" }).format(dayInstant(day));
+}
+
+/** "Wednesday 2 December 2026": a day spelled out, for headings and warnings. */
+export function formatLongDay(day: string, look: Locale): string {
+  return dtf(look.locale, { dateStyle: "full", timeZone: "UTC" }).format(dayInstant(day));
+}
+
+/** "2 Dec": a day on a chart's axis, where the year is in the title. */
+export function formatDayMonth(day: string, look: Locale): string {
+  return dtf(look.locale, { day: "numeric", month: "short", timeZone: "UTC" }).format(dayInstant(day));
+}
+
+/** "1 Nov 2026 – 31 Jan 2027", "1–30 Nov 2026": two calendar days, the shared parts once. */
+export function formatDayRange(from: string, to: string, look: Locale): string {
+  const a = dayInstant(from);
+  const b = dayInstant(to);
+  const f = dtf(look.locale, { dateStyle: "medium", timeZone: "UTC" });
+  return a.getTime() > b.getTime() ? `${f.format(a)} – ${f.format(b)}` : f.formatRange(a, b);
+}
+
+/** "2 Dec 2026, 13:55": a moment on the group's clock. */
+export function formatMoment(at: string | Date, look: Clock): string {
+  return dtf(look.locale, { dateStyle: "medium", timeStyle: "short", timeZone: look.timeZone }).format(new Date(at));
+}
+
+/** "13:55": a moment's time alone, when the day is said next to it. */
+export function formatTime(at: string | Date, look: Clock): string {
+  return dtf(look.locale, { timeStyle: "short", timeZone: look.timeZone }).format(new Date(at));
+}
+
+/** The calendar day ("2026-12-02") a moment falls on in a time zone: for comparing and filtering, not for showing. */
+export function localDay(at: string | Date, timeZone: string): string {
+  const parts = Object.fromEntries(
+    dtf("en-GB", { timeZone, year: "numeric", month: "2-digit", day: "2-digit" })
+      .formatToParts(new Date(at))
+      .map((p) => [p.type, p.value]),
+  );
+  return `${parts.year}-${parts.month}-${parts.day}`;
+}
