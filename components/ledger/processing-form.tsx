@@ -7,6 +7,7 @@ import { FormError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { LOSS_REASON_LABEL, processingInputSchema, type LossReason } from "@/lib/ledger/schemas";
+import { stageLabel } from "@/lib/ledger/labels";
 import { ledgerQueries } from "@/hooks/queries/ledger";
 import { ProcessingCaution } from "./cautions";
 import { NumberField } from "@/components/ui/number-field";
@@ -77,7 +78,7 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
       </fieldset>
       <ProcessingCaution to={step.to} />
       <p className="text-ink-soft">
-        {available === null ? "Loading what is on hand…" : `${countOf(available, noun("can is", "cans are"))} ${step.from} and can move on.`}
+        {available === null ? "Loading what is on hand…" : `${countOf(available, noun("can is", "cans are"))} ${stageLabel(step.from)} and can move on.`}
       </p>
       <NumberField
         id="processing-quantity"

@@ -15,7 +15,7 @@ import { NumberField } from "@/components/ui/number-field";
 import { NUMBER_SPECS, parseNumberInput, parseNumberInputs } from "@/lib/forms/number-input";
 import { countOf, plural } from "@/lib/plural";
 import type { SubmitResult } from "./use-outbox";
-import { formatDateTime } from "@/lib/format";
+import { useFormat } from "@/hooks/use-look";
 
 type Submit = (url: string, body: unknown, label: string) => Promise<SubmitResult>;
 const zeroRejects = () => Object.fromEntries(REJECT_REASONS.map((r) => [r, "0"])) as Record<RejectReason, string>;
@@ -26,6 +26,7 @@ const valueOf = (raw: string) => {
 };
 
 export function SortForm({ driveId, submit }: { driveId: string; submit: Submit }) {
+  const f = useFormat();
   const hauls = useQuery(ledgerQueries.openHauls(driveId));
   const [chosen, setChosen] = useState<string[]>([]);
   const [goodText, setGood] = useState("0");
@@ -94,8 +95,8 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
                 onChange={(e) => setChosen((c) => (e.target.checked ? [...c, h.id] : c.filter((x) => x !== h.id)))}
               />
               <span>
-                {h.dropPointName} · {countOf(h.bags, "bag")}{h.weightKg !== null ? ` · ${h.weightKg} kg` : ""} · ≈{countOf(h.estimatedCans, "can")}
-                <span className="block text-sm text-ink-faint">{formatDateTime(h.hauledAt)}</span>
+                {h.dropPointName} · {countOf(h.bags, "bag")}{h.weightKg !== null ? ` · ${f.mass(h.weightKg)}` : ""} · ≈{countOf(h.estimatedCans, "can")}
+                <span className="block text-sm text-ink-faint">{f.moment(h.hauledAt)}</span>
               </span>
             </label>
           ))

@@ -6,6 +6,7 @@ import type { Look } from "./look";
 // (the CSV's ISO UTC, <time dateTime>) keep ISO; everything shown goes through here.
 
 const cache = new Map<string, Intl.DateTimeFormat>();
+const agoCache = new Map<string, Intl.RelativeTimeFormat>();
 
 function dtf(locale: string, options: Intl.DateTimeFormatOptions): Intl.DateTimeFormat {
   const key = `${locale}|${JSON.stringify(options)}`;
@@ -70,4 +71,15 @@ export function localDay(at: string | Date, timeZone: string): string {
       .map((p) => [p.type, p.value]),
   );
   return `${parts.year}-${parts.month}-${parts.day}`;
+}
+
+/** "3 hours ago", "1 day ago": Intl.RelativeTimeFormat, so the unit's plural is CLDR's. */
+export function formatAgo(amount: number, unit: "minute" | "hour" | "day", look: Pick<Look, "locale"> = { locale: "en-GB" }): string {
+  const key = `${look.locale}|ago`;
+  let f = agoCache.get(key);
+  if (!f) {
+    f = new Intl.RelativeTimeFormat(look.locale, { numeric: "always" });
+    agoCache.set(key, f);
+  }
+  return f.format(-amount, unit);
 }

@@ -61,7 +61,7 @@ describe("pickup run journey", () => {
     await context.close();
 
     const mail = await waitForMail(DEMO.volunteer, (m) => m.text.includes(`/runs/${runId}`));
-    expect(mail.subject).toBe("Pickup run on 2026-12-12: 3 stops");
+    expect(mail.subject).toBe("Pickup run on 12 Dec 2026: 3 stops");
     const stored = await testDb()("pickup_run_stops").where({ run_id: runId }).orderBy("position").pluck("drop_point_id");
     expect([...stored].sort()).toEqual(WANTED.map(idOf).sort());
 

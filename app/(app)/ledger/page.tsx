@@ -12,7 +12,6 @@ import { driveGoodDaily, dropPointTallies } from "@/lib/ledger/balances";
 import { driveChartBasics } from "@/lib/ledger/queries";
 import { listGroupPeople } from "@/lib/accounts/queries";
 import { listLogDrives } from "@/lib/drives/queries";
-import { groupTimeZone } from "@/lib/ledger/ledger-list";
 import { dailySeries } from "@/lib/ledger/daily-series";
 import { countOf } from "@/lib/plural";
 import { NO_HEATERS } from "@/lib/drives/progress-wording";
@@ -24,7 +23,7 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
   // ?driveId= is the table's filter (kept in the address); ?drive= is the older link form.
   const { drive: oldLink, driveId } = await searchParams;
   const wanted = driveId ?? oldLink;
-  const [drives, people, timeZone] = await Promise.all([listLogDrives(actor.group.id), listGroupPeople(actor.group.id), groupTimeZone(actor.group.id)]);
+  const [drives, people] = await Promise.all([listLogDrives(actor.group.id), listGroupPeople(actor.group.id)]);
   // The address wins (links, the table's filter); else the remembered drive, else the one running today.
   const { drive, today } = await pageDrive(actor, drives, wanted);
   if (!drive) {
@@ -70,7 +69,7 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
         <RecyclingForm driveId={drive.id} />
       </Card>
       <Card title="Every line">
-        <LedgerTable drives={drives} people={people} initialDriveId={drive.id} timeZone={timeZone} />
+        <LedgerTable drives={drives} people={people} initialDriveId={drive.id} />
       </Card>
     </main>
   );
