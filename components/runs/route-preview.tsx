@@ -5,6 +5,7 @@ import { runQueries } from "@/hooks/queries/runs";
 import type { SuggestionRow } from "@/lib/runs/types";
 import { Skeleton } from "@/components/ui/card";
 import { RouteMap } from "./route-map";
+import { useFormat } from "@/hooks/use-look";
 
 export function RoutePreview({
   start,
@@ -26,6 +27,7 @@ export function RoutePreview({
     returnToStart,
   };
   const route = useQuery({ ...runQueries.route(input), enabled: ready });
+  const f = useFormat();
   if (!ready) {
     return <p className="text-ink-soft">Choose a start point and at least one drop point to see the route.</p>;
   }
@@ -36,7 +38,7 @@ export function RoutePreview({
   return (
     <div className="flex flex-col gap-3">
       <p className="text-lg">
-        Route length <strong data-testid="route-length">{route.data.distanceKm.toFixed(2)} km</strong>{" "}
+        Route length <strong data-testid="route-length">{f.distance(route.data.distanceKm)}</strong>{" "}
         <span className="text-sm text-ink-faint">(straight lines between stops; roads are longer)</span>
       </p>
       <RouteMap start={start} stops={ordered} returnToStart={returnToStart} tileUrl={tileUrl} attribution={attribution} />
@@ -48,10 +50,10 @@ export function RoutePreview({
               <span className="mr-2 inline-flex h-6 w-6 items-center justify-center rounded-full bg-ember text-sm font-bold text-white">{i + 1}</span>
               {s.name}
             </span>
-            <span className="text-ink-faint">+{route.data.legs[i]!.distanceKm.toFixed(2)} km</span>
+            <span className="text-ink-faint">+{f.distance(route.data.legs[i]!.distanceKm)}</span>
           </li>
         ))}
-        {returnToStart ? <li className="text-ink-soft">Back to the start (+{route.data.legs.at(-1)!.distanceKm.toFixed(2)} km)</li> : null}
+        {returnToStart ? <li className="text-ink-soft">Back to the start (+{f.distance(route.data.legs.at(-1)!.distanceKm)})</li> : null}
       </ol>
     </div>
   );

@@ -67,3 +67,6 @@ export function formatDistance(km: number, look: Shown): string {
 
 /** The unit a typed mass is asked in. */
 export const massUnit = (units: Units) => (units === "imperial" ? "lb" : "kg");
+
+/** The planner's length unit for the group's units: inches for imperial, millimetres for metric. */
+export const lengthUnitOf = (units: Units): "in" | "mm" => (units === "imperial" ? "in" : "mm");
