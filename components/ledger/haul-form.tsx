@@ -32,6 +32,7 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
 
   async function onSubmit(e: React.FormEvent) {
     e.preventDefault();
+    setMessage(null); // an earlier "recorded" must not stand above this try's errors
     // Anything typed that is not a number stops here; nothing else is ever sent in its place.
     const numbers = parseNumberInputs({ bags: [bags, NUMBER_SPECS.haulBags], weightKg: [weight, NUMBER_SPECS.haulWeightKg] });
     const parsed = haulInputSchema.safeParse({ dropPointId, bags: numbers.values.bags, weightKg: numbers.values.weightKg });

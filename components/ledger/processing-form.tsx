@@ -42,6 +42,7 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
 
   async function onSubmit(e: React.FormEvent) {
     e.preventDefault();
+    setMessage(null); // an earlier "recorded" must not stand above this try's errors
     // Anything typed that is not a whole number stops here; nothing else is ever sent in its place.
     const numbers = parseNumberInputs({ quantity: [quantityText, NUMBER_SPECS.batchCans], "lost.quantity": [lostText, NUMBER_SPECS.lostCans] });
     const quantity = numbers.values.quantity;

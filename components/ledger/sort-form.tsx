@@ -42,6 +42,7 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
 
   async function onSubmit(e: React.FormEvent) {
     e.preventDefault();
+    setMessage(null); // an earlier "recorded" must not stand above this try's errors
     // Anything typed that is not a whole number stops here; nothing else is ever sent in its place.
     const numbers = parseNumberInputs({
       good: [goodText, NUMBER_SPECS.goodCans],

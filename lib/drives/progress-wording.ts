@@ -1,4 +1,6 @@
 import { countOf } from "@/lib/plural";
+import { formatDay } from "@/lib/format/dates";
+import { DEFAULT_LOOK, type Look } from "@/lib/format/look";
 import type { DriveFinish } from "./progress";
 
 // The words shown beside a drive's progress, in one place so the public page
@@ -21,21 +23,22 @@ export function remainingText(target: { cans: number; heaters: number }, remaini
   return "Target reached — thank you!";
 }
 
-/** The dashboard's "Expected finish": a date only when a pace promises one for a running drive. */
-export function finishText(finish: DriveFinish): string {
+/** The dashboard's "Expected finish": a date only when a pace promises one for a running drive. Days in the group's style. */
+export function finishText(finish: DriveFinish, look: Pick<Look, "locale"> = DEFAULT_LOOK): string {
+  const day = (d: string) => formatDay(d, look);
   switch (finish.kind) {
     case "noTarget":
       return NO_HEATERS;
     case "reached":
       return "Target reached";
     case "ended":
-      return `The drive ended on ${finish.endsOn}`;
+      return `The drive ended on ${day(finish.endsOn)}`;
     case "notStarted":
-      return `No pace yet: the drive starts on ${finish.startsOn}`;
+      return `No pace yet: the drive starts on ${day(finish.startsOn)}`;
     case "noPace":
       return `No pace yet: nothing counted in the last ${countOf(finish.windowDays, "day")}`;
     case "expected":
-      return finish.afterEnd && finish.endsOn ? `${finish.date}, after the drive ends on ${finish.endsOn}` : finish.date;
+      return finish.afterEnd && finish.endsOn ? `${day(finish.date)}, after the drive ends on ${day(finish.endsOn)}` : day(finish.date);
   }
 }
 

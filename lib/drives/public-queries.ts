@@ -4,6 +4,7 @@ import { notFound } from "@/lib/api/errors";
 import { UUID } from "@/lib/api/path";
 import { CURRENT_FILL_LATERAL } from "./fill";
 import type { PublicDropPointRow, PublicDropPointWithTallies } from "./types";
+import type { Look } from "@/lib/format/look";
 
 export type { PublicDropPointRow, PublicDropPointWithTallies };
 
@@ -36,6 +37,8 @@ export interface PublicDriveRow extends PublicDriveSummary {
   description: string;
   wanted: string;
   sparePercent: number;
+  /** The group's look (lib/format): its day for the pace, its words for dates and measures. */
+  look: Look;
 }
 
 export async function findPublicDrive(slug: string): Promise<PublicDriveRow | undefined> {
@@ -45,6 +48,9 @@ export async function findPublicDrive(slug: string): Promise<PublicDriveRow | un
       "d.id",
       "d.group_id as groupId",
       "g.name as groupName",
+      "g.time_zone as timeZone",
+      "g.locale",
+      "g.units",
       "d.slug",
       "d.name",
       "d.description",
@@ -55,7 +61,9 @@ export async function findPublicDrive(slug: string): Promise<PublicDriveRow | un
     )
     .where({ "d.slug": slug, "d.is_public": true })
     .first();
-  return row ? { ...row, sparePercent: Number(row.sparePercent) } : undefined;
+  if (!row) return undefined;
+  const { timeZone, locale, units, ...rest } = row;
+  return { ...rest, sparePercent: Number(row.sparePercent), look: { timeZone, locale, units } };
 }
 
 /** Cans each heater unit of the drive needs, oldest unit first. */

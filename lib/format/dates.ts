@@ -35,9 +35,9 @@ export function formatDay(day: string, look: Locale): string {
   return dtf(look.locale, { dateStyle: "medium", timeZone: "UTC" }).format(dayInstant(day));
 }
 
-/** "Wednesday 2 December 2026": a day spelled out, for headings and warnings. */
+/** "2 December 2026": a day spelled out, for sentences, warnings and mail. */
 export function formatLongDay(day: string, look: Locale): string {
-  return dtf(look.locale, { dateStyle: "full", timeZone: "UTC" }).format(dayInstant(day));
+  return dtf(look.locale, { dateStyle: "long", timeZone: "UTC" }).format(dayInstant(day));
 }
 
 /** "2 Dec": a day on a chart's axis, where the year is in the title. */
@@ -50,12 +50,18 @@ export function formatDayRange(from: string, to: string, look: Locale): string {
   const a = dayInstant(from);
   const b = dayInstant(to);
   const f = dtf(look.locale, { dateStyle: "medium", timeZone: "UTC" });
-  return a.getTime() > b.getTime() ? `${f.format(a)} – ${f.format(b)}` : f.formatRange(a, b);
+  // CLDR's range pattern puts thin spaces (U+2009) round the dash; plain ones read like the other dates.
+  return (a.getTime() > b.getTime() ? `${f.format(a)} – ${f.format(b)}` : f.formatRange(a, b)).replaceAll("\u2009", " ");
 }
 
 /** "2 Dec 2026, 13:55": a moment on the group's clock. */
 export function formatMoment(at: string | Date, look: Clock): string {
   return dtf(look.locale, { dateStyle: "medium", timeStyle: "short", timeZone: look.timeZone }).format(new Date(at));
+}
+
+/** "2 Dec 2026": the day a moment falls on, on the group's clock. */
+export function formatMomentDay(at: string | Date, look: Clock): string {
+  return dtf(look.locale, { dateStyle: "medium", timeZone: look.timeZone }).format(new Date(at));
 }
 
 /** "13:55": a moment's time alone, when the day is said next to it. */

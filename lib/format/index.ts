@@ -1,7 +1,7 @@
 // The one presentation layer: dates, numbers, counts and measures in the
 // group's time zone, locale and units (a Look). Client-safe and free of
 // libraries: only Intl (DateTimeFormat, NumberFormat, PluralRules).
-import { formatDay, formatDayMonth, formatDayRange, formatLongDay, formatMoment, formatTime } from "./dates";
+import { formatDay, formatDayMonth, formatDayRange, formatLongDay, formatMoment, formatMomentDay, formatTime } from "./dates";
 import { DEFAULT_LOOK, type Look } from "./look";
 import { formatArea, formatDistance, formatLength, formatMass } from "./measures";
 import { formatCount, formatNumber, formatPercent } from "./numbers";
@@ -22,6 +22,7 @@ export function formatter(look: Look = DEFAULT_LOOK) {
     dayMonth: (day: string) => formatDayMonth(day, look),
     dayRange: (from: string, to: string) => formatDayRange(from, to, look),
     moment: (at: string | Date) => formatMoment(at, look),
+    dayOf: (at: string | Date) => formatMomentDay(at, look),
     time: (at: string | Date) => formatTime(at, look),
     number: (n: number, maxDigits = 0) => formatNumber(n, look, maxDigits),
     percent: (share: number, digits = 0) => formatPercent(share, look, digits),

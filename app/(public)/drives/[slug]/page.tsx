@@ -4,7 +4,8 @@ import { DriveLive } from "@/components/drives/public/drive-live";
 import { CanSafetyNote, WantedCans } from "@/components/drives/public/wanted-cans";
 import { Card } from "@/components/ui/card";
 import { AppError } from "@/lib/api/errors";
-import { publicDrive, publicDropPoints } from "@/lib/drives/public-service";
+import { publicDrive, publicDriveLook, publicDropPoints } from "@/lib/drives/public-service";
+import { formatLongDay } from "@/lib/format/dates";
 import { tileConfig } from "@/lib/map/config";
 
 export const dynamic = "force-dynamic";
@@ -15,7 +16,7 @@ type Props = { params: Promise<{ slug: string }> };
 
 async function load(slug: string) {
   try {
-    return await Promise.all([publicDrive(slug), publicDropPoints(slug)]);
+    return await Promise.all([publicDrive(slug), publicDropPoints(slug), publicDriveLook(slug)]);
   } catch (error) {
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;
@@ -31,13 +32,9 @@ export async function generateMetadata({ params }: Props): Promise<Metadata> {
   }
 }
 
-function formatDate(d: string) {
-  return new Date(`${d}T12:00:00Z`).toLocaleDateString("en-GB", { day: "numeric", month: "long", year: "numeric" });
-}
-
 export default async function PublicDrivePage({ params }: Props) {
   const { slug } = await params;
-  const [drive, points] = await load(slug);
+  const [drive, points, look] = await load(slug);
   const tiles = tileConfig();
   return (
     <main id="main" className="mx-auto flex max-w-5xl flex-col gap-6 px-4 py-6">
@@ -45,7 +42,7 @@ export default async function PublicDrivePage({ params }: Props) {
         <p className="font-semibold text-ember-deep">{drive.drive.groupName}</p>
         <h1 className="text-3xl sm:text-4xl">{drive.drive.name}</h1>
         <p className="mt-1 text-ink-soft">
-          {formatDate(drive.drive.startsOn)} to {formatDate(drive.drive.endsOn)}
+          {formatLongDay(drive.drive.startsOn, look)} to {formatLongDay(drive.drive.endsOn, look)}
         </p>
         {drive.drive.description ? <p className="mt-3 max-w-prose text-lg">{drive.drive.description}</p> : null}
       </header>
