@@ -9,8 +9,8 @@ import { capitalise, stageLabel } from "@/lib/ledger/labels";
 export type { DailyPoint };
 
 export function GoodCansChart({ daily, target }: { daily: DailyPoint[]; target: number }) {
-  if (daily.every((d) => d.goodCans === 0)) return <p className="text-ink-soft">No good cans counted yet for this drive.</p>;
   const f = useFormat();
+  if (daily.every((d) => d.goodCans === 0)) return <p className="text-ink-soft">No good cans counted yet for this drive.</p>;
   const top = Math.max(target, daily[daily.length - 1]?.cumulative ?? 0);
   const tick = (t: number) => dayTick(t, f.look);
   return (
