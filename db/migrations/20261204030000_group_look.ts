@@ -9,7 +9,8 @@ export async function up(knex: Knex): Promise<void> {
     t.string("units", 8).notNullable().defaultTo("metric");
   });
   await knex.raw("alter table groups add constraint groups_units_check check (units in ('metric', 'imperial'))");
-  await knex.raw("alter table groups add constraint groups_locale_check check (locale ~ '^[a-z]{2,3}(-[A-Z]{2})?$')");
+  // No "?" in the pattern: knex.raw would read it as a binding.
+  await knex.raw("alter table groups add constraint groups_locale_check check (locale ~ '^[a-z]{2,3}(-[A-Z]{2}){0,1}$')");
 }
 
 export async function down(knex: Knex): Promise<void> {
