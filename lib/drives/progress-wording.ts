@@ -1,6 +1,7 @@
 import { countOf } from "@/lib/plural";
 import { formatDay } from "@/lib/format/dates";
-import { DEFAULT_LOOK, type Look } from "@/lib/format/look";
+import { DEFAULT_LOOK } from "@/lib/format/default-look";
+import type { Look } from "@/lib/format/look";
 import type { DriveFinish } from "./progress";
 
 // The words shown beside a drive's progress, in one place so the public page

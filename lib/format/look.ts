@@ -13,7 +13,7 @@ export interface Look {
   units: Units;
 }
 
-export const DEFAULT_LOOK: Look = { timeZone: "Europe/London", locale: "en-GB", units: "metric" };
+export { DEFAULT_LOOK } from "./default-look";
 
 /**
  * The locales offered. Cantrove's words are English, so only English locales:

@@ -121,7 +121,8 @@ describe("pickup run journey", () => {
     await org.page.goto("/runs");
     const card = (title: string) => org.page.locator("section", { has: org.page.getByRole("heading", { name: title, exact: true }) });
     const done = card("Done");
-    await done.getByRole("link", { name: /2026-12-12 · Tobin Ashgrove/ }).waitFor();
+    // The run is named by its day in the group's style (CLDR en-GB medium date), not the ISO code.
+    await done.getByRole("link", { name: /12 Dec 2026 · Tobin Ashgrove/ }).waitFor();
     const history = card("Pickup history by drop point");
     await history.getByText(/^Hilltop Corner Shop/).click();
     await history.getByText(/haul logged: 2 bags/).first().waitFor();

@@ -6,8 +6,7 @@ import { FILL_SHAPE_LABEL, fillShape, LEVEL_LABEL } from "@/lib/drives/fill";
 import type { PublicDropPointView } from "@/lib/drives/types";
 import { haversineKm } from "@/lib/runs/great-circle";
 import { formatMoment } from "@/lib/format/dates";
-import { DEFAULT_LOOK } from "@/lib/format/look";
-import { formatDistance, NBSP } from "@/lib/format/measures";
+import { DEFAULT_LOOK } from "@/lib/format/default-look";
 import { countOf } from "@/lib/plural";
 
 import { FillReportForm } from "./fill-report-form";
@@ -72,7 +71,7 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
                 </span>
                 {p.name}
               </h3>
-              {p.km !== undefined ? <span className="font-semibold">{formatDistance(p.km, DEFAULT_LOOK)} away</span> : null}
+              {p.km !== undefined ? <span className="font-semibold">{p.km < 1 ? `${Math.round(p.km * 1000)}\u00a0m` : `${p.km.toFixed(1)}\u00a0km`} away</span> : null}
             </div>
             {p.address ? <p>{p.address}</p> : null}
             <p>
@@ -83,7 +82,7 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
             </p>
             <p className={`text-sm font-semibold ${fillShape(p.fill?.level) === "full" ? "text-alarm" : "text-ink-soft"}`} data-testid="fill" data-fill={fillShape(p.fill?.level)}>
               Bin: {FILL_SHAPE_LABEL[fillShape(p.fill?.level)]}
-              {p.fill ? ` — ${LEVEL_LABEL[p.fill.level] ?? `${p.fill.level}${NBSP}%`} (${formatMoment(p.fill.reportedAt, DEFAULT_LOOK)})` : " since the last pickup"}
+              {p.fill ? ` — ${LEVEL_LABEL[p.fill.level] ?? `${p.fill.level}\u00a0%`} (${formatMoment(p.fill.reportedAt, DEFAULT_LOOK)})` : " since the last pickup"}
             </p>
             {p.photos.length ? (
               <div className="mt-2 flex gap-2 overflow-x-auto">
