@@ -1,22 +1,12 @@
 import type { Look } from "./look";
+import { memo } from "./memo";
 
 // Every date and time people read, in one style: "2 Dec 2026" for a day,
 // "2 Dec 2026, 13:55" for a moment, "1 Nov 2026 – 31 Jan 2027" for a span
 // (en-GB; other locales get their own order from Intl/CLDR). Machine columns
 // (the CSV's ISO UTC, <time dateTime>) keep ISO; everything shown goes through here.
 
-const cache = new Map<string, Intl.DateTimeFormat>();
-const agoCache = new Map<string, Intl.RelativeTimeFormat>();
-
-function dtf(locale: string, options: Intl.DateTimeFormatOptions): Intl.DateTimeFormat {
-  const key = `${locale}|${JSON.stringify(options)}`;
-  let f = cache.get(key);
-  if (!f) {
-    f = new Intl.DateTimeFormat(locale, options);
-    cache.set(key, f);
-  }
-  return f;
-}
+const dtf = (locale: string, options: Intl.DateTimeFormatOptions) => memo("date", locale, options, () => new Intl.DateTimeFormat(locale, options));
 
 const DAY_SHAPE = /^(\d{4})-(\d{2})-(\d{2})$/;
 
@@ -81,11 +71,5 @@ export function localDay(at: string | Date, timeZone: string): string {
 
 /** "3 hours ago", "1 day ago": Intl.RelativeTimeFormat, so the unit's plural is CLDR's. */
 export function formatAgo(amount: number, unit: "minute" | "hour" | "day", look: Pick<Look, "locale"> = { locale: "en-GB" }): string {
-  const key = `${look.locale}|ago`;
-  let f = agoCache.get(key);
-  if (!f) {
-    f = new Intl.RelativeTimeFormat(look.locale, { numeric: "always" });
-    agoCache.set(key, f);
-  }
-  return f.format(-amount, unit);
+  return memo("ago", look.locale, {}, () => new Intl.RelativeTimeFormat(look.locale, { numeric: "always" })).format(-amount, unit);
 }

@@ -1,5 +1,6 @@
 import { countOf, plural, type Noun } from "@/lib/plural";
 import type { Look } from "./look";
+import { memo } from "./memo";
 
 // Numbers as the group's locale writes them ("1,234.5" in en-GB, "1 234,5"
 // in en-ZA), and counts with a noun spelled right for the number (lib/plural.ts:
@@ -7,16 +8,8 @@ import type { Look } from "./look";
 
 type Locale = Pick<Look, "locale">;
 
-const cache = new Map<string, Intl.NumberFormat>();
-
 export function numberFormat(locale: string, options: Intl.NumberFormatOptions): Intl.NumberFormat {
-  const key = `${locale}|${JSON.stringify(options)}`;
-  let f = cache.get(key);
-  if (!f) {
-    f = new Intl.NumberFormat(locale, options);
-    cache.set(key, f);
-  }
-  return f;
+  return memo("number", locale, options, () => new Intl.NumberFormat(locale, options));
 }
 
 /** "1,234" or, with digits, "1,234.5": at most `maxDigits` decimals, no trailing zeros. */
