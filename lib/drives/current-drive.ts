@@ -44,8 +44,8 @@ export function pickDrive<D extends DriveSpan>(drives: readonly D[], today: stri
   return defaultDrive(drives, today);
 }
 
-// The words come from lib/format (Intl with the group's locale). Callers render
-// them on the server: the browser's Intl data may differ from Node's ("Sep"/"Sept").
+// The words come from lib/format (Intl with the group's locale); its steady() spelling
+// keeps the server's and the browser's text the same ("Sep", not "Sept" from newer ICU data).
 
 /** "1 March 2027". */
 export function longDay(day: string, look: Pick<Look, "locale"> = DEFAULT_LOOK): string {

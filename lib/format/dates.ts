@@ -6,7 +6,17 @@ import { memo } from "./memo";
 // (en-GB; other locales get their own order from Intl/CLDR). Machine columns
 // (the CSV's ISO UTC, <time dateTime>) keep ISO; everything shown goes through here.
 
-const dtf = (locale: string, options: Intl.DateTimeFormatOptions) => memo("date", locale, options, () => new Intl.DateTimeFormat(locale, options));
+/**
+ * Server and browser render the same text: ICU builds differ in small ways (CLDR 38+ has en-GB
+ * "Sept", older data "Sep"; some put U+202F before "PM" and U+2009 round a range's dash), and a
+ * page whose server and browser text disagree fails to hydrate. One spelling for each.
+ */
+export const steady = (text: string) => text.replace(/\bSept\b/g, "Sep").replace(/\u202f/g, "\u00a0").replace(/\u2009/g, " ");
+
+function dtf(locale: string, options: Intl.DateTimeFormatOptions) {
+  const f = memo("date", locale, options, () => new Intl.DateTimeFormat(locale, options));
+  return { format: (d: Date) => steady(f.format(d)), formatRange: (a: Date, b: Date) => steady(f.formatRange(a, b)), formatToParts: (d: Date) => f.formatToParts(d) };
+}
 
 const DAY_SHAPE = /^(\d{4})-(\d{2})-(\d{2})$/;
 
@@ -40,8 +50,8 @@ export function formatDayRange(from: string, to: string, look: Locale): string {
   const a = dayInstant(from);
   const b = dayInstant(to);
   const f = dtf(look.locale, { dateStyle: "medium", timeZone: "UTC" });
-  // CLDR's range pattern puts thin spaces (U+2009) round the dash; plain ones read like the other dates.
-  return (a.getTime() > b.getTime() ? `${f.format(a)} – ${f.format(b)}` : f.formatRange(a, b)).replaceAll("\u2009", " ");
+  // CLDR's range pattern puts thin spaces (U+2009) round the dash; steady() makes them plain, like the other dates.
+  return a.getTime() > b.getTime() ? `${f.format(a)} – ${f.format(b)}` : f.formatRange(a, b);
 }
 
 /** "2 Dec 2026, 13:55": a moment on the group's clock. */

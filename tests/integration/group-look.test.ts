@@ -39,7 +39,7 @@ describe("the group's look", () => {
     const csv = await (await org.get(`/api/ledger/export?driveId=${g.driveId}`)).text();
     // 18:55 UTC is 13:55 in New York in December (EST, UTC−5; IANA tz database).
     expect(csv.split(/\r?\n/)[0]).toContain("occurred_local (America/New_York)");
-    expect(csv).toMatch(/2026-12-02T18:55:00\.000Z,"Dec 2, 2026, 1:55[ \u202f]PM",/);
+    expect(csv).toMatch(/2026-12-02T18:55:00\.000Z,"Dec 2, 2026, 1:55[ \u00a0]PM",/);
   });
 
   it("is set by organisers only, and a wrong value is refused field by field", async () => {

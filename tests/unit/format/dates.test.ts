@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { formatAgo, formatDay, formatDayMonth, formatDayRange, formatLongDay, formatMoment, formatMomentDay, formatTime, localDay } from "@/lib/format/dates";
+import { formatAgo, formatDay, formatDayMonth, formatDayRange, formatLongDay, formatMoment, formatMomentDay, formatTime, localDay, steady } from "@/lib/format/dates";
 import { isTimeZone } from "@/lib/format/look";
 
 // CLDR date patterns (unicode.org/cldr, gregorian calendar), from memory: en-GB medium "d MMM y",
@@ -34,9 +34,15 @@ describe("moments on the group's clock", () => {
     expect(formatTime("2026-07-03T09:30:00Z", LONDON)).toBe("10:30");
   });
   it("uses a 12-hour clock where the locale does", () => {
-    // CLDR 42+ writes a narrow no-break space (U+202F) before the day period; V8 and ICU builds
-    // for the web put a plain space back for compatibility. Either is CLDR's "h:mm a".
-    expect(formatMoment("2026-12-02T18:55:00Z", NEW_YORK)).toMatch(/^Dec 2, 2026, 1:55[ \u202f]PM$/);
+    // CLDR 42+ writes a narrow no-break space (U+202F) before the day period; some ICU builds for
+    // the web put a plain space back. Either is CLDR's "h:mm a"; steady() writes U+00A0 for the first.
+    expect(formatMoment("2026-12-02T18:55:00Z", NEW_YORK)).toMatch(/^Dec 2, 2026, 1:55[ \u00a0]PM$/);
+  });
+  it("spells a date the same whichever ICU build renders it, so server and browser text agree", () => {
+    // en-GB's short September is "Sept" in CLDR 38 and later, "Sep" before (from memory).
+    expect(formatDay("2026-09-02", LONDON)).toBe("2 Sep 2026");
+    expect(formatLongDay("2026-09-02", LONDON)).toBe("2 September 2026");
+    expect(steady("1\u202fPM 1\u2009–\u20093 Sept")).toBe("1\u00a0PM 1 – 3 Sep");
   });
   it("finds the group's calendar day of a moment across midnight", () => {
     expect(localDay("2026-11-30T23:30:00Z", "Europe/London")).toBe("2026-11-30");
