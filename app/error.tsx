@@ -2,15 +2,16 @@
 
 import { useEffect, useState } from "react";
 import { Button } from "@/components/ui/button";
+import { ApiError, fetchJson } from "@/lib/api/client";
 
 // Production hides the real error from the browser, so ask the health
 // endpoint whether the database is the cause and say so plainly.
 export default function ErrorPage({ reset }: { error: Error & { digest?: string }; reset: () => void }) {
   const [dbDown, setDbDown] = useState(false);
   useEffect(() => {
-    fetch("/api/health", { cache: "no-store" })
-      .then((r) => setDbDown(r.status === 503))
-      .catch(() => setDbDown(false));
+    fetchJson("/api/health")
+      .then(() => setDbDown(false))
+      .catch((error: unknown) => setDbDown(error instanceof ApiError && error.status === 503));
   }, []);
   return (
     <main id="main" className="mx-auto max-w-xl px-4 py-16">

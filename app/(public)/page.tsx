@@ -3,7 +3,8 @@ import { ButtonLink } from "@/components/ui/button-link";
 import { Card, EmptyState } from "@/components/ui/card";
 import { DatabaseDown } from "@/components/system/database-down";
 import { isDatabaseUnreachable } from "@/lib/db";
-import { listPublicDrives } from "@/lib/drives/public-queries";
+import { groupByTiming, longDay, spanText } from "@/lib/drives/current-drive";
+import { listPublicDrivesWithDay } from "@/lib/drives/public-queries";
 
 const STEPS = [
   ["Gather", "Drop points at shops, schools and halls collect bags of empty cans from neighbours."],
@@ -12,28 +13,63 @@ const STEPS = [
   ["Build", "Builders claim finished cans for each heater unit, sized from its glazing sheet."],
 ] as const;
 
-function formatRange(start: string, end: string) {
-  const fmt = (d: string) => new Date(`${d}T12:00:00Z`).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" });
-  return `${fmt(start)} – ${fmt(end)}`;
-}
+type Listed = Awaited<ReturnType<typeof listPublicDrivesWithDay>>[number];
 
 // Lists live drives: never prerendered at build time.
 export const dynamic = "force-dynamic";
 
+/** One drive per row; the whole row is the link, at least 44 px tall (WCAG 2.5.5). */
+function DriveRows({ drives, note, hash = "" }: { drives: Listed[]; note: (d: Listed) => string; hash?: string }) {
+  return (
+    <ul className="divide-y divide-paper-edge">
+      {drives.map((d) => (
+        <li key={d.slug}>
+          <Link
+            href={`/drives/${d.slug}${hash}`}
+            className="flex min-h-11 flex-wrap items-center justify-between gap-x-3 gap-y-1 py-2 no-underline hover:underline"
+          >
+            <span className="text-lg font-semibold [overflow-wrap:anywhere]">{d.name}</span>
+            <span className="text-ink-faint">
+              {d.groupName} · {note(d)}
+            </span>
+          </Link>
+        </li>
+      ))}
+    </ul>
+  );
+}
+
 export default async function LandingPage() {
-  let drives: Awaited<ReturnType<typeof listPublicDrives>>;
+  let drives: Listed[];
   try {
-    drives = await listPublicDrives();
+    drives = await listPublicDrivesWithDay();
   } catch (error) {
     if (isDatabaseUnreachable(error)) return <DatabaseDown />;
     throw error;
   }
+  const { running, upcoming, ended } = groupByTiming(drives);
   return (
-    <main id="main" className="mx-auto max-w-5xl px-4 py-8 sm:py-12">
-      <section className="grid gap-6 sm:grid-cols-[3fr_2fr] sm:items-center">
+    <main id="main" className="mx-auto max-w-5xl px-4 py-6 sm:py-10">
+      {/* First on a phone: where a donor can take their cans. */}
+      <section aria-labelledby="find-heading" className="rounded-card border-2 border-ember bg-white/70 p-4 sm:p-6">
+        <h1 id="find-heading" className="text-3xl sm:text-4xl">
+          Find a drop point near you
+        </h1>
+        <p className="mt-1 text-ink-soft">Choose a drive collecting now to see its drop points on a map, nearest to you first, and when each is open.</p>
+        <h2 className="mt-4 text-xl">Collecting now</h2>
+        {running.length === 0 ? (
+          <EmptyState title="No drive is collecting today">
+            {upcoming.length ? `The next one starts on ${longDay(upcoming[0].startsOn)}; see “Coming up” below.` : "Groups publish their drives here once they open drop points."}
+          </EmptyState>
+        ) : (
+          <DriveRows drives={running} hash="#list-heading" note={(d) => `until ${longDay(d.endsOn)}`} />
+        )}
+      </section>
+
+      <section className="mt-10 grid gap-6 sm:grid-cols-[3fr_2fr] sm:items-center">
         <div>
           <p className="font-semibold uppercase tracking-wide text-ember-deep">Cantrove</p>
-          <h1 className="mt-2 text-4xl sm:text-5xl">Empty cans in, warm rooms out.</h1>
+          <h2 className="mt-2 text-3xl sm:text-4xl">Empty cans in, warm rooms out.</h2>
           <p className="mt-4 text-lg text-ink-soft">
             Cantrove runs the can drives behind community-built solar air heaters: where the drop points are, how
             many good cans have come in, who is washing and punching them, and how many heaters they will fill.
@@ -59,22 +95,16 @@ export default async function LandingPage() {
         </ol>
       </section>
 
-      <Card title="Drives collecting now" className="mt-10">
-        {drives.length === 0 ? (
-          <EmptyState title="No public drives yet">Groups publish their drives here once they open drop points.</EmptyState>
-        ) : (
-          <ul className="divide-y divide-paper-edge">
-            {drives.map((d) => (
-              <li key={d.slug} className="flex flex-wrap items-baseline justify-between gap-2 py-3">
-                <Link href={`/drives/${d.slug}`} className="text-lg font-semibold">
-                  {d.name}
-                </Link>
-                <span className="text-ink-faint">{formatRange(d.startsOn, d.endsOn)}</span>
-              </li>
-            ))}
-          </ul>
-        )}
-      </Card>
+      {upcoming.length ? (
+        <Card title="Coming up" className="mt-10">
+          <DriveRows drives={upcoming} note={(d) => `starts ${longDay(d.startsOn)}`} />
+        </Card>
+      ) : null}
+      {ended.length ? (
+        <Card title="Ended" className="mt-6">
+          <DriveRows drives={ended} note={(d) => spanText(d)} />
+        </Card>
+      ) : null}
     </main>
   );
 }

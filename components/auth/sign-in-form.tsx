@@ -9,6 +9,7 @@ import { Field, FormError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { ResendVerification } from "@/components/accounts/resend-verification";
 import { EMAIL_UNPROVEN } from "@/lib/accounts/schemas";
+import { fetchJson } from "@/lib/api/client";
 import { ROLE_HOME, type Role } from "@/lib/auth/roles";
 import { safeRedirect } from "@/lib/auth/safe-redirect";
 
@@ -42,7 +43,7 @@ export function SignInForm() {
       if (result?.error === EMAIL_UNPROVEN) setUnproven(email);
       return;
     }
-    const me = await fetch("/api/me").then((r) => (r.ok ? r.json() : null));
+    const me = await fetchJson<{ role?: Role }>("/api/me").catch(() => null);
     const home = me?.role ? ROLE_HOME[me.role as Role] : "/";
     router.push(safeRedirect(next, home));
     router.refresh();

@@ -1,5 +1,6 @@
 import { compareGlazingOptions, type GlazingOption } from "@/lib/heaters/can-grid";
 import { formatLength, formatNumber, formatPercent } from "@/lib/heaters/format";
+import { resolveCanGridInput } from "@/lib/heaters/schemas";
 
 /** Side by side: which sheet gives more cans for the glass bought and less cut away. */
 export function GlazingComparison({ options }: { options: GlazingOption[] }) {
@@ -17,12 +18,14 @@ export function GlazingComparison({ options }: { options: GlazingOption[] }) {
         </p>
       ) : null}
       <div className="overflow-x-auto">
-        <table className="w-full min-w-[32rem] border-collapse text-left">
+        <table className="w-full min-w-[44rem] border-collapse text-left">
           <caption className="sr-only">Glazing options compared</caption>
           <thead>
             <tr className="border-b-2 border-paper-edge">
               <th scope="col" className="py-2 pr-3">Sheet</th>
               <th scope="col" className="py-2 pr-3">Size</th>
+              <th scope="col" className="py-2 pr-3">Covers</th>
+              <th scope="col" className="py-2 pr-3">Manifolds</th>
               <th scope="col" className="py-2 pr-3">Grid</th>
               <th scope="col" className="py-2 pr-3">Cans</th>
               <th scope="col" className="py-2 pr-3">Cans per m²</th>
@@ -33,11 +36,16 @@ export function GlazingComparison({ options }: { options: GlazingOption[] }) {
           <tbody>
             {rows.map((r, i) => {
               const u = options[i].input.unit;
+              const plan = resolveCanGridInput(options[i].input);
               return (
                 <tr key={i} className={`border-b border-paper-edge ${r.rank === 1 ? "bg-moss-soft" : ""}`}>
                   <th scope="row" className="py-2 pr-3">{r.label}</th>
                   <td className="py-2 pr-3">
                     {formatLength(options[i].input.glazingWidth, u)} × {formatLength(options[i].input.glazingHeight, u)}
+                  </td>
+                  <td className="py-2 pr-3" data-cell="covers">{plan.coverage === "full" ? "Chamber and manifolds" : "Chamber only"}</td>
+                  <td className="py-2 pr-3" data-cell="manifolds">
+                    {formatLength(plan.manifoldHeight, u)} each{plan.coverage === "full" ? ", inside the sheet" : ", outside"}
                   </td>
                   <td className="py-2 pr-3">{r.grid.columns} × {r.grid.rows}</td>
                   <td className="py-2 pr-3 font-bold">{formatNumber(r.grid.cans)}</td>

@@ -15,7 +15,7 @@ export function GridFigures({ grid }: { grid: CanGridResult }) {
     ["outer", "Outer box size", `${formatLength(grid.outerSize.width, unit)} × ${formatLength(grid.outerSize.height, unit)}`],
   ];
   return (
-    <dl className="grid content-start grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-4">
+    <dl className="grid content-start grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-4 print:grid-cols-2">
       {items.map(([key, label, value]) => (
         <div key={key} className="flex flex-col">
           <dt className="text-sm text-ink-faint">{label}</dt>

@@ -1,6 +1,7 @@
 import type { CanGridResult } from "@/lib/heaters/can-grid";
 import { formatLength } from "@/lib/heaters/format";
 import type { ResolvedCanGridInput } from "@/lib/heaters/schemas";
+import { SheetOutline } from "./sheet-outline";
 
 // Past this many cans single cans are too small to see; columns are drawn instead.
 const MAX_DRAWN_CANS = 1500;
@@ -47,19 +48,7 @@ export function GridPreview({ plan, grid, title }: { plan: ResolvedCanGridInput;
             <line x1="0" y1="0" x2="0" y2={fontSize} stroke="#8a5a00" strokeWidth={stroke * 2} />
           </pattern>
         </defs>
-        {outside > 0 ? (
-          <>
-            <rect x={pad} y={pad} width={W} height={m} fill="#e2d5bf" stroke="#6b6156" strokeDasharray={`${stroke * 4}`} strokeWidth={stroke} />
-            <rect x={pad} y={sheetY + H} width={W} height={m} fill="#e2d5bf" stroke="#6b6156" strokeDasharray={`${stroke * 4}`} strokeWidth={stroke} />
-          </>
-        ) : null}
-        <rect x={pad} y={sheetY} width={W} height={H} fill="#f3ebdd" stroke="#1f1b16" strokeWidth={stroke * 2} />
-        {full ? (
-          <>
-            <rect x={pad} y={sheetY} width={W} height={m} fill="#e2d5bf" />
-            <rect x={pad} y={sheetY + H - m} width={W} height={m} fill="#e2d5bf" />
-          </>
-        ) : null}
+        <SheetOutline x={pad} y={sheetY} width={W} height={H} manifold={m} full={full} stroke={stroke} dash={stroke * 4} />
         {grid.slack.width > 0 ? (
           <rect x={left + gridW} y={chamberBottom - (full ? H - 2 * m - 2 * e : H - 2 * e)} width={grid.slack.width} height={full ? H - 2 * m - 2 * e : H - 2 * e} fill="url(#slack-hatch)" opacity={0.7} />
         ) : null}

@@ -6,17 +6,19 @@ import { fieldErrorsOf, type FieldErrors } from "@/lib/api/errors";
 import { computeCanGrid, type CanGridResult } from "@/lib/heaters/can-grid";
 import { canGridInputSchema, fromMm, MM_PER_INCH, type CanGridInput, type LengthUnit } from "@/lib/heaters/schemas";
 
+/** One glazing sheet to compare, with what it covers and its own manifold height. */
 export interface GlazingDraft {
   key: number;
   label: string;
   width: string;
   height: string;
-}
-
-export interface PlanSettings {
-  unit: LengthUnit;
   coverage: "chamber" | "full";
   manifoldHeight: string;
+}
+
+/** What every sheet shares: the unit, the cans, clearance, holes and frame. */
+export interface PlanSettings {
+  unit: LengthUnit;
   canDiameter: string;
   canLength: string;
   edgeClearance: string;
@@ -26,7 +28,6 @@ export interface PlanSettings {
 }
 
 export const SETTING_FIELDS = [
-  "manifoldHeight",
   "canDiameter",
   "canLength",
   "edgeClearance",
@@ -36,8 +37,6 @@ export const SETTING_FIELDS = [
 
 export const INITIAL_SETTINGS: PlanSettings = {
   unit: "in",
-  coverage: "chamber",
-  manifoldHeight: "",
   canDiameter: "",
   canLength: "",
   edgeClearance: "",
@@ -47,8 +46,8 @@ export const INITIAL_SETTINGS: PlanSettings = {
 };
 
 export const INITIAL_OPTIONS: GlazingDraft[] = [
-  { key: 1, label: "Sheet A", width: "30", height: "60" },
-  { key: 2, label: "Sheet B", width: "28", height: "74" },
+  { key: 1, label: "Sheet A", width: "30", height: "60", coverage: "chamber", manifoldHeight: "" },
+  { key: 2, label: "Sheet B", width: "28", height: "74", coverage: "full", manifoldHeight: "5" },
 ];
 
 /** Blank means "use the default"; anything else is read as a number (NaN lets the schema say so). */
@@ -57,13 +56,15 @@ function num(text: string): number | undefined {
   return t === "" ? undefined : Number(t);
 }
 
-export function toCanGridInput(settings: PlanSettings, option: Pick<GlazingDraft, "width" | "height">): CanGridInput {
+type SheetFields = Pick<GlazingDraft, "width" | "height" | "coverage" | "manifoldHeight">;
+
+export function toCanGridInput(settings: PlanSettings, option: SheetFields): CanGridInput {
   return {
     glazingWidth: num(option.width) as number,
     glazingHeight: num(option.height) as number,
     unit: settings.unit,
-    coverage: settings.coverage,
-    manifoldHeight: num(settings.manifoldHeight),
+    coverage: option.coverage,
+    manifoldHeight: num(option.manifoldHeight),
     canDiameter: num(settings.canDiameter),
     canLength: num(settings.canLength),
     edgeClearance: num(settings.edgeClearance),
@@ -77,7 +78,7 @@ export type Evaluated =
   | { ok: true; input: CanGridInput; grid: CanGridResult }
   | { ok: false; input: CanGridInput; errors: FieldErrors };
 
-export function evaluate(settings: PlanSettings, option: Pick<GlazingDraft, "width" | "height">): Evaluated {
+export function evaluate(settings: PlanSettings, option: SheetFields): Evaluated {
   const input = toCanGridInput(settings, option);
   const parsed = canGridInputSchema.safeParse(input);
   if (!parsed.success) return { ok: false, input, errors: fieldErrorsOf(parsed.error) };

@@ -6,7 +6,6 @@ import { CAN_GRID_DEFAULTS_MM, DEFAULT_HOLES_PER_CAN } from "@/lib/heaters/schem
 import { defaultText, SETTING_FIELDS, type PlanSettings } from "./plan-form-state";
 
 const LABEL: Record<(typeof SETTING_FIELDS)[number], [string, string]> = {
-  manifoldHeight: ["Manifold height (each, top and bottom)", "The air boxes above and below the can columns"],
   canDiameter: ["Can diameter", "A standard 355 mL can is about 66 mm"],
   canLength: ["Can length (as stacked)", "Length each can adds to a column"],
   edgeClearance: ["Edge clearance", "Kept free on every side of the sheet"],
@@ -14,25 +13,11 @@ const LABEL: Record<(typeof SETTING_FIELDS)[number], [string, string]> = {
   frameAllowanceHeight: ["Frame allowance, height", "Added to the height, top and bottom together"],
 };
 
-/** Coverage, can size, clearance, holes and frame allowances, shared by every glazing option. */
+/** Can size, clearance, holes and frame allowances, shared by every glazing option (coverage and manifolds are per sheet). */
 export function PlanSettingsFields({ settings, errors, onChange }: { settings: PlanSettings; errors: FieldErrors; onChange: (s: PlanSettings) => void }) {
   const u = settings.unit;
   return (
     <div className="flex flex-col gap-3">
-      <fieldset className="flex flex-col gap-1">
-        <legend className="font-semibold">The glazing covers</legend>
-        {(
-          [
-            ["chamber", "Only the can chamber (manifolds sealed separately)"],
-            ["full", "Chamber and both manifolds"],
-          ] as const
-        ).map(([value, label]) => (
-          <label key={value} className="flex min-h-11 items-center gap-2">
-            <input type="radio" name="coverage" value={value} checked={settings.coverage === value} onChange={() => onChange({ ...settings, coverage: value })} className="h-5 w-5" />
-            {label}
-          </label>
-        ))}
-      </fieldset>
       <div className="grid gap-x-4 sm:grid-cols-2 lg:grid-cols-3">
         {SETTING_FIELDS.map((key) => (
           <Field

@@ -4,6 +4,7 @@ import { useState } from "react";
 import { Card } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
 import type { FieldErrors } from "@/lib/api/errors";
+import { fitProblems } from "@/lib/heaters/can-grid";
 import { areaToM2 } from "@/lib/heaters/format";
 import { resolveCanGridInput, type LengthUnit } from "@/lib/heaters/schemas";
 import { GlazingComparison } from "./glazing-comparison";
@@ -28,7 +29,9 @@ export function Planner({ drives, canSave, latitude, today }: { drives: DriveCho
   const results = options.map((o) => evaluate(settings, o));
   const current = results[chosen];
   const settingErrors: FieldErrors = {};
-  for (const r of results) if (!r.ok) for (const [k, v] of Object.entries(r.errors)) if (!k.startsWith("glazing")) settingErrors[k] ??= v;
+  // Per-sheet fields (size, manifolds) show their errors beside the sheet; the rest under the shared settings.
+  for (const r of results) if (!r.ok) for (const [k, v] of Object.entries(r.errors)) if (!k.startsWith("glazing") && k !== "manifoldHeight") settingErrors[k] ??= v;
+  const problems = results.map((r) => (r.ok ? fitProblems(r.input) : []));
   const label = options[chosen].label || `Sheet ${chosen + 1}`;
 
   function setUnit(unit: LengthUnit) {
@@ -36,7 +39,8 @@ export function Planner({ drives, canSave, latitude, today }: { drives: DriveCho
     const next = { ...settings, unit };
     for (const key of SETTING_FIELDS) next[key] = convertText(settings[key], settings.unit, unit);
     setSettings(next);
-    setOptions(options.map((o) => ({ ...o, width: convertText(o.width, settings.unit, unit), height: convertText(o.height, settings.unit, unit) })));
+    const conv = (t: string) => convertText(t, settings.unit, unit);
+    setOptions(options.map((o) => ({ ...o, width: conv(o.width), height: conv(o.height), manifoldHeight: conv(o.manifoldHeight) })));
   }
 
   return (
@@ -54,6 +58,7 @@ export function Planner({ drives, canSave, latitude, today }: { drives: DriveCho
         <GlazingOptionsFields
           options={options}
           errors={results.map((r) => (r.ok ? {} : r.errors))}
+          problems={problems}
           unit={settings.unit}
           selected={chosen}
           onChange={setOptions}
@@ -61,14 +66,19 @@ export function Planner({ drives, canSave, latitude, today }: { drives: DriveCho
         />
       </Card>
 
-      <Card title="2. Cans, manifolds and frame">
+      <Card title="2. Cans and frame (every sheet)">
         <PlanSettingsFields settings={settings} errors={settingErrors} onChange={setSettings} />
       </Card>
 
       <Card title={`3. The can grid for ${label}`}>
         {current.ok ? (
           <div className="grid gap-4 md:grid-cols-[1fr_18rem]">
-            <div aria-live="polite">
+            <div aria-live="polite" className="flex flex-col gap-3">
+              {problems[chosen].map((p) => (
+                <p key={p} className="border-l-4 border-sun bg-sun-soft px-3 py-2 font-semibold" data-testid="grid-fit-problem">
+                  {p}
+                </p>
+              ))}
               <GridFigures grid={current.grid} />
             </div>
             <GridPreview plan={resolveCanGridInput(current.input)} grid={current.grid} title={`${label}: ${current.grid.columns} by ${current.grid.rows} cans`} />

@@ -23,7 +23,7 @@ export function UnitFigures({ c, printedAt }: { c: UnitCounts; printedAt?: strin
   ];
   return (
     <div className="flex flex-col gap-1">
-      <dl className="grid grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-4">
+      <dl className="grid grid-cols-2 gap-x-4 gap-y-2 sm:grid-cols-4 print:grid-cols-2">
         {items.map(([id, label, value]) => (
           <div key={id} className="flex flex-col">
             <dt className="text-sm text-ink-faint">{label}</dt>

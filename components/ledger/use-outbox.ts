@@ -70,8 +70,7 @@ export function useOutbox() {
   }, [settle]);
 
   useEffect(() => {
-    // The queue lives in localStorage, which the server render cannot read: it is loaded once mounted.
-    // eslint-disable-next-line react-hooks/set-state-in-effect
+    // eslint-disable-next-line react-hooks/set-state-in-effect -- the queue lives in localStorage, which the server render cannot read: loaded once mounted
     setItems(readOutbox(localStorage));
     void flush();
     const timer = setInterval(() => {

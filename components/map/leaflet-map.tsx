@@ -35,8 +35,7 @@ function FitPoints({ points }: { points: MapPoint[] }) {
   useEffect(() => {
     const real = points.filter((p) => p.tone !== "draft");
     if (real.length >= 2) map.fitBounds(L.latLngBounds(real.map((p) => [p.lat, p.lng] as [number, number])), { padding: [40, 40], maxZoom: 16 });
-    // Refit only when the set of points changes, not on every refetch.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- refit only when the set of points changes (key), not on every refetch
   }, [key, map]);
   return null;
 }

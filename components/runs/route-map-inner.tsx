@@ -24,8 +24,7 @@ function FitTo({ points }: { points: [number, number][] }) {
     if (points.length === 0) return;
     if (points.length === 1) map.setView(points[0]!, 15);
     else map.fitBounds(L.latLngBounds(points), { padding: [28, 28] });
-    // The key captures every coordinate; points itself is a fresh array each render.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- key captures every coordinate; points is a fresh array each render
   }, [map, key]);
   return null;
 }

@@ -11,19 +11,42 @@
 -- (detail {what}) and CT409 (detail {kind, ...}).
 
 -- A haul: p is ledger_post's payload (kind 'haul', movementId, lines) plus
--- p.haul = { id, dropPointId, bags, weightKg, estimatedCans, method, perUnit, countedHauls }.
+-- p.haul = { id, dropPointId, bags, weightKg, estimatedCans, method, perUnit, countedHauls }
+-- and, for a haul logged at a pickup-run stop, p.stop = { runId, stopId, assigneeId }
+-- (assigneeId: the volunteer who must hold the run, null for an organiser). The stop is then
+-- settled in the same call: the run is locked after the drive, the stop must still be
+-- pending (else CT409 stopSettled), and the run's state follows its stops
+-- (pickup_run_follow_stops). Answers { movementId, haulId, stop?: { resolvedAt, run } }.
 create or replace function ledger_haul(p jsonb) returns jsonb language plpgsql as $$
 declare
   v_group uuid := (p->>'groupId')::uuid;
   v_drive uuid := (p->>'driveId')::uuid;
   h jsonb := p->'haul';
+  s jsonb := p->'stop';
   v_dp uuid := (h->>'dropPointId')::uuid;
   v_at timestamptz := (p->>'occurredAt')::timestamptz;
+  v_status text;
+  v_resolved timestamptz;
 begin
   perform ledger_lock_drive(v_group, v_drive);
   perform 1 from drop_points where id = v_dp and drive_id = v_drive and group_id = v_group;
   if not found then
     raise exception 'ledger_haul: no such drop point' using errcode = 'CT404', detail = '{"what":"dropPoint"}';
+  end if;
+  if s is not null and jsonb_typeof(s) = 'object' then
+    perform 1 from pickup_runs where id = (s->>'runId')::uuid and group_id = v_group and drive_id = v_drive
+      and (s->>'assigneeId' is null or assignee_id = (s->>'assigneeId')::uuid) for update;
+    if not found then
+      raise exception 'ledger_haul: no such run' using errcode = 'CT404', detail = '{"what":"run"}';
+    end if;
+    select status into v_status from pickup_run_stops
+    where id = (s->>'stopId')::uuid and run_id = (s->>'runId')::uuid and group_id = v_group and drop_point_id = v_dp;
+    if not found then
+      raise exception 'ledger_haul: no such stop' using errcode = 'CT404', detail = '{"what":"stop"}';
+    end if;
+    if v_status <> 'pending' then
+      raise exception 'ledger_haul: stop settled' using errcode = 'CT409', detail = jsonb_build_object('kind', 'stopSettled', 'status', v_status)::text;
+    end if;
   end if;
   insert into movements (id, group_id, drive_id, kind, recorded_by, occurred_at, details)
   values ((p->>'movementId')::uuid, v_group, v_drive, 'haul', (p->>'actorId')::uuid, v_at, '{}');
@@ -36,7 +59,37 @@ begin
     perform ledger_post(p || jsonb_build_object('existingMovementId', p->>'movementId'));
   end if;
   perform ledger_bump_drop_point(v_group, v_drive, v_dp, 1, (h->>'bags')::int);
-  return jsonb_build_object('movementId', p->>'movementId', 'haulId', h->>'id');
+  if v_status is null then
+    return jsonb_build_object('movementId', p->>'movementId', 'haulId', h->>'id');
+  end if;
+  -- The unique index pickup_run_stops_haul_unique holds too: this haul is new, so it settles this stop alone.
+  update pickup_run_stops set status = 'logged', haul_id = (h->>'id')::uuid, skip_reason = null,
+    resolved_by = (p->>'actorId')::uuid, resolved_at = now()
+  where id = (s->>'stopId')::uuid
+  returning resolved_at into v_resolved;
+  return jsonb_build_object('movementId', p->>'movementId', 'haulId', h->>'id', 'stop', jsonb_build_object(
+    'resolvedAt', v_resolved, 'run', pickup_run_follow_stops((s->>'runId')::uuid, true)));
+end
+$$;
+
+-- A run's state follows its stops (the one place this rule lives): done when none
+-- is pending, under way when some is not, else planned; finished_at only while it is done.
+-- v_starts: a stop was just settled, so the run has started (started_at kept once set).
+-- The caller holds the run's row (or the drive's lock, for an undo). Answers { state, stops, logged, skipped }.
+create or replace function pickup_run_follow_stops(v_run uuid, v_starts boolean) returns jsonb language plpgsql as $$
+declare
+  c record;
+  v_state text;
+begin
+  select count(*)::int as stops, count(*) filter (where status = 'pending')::int as pending,
+         count(*) filter (where status = 'logged')::int as logged, count(*) filter (where status = 'skipped')::int as skipped
+  into c from pickup_run_stops where run_id = v_run;
+  v_state := case when c.stops > 0 and c.pending = 0 then 'done' when c.pending < c.stops then 'under_way' else 'planned' end;
+  update pickup_runs set state = v_state,
+    started_at = case when v_starts then coalesce(started_at, now()) else started_at end,
+    finished_at = case when v_state = 'done' then coalesce(finished_at, now()) end
+  where id = v_run;
+  return jsonb_build_object('state', v_state, 'stops', c.stops, 'logged', c.logged, 'skipped', c.skipped);
 end
 $$;
 
@@ -98,7 +151,7 @@ $$;
 -- Undoing an entry: p is ledger_post's payload (kind 'reversal', movementId, reversesMovementId, the
 -- reversed lines) plus p.undo = { kind, haulId?, dropPointId?, bags?, sortId?, calibration? }.
 -- A haul's undo reopens the pickup-run stop it settled; the run's state then follows its stops
--- by the rule of lib/runs/state.ts runStateOf (done when none is pending, under way when some is not).
+-- (pickup_run_follow_stops).
 create or replace function ledger_reverse(p jsonb) returns jsonb language plpgsql as $$
 declare
   v_group uuid := (p->>'groupId')::uuid;
@@ -123,12 +176,7 @@ begin
     where haul_id = (u->>'haulId')::uuid and group_id = v_group
     returning run_id into v_run;
     if v_run is not null then
-      update pickup_runs r set state = s.state, finished_at = case when s.state = 'done' then coalesce(r.finished_at, now()) end
-      from (select case when count(*) > 0 and count(*) filter (where status = 'pending') = 0 then 'done'
-                        when count(*) filter (where status = 'pending') < count(*) then 'under_way'
-                        else 'planned' end as state
-            from pickup_run_stops where run_id = v_run) s
-      where r.id = v_run;
+      perform pickup_run_follow_stops(v_run, false);
     end if;
   elsif u->>'kind' = 'sort' then
     update hauls set sort_id = null where sort_id = (u->>'sortId')::uuid;
@@ -174,5 +222,20 @@ begin
     'state', v_next,
     'claimed', (select coalesce(sum(quantity), 0) from stage_balances where heater_unit_id = v_unit and stage = 'claimed'),
     'builtIn', (select coalesce(sum(quantity), 0) from stage_balances where heater_unit_id = v_unit and stage = 'builtIn'));
+end
+$$;
+
+-- Several heater-unit postings in one call, in order (a claim move: a release from one unit, then
+-- a claim for another): ps is an array of ledger_unit payloads; answers the array of their answers.
+-- A refusal of any undoes them all, and the drive's lock is taken and used inside this one call.
+create or replace function ledger_units(ps jsonb) returns jsonb language plpgsql as $$
+declare
+  p jsonb;
+  v_out jsonb := '[]'::jsonb;
+begin
+  for p in select e.x from jsonb_array_elements(ps) with ordinality as e(x, n) order by e.n loop
+    v_out := v_out || jsonb_build_array(ledger_unit(p));
+  end loop;
+  return v_out;
 end
 $$;

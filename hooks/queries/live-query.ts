@@ -13,7 +13,7 @@ import { useCallback, useEffect, useSyncExternalStore } from "react";
 export function useLiveQuery<T>(
   options: { queryKey: QueryKey; queryFn?: unknown; refetchInterval?: unknown },
   initialData: T,
-): { data: T; isError: boolean } {
+): { data: T; isError: boolean; updatedAt: number } {
   const client = useQueryClient();
   const { queryKey } = options;
   const queryFn = options.queryFn as () => Promise<T>;
@@ -21,6 +21,8 @@ export function useLiveQuery<T>(
   const hash = JSON.stringify(queryKey);
   const subscribe = useCallback((onChange: () => void) => client.getQueryCache().subscribe(onChange), [client]);
   const data = useSyncExternalStore(subscribe, () => client.getQueryData<T>(queryKey) ?? initialData, () => initialData);
+  // When the shown data was fetched here; 0 while it is still the server's.
+  const updatedAt = useSyncExternalStore(subscribe, () => client.getQueryState(queryKey)?.dataUpdatedAt ?? 0, () => 0);
   const isError = useSyncExternalStore(subscribe, () => client.getQueryState(queryKey)?.status === "error", () => false);
 
   useEffect(() => {
@@ -37,5 +39,5 @@ export function useLiveQuery<T>(
     // eslint-disable-next-line react-hooks/exhaustive-deps -- hash stands for queryKey and queryFn
   }, [client, hash, every]);
 
-  return { data, isError };
+  return { data, isError, updatedAt };
 }

@@ -19,6 +19,23 @@ export function driveTiming(drive: Pick<DriveSpan, "startsOn" | "endsOn">, today
   return "running";
 }
 
+/** Within one timing: what starts soonest first when upcoming, else what ended (or ends) latest first. */
+export function byTimingOrder(timing: DriveTiming, a: Pick<DriveSpan, "startsOn" | "endsOn">, b: Pick<DriveSpan, "startsOn" | "endsOn">): number {
+  return timing === "upcoming" ? a.startsOn.localeCompare(b.startsOn) : b.endsOn.localeCompare(a.endsOn);
+}
+
+/**
+ * Drives split by their timing, each judged against its own group's day
+ * (`today`, as drives of several groups can sit on one list), ordered as the
+ * organiser's dashboard orders them.
+ */
+export function groupByTiming<D extends Pick<DriveSpan, "startsOn" | "endsOn"> & { today: string }>(drives: readonly D[]): Record<DriveTiming, D[]> {
+  const out: Record<DriveTiming, D[]> = { running: [], upcoming: [], ended: [] };
+  for (const d of drives) out[driveTiming(d, d.today)].push(d);
+  for (const timing of Object.keys(out) as DriveTiming[]) out[timing].sort((a, b) => byTimingOrder(timing, a, b));
+  return out;
+}
+
 const byName = (a: DriveSpan, b: DriveSpan) => (a.name < b.name ? -1 : a.name > b.name ? 1 : a.id < b.id ? -1 : 1);
 
 /**

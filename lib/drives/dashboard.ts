@@ -4,7 +4,7 @@ import { listDrives, listPledges } from "./queries";
 import { listFullBins } from "./fill-queries";
 import { unitCansOf } from "./public-queries";
 import { progressFor } from "./tallies";
-import { driveTiming, type DriveTiming } from "./current-drive";
+import { byTimingOrder, driveTiming, type DriveTiming } from "./current-drive";
 import { groupToday } from "./current-drive-queries";
 
 const TIMING_ORDER: Record<DriveTiming, number> = { running: 0, upcoming: 1, ended: 2 };
@@ -17,7 +17,7 @@ export async function organiserDashboard(groupId: string) {
   const drives = [...all].sort((a, b) => {
     const [ta, tb] = [driveTiming(a, day), driveTiming(b, day)];
     if (ta !== tb) return TIMING_ORDER[ta] - TIMING_ORDER[tb];
-    return ta === "upcoming" ? a.startsOn.localeCompare(b.startsOn) : b.endsOn.localeCompare(a.endsOn);
+    return byTimingOrder(ta, a, b);
   });
   const spare = await db("drives").select("id", "spare_percent").where({ group_id: groupId });
   const spareOf = new Map(spare.map((d) => [d.id as string, Number(d.spare_percent)]));

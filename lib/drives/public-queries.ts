@@ -16,18 +16,38 @@ export interface PublicDriveSummary {
 }
 
 // Dates leave as plain YYYY-MM-DD strings, never shifted by a time zone.
-export const publicDriveColumns = () => [
-  "slug",
-  "name",
-  db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`),
-  db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`),
-];
+const spanColumns = (table = "") => {
+  const t = table ? `${table}.` : "";
+  return [db.raw(`to_char(${t}starts_on, 'YYYY-MM-DD') as "startsOn"`), db.raw(`to_char(${t}ends_on, 'YYYY-MM-DD') as "endsOn"`)];
+};
+export const publicDriveColumns = () => ["slug", "name", ...spanColumns()];
 
 export async function listPublicDrives(): Promise<PublicDriveSummary[]> {
   return db("drives")
     .select(publicDriveColumns())
     .where({ is_public: true })
     .orderBy([{ column: "starts_on", order: "desc" }, { column: "name" }]);
+}
+
+/** The landing page's list: every public drive with its group's name and the group's own calendar day now. */
+export async function listPublicDrivesWithDay(): Promise<(PublicDriveSummary & { groupName: string; today: string })[]> {
+  return db("drives as d")
+    .join("groups as g", "g.id", "d.group_id")
+    .select(
+      "d.slug",
+      "d.name",
+      "g.name as groupName",
+      ...spanColumns("d"),
+      db.raw(`to_char((now() at time zone g.time_zone)::date, 'YYYY-MM-DD') as "today"`),
+    )
+    .where({ "d.is_public": true })
+    .orderBy([{ column: "d.name" }]);
+}
+
+/** The time zone of the group running a public drive (for showing times as the group reads them). */
+export async function publicDriveTimeZone(slug: string): Promise<string> {
+  const row = await db("drives as d").join("groups as g", "g.id", "d.group_id").select("g.time_zone as timeZone").where({ "d.slug": slug, "d.is_public": true }).first();
+  return (row?.timeZone as string | undefined) ?? "UTC";
 }
 
 export interface PublicDriveRow extends PublicDriveSummary {

@@ -3,6 +3,7 @@
  * I/O, lengths in the request's unit, areas in that unit squared.
  */
 import { resolveCanGridInput, toMm, type CanGridInput, type LengthUnit } from "./schemas";
+import { formatLength } from "./format";
 
 export interface CanGridResult {
   columns: number;
@@ -69,6 +70,44 @@ export function computeCanGrid(input: CanGridInput): CanGridResult {
       height: p.glazingHeight + (p.coverage === "chamber" ? manifolds : 0) + p.frameAllowanceHeight,
     },
   };
+}
+
+/**
+ * The smallest sheet that holds one can column across and one row of cans up:
+ * width d + 2e; height L + 2e, plus 2m when the sheet also covers the manifolds.
+ */
+export function minimumSheet(input: CanGridInput): { width: number; height: number } {
+  const p = resolveCanGridInput(input);
+  return {
+    width: p.canDiameter + 2 * p.edgeClearance,
+    height: p.canLength + 2 * p.edgeClearance + (p.coverage === "full" ? 2 * p.manifoldHeight : 0),
+  };
+}
+
+/** Plain words for a sheet too small for a single column or row of cans (it would hold 0 cans); empty when cans fit. */
+export function fitProblems(input: CanGridInput): string[] {
+  const grid = computeCanGrid(input);
+  const p = resolveCanGridInput(input);
+  const min = minimumSheet(input);
+  const len = (v: number) => formatLength(v, p.unit);
+  const problems: string[] = [];
+  if (grid.columns === 0) {
+    problems.push(
+      `Too narrow for one column of cans: a column needs ${len(min.width)} across (one ${len(p.canDiameter)} can` +
+        (p.edgeClearance > 0 ? ` plus ${len(p.edgeClearance)} clearance each side` : "") +
+        `), and this sheet is ${len(p.glazingWidth)}. Use a wider sheet or a smaller clearance.`,
+    );
+  }
+  if (grid.rows === 0) {
+    const parts = [`one ${len(p.canLength)} can`];
+    if (p.coverage === "full" && p.manifoldHeight > 0) parts.push(`two ${len(p.manifoldHeight)} manifolds`);
+    if (p.edgeClearance > 0) parts.push(`${len(p.edgeClearance)} clearance top and bottom`);
+    problems.push(
+      `Too short for one row of cans: a row needs ${len(min.height)} up (${parts.join(", ")}), and this sheet is ${len(p.glazingHeight)}. ` +
+        (p.coverage === "full" ? "Use a taller sheet, lower manifolds, or put the manifolds outside the sheet." : "Use a taller sheet or a smaller clearance."),
+    );
+  }
+  return problems;
 }
 
 export interface GlazingOption {

@@ -74,3 +74,16 @@ export function computeHeatOutput(input: HeatOutputInput): HeatOutput {
     outletC: input.inletC + airRiseC,
   };
 }
+
+/** The contract's fixed reference sunlight for a rating-style figure, W/m² (not what any given wall receives). */
+export const RATING_IRRADIANCE_WM2 = 800;
+
+/**
+ * The planner's headline: the heat at the clear-day peak sunlight on the
+ * chosen wall and day (from `clearDayEnergy`). A wall the sun never reaches
+ * that day (peak 0) delivers nothing, said as zeros, not as an error.
+ */
+export function heatAtPeak(input: Omit<HeatOutputInput, "irradianceWm2">, peakWm2: number): HeatOutput {
+  if (!(peakWm2 > 0)) return { efficiency: 0, usefulW: 0, usefulBtuh: 0, airRiseC: 0, outletC: input.inletC };
+  return computeHeatOutput({ ...input, irradianceWm2: peakWm2 });
+}

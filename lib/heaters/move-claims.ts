@@ -2,12 +2,13 @@ import "server-only";
 import type { Knex } from "knex";
 import { AppError, conflict, notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
-import { recordClaim, releaseClaim } from "@/lib/ledger/record";
+import { transferClaim } from "@/lib/ledger/record";
 
 /**
  * Moves claimed cans from one unit to another of the same drive: a release
- * and a claim, two ledger movements in one transaction, so the cans are never
- * free for someone else in between and a failed claim undoes the release.
+ * and a claim, two ledger movements posted by one database call
+ * (transferClaim), so the cans are never free for someone else in between
+ * and a failed claim undoes the release.
  */
 export async function moveClaims(actor: Actor, fromId: string, toId: string, quantity: number, trx: Knex.Transaction) {
   if (fromId === toId) throw new AppError("invalid_input", "Choose another unit.", { fields: { toHeaterId: "Choose another unit" } });
@@ -17,7 +18,6 @@ export async function moveClaims(actor: Actor, fromId: string, toId: string, qua
   if (!from) throw notFound("That heater unit");
   if (!to) throw new AppError("not_found", "The unit to move the cans to was not found.", { fields: { toHeaterId: "Choose one of this drive's units" } });
   if (!from.drive_id || from.drive_id !== to.drive_id) throw conflict("Claims move only between units of the same drive.");
-  const released = await releaseClaim(actor, fromId, quantity, trx, "moved to another unit");
-  const claimed = await recordClaim(actor, toId, quantity, trx, "moved from another unit");
+  const { from: released, to: claimed } = await transferClaim(actor, fromId, toId, quantity, trx, { from: "moved to another unit", to: "moved from another unit" });
   return { from: released, to: claimed, quantity };
 }

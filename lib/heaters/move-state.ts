@@ -1,40 +1,59 @@
 import "server-only";
-import { AppError, notFound } from "@/lib/api/errors";
+import { AppError, conflict, notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
 import { db } from "@/lib/db";
-import { lockDrive } from "@/lib/ledger/post";
-import { releaseClaim } from "@/lib/ledger/record";
+import { ledgerCall, ledgerPayload, runLedgerFunction, type OwnRefusals } from "@/lib/ledger/post";
 import { getHeaterUnit } from "./queries";
 import { checkStateMove } from "./states";
 import type { HeaterState } from "./unit-schemas";
 
+/** A unit whose state changed between our read and the function's lock; we check the move again from `state`. */
+class StateChanged extends AppError {
+  constructor(readonly state: HeaterState) {
+    super("conflict", "The unit's state changed meanwhile; try again.", { details: { state } });
+  }
+}
+
+const REFUSALS: OwnRefusals = {
+  unitMoved: () => conflict("The unit moved to another drive meanwhile; try again."),
+  stateChanged: (d) => new StateChanged(d.state as HeaterState),
+};
+
+const RELEASE_NOTE = "unit installed: unbuilt claim given back";
+/** Each retry follows someone else's move of the same unit; three in a row is a unit too busy to move now. */
+const TRIES = 3;
+
 /**
- * Moves a unit along planned → claiming → building → installed under its row
- * lock, so two people moving it at once cannot skip the rule. Going on the
- * wall gives its unbuilt claims back to the drive in the same transaction (a
- * `release` movement, undoable like any other), so no cans stay locked to a
- * finished heater. Locks are taken drive first, then the unit, the order
- * every ledger writer uses.
+ * Moves a unit along planned → claiming → building → installed. The rule
+ * (checkStateMove, role-dependent) is checked here on the state read without a
+ * lock; one call of heater_unit_move (db/functions/heater_units.sql) then
+ * locks the drive and the unit, refuses if the state is no longer the one
+ * checked (we check again from the new state, so the answer is the one the
+ * rule gives now), gives an installed unit's unbuilt claims back to the drive
+ * (a `release` movement, undoable like any other) and moves the unit, so no
+ * lock is held across a round trip.
  */
 export async function moveUnitState(actor: Actor, id: string, to: HeaterState) {
   const groupId = actor.group.id;
-  const released = await db.transaction(async (trx) => {
-    const unit = await trx("heater_units").select("drive_id").where({ id, group_id: groupId }).first();
-    if (!unit) throw notFound("That heater unit");
-    if (unit.drive_id) await lockDrive(trx, groupId, unit.drive_id);
-    const row = await trx("heater_units").select("state", "drive_id").where({ id, group_id: groupId }).forNoKeyUpdate().first();
-    if (!row) throw notFound("That heater unit");
-    if (row.drive_id !== unit.drive_id) throw new AppError("conflict", "The unit moved to another drive meanwhile; try again.");
-    const verdict = checkStateMove(row.state, to, actor.role);
-    if (!verdict.ok) throw new AppError("conflict", verdict.reason, { details: { state: row.state } });
-    let releasedCans = 0;
-    if (to === "installed" && row.drive_id) {
-      const claimed = await trx("stage_balances").where({ heater_unit_id: id, drive_id: row.drive_id, stage: "claimed" }).first("quantity");
-      releasedCans = Number(claimed?.quantity ?? 0);
-      if (releasedCans > 0) await releaseClaim(actor, id, releasedCans, trx, "unit installed: unbuilt claim given back");
+  const unit = await db("heater_units").select("state", "drive_id").where({ id, group_id: groupId }).first();
+  if (!unit) throw notFound("That heater unit");
+  let from: HeaterState = unit.state;
+  for (let attempt = 1; ; attempt++) {
+    const verdict = checkStateMove(from, to, actor.role);
+    if (!verdict.ok) throw new AppError("conflict", verdict.reason, { details: { state: from } });
+    // A unit on no drive has a null driveId: the function then locks the unit alone and releases nothing.
+    const payload = ledgerPayload(
+      { groupId, driveId: unit.drive_id, actorId: actor.user.id, kind: "release", details: { heaterUnitId: id } },
+      [],
+      { unit: { id, action: "release" }, move: { from, to }, note: RELEASE_NOTE },
+    );
+    try {
+      const r = await runLedgerFunction<{ released: number | string }>(db, ledgerCall("heater_unit_move", payload), REFUSALS);
+      return { ...(await getHeaterUnit(groupId, id)), released: Number(r.released) };
+    } catch (error) {
+      if (!(error instanceof StateChanged)) throw error;
+      if (attempt === TRIES) throw conflict("Others are moving this unit right now; reload it and try again.", { state: error.state });
+      from = error.state;
     }
-    await trx("heater_units").where({ id, group_id: groupId }).update({ state: to, state_changed_at: trx.fn.now() });
-    return releasedCans;
-  });
-  return { ...(await getHeaterUnit(groupId, id)), released };
+  }
 }

@@ -66,7 +66,7 @@ export async function listLedgerPage(groupId: string, f: Filter, pageSize: numbe
   return { rows: page, total: Number(count[0].n), nextCursor: more ? page[page.length - 1].id : null };
 }
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- a joined row of several tables, not yet typed
 function toRow(r: any): LedgerRow {
   return {
     id: String(r.id),

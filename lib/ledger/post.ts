@@ -58,13 +58,6 @@ export interface MovementSpec {
   movementId?: string;
 }
 
-/** Locks the drive for a caller that changes other rows under it first (a unit's state move); another group's drive is 404. */
-export async function lockDrive(trx: Trx, groupId: string, driveId: string): Promise<{ id: string; name: string }> {
-  const row = await trx("drives").select("id", "name").where({ id: driveId, group_id: groupId }).forNoKeyUpdate().first();
-  if (!row) throw notFound("That drive");
-  return row;
-}
-
 export function isoDay(d: Date): string {
   return d.toISOString().slice(0, 10);
 }
@@ -133,7 +126,7 @@ export function ledgerPayload(m: MovementSpec, lines: LineSpec[], extra: Record<
 }
 
 /** `fn` is one of db/functions' ledger functions; the payload is ledgerPayload's. */
-export function ledgerCall(fn: "ledger_post" | "ledger_haul" | "ledger_sort" | "ledger_reverse" | "ledger_unit", payload: object): LedgerCall {
+export function ledgerCall(fn: "ledger_post" | "ledger_haul" | "ledger_sort" | "ledger_reverse" | "ledger_unit" | "ledger_units" | "heater_unit_move", payload: object): LedgerCall {
   return { sql: `${fn}(?::jsonb)`, bindings: [JSON.stringify(payload)] };
 }
 
@@ -141,7 +134,14 @@ export function ledgerPostCall(m: MovementSpec, lines: LineSpec[], extra?: Recor
   return ledgerCall("ledger_post", ledgerPayload(m, lines, extra));
 }
 
-const NOT_FOUND_LABEL: Record<string, string> = { drive: "That drive", dropPoint: "That drop point", haul: "One of those hauls" };
+const NOT_FOUND_LABEL: Record<string, string> = {
+  drive: "That drive",
+  dropPoint: "That drop point",
+  haul: "One of those hauls",
+  unit: "That heater unit",
+  run: "That pickup run",
+  stop: "That stop",
+};
 
 /** The function's refusals as the messages people see; anything else is not ours to translate. */
 export function ledgerRefusal(error: unknown, own?: OwnRefusals): AppError | null {

@@ -16,7 +16,7 @@ export async function listHauls(groupId: string, driveId: string, opts: { open?:
     })
     .orderBy("h.hauled_at", "desc")
     .limit(200);
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- a joined row of several tables, not yet typed
   return rows.map((r: any) => ({
     id: r.id as string,
     movementId: r.movement_id as string,

@@ -16,6 +16,8 @@ import type { HaulInput, ProcessingInput, RecyclingInput, SortInput } from "./sc
 type Conn = Knex | Knex.Transaction;
 
 export const recordHaul = (actor: Actor, driveId: string, input: HaulInput, conn: Conn = db) => w.recordHaul(actor, driveId, input, conn);
+export const recordHaulAtStop = (actor: Actor, driveId: string, input: HaulInput, at: w.HaulStop, conn: Conn = db) =>
+  w.recordHaulAtStop(actor, driveId, input, at, conn);
 export const recordSort = (actor: Actor, driveId: string, input: SortInput, conn: Conn = db) => w.recordSort(actor, driveId, input, conn);
 export const recordProcessing = (actor: Actor, driveId: string, input: ProcessingInput, conn: Conn = db) =>
   w.recordProcessing(actor, driveId, input, conn);
@@ -27,6 +29,8 @@ export const recordClaim = (actor: Actor, heaterUnitId: string, quantity: number
   c.recordClaim(actor, heaterUnitId, quantity, conn, note);
 export const releaseClaim = (actor: Actor, heaterUnitId: string, quantity: number, conn: Conn = db, note?: string) =>
   c.releaseClaim(actor, heaterUnitId, quantity, conn, note);
+export const transferClaim = (actor: Actor, fromId: string, toId: string, quantity: number, conn: Conn, notes: { from: string; to: string }) =>
+  c.transferClaim(actor, fromId, toId, quantity, conn, notes);
 export const recordBuiltIn = (actor: Actor, heaterUnitId: string, quantity: number, conn: Conn = db, note?: string) =>
   c.recordBuiltIn(actor, heaterUnitId, quantity, conn, note);
 export const reverseMovement = (actor: Actor, movementId: string, conn: Conn = db, reason?: string) => reverse(actor, movementId, conn, reason);

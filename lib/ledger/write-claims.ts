@@ -18,7 +18,15 @@ const REFUSALS: OwnRefusals = {
   unitInstalled: () => conflict("This unit is already installed; it takes no more cans."),
 };
 
-async function postForUnit(actor: Actor, heaterUnitId: string, action: Action, lines: (unitId: string) => LineSpec[], conn: Conn) {
+interface UnitAnswer {
+  movementId: string;
+  state: string;
+  claimed: number | string;
+  builtIn: number | string;
+}
+
+/** Reads the unit (no lock) and builds ledger_unit's payload; the function re-checks what could change. */
+async function prepareForUnit(actor: Actor, heaterUnitId: string, action: Action, lines: (unitId: string) => LineSpec[], conn: Conn) {
   const unit = await conn("heater_units").select("id", "drive_id", "state").where({ id: heaterUnitId, group_id: actor.group.id }).first();
   if (!unit) throw notFound("That heater unit");
   if (!unit.drive_id) throw conflict("This unit is not counted against a drive yet; add it to a drive before claiming cans.");
@@ -28,8 +36,29 @@ async function postForUnit(actor: Actor, heaterUnitId: string, action: Action, l
     lines(unit.id),
     { unit: { id: unit.id, action } },
   );
-  const r = await runLedgerFunction<{ movementId: string; state: string; claimed: number | string; builtIn: number | string }>(conn, ledgerCall("ledger_unit", payload), REFUSALS);
-  return { movementId: r.movementId, heaterUnitId: unit.id as string, driveId: unit.drive_id as string, state: r.state, claimed: Number(r.claimed), builtIn: Number(r.builtIn) };
+  return { unit: { id: unit.id as string, driveId: unit.drive_id as string }, payload };
+}
+
+function unitAnswer(unit: { id: string; driveId: string }, r: UnitAnswer) {
+  return { movementId: r.movementId, heaterUnitId: unit.id, driveId: unit.driveId, state: r.state, claimed: Number(r.claimed), builtIn: Number(r.builtIn) };
+}
+
+async function postForUnit(actor: Actor, heaterUnitId: string, action: Action, lines: (unitId: string) => LineSpec[], conn: Conn) {
+  const { unit, payload } = await prepareForUnit(actor, heaterUnitId, action, lines, conn);
+  return unitAnswer(unit, await runLedgerFunction<UnitAnswer>(conn, ledgerCall("ledger_unit", payload), REFUSALS));
+}
+
+/**
+ * Moves claimed cans from one unit to another: a release and a claim, two
+ * movements posted by one call of ledger_units, so the cans are never free for
+ * someone else in between, a refused claim undoes the release, and the drive's
+ * lock is not held across a round trip.
+ */
+export async function transferClaim(actor: Actor, fromId: string, toId: string, quantity: number, conn: Conn, notes: { from: string; to: string }) {
+  const release = await prepareForUnit(actor, fromId, "release", (id) => [{ from: "claimed", to: null, quantity, heaterUnitId: id, note: notes.from }], conn);
+  const claim = await prepareForUnit(actor, toId, "claim", (id) => [{ from: null, to: "claimed", quantity, heaterUnitId: id, note: notes.to }], conn);
+  const [released, claimed] = await runLedgerFunction<[UnitAnswer, UnitAnswer]>(conn, ledgerCall("ledger_units", [release.payload, claim.payload]), REFUSALS);
+  return { from: { ...unitAnswer(release.unit, released), quantity }, to: { ...unitAnswer(claim.unit, claimed), quantity } };
 }
 
 export async function recordClaim(actor: Actor, heaterUnitId: string, quantity: number, conn: Conn, note?: string) {

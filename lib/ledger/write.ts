@@ -8,6 +8,7 @@ import { calibrationDelta, calibrationOfRow } from "./calibration";
 import { entryTimeOf, resolveEntryTime } from "./entry-time-query";
 import { askUnlessConfirmed, checkHaul, checkSort } from "./plausibility";
 import { ledgerCall, ledgerPayload, ledgerPostCall, postMovement, runLedgerCall, runLedgerFunction, type LedgerCall, type LineSpec, type OwnRefusals } from "./post";
+import type { RunState } from "@/lib/runs/schemas";
 import { REJECT_REASONS, UNDER_ONE_CAN, type HaulInput, type LossReason, type ProcessingInput, type RecyclingInput, type SortInput } from "./schemas";
 
 // Writers of the ledger. Each reads what it needs first, without a lock, then
@@ -19,7 +20,38 @@ import { REJECT_REASONS, UNDER_ONE_CAN, type HaulInput, type LossReason, type Pr
 
 type Conn = Knex | Knex.Transaction;
 
+/** A pickup-run stop the haul settles, in the same call (ledger_haul's p.stop). */
+export interface HaulStop {
+  runId: string;
+  stopId: string;
+}
+
+/** What ledger_haul answers for a settled stop: when, and the run's state and counts after it. */
+export interface SettledStop {
+  resolvedAt: string;
+  run: { state: RunState; stops: number; logged: number; skipped: number };
+}
+
+const HAUL_REFUSALS: OwnRefusals = {
+  stopSettled: (d) => conflict(`This stop is already ${String(d.status)}.`),
+};
+
 export async function recordHaul(actor: Actor, driveId: string, input: HaulInput, conn: Conn) {
+  return (await writeHaul(actor, driveId, input, conn)).haul;
+}
+
+/**
+ * Logs a haul at a pickup-run stop and settles the stop in one call of
+ * ledger_haul: the run is locked after the drive, a stop no longer pending is
+ * a 409, and the run's state follows its stops. Only the run's volunteer or an
+ * organiser may (404 otherwise, as for the run itself).
+ */
+export async function recordHaulAtStop(actor: Actor, driveId: string, input: HaulInput, at: HaulStop, conn: Conn) {
+  const r = await writeHaul(actor, driveId, input, conn, at);
+  return { haul: r.haul, settled: r.settled! };
+}
+
+async function writeHaul(actor: Actor, driveId: string, input: HaulInput, conn: Conn, at?: HaulStop) {
   const groupId = actor.group.id;
   // The drive, the drop point and the group's calibration in one read.
   const { rows } = await conn.raw(
@@ -57,8 +89,10 @@ export async function recordHaul(actor: Actor, driveId: string, input: HaulInput
     perUnit: est.perUnit,
     countedHauls: est.basis.countedHauls,
   };
-  await runLedgerFunction(conn, ledgerCall("ledger_haul", ledgerPayload({ groupId, driveId, actorId: actor.user.id, kind: "haul", occurredAt: hauledAt, movementId }, lines, { haul })));
-  return {
+  const stop = at ? { runId: at.runId, stopId: at.stopId, assigneeId: actor.role === "organiser" ? null : actor.user.id } : undefined;
+  const payload = ledgerPayload({ groupId, driveId, actorId: actor.user.id, kind: "haul", occurredAt: hauledAt, movementId }, lines, { haul, stop });
+  const r = await runLedgerFunction<{ stop?: SettledStop }>(conn, ledgerCall("ledger_haul", payload), HAUL_REFUSALS);
+  const answer = {
     id: haulId,
     movementId,
     driveId,
@@ -70,6 +104,7 @@ export async function recordHaul(actor: Actor, driveId: string, input: HaulInput
     estimate: { method: est.method, perUnit: est.perUnit, countedHauls: est.basis.countedHauls, calibrated: est.basis.calibrated },
     hauledAt: hauledAt.toISOString(),
   };
+  return { haul: answer, settled: r.stop };
 }
 
 const SORT_REFUSALS: OwnRefusals = {

@@ -1,11 +1,14 @@
 import "server-only";
 import type { Knex } from "knex";
 import { db } from "@/lib/db";
-import { AppError, conflict, notFound } from "@/lib/api/errors";
+import { AppError, conflict, invalidInput, notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
+import { recordHaulAtStop } from "@/lib/ledger/record";
+import { haulInputSchema } from "@/lib/ledger/schemas";
 import { planRoute } from "@/lib/runs/route-order";
-import type { CreateRunInput, StopStatus } from "./schemas";
-import { runStateOf } from "./state";
+import type { CreateRunInput } from "./schemas";
+import { followStops } from "./stop-follow";
+import type { RunDetail, RunStop } from "./types";
 
 // The pickup runs' writes: a new run, and settling its stops. Reads are in queries.ts.
 
@@ -64,7 +67,7 @@ export async function createRun(actor: Actor, input: CreateRunInput) {
 }
 
 /** Locks the run and returns the stop if the actor may settle it and it is still pending. */
-export async function lockPendingStop(actor: Actor, runId: string, stopId: string, trx: Knex.Transaction) {
+async function lockPendingStop(actor: Actor, runId: string, stopId: string, trx: Knex.Transaction) {
   const run = await trx("pickup_runs")
     .select("id", "assignee_id", "started_at")
     .where({ id: runId, group_id: actor.group.id })
@@ -88,6 +91,35 @@ function isUniqueViolation(error: unknown, constraint: string): boolean {
 }
 
 /**
+ * Logs a haul at a stop of `before` (the run as read for the request, without
+ * a lock) and settles the stop: the body is the haul's (same rules and
+ * estimate as POST /api/drives/{id}/hauls), a stop already settled is a 409
+ * before anything is written. The haul, the stop and the run's state are
+ * written by one call of ledger_haul (which re-checks the stop under the
+ * run's lock, taken after the drive's), so the drive's lock is never held
+ * across a round trip; the answer is `before` with the stop settled and the
+ * run's state and counts as that call left them.
+ */
+export async function logHaulAtStop(actor: Actor, before: RunDetail, stopId: string, body: Record<string, unknown>, trx: Knex.Transaction) {
+  const stop = before.stopList.find((s) => s.id === stopId);
+  if (!stop) throw notFound("That stop");
+  const parsed = haulInputSchema.safeParse({ ...body, dropPointId: stop.dropPoint.id });
+  if (!parsed.success) throw invalidInput(parsed.error);
+  if (stop.status !== "pending") throw conflict(`This stop is already ${stop.status}.`);
+  const { haul, settled } = await recordHaulAtStop(actor, before.driveId, parsed.data, { runId: before.id, stopId }, trx);
+  const logged: RunStop = {
+    ...stop,
+    status: "logged",
+    skipReason: null,
+    haulId: haul.id,
+    resolvedAt: new Date(settled.resolvedAt).toISOString(),
+    haul: { bags: haul.bags, weightKg: haul.weightKg, estimatedCans: haul.estimatedCans, movementId: haul.movementId },
+  };
+  const run: RunDetail = { ...before, ...settled.run, stopList: before.stopList.map((s) => (s.id === stopId ? logged : s)) };
+  return { haul, run };
+}
+
+/**
  * Marks one stop logged or skipped, then moves the run's state along. Only the
  * run's volunteer or an organiser may; a stop already settled is a 409.
  */
@@ -97,14 +129,16 @@ export async function resolveStop(
   stopId: string,
   change: { status: "skipped"; reason: string } | { status: "logged"; haulId: string },
   trx: Knex.Transaction,
-  /** What lockPendingStop already returned in this transaction, so it is not locked and read twice. */
-  locked?: Awaited<ReturnType<typeof lockPendingStop>>,
 ) {
-  const { run, stop } = locked ?? (await lockPendingStop(actor, runId, stopId, trx));
   if (change.status === "logged") {
     // Two runs logging one haul lock different runs; locking the haul makes
-    // the second wait for the first and then see the stop it settled.
+    // the second wait for the first and then see the stop it settled. The haul
+    // is locked before the run, the order an undo takes them in (ledger_reverse:
+    // drive, haul, then the run of the stop it reopens), so the two cannot deadlock.
     await trx("hauls").select("id").where({ id: change.haulId, group_id: actor.group.id }).forUpdate().first();
+  }
+  const { stop } = await lockPendingStop(actor, runId, stopId, trx);
+  if (change.status === "logged") {
     const taken = await trx("pickup_run_stops").select("id").where({ haul_id: change.haulId }).first();
     if (taken) throw conflict(HAUL_TAKEN);
   }
@@ -122,14 +156,6 @@ export async function resolveStop(
       if (isUniqueViolation(error, "pickup_run_stops_haul_unique")) throw conflict(HAUL_TAKEN);
       throw error;
     });
-  const statuses: StopStatus[] = await trx("pickup_run_stops").where({ run_id: runId }).pluck("status");
-  const state = runStateOf(statuses);
-  await trx("pickup_runs")
-    .where({ id: runId })
-    .update({
-      state,
-      started_at: run.started_at ?? trx.fn.now(),
-      finished_at: state === "done" ? trx.fn.now() : null,
-    });
+  const state = await followStops(trx, runId, true);
   return { dropPointId: stop.dropPointId, state };
 }

@@ -1,15 +1,6 @@
-/**
- * A run's state follows its stops: untouched stops mean planned, any stop
- * logged or skipped means under way, and none left pending means done.
- */
-import type { RunState, StopStatus } from "./schemas";
-
-export function runStateOf(statuses: readonly StopStatus[]): RunState {
-  const pending = statuses.filter((s) => s === "pending").length;
-  if (statuses.length > 0 && pending === 0) return "done";
-  if (pending < statuses.length) return "under_way";
-  return "planned";
-}
+// A run's state (planned, under way, done) follows its stops in the database:
+// pickup_run_follow_stops in db/functions/ledger_writers.sql is the one rule.
+import type { StopStatus } from "./schemas";
 
 /** Counts for a progress line such as "3 of 5 stops done". */
 export function stopProgress(statuses: readonly StopStatus[]) {

@@ -1,20 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { launchBrowser, newPage, PHONE, signInAs } from "@/tests/support/browser";
+import { describe, expect, it } from "vitest";
+import { newPage, PHONE, signInAs, browserForFile } from "@/tests/support/browser";
 import { ApiClient } from "@/tests/support/http";
-import { closeTestDb } from "@/tests/support/db";
 import { freshGroup } from "@/tests/support/ledger";
 
 // Bin fill as state, in the browser (issue 13): a full bin shows on the
 // dashboard and as a shape on its map pin; a haul from it clears both.
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await closeTestDb();
-});
+const browser = browserForFile();
 
 describe("full bins on the dashboard and the public map", () => {
   it("a haul clears a full bin; the organiser can clear another by hand", async () => {
@@ -24,7 +15,7 @@ describe("full bins on the dashboard and the public map", () => {
       expect((await anon.json("POST", `/api/public/drives/${g.driveSlug}/drop-points/${dp}/fill-reports`, { level: 100 })).status).toBe(201);
     }
 
-    const { context, page } = await newPage(browser, PHONE);
+    const { context, page } = await newPage(browser(), PHONE);
     await page.goto(`/drives/${g.driveSlug}`);
     const fullPins = page.locator('.leaflet-marker-icon svg[data-fill="full"]');
     await expect.poll(() => fullPins.count(), { timeout: 15_000 }).toBe(2);

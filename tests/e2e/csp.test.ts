@@ -1,9 +1,9 @@
 import path from "node:path";
-import type { Browser, Page } from "playwright-core";
+import type { Page } from "playwright-core";
 import { PNG } from "pngjs";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, newPage, PHONE, signInAs } from "@/tests/support/browser";
-import { closeTestDb, testDb } from "@/tests/support/db";
+import { describe, expect, it } from "vitest";
+import { newPage, PHONE, signInAs, browserForFile } from "@/tests/support/browser";
+import { testDb } from "@/tests/support/db";
 import { DEMO } from "@/tests/support/env";
 import { createOwnGroup } from "@/tests/support/own-group";
 
@@ -11,15 +11,7 @@ import { createOwnGroup } from "@/tests/support/own-group";
 // app's own scripts, styles, fonts, tiles, queries and uploads through while
 // allowing no inline script without the nonce. Directive names per CSP Level 3 (W3C).
 const shots = path.resolve(import.meta.dirname, "../../.test-results");
-let browser: Browser;
-
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await closeTestDb();
-});
+const browser = browserForFile();
 
 /** Records every violation the page reports, from its first script on. */
 async function watchViolations(page: Page): Promise<string[]> {
@@ -53,7 +45,7 @@ async function open(page: Page, url: string) {
 
 describe("Content-Security-Policy in the browser", () => {
   it("gives each page load a fresh nonce, and the page's scripts carry it", async () => {
-    const { context, page } = await newPage(browser);
+    const { context, page } = await newPage(browser());
     const first = (await open(page, "/")).headers()["content-security-policy"];
     const second = (await open(page, "/")).headers()["content-security-policy"];
     const nonceOf = (p: string) => /'nonce-([^']+)'/.exec(p)![1];
@@ -66,7 +58,7 @@ describe("Content-Security-Policy in the browser", () => {
   });
 
   it("blocks nothing on the landing page, a public drive's map, the planner and the signed-in dashboard", async () => {
-    const { context, page } = await newPage(browser, PHONE);
+    const { context, page } = await newPage(browser(), PHONE);
     const violations = await watchViolations(page);
 
     await open(page, "/");
@@ -88,7 +80,7 @@ describe("Content-Security-Policy in the browser", () => {
     await page.getByRole("heading", { name: "Heater planner" }).waitFor();
     await page.screenshot({ path: path.join(shots, "csp-planner.png") });
     // The planner's figures are computed in the browser as the form changes.
-    await page.getByLabel("Chamber and both manifolds").check();
+    await page.getByLabel("Chamber and both manifolds").first().check();
 
     await signInAs(page, DEMO.organiser);
     await open(page, "/dashboard");
@@ -105,7 +97,7 @@ describe("Content-Security-Policy in the browser", () => {
 
   it("lets an organiser upload a photo to the upload service and show it", async () => {
     const g = await createOwnGroup(testDb(), "csp-upload");
-    const { context, page } = await newPage(browser);
+    const { context, page } = await newPage(browser());
     const violations = await watchViolations(page);
     await signInAs(page, g.emails.organiser);
     await open(page, `/organise/drop-points/${g.dropPointId}`);
@@ -121,7 +113,7 @@ describe("Content-Security-Policy in the browser", () => {
   });
 
   it("refuses a script injected into the page's HTML without the nonce", async () => {
-    const { context, page } = await newPage(browser);
+    const { context, page } = await newPage(browser());
     const violations = await watchViolations(page);
     // What a stored cross-site script would be: markup in the server's answer, under the server's own policy.
     await page.route("**/", async (route) => {

@@ -1,20 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launchBrowser, newPage, PHONE, signInAs } from "@/tests/support/browser";
-import { closeTestDb, testDb } from "@/tests/support/db";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
+import { testDb } from "@/tests/support/db";
 import { addDrive, dayFromToday, freshGroup } from "@/tests/support/ledger";
 
 // The drive a page opens on, on a phone: with next season's drive already set
 // up, the log opens on the one running today and says so; a drive the person
 // chooses is kept across reloads and across the pages where cans are entered.
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await closeTestDb();
-});
+const browser = browserForFile();
 
 const runningName = "Chapel yard drive";
 const futureName = "Next winter drive";
@@ -44,8 +37,7 @@ describe("the drive the log opens on", () => {
     await testDb()("drives").where({ id: g.driveId }).update({ name: runningName, starts_on: dayFromToday(-15), ends_on: dayFromToday(45) });
     const futureId = await addDrive(g, { name: futureName, startsOn: dayFromToday(100), endsOn: dayFromToday(190) });
 
-    const { context, page } = await newPage(browser, PHONE);
-    await signInAs(page, g.emails.volunteer);
+    const { context, page } = await signedInPage(browser(), g.emails.volunteer, PHONE);
     await open(page, "/log");
     expect(await visible(page, "#log-drive").inputValue()).toBe(g.driveId);
     expect(await bannerName(page)).toBe(runningName);
@@ -69,8 +61,7 @@ describe("the drive the log opens on", () => {
     await context.close();
 
     // The organiser's own choice, made on the ledger, carries to the log and the run planner.
-    const org = await newPage(browser, PHONE);
-    await signInAs(org.page, g.emails.organiser);
+    const org = await signedInPage(browser(), g.emails.organiser, PHONE);
     await open(org.page, "/ledger");
     expect(await bannerName(org.page)).toBe(runningName);
     const stored = org.page.waitForResponse((r) => r.url().endsWith("/api/me/drive") && r.request().method() === "PUT");

@@ -2,12 +2,11 @@ import { spawn, type ChildProcess } from "node:child_process";
 import { mkdtempSync, rmSync, chmodSync } from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
 import { startStack, type Stack } from "@/scripts/lib/stack";
 import { startClusterAt, stopClusterAt } from "@/scripts/lib/postgres";
 import { waitForHealthy } from "@/scripts/lib/wait";
 import { freePort } from "@/tests/support/ports";
-import { launchBrowser } from "@/tests/support/browser";
+import { browserForFile } from "@/tests/support/browser";
 import { serverCommand } from "@/scripts/lib/serve";
 
 // A stack of its own, so stopping its database disturbs no other test.
@@ -18,7 +17,7 @@ let stack: Stack;
 let server: ChildProcess;
 let appUrl = "";
 let pgPort = 0;
-let browser: Browser;
+const browser = browserForFile();
 
 beforeAll(async () => {
   pgPort = await freePort();
@@ -43,11 +42,9 @@ beforeAll(async () => {
     stdio: "ignore",
   });
   await waitForHealthy(`${appUrl}/api/health`, 60_000);
-  browser = await launchBrowser();
 });
 
 afterAll(async () => {
-  await browser?.close();
   server?.kill("SIGTERM");
   await stack?.stop().catch(() => undefined);
   rmSync(runDir, { recursive: true, force: true });
@@ -61,7 +58,7 @@ async function health() {
 describe("when the database goes away", () => {
   it("answers 503 and a clear page, then recovers on its own", async () => {
     expect(await health()).toEqual({ status: 200, body: { status: "ok", db: "up" } });
-    const page = await browser.newPage();
+    const page = await browser().newPage();
     await page.goto(`${appUrl}/`);
     await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toContain("Empty cans in");
 

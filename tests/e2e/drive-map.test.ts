@@ -1,19 +1,12 @@
-import type { Browser } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, newPage, PHONE } from "@/tests/support/browser";
+import { describe, expect, it } from "vitest";
+import { newPage, PHONE, browserForFile } from "@/tests/support/browser";
 import { DEMO_DROP_POINTS } from "@/db/seeds/data/scenario";
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
 describe("public drive map", () => {
   it("shows the committed tiles and one marker per active drop point, on a phone", async () => {
-    const { context, page } = await newPage(browser, PHONE);
+    const { context, page } = await newPage(browser(), PHONE);
     const tileResponses: number[] = [];
     page.on("response", (r) => {
       if (r.url().includes("/tiles/")) tileResponses.push(r.status());
@@ -43,7 +36,7 @@ describe("public drive map", () => {
 
   it("sorts the list by distance when the visitor shares a location", async () => {
     // Standing at the harbour: the Quayside hall is nearest (haversine, lib/runs/great-circle.ts).
-    const { context, page } = await newPage(browser, { ...PHONE, geolocation: { latitude: 47.1930, longitude: -7.9970 }, permissions: ["geolocation"] });
+    const { context, page } = await newPage(browser(), { ...PHONE, geolocation: { latitude: 47.1930, longitude: -7.9970 }, permissions: ["geolocation"] });
     await page.goto("/drives/larkhollow-winter-2026");
     await page.getByRole("button", { name: "Sort by distance from me" }).click();
     await page.getByRole("heading", { name: "Drop points nearest first" }).waitFor();

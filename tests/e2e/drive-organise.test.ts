@@ -1,6 +1,6 @@
-import type { Browser, Page } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, newPage, PHONE, signInAs } from "@/tests/support/browser";
+import type { Page } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import { newPage, PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
 import { DEMO } from "@/tests/support/env";
 import { mailTo, waitForMail } from "@/tests/support/mail";
 import { PNG } from "pngjs";
@@ -11,13 +11,7 @@ function pngOf(size: number): Buffer {
   return PNG.sync.write(png);
 }
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
 async function clickMap(page: Page, dx: number, dy: number) {
   const map = page.locator(".leaflet-container").first();
@@ -30,8 +24,7 @@ describe("organiser sets up a drive; the public uses it", () => {
   it("creates a drive with two drop points placed on the map; a visitor pledges and reports a full bin", async () => {
     const tag = Date.now().toString(36);
     const slug = `lantern-${tag}`;
-    const org = await newPage(browser);
-    await signInAs(org.page, DEMO.organiser);
+    const org = await signedInPage(browser(), DEMO.organiser);
     await org.page.goto("/organise/drives/new");
     await org.page.getByLabel("Name", { exact: true }).fill("Lantern Street Winter Drive");
     await org.page.getByLabel("Web address").fill(slug);
@@ -75,7 +68,7 @@ describe("organiser sets up a drive; the public uses it", () => {
     await org.page.getByRole("img", { name: "Photo of the bin at Lantern Street bakery" }).waitFor();
     await org.context.close();
 
-    const { context, page } = await newPage(browser, PHONE);
+    const { context, page } = await newPage(browser(), PHONE);
     await page.goto(`/drives/${slug}`);
     await page.waitForSelector("img.leaflet-tile-loaded");
     await expect.poll(() => page.locator(".leaflet-marker-icon").count(), { timeout: 15_000 }).toBe(2);

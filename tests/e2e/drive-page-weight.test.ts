@@ -1,6 +1,6 @@
-import type { Browser, Route } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, newPage, PHONE } from "@/tests/support/browser";
+import type { Route } from "playwright-core";
+import { describe, expect, it } from "vitest";
+import { newPage, PHONE, browserForFile } from "@/tests/support/browser";
 import { waitForMail } from "@/tests/support/mail";
 
 // The public drive page is what a passer-by opens from a sign on a bin, often
@@ -11,17 +11,11 @@ const PAGE = "/drives/larkhollow-winter-2026";
 // JavaScript (1 kB = 1000 bytes), the map's Leaflet code included.
 const BUDGET_BYTES = 200_000;
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
 describe("public drive page weight", () => {
   it("loads at most 200 kB of compressed JavaScript on a phone, map and pledge form included", async () => {
-    const { context, page } = await newPage(browser, PHONE);
+    const { context, page } = await newPage(browser(), PHONE);
     try {
       await page.goto(PAGE);
       // The map's code is part of the first load: wait for the pins it draws.
@@ -43,7 +37,7 @@ describe("public drive page weight", () => {
   });
 
   it("sends a pledge typed before the page's code arrived, as a plain form post, and answers with the confirmation", async () => {
-    const { context, page } = await newPage(browser, PHONE);
+    const { context, page } = await newPage(browser(), PHONE);
     try {
       // A slow connection: no script of the app ever arrives.
       const held: Route[] = [];

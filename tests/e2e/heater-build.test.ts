@@ -1,27 +1,21 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launchBrowser, newPage, signInAs } from "@/tests/support/browser";
+import { beforeAll, describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { newPage, signInAs, browserForFile } from "@/tests/support/browser";
 import { DEMO } from "@/tests/support/env";
-import { demoFixture, type DemoFixture } from "@/tests/support/fixtures";
-import { closeTestDb, testDb } from "@/tests/support/db";
+import { demoFixtureForFile } from "@/tests/support/fixtures";
+import { testDb } from "@/tests/support/db";
 import { pdfText } from "@/tests/support/pdf-text";
 
 // A builder's journey: plan a unit from a 30 × 60 in sheet, save it to the
 // demo drive, see the drive's target grow, claim cans, record part of the
 // build, be refused a claim past the unit's need, print the build sheet, and
 // put the unit on the wall, which gives its unbuilt claims back.
-let browser: Browser;
+const browser = browserForFile();
 let page: Page;
-let f: DemoFixture;
+const f = demoFixtureForFile();
 
 beforeAll(async () => {
-  f = await demoFixture();
-  browser = await launchBrowser();
-  ({ page } = await newPage(browser));
-});
-afterAll(async () => {
-  await browser?.close();
-  await closeTestDb();
+  ({ page } = await newPage(browser()));
 });
 
 /** Page object for the drive's line on /units: "Target X cans: Y for N heaters + S spare". */
@@ -56,6 +50,9 @@ describe("a builder plans, saves, claims, builds and prints a heater unit", () =
     const before = await driveTarget();
 
     await page.goto("/plan");
+    // Signed in, the planner keeps the group's navigation, not the visitor's header.
+    await expect(page.getByRole("navigation", { name: "Group" }).getByRole("link", { name: "My units" }).count()).resolves.toBe(1);
+    await expect(page.getByRole("link", { name: "Sign in", exact: true }).count()).resolves.toBe(0);
     await page.locator("#sheet-1-width").fill("30");
     await page.locator("#sheet-1-height").fill("60");
     // Common practice, no published source: 11 × 12 = 132 cans and 528 holes.

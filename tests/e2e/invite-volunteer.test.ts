@@ -1,18 +1,11 @@
 import { randomBytes } from "node:crypto";
-import type { Browser } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { PHONE, launchBrowser, newPage, signInAs } from "@/tests/support/browser";
+import { describe, expect, it } from "vitest";
+import { PHONE, newPage, signInAs, browserForFile } from "@/tests/support/browser";
 import { DEMO } from "@/tests/support/env";
 import { waitForMail } from "@/tests/support/mail";
 import { invitationPage, membersPage } from "./pages/accounts";
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
 describe("an organiser invites a volunteer", () => {
   it("the invitation arrives, the volunteer joins, lands on their home and is refused organiser pages", async () => {
@@ -21,7 +14,7 @@ describe("an organiser invites a volunteer", () => {
     const errors: string[] = [];
 
     // The organiser, on a laptop.
-    const organiser = await newPage(browser);
+    const organiser = await newPage(browser());
     organiser.page.on("console", (m) => m.type() === "error" && errors.push(m.text()));
     await signInAs(organiser.page, DEMO.organiser);
     expect(new URL(organiser.page.url()).pathname).toBe("/dashboard");
@@ -36,7 +29,7 @@ describe("an organiser invites a volunteer", () => {
     expect(link).toBeTruthy();
 
     // The volunteer, on a phone, follows the link and chooses a password.
-    const volunteer = await newPage(browser, PHONE);
+    const volunteer = await newPage(browser(), PHONE);
     volunteer.page.on("console", (m) => m.type() === "error" && errors.push(m.text()));
     await invitationPage.accept(volunteer.page, new URL(link!).pathname, "Rowan Newcomer", password);
     await expect.poll(() => volunteer.page.getByLabel("E-mail").inputValue()).toBe(email);

@@ -1,19 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launchBrowser, newPage, PHONE, signInAs } from "@/tests/support/browser";
-import { closeTestDb, testDb } from "@/tests/support/db";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
+import { testDb } from "@/tests/support/db";
 import { freshGroup, type FreshGroup } from "@/tests/support/ledger";
 
 // The Log page asks before recording an unusual number (and records it on Yes),
 // and an entry kept offline is recorded at the time it was entered.
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await closeTestDb();
-});
+const browser = browserForFile();
 
 const good = async (g: FreshGroup) => {
   const org = await g.client("organiser");
@@ -30,8 +23,7 @@ async function sortOf(page: Page, cans: number) {
 describe("unusual numbers on the Log page", () => {
   it("asks 'really 1,000,000 cans from 1 bag?'; No records nothing, Yes records it", async () => {
     const g = await freshGroup("e2e-confirm");
-    const { context, page } = await newPage(browser, PHONE);
-    await signInAs(page, g.emails.volunteer);
+    const { context, page } = await signedInPage(browser(), g.emails.volunteer, PHONE);
     await page.goto(`/log?dropPoint=${g.dropPointIds[0]}`);
     await page.getByLabel("Bags", { exact: true }).fill("1");
     await page.getByRole("button", { name: "Record haul" }).click();
@@ -60,8 +52,7 @@ describe("unusual numbers on the Log page", () => {
 describe("an entry kept offline", () => {
   it("is recorded at the time it was entered, and the ledger shows when it was sent", async () => {
     const g = await freshGroup("e2e-entry-time");
-    const { context, page } = await newPage(browser, PHONE);
-    await signInAs(page, g.emails.volunteer);
+    const { context, page } = await signedInPage(browser(), g.emails.volunteer, PHONE);
     await page.goto(`/log?dropPoint=${g.dropPointIds[0]}`);
     // The phone's clock says T, 90 s before the server receives the entry.
     const T = new Date(Date.now() - 90_000);
@@ -79,8 +70,7 @@ describe("an entry kept offline", () => {
     expect(new Date(m.recorded_at).getTime() - T.getTime()).toBeGreaterThanOrEqual(60_000);
     await context.close();
 
-    const org = await newPage(browser, { viewport: { width: 1200, height: 900 } });
-    await signInAs(org.page, g.emails.organiser);
+    const org = await signedInPage(browser(), g.emails.organiser, { viewport: { width: 1200, height: 900 } });
     await org.page.goto(`/ledger?driveId=${g.driveId}`);
     await org.page.getByRole("cell", { name: /\d\d:\d\d\s*sent \d\d:\d\d/ }).first().waitFor();
     await org.context.close();

@@ -1,20 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { launchBrowser, newPage, signInAs } from "@/tests/support/browser";
-import { closeTestDb } from "@/tests/support/db";
+import { describe, expect, it } from "vitest";
+import { browserForFile, signedInPage } from "@/tests/support/browser";
 import { freshGroup } from "@/tests/support/ledger";
 
 // The ledger screen (issue 13): an organiser undoes a volunteer's wrong entry
 // with a confirmation and a reason; line numbers show where lines are named;
 // filters live in the address, so Back brings the previous view.
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await closeTestDb();
-});
+const browser = browserForFile();
 
 describe("organiser corrections on /ledger", () => {
   it("reverses a volunteer's line with a reason, shows both line numbers, keeps filters in the URL", async () => {
@@ -25,8 +16,7 @@ describe("organiser corrections on /ledger", () => {
     const kept = await vol.json("POST", `/api/drives/${g.driveId}/hauls`, { dropPointId: g.dropPointIds[0], bags: 1 });
     expect(kept.status).toBe(201);
 
-    const { context, page } = await newPage(browser, { viewport: { width: 1280, height: 900 } });
-    await signInAs(page, g.emails.organiser);
+    const { context, page } = await signedInPage(browser(), g.emails.organiser, { viewport: { width: 1280, height: 900 } });
     await page.goto(`/ledger?driveId=${g.driveId}`);
     const lines = page.locator("tr[data-line]");
     await expect.poll(() => lines.count(), { timeout: 15_000 }).toBe(2);

@@ -1,20 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launchBrowser, newPage, PHONE, signInAs } from "@/tests/support/browser";
-import { closeTestDb, testDb } from "@/tests/support/db";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
+import { testDb } from "@/tests/support/db";
 import { freshGroup, type FreshGroup } from "@/tests/support/ledger";
 
 // A volunteer on a phone: haul, sort with rejects, wash, open and punch part,
 // undo one entry; the drive's stock and the public tallies must agree. Then the
 // same with the network cut part-way, and with one answer lost on its way back.
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await closeTestDb();
-});
+const browser = browserForFile();
 
 const stage = async (page: Page, name: string) => Number((await page.locator(`[data-stage="${name}"]`).innerText()).replace(/[^\d]/g, ""));
 
@@ -51,8 +44,7 @@ async function apiStock(g: FreshGroup) {
 describe("volunteer logging on a phone", () => {
   it("logs a haul, sorts it with rejects, washes and punches part, undoes one entry", async () => {
     const g = await freshGroup("e2e");
-    const { context, page } = await newPage(browser, PHONE);
-    await signInAs(page, g.emails.volunteer);
+    const { context, page } = await signedInPage(browser(), g.emails.volunteer, PHONE);
     await page.goto(`/log?dropPoint=${g.dropPointIds[0]}`);
     await expect.poll(() => page.getByLabel("Drop point").inputValue()).toBe(g.dropPointIds[0]);
     await expect.poll(() => page.getByText("Sugary bins draw wasps").count()).toBe(1);
@@ -93,8 +85,7 @@ describe("volunteer logging on a phone", () => {
 
   it("loses and doubles nothing when the network drops part-way", async () => {
     const g = await freshGroup("e2e-offline");
-    const { context, page } = await newPage(browser, PHONE);
-    await signInAs(page, g.emails.volunteer);
+    const { context, page } = await signedInPage(browser(), g.emails.volunteer, PHONE);
     await page.goto(`/log?dropPoint=${g.dropPointIds[1]}`);
     await logHaul(page, 2);
     await page.getByText(/Haul recorded/).waitFor();

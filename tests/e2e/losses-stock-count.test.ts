@@ -1,22 +1,17 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launchBrowser, newPage, PHONE, signInAs } from "@/tests/support/browser";
-import { closeTestDb, testDb } from "@/tests/support/db";
+import { beforeAll, describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
+import { testDb } from "@/tests/support/db";
 import { freshGroup, haulAndSort, type FreshGroup } from "@/tests/support/ledger";
 import { totalsMismatches } from "@/tests/support/ledger-totals";
 
 // A volunteer records cans lost while washing on a phone; an organiser then
 // counts what is on hand, posts the difference as one adjustment and undoes it.
-let browser: Browser;
+const browser = browserForFile();
 let g: FreshGroup;
 beforeAll(async () => {
-  browser = await launchBrowser();
   g = await freshGroup("e2e-losses");
   await haulAndSort(await g.client("volunteer"), g.driveId, g.dropPointIds[0], 100, { dented: 5 });
-});
-afterAll(async () => {
-  await browser?.close();
-  await closeTestDb();
 });
 
 type Stock = { stages: Record<string, number>; rejected: Record<string, number>; rejectedOnHand: number };
@@ -25,8 +20,7 @@ const number = async (page: Page, selector: string) => Number((await page.locato
 
 describe("losses and stock counts in the browser", () => {
   it("records cans lost while washing from the phone's processing form", async () => {
-    const { context, page } = await newPage(browser, PHONE);
-    await signInAs(page, g.emails.volunteer);
+    const { context, page } = await signedInPage(browser(), g.emails.volunteer, PHONE);
     await page.goto("/log");
     await page.getByRole("tab", { name: "Log processing" }).click();
     await page.getByRole("radio", { name: "Washed" }).check({ force: true });
@@ -55,8 +49,7 @@ describe("losses and stock counts in the browser", () => {
   });
 
   it("lets the organiser count what is on hand, post the difference as one entry, and undo it", async () => {
-    const { context, page } = await newPage(browser, { viewport: { width: 1280, height: 900 } });
-    await signInAs(page, g.emails.organiser);
+    const { context, page } = await signedInPage(browser(), g.emails.organiser, { viewport: { width: 1280, height: 900 } });
     await page.goto(`/ledger?drive=${g.driveId}`);
     await page.getByRole("link", { name: "Count what is on hand (stock count)" }).click();
     await page.waitForURL(/\/ledger\/stock-count/);

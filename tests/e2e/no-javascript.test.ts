@@ -1,25 +1,17 @@
 import { randomBytes } from "node:crypto";
-import type { Browser } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, newPage, PHONE } from "@/tests/support/browser";
-import { closeTestDb, testDb } from "@/tests/support/db";
+import { describe, expect, it } from "vitest";
+import { newPage, PHONE, browserForFile } from "@/tests/support/browser";
+import { testDb } from "@/tests/support/db";
 
 // The browser forms are server actions in plain <form>s: with JavaScript off
 // (or before it arrives) they post and the page comes back with the answer.
 const PAGE = "/drives/larkhollow-winter-2026";
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await closeTestDb();
-});
+const browser = browserForFile();
 
 describe("forms with JavaScript disabled", () => {
   it("a donor pledges on the public drive page: a refusal keeps what was typed, the pledge is stored and confirmed", async () => {
-    const { context, page } = await newPage(browser, { ...PHONE, javaScriptEnabled: false });
+    const { context, page } = await newPage(browser(), { ...PHONE, javaScriptEnabled: false });
     try {
       const donor = `nojs-${randomBytes(3).toString("hex")}@example.test`;
       await page.goto(PAGE);
@@ -53,7 +45,7 @@ describe("forms with JavaScript disabled", () => {
   });
 
   it("someone at a bin says it is full: the native disclosure opens, the report is stored", async () => {
-    const { context, page } = await newPage(browser, { ...PHONE, javaScriptEnabled: false });
+    const { context, page } = await newPage(browser(), { ...PHONE, javaScriptEnabled: false });
     try {
       const note = `nojs-note-${randomBytes(3).toString("hex")}`;
       await page.goto(PAGE);
@@ -75,8 +67,52 @@ describe("forms with JavaScript disabled", () => {
     }
   });
 
+  it("a donor follows a drop point's “Pledge cans here” link: the form opens on that point, and the pledge goes to it", async () => {
+    const { context, page } = await newPage(browser(), { ...PHONE, javaScriptEnabled: false });
+    try {
+      const donor = `nojs-here-${randomBytes(3).toString("hex")}@example.test`;
+      await page.goto(PAGE);
+      const item = page.getByTestId("drop-point").nth(2);
+      const pointId = (await item.getAttribute("id"))!.replace(/^point-/, "");
+      // Directions in the visitor's own map app, with no tracking parameters.
+      const osm = new URL((await item.getByRole("link", { name: "Open in OpenStreetMap" }).getAttribute("href"))!);
+      expect([...osm.searchParams.keys()]).toEqual(["mlat", "mlon"]);
+      expect(await item.getByRole("link", { name: "Directions (map app)" }).getAttribute("href")).toMatch(/^geo:-?\d+(\.\d+)?,-?\d+(\.\d+)?$/);
+      await item.getByRole("link", { name: "Pledge cans here" }).click();
+      await page.waitForURL((url) => url.searchParams.get("point") === pointId && url.hash === "#pledge");
+      await expect(page.getByLabel("Drop point", { exact: true }).inputValue()).resolves.toBe(pointId);
+      await page.getByLabel("About how many bags").fill("2");
+      await page.getByLabel("When you will bring them").fill("2026-12-12");
+      await page.getByLabel("E-mail for a confirmation (optional)").fill(donor);
+      await page.getByRole("button", { name: "Send my pledge" }).click();
+      await page.getByText("Thank you — your pledge is in.").waitFor();
+      const rows = await testDb()("pledges").where({ email: donor }).select("drop_point_id");
+      expect(rows).toEqual([{ drop_point_id: pointId }]);
+    } finally {
+      await context.close();
+    }
+  });
+
+  it("on a bin's own page, “it is full” is one tap", async () => {
+    const { context, page } = await newPage(browser(), { ...PHONE, javaScriptEnabled: false });
+    try {
+      await page.goto(PAGE);
+      const item = page.getByTestId("drop-point").first();
+      const pointId = (await item.getAttribute("id"))!.replace(/^point-/, "");
+      await item.getByRole("link", { name: "This bin’s page" }).click();
+      await page.waitForURL(`**${PAGE}/bins/${pointId}`);
+      const before = new Date();
+      await page.getByRole("button", { name: /^It is full/ }).click();
+      await page.getByText("Thank you — the organisers can see your report").waitFor();
+      const rows = await testDb()("fill_reports").where({ drop_point_id: pointId }).where("created_at", ">=", new Date(before.getTime() - 5_000)).select("level");
+      expect(rows.map((r) => r.level)).toContain(100);
+    } finally {
+      await context.close();
+    }
+  });
+
   it("a new organiser signs up: a refused password keeps the rest, then the check-your-mail answer shows", async () => {
-    const { context, page } = await newPage(browser, { javaScriptEnabled: false });
+    const { context, page } = await newPage(browser(), { javaScriptEnabled: false });
     try {
       const email = `nojs-founder-${randomBytes(3).toString("hex")}@signup.test`;
       await page.goto("/signup");

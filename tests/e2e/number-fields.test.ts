@@ -1,21 +1,16 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Locator, Page } from "playwright-core";
-import { launchBrowser, newPage, PHONE, signInAs } from "@/tests/support/browser";
-import { closeTestDb, testDb } from "@/tests/support/db";
+import { beforeAll, describe, expect, it } from "vitest";
+import type { Locator, Page } from "playwright-core";
+import { newPage, PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
+import { testDb } from "@/tests/support/db";
 import { freshGroup, type FreshGroup } from "@/tests/support/ledger";
 
 // Every count box on a phone takes exactly what was typed, or says why not:
 // "−4" (a Unicode minus), "2.5" and "abc" are refused with the same message
 // beside the box and nothing is saved; a whole number then saves exactly that.
-let browser: Browser;
+const browser = browserForFile();
 let g: FreshGroup;
 beforeAll(async () => {
-  browser = await launchBrowser();
   g = await freshGroup("e2e-numbers");
-});
-afterAll(async () => {
-  await browser?.close();
-  await closeTestDb();
 });
 
 const BAD_COUNTS = ["\u22124", "2.5", "abc"];
@@ -44,8 +39,7 @@ async function refusesBadCounts(page: Page, box: Locator, noun: string, save: ()
 
 describe("count boxes on the Log page", () => {
   it("refuses −4, 2.5 and abc in every haul, sort and processing count, then saves exactly what is typed", async () => {
-    const { context, page } = await newPage(browser, PHONE);
-    await signInAs(page, g.emails.volunteer);
+    const { context, page } = await signedInPage(browser(), g.emails.volunteer, PHONE);
     await page.goto(`/log?dropPoint=${g.dropPointIds[0]}`);
     const recordHaul = () => page.getByRole("button", { name: "Record haul" }).click();
 
@@ -119,8 +113,7 @@ describe("count boxes on the Log page", () => {
     const volunteerId = (await testDb()("users").where({ email: g.emails.volunteer }).first()).id;
     const created = await org.json<{ id: string }>("POST", "/api/runs", { driveId: g.driveId, plannedOn: "2026-12-11", start: { lat: 47.19, lng: -8 }, dropPointIds: [g.dropPointIds[1]], assigneeId: volunteerId });
     expect(created.status).toBe(201);
-    const { context, page } = await newPage(browser, PHONE);
-    await signInAs(page, g.emails.volunteer);
+    const { context, page } = await signedInPage(browser(), g.emails.volunteer, PHONE);
     await page.goto(`/runs/${created.body.id}`);
     const stop = page.getByRole("listitem", { name: /^Stop \d+: South gate$/ });
     await stop.getByRole("button", { name: "Log the haul here" }).click();
@@ -146,7 +139,7 @@ describe("a drive with no heaters planned", () => {
     const db = testDb();
     const slug = `no-heaters-${g.driveSlug}`;
     await db("drives").insert({ group_id: g.groupId, slug, name: "Empty Shelf Drive", starts_on: "2026-11-01", ends_on: "2027-02-28", is_public: true });
-    const { context, page } = await newPage(browser, PHONE);
+    const { context, page } = await newPage(browser(), PHONE);
     await page.goto(`/drives/${slug}`);
     await page.getByText("No heaters planned yet.").first().waitFor();
     const body = await page.locator("main").innerText();
@@ -155,8 +148,7 @@ describe("a drive with no heaters planned", () => {
     await page.screenshot({ path: ".test-results/number-fields-no-heaters.png", fullPage: true });
     await context.close();
 
-    const desk = await newPage(browser, { viewport: { width: 1200, height: 900 } });
-    await signInAs(desk.page, g.emails.organiser);
+    const desk = await signedInPage(browser(), g.emails.organiser, { viewport: { width: 1200, height: 900 } });
     await desk.page.goto("/dashboard");
     const card = desk.page.locator("section").filter({ has: desk.page.getByRole("link", { name: "Empty Shelf Drive" }) }).last();
     await card.getByTestId("heaters-covered").waitFor();

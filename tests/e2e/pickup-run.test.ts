@@ -1,10 +1,10 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser, Page } from "playwright-core";
-import { launchBrowser, newPage, PHONE, signInAs } from "@/tests/support/browser";
+import { describe, expect, it } from "vitest";
+import type { Page } from "playwright-core";
+import { PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
 import { DEMO } from "@/tests/support/env";
 import { ApiClient } from "@/tests/support/http";
-import { closeTestDb, testDb } from "@/tests/support/db";
-import { demoFixture, type DemoFixture } from "@/tests/support/fixtures";
+import { testDb } from "@/tests/support/db";
+import { demoFixtureForFile } from "@/tests/support/fixtures";
 import { waitForMail } from "@/tests/support/mail";
 
 // The pickup-run journey: an organiser plans a run over demo drop points and
@@ -12,17 +12,8 @@ import { waitForMail } from "@/tests/support/mail";
 const WANTED = ["Hilltop Corner Shop", "Millbrook School gate", "Quayside Community Hall"];
 const SHOTS = process.env.CANTROVE_SCREENSHOTS;
 
-let browser: Browser;
-let f: DemoFixture;
-
-beforeAll(async () => {
-  browser = await launchBrowser();
-  f = await demoFixture();
-});
-afterAll(async () => {
-  await browser?.close();
-  await closeTestDb();
-});
+const browser = browserForFile();
+const f = demoFixtureForFile();
 
 const tallies = async () =>
   (await new ApiClient().json<Record<string, { hauls: number; bags: number }>>("GET", `/api/public/drives/${f.demoDriveSlug}/tallies`)).body;
@@ -38,8 +29,7 @@ describe("pickup run journey", () => {
     const before = await tallies();
 
     // Organiser plans the run.
-    const { page, context } = await newPage(browser, { viewport: { width: 1200, height: 900 } });
-    await signInAs(page, DEMO.organiser);
+    const { page, context } = await signedInPage(browser(), DEMO.organiser, { viewport: { width: 1200, height: 900 } });
     // Other suites may add drives that end later (the planner's default): name the demo drive.
     await page.goto(`/runs/new?drive=${f.demoDriveId}`);
     const picker = page.getByRole("group", { name: "Drop points to visit" });
@@ -66,8 +56,7 @@ describe("pickup run journey", () => {
     expect([...stored].sort()).toEqual(WANTED.map(idOf).sort());
 
     // Volunteer on a phone.
-    const phone = await newPage(browser, PHONE);
-    await signInAs(phone.page, DEMO.volunteer);
+    const phone = await signedInPage(browser(), DEMO.volunteer, PHONE);
     await phone.page.goto(`/runs/${runId}`);
     const v = phone.page;
     await expect.poll(() => v.getByRole("listitem", { name: /^Stop \d+:/ }).count()).toBe(3);
@@ -116,8 +105,7 @@ describe("pickup run journey", () => {
     expect(skipped.haul_id).toBeNull();
 
     // The organiser sees the run among the done ones, and each drop point's pickup history.
-    const org = await newPage(browser, { viewport: { width: 1200, height: 900 } });
-    await signInAs(org.page, DEMO.organiser);
+    const org = await signedInPage(browser(), DEMO.organiser, { viewport: { width: 1200, height: 900 } });
     await org.page.goto("/runs");
     const card = (title: string) => org.page.locator("section", { has: org.page.getByRole("heading", { name: title, exact: true }) });
     const done = card("Done");

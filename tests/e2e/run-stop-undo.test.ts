@@ -1,19 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { launchBrowser, newPage, PHONE, signInAs } from "@/tests/support/browser";
-import { closeTestDb, testDb } from "@/tests/support/db";
+import { describe, expect, it } from "vitest";
+import { PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
+import { testDb } from "@/tests/support/db";
 import { freshGroup } from "@/tests/support/ledger";
 
 // On the run page: an unusual haul is asked about, a logged stop's haul can be
 // undone (the stop opens again), and a skipped stop can be put back on the run.
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await closeTestDb();
-});
+const browser = browserForFile();
 
 describe("a run's stops follow their hauls", () => {
   it("asks about 40 bags, undoes the haul back to pending, and un-skips a stop", async () => {
@@ -24,8 +16,7 @@ describe("a run's stops follow their hauls", () => {
     expect(created.status).toBe(201);
     const runId = created.body.id;
 
-    const { context, page } = await newPage(browser, PHONE);
-    await signInAs(page, g.emails.volunteer);
+    const { context, page } = await signedInPage(browser(), g.emails.volunteer, PHONE);
     await page.goto(`/runs/${runId}`);
     const north = page.getByRole("listitem", { name: /^Stop \d+: North porch$/ });
     const south = page.getByRole("listitem", { name: /^Stop \d+: South gate$/ });

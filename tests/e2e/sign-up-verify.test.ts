@@ -1,23 +1,16 @@
 import { randomBytes } from "node:crypto";
-import type { Browser } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { launchBrowser, newPage } from "@/tests/support/browser";
+import { describe, expect, it } from "vitest";
+import { newPage, browserForFile } from "@/tests/support/browser";
 import { APP_URL } from "@/tests/support/env";
 import { waitForMail } from "@/tests/support/mail";
 
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
 describe("a new organiser signs up", () => {
   it("is told to check the mail, cannot sign in before opening the link, then lands home even when next= points away", async () => {
     const email = `founder-${randomBytes(3).toString("hex")}@signup.test`;
     const password = "a-founders-password";
-    const { context, page } = await newPage(browser);
+    const { context, page } = await newPage(browser());
 
     await page.goto("/signup");
     await page.getByLabel("Your name").fill("Fern Founder");

@@ -1,23 +1,15 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
-import { launchBrowser, newPage, PHONE, signInAs } from "@/tests/support/browser";
+import { describe, expect, it } from "vitest";
+import { newPage, PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
 import { DEMO } from "@/tests/support/env";
 
 // WCAG 2.2, success criterion 2.5.5 "Target Size (Enhanced)": targets of at
 // least 44 by 44 CSS pixels. Checked on the signed-in header's links on a phone,
 // and the dashboard's drive dates read as words, not ISO codes.
-let browser: Browser;
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-});
+const browser = browserForFile();
 
 describe("the signed-in header on a phone", () => {
   it("gives every navigation link a target at least 44 px tall, and dates in words", async () => {
-    const { context, page } = await newPage(browser, PHONE);
-    await signInAs(page, DEMO.organiser);
+    const { context, page } = await signedInPage(browser(), DEMO.organiser, PHONE);
     await page.goto("/dashboard");
     const links = page.getByRole("navigation", { name: "Group" }).getByRole("link");
     const count = await links.count();
@@ -33,7 +25,7 @@ describe("the signed-in header on a phone", () => {
   });
 
   it("gives the public map's zoom buttons targets of at least 44 × 44 px", async () => {
-    const { context, page } = await newPage(browser, PHONE);
+    const { context, page } = await newPage(browser(), PHONE);
     await page.goto("/drives/larkhollow-winter-2026");
     const zoomIn = page.getByRole("button", { name: "Zoom in" });
     await zoomIn.waitFor();

@@ -1,14 +1,13 @@
-import { QueryClient, QueryClientProvider, useQuery } from "@tanstack/react-query";
+import { useQuery } from "@tanstack/react-query";
 import { act, renderHook, waitFor } from "@testing-library/react";
 import { HttpResponse, http } from "msw";
-import { setupServer } from "msw/node";
-import type { ReactNode } from "react";
-import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { heaterKeys, useMoveHeater } from "@/hooks/queries/heaters";
 import { ledgerKeys, ledgerQueries, useUndoMovement } from "@/hooks/queries/ledger";
 import { memberKeys, useRevokeInvitation } from "@/hooks/queries/members";
 import { runKeys, useUnskipStop } from "@/hooks/queries/runs";
 import type { DriveStock } from "@/lib/ledger/types";
+import { mockApi, testQueryClient } from "@/tests/support/query-client";
 
 // Each mutation hook owns its invalidation: after a write, the reads of its
 // own domain (and only the domains the write touches) are marked stale, and a
@@ -18,7 +17,7 @@ let stockCalls = 0;
 let goodCans = 100;
 const undone: { movementId: string; key: string | null; body: unknown }[] = [];
 
-const server = setupServer(
+const server = mockApi([
   http.get(`*/api/drives/${DRIVE}/stock`, () => {
     stockCalls += 1;
     return HttpResponse.json({ stages: { sorted: goodCans }, rejectedOnHand: 0, unclaimed: goodCans } as unknown as DriveStock);
@@ -32,20 +31,14 @@ const server = setupServer(
   http.post("*/api/heaters/:id/state", () => HttpResponse.json({ id: "u1", name: "Unit", cans: 120, state: "building", released: 0 })),
   http.delete("*/api/invitations/:id", () => HttpResponse.json({ revoked: true })),
   http.post("*/api/runs/:runId/stops/:stopId/unskip", ({ params }) => HttpResponse.json({ id: params.runId, state: "under_way", stopList: [] })),
-);
-
-beforeAll(() => server.listen({ onUnhandledRequest: "error" }));
-afterEach(() => {
-  server.resetHandlers();
+], () => {
   stockCalls = 0;
   goodCans = 100;
   undone.length = 0;
 });
-afterAll(() => server.close());
 
 function setup() {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false, staleTime: Infinity }, mutations: { retry: false } } });
-  const wrapper = ({ children }: { children: ReactNode }) => <QueryClientProvider client={client}>{children}</QueryClientProvider>;
+  const { client, wrapper } = testQueryClient({ staleTime: Infinity });
   // Reads of every domain, cached but not mounted: invalidation marks them without fetching.
   const seeded = {
     ledgerMine: ledgerKeys.mine(),

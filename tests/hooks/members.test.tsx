@@ -1,11 +1,10 @@
-import { QueryClient, QueryClientProvider, useQuery } from "@tanstack/react-query";
+import { useQuery } from "@tanstack/react-query";
 import { act, renderHook, waitFor } from "@testing-library/react";
 import { HttpResponse, delay, http } from "msw";
-import { setupServer } from "msw/node";
-import type { ReactNode } from "react";
-import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { ApiError } from "@/lib/api/client";
 import { memberQueries, useChangeRole, type Member } from "@/hooks/queries/members";
+import { mockApi, testQueryClient } from "@/tests/support/query-client";
 
 // The members hooks against a mocked API (msw intercepts fetch), the way the
 // members page uses them: list, error JSON, a slow answer, and a mutation that
@@ -19,7 +18,7 @@ let members = structuredClone(MEMBERS);
 let listCalls = 0;
 
 const refuse = new Map<string, string>();
-const server = setupServer(
+const server = mockApi([
   http.get("*/api/members", () => {
     listCalls += 1;
     return HttpResponse.json(members);
@@ -36,23 +35,12 @@ const server = setupServer(
     member.role = role;
     return HttpResponse.json(member);
   }),
-);
-
-beforeAll(() => server.listen({ onUnhandledRequest: "error" }));
-afterEach(() => {
-  server.resetHandlers();
+], () => {
   members = structuredClone(MEMBERS);
   listCalls = 0;
   refuse.clear();
 });
-afterAll(() => server.close());
-
-function wrapper() {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  return function Wrapper({ children }: { children: ReactNode }) {
-    return <QueryClientProvider client={client}>{children}</QueryClientProvider>;
-  };
-}
+const wrapper = () => testQueryClient().wrapper;
 
 describe("members hooks", () => {
   it("loads the group's members", async () => {

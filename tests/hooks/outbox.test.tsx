@@ -1,11 +1,9 @@
-import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { act, renderHook } from "@testing-library/react";
 import { HttpResponse, http } from "msw";
-import { setupServer } from "msw/node";
-import type { ReactNode } from "react";
-import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import { useOutbox, type SubmitResult } from "@/components/ledger/use-outbox";
 import { OUTBOX_STORAGE_KEY } from "@/lib/ledger/browser-queue";
+import { mockApi, testQueryClient } from "@/tests/support/query-client";
 
 // The volunteer's queue against a mocked API, with a fake clock: an entry made
 // offline at T and sent at T + 60 s carries T; an unusual number asked about by
@@ -15,7 +13,7 @@ let online = false;
 let asks = false;
 const seen: { key: string | null; body: Record<string, unknown> }[] = [];
 
-const server = setupServer(
+mockApi([
   http.post("*/api/drives/d1/hauls", async ({ request }) => {
     if (!online) return HttpResponse.error();
     const body = (await request.json()) as Record<string, unknown>;
@@ -25,25 +23,14 @@ const server = setupServer(
     }
     return HttpResponse.json({ id: "h1", movementId: "m1", hauledAt: body.happenedAt }, { status: 201 });
   }),
-);
-
-beforeAll(() => server.listen({ onUnhandledRequest: "error" }));
-afterEach(() => {
-  server.resetHandlers();
+], () => {
   vi.useRealTimers();
   localStorage.removeItem(OUTBOX_STORAGE_KEY);
   seen.length = 0;
   online = false;
   asks = false;
 });
-afterAll(() => server.close());
-
-function wrapper() {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
-  return function Wrapper({ children }: { children: ReactNode }) {
-    return <QueryClientProvider client={client}>{children}</QueryClientProvider>;
-  };
-}
+const wrapper = () => testQueryClient().wrapper;
 
 describe("the outbox", () => {
   it("sends an entry made offline at T, and sent at T + 60 s, with happenedAt T and the same key on every try", async () => {

@@ -1,8 +1,7 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { Browser } from "playwright-core";
+import { beforeAll, describe, expect, it } from "vitest";
 import { APP_URL } from "@/tests/support/env";
-import { launchBrowser, newPage, PHONE } from "@/tests/support/browser";
-import { closeTestDb, testDb } from "@/tests/support/db";
+import { newPage, PHONE, browserForFile } from "@/tests/support/browser";
+import { testDb } from "@/tests/support/db";
 import { createOwnGroup, type OwnGroup } from "@/tests/support/own-group";
 
 // Text people type is shown as text: a drive and a drop point named like
@@ -11,16 +10,10 @@ const DRIVE = `<script>window.__cantroveXss = "drive"</script>Cans & "Co" drive`
 const POINT = `<img src=x onerror="window.__cantroveXss='point'">Porch`;
 
 let g: OwnGroup;
-let browser: Browser;
+const browser = browserForFile();
 
 beforeAll(async () => {
   g = await createOwnGroup(testDb(), "escaping", { drive: DRIVE, dropPoint: POINT });
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await closeTestDb();
 });
 
 describe("typed text is shown escaped", () => {
@@ -32,7 +25,7 @@ describe("typed text is shown escaped", () => {
   });
 
   it("in chromium the names read literally and no script of theirs runs", async () => {
-    const { context, page } = await newPage(browser, PHONE);
+    const { context, page } = await newPage(browser(), PHONE);
     try {
       await page.goto(`/drives/${g.driveSlug}`);
       await expect.poll(() => page.getByText(POINT, { exact: false }).count(), { timeout: 15_000 }).toBeGreaterThan(0);

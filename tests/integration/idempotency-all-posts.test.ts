@@ -1,19 +1,17 @@
 import { randomUUID } from "node:crypto";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { closeTestDb, testDb } from "@/tests/support/db";
-import { freshGroup, type FreshGroup } from "@/tests/support/ledger";
+import { beforeAll, describe, expect, it } from "vitest";
+import { testDb } from "@/tests/support/db";
+import { freshGroupForFile } from "@/tests/support/ledger";
 import type { ApiClient } from "@/tests/support/http";
 
 // CONTRACT.md: every POST accepts an Idempotency-Key — a repeat with the same
 // key and body returns the first answer and changes nothing; the same key with
 // another body is 409. Checked here on POSTs that are not ledger writes.
-let g: FreshGroup;
+const g = freshGroupForFile("idem-posts");
 let org: ApiClient;
 beforeAll(async () => {
-  g = await freshGroup("idem-posts");
   org = await g.client("organiser");
 });
-afterAll(closeTestDb);
 
 const drivesWithSlug = async (slug: string) => Number((await testDb()("drives").where({ group_id: g.groupId, slug }).count({ n: "*" }).first())?.n);
 const driveBody = (slug: string) => ({ name: "Idempotent spring drive", slug, startsOn: "2027-03-01", endsOn: "2027-04-30", isPublic: false });

@@ -1,19 +1,17 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { closeTestDb, testDb } from "@/tests/support/db";
-import { freshGroup, type FreshGroup } from "@/tests/support/ledger";
+import { beforeAll, describe, expect, it } from "vitest";
+import { testDb } from "@/tests/support/db";
+import { freshGroupForFile } from "@/tests/support/ledger";
 import type { ApiClient } from "@/tests/support/http";
 
 // An entry made offline at T and sent later is recorded at T (happenedAt), within
 // bounds: not more than 5 minutes ahead of the server, not before the drive started.
-let g: FreshGroup;
+const g = freshGroupForFile("entry-time");
 let vol: ApiClient;
 type Line = { movementId: string; occurredAt: string; recordedAt: string };
 
 beforeAll(async () => {
-  g = await freshGroup("entry-time");
   vol = await g.client("volunteer");
 });
-afterAll(closeTestDb);
 
 describe("happenedAt", () => {
   it("records a haul, a sort and a processing step entered at T and sent at T + 60 s at T", async () => {

@@ -1,18 +1,15 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { closeTestDb } from "@/tests/support/db";
-import { freshGroup, type FreshGroup } from "@/tests/support/ledger";
+import { beforeAll, describe, expect, it } from "vitest";
+import { freshGroupForFile } from "@/tests/support/ledger";
 import type { ApiClient } from "@/tests/support/http";
 
 type Haul = { id: string; estimatedCans: number; estimate: { method: string; countedHauls: number; calibrated: boolean } };
 
 // The haul estimate through the API, in a group with no counted hauls yet.
-let g: FreshGroup;
+const g = freshGroupForFile("estimate");
 let vol: ApiClient;
 beforeAll(async () => {
-  g = await freshGroup("estimate");
   vol = await g.client("volunteer");
 });
-afterAll(closeTestDb);
 
 const haul = (body: object) => vol.json<Haul>("POST", `/api/drives/${g.driveId}/hauls`, { dropPointId: g.dropPointIds[0], ...body });
 

@@ -1,19 +1,17 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { closeTestDb, testDb } from "@/tests/support/db";
-import { demoFixture, type DemoFixture } from "@/tests/support/fixtures";
+import { beforeAll, describe, expect, it } from "vitest";
+import { testDb } from "@/tests/support/db";
+import { demoFixtureForFile } from "@/tests/support/fixtures";
 import { DEMO } from "@/tests/support/env";
 import { signedIn, type ApiClient } from "@/tests/support/http";
 
 // Another group's records are 404 everywhere, never 403, and nothing is written.
-let f: DemoFixture;
+const f = demoFixtureForFile();
 let other: ApiClient;
 let demoMovementId: string;
 beforeAll(async () => {
-  f = await demoFixture();
   other = await signedIn(DEMO.otherOrganiser);
   demoMovementId = (await testDb()("movements").where({ drive_id: f.demoDriveId, kind: "processing" }).first()).id;
 });
-afterAll(closeTestDb);
 
 describe("another group's organiser", () => {
   it("gets 404 for the demo drive's stock, hauls, sorts, processing, heaters and entries", async () => {

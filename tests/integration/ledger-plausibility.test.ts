@@ -1,7 +1,7 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { randomUUID } from "node:crypto";
-import { closeTestDb, testDb } from "@/tests/support/db";
-import { freshGroup, type FreshGroup } from "@/tests/support/ledger";
+import { testDb } from "@/tests/support/db";
+import { freshGroupForFile } from "@/tests/support/ledger";
 import type { ApiClient } from "@/tests/support/http";
 
 // Unusual numbers are asked about, not refused: 409 with the question, and the
@@ -10,7 +10,7 @@ import type { ApiClient } from "@/tests/support/http";
 type Asked = { error: { code: string; message: string; confirm: string; confirmField: string; unusual: { check: string; value: number; expected: number }[] } };
 type Stock = { stages: Record<string, number> };
 
-let g: FreshGroup;
+const g = freshGroupForFile("plausible");
 let vol: ApiClient;
 const stock = async () => (await vol.json<Stock>("GET", `/api/drives/${g.driveId}/stock`)).body;
 const haul = async (body: Record<string, unknown>) => {
@@ -20,10 +20,8 @@ const haul = async (body: Record<string, unknown>) => {
 };
 
 beforeAll(async () => {
-  g = await freshGroup("plausible");
   vol = await g.client("volunteer");
 });
-afterAll(closeTestDb);
 
 describe("a sort far from its hauls' estimate", () => {
   it("asks about 1,000,000 cans from one bag, records nothing, and records it once confirmed under a new key", async () => {

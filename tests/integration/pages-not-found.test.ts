@@ -1,14 +1,14 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { ApiClient, signedIn } from "@/tests/support/http";
+import { beforeAll, describe, expect, it } from "vitest";
+import { ApiClient, signedInAll } from "@/tests/support/http";
 import { DEMO } from "@/tests/support/env";
-import { closeTestDb, testDb } from "@/tests/support/db";
-import { demoFixture, type DemoFixture } from "@/tests/support/fixtures";
+import { testDb } from "@/tests/support/db";
+import { demoFixtureForFile } from "@/tests/support/fixtures";
 import { createOwnGroup } from "@/tests/support/own-group";
 
 // A page of another group's record is the not-found page with a real 404
 // status (RFC 9110 §15.5.5), not a 200 that only looks like one: the answer
 // must say nothing about whether the record exists.
-let f: DemoFixture;
+const f = demoFixtureForFile();
 let demoRunId: string;
 let demoRunNotes: string;
 let privateSlug: string;
@@ -17,7 +17,6 @@ let elsewhere: ApiClient;
 let organiser: ApiClient;
 
 beforeAll(async () => {
-  f = await demoFixture();
   const db = testDb();
   // The seeded run (the first), whose notes only its own page shows.
   const run = await db("pickup_runs").where({ group_id: f.demoGroupId }).orderBy("created_at").first();
@@ -28,9 +27,8 @@ beforeAll(async () => {
   await db("drives").where({ id: own.driveId }).update({ is_public: false });
   privateSlug = own.driveSlug;
   privateName = (await db("drives").where({ id: own.driveId }).first()).name;
-  [elsewhere, organiser] = await Promise.all([signedIn(DEMO.otherOrganiser), signedIn(DEMO.organiser)]);
+  [elsewhere, organiser] = await signedInAll(DEMO.otherOrganiser, DEMO.organiser);
 });
-afterAll(closeTestDb);
 
 // The not-found page's words ride in every page's React payload (its boundary
 // is part of the tree), so they prove nothing; what does is the status and

@@ -1,4 +1,4 @@
-import { testDb } from "./db";
+import { forTheFile, testDb } from "./db";
 
 // Ids of the demo scenario's records, looked up by their invented names so
 // tests never hard-code generated ids.
@@ -38,3 +38,6 @@ export async function demoFixture(): Promise<DemoFixture> {
     otherHeaterId: otherHeater.id,
   };
 }
+
+/** The demo fixture for the whole test file (see forTheFile in db.ts). */
+export const demoFixtureForFile = (): DemoFixture => forTheFile(demoFixture);

@@ -1,5 +1,5 @@
 import { randomUUID } from "node:crypto";
-import { testDb } from "./db";
+import { forTheFile, testDb } from "./db";
 import { signedIn, type ApiClient } from "./http";
 
 // A group of its own for a ledger test: its balances and calibration start at
@@ -61,6 +61,9 @@ export async function freshGroup(label = "ledger"): Promise<FreshGroup> {
     },
   };
 }
+
+/** A fresh group for the whole test file (see forTheFile in db.ts). */
+export const freshGroupForFile = (label: string): FreshGroup => forTheFile(() => freshGroup(label));
 
 /**
  * Hauls 2 bags at a drop point and sorts them to exactly `good` good cans; returns the two bodies.

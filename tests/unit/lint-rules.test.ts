@@ -50,6 +50,32 @@ describe("the linter's rules of shape", { timeout: 60_000 }, () => {
     expect(await rulesFor("lib/sample-queries.ts", 'import "server-only";\n\nexport const q = 1;\n')).toEqual([]);
   });
 
+  it("refuses a computation that reaches the database or Next.js", async () => {
+    expect(await rulesFor("lib/heaters/can-grid.ts", 'import { db } from "@/lib/db";\n\nexport const d = db;\n')).toContain("no-restricted-imports");
+    expect(await rulesFor("lib/drives/progress.ts", 'import { headers } from "next/headers";\n\nexport const h = headers;\n')).toContain("no-restricted-imports");
+    // The same import outside the list of computations is allowed.
+    expect(await rulesFor("lib/drives/lint-sample.ts", 'import { db } from "@/lib/db";\n\nexport const d = db;\n')).toEqual([]);
+  });
+
+  it("refuses a component that calls fetch itself instead of the one fetch wrapper", async () => {
+    expect(await rulesFor("components/lint-sample.tsx", 'export const load = () => fetch("/api/me");\n')).toContain("no-restricted-globals");
+    expect(await rulesFor("components/lint-sample.tsx", 'import { fetchJson } from "@/lib/api/client";\n\nexport const load = () => fetchJson("/api/me");\n')).toEqual([]);
+  });
+
+  it("refuses a switched-off rule without a reason, or for a whole file", async () => {
+    const line = "export const f = (x: any) => x;\n";
+    expect(await rulesFor("lib/lint-sample.ts", `// eslint-disable-next-line @typescript-eslint/no-explicit-any\n${line}`)).toContain("cantrove/disable-with-reason");
+    expect(await rulesFor("lib/lint-sample.ts", `/* eslint-disable @typescript-eslint/no-explicit-any -- reason */\n${line}`)).toContain("cantrove/disable-with-reason");
+    expect(await rulesFor("lib/lint-sample.ts", `// eslint-disable-next-line @typescript-eslint/no-explicit-any -- why it is fine here\n${line}`)).toEqual([]);
+  });
+
+  it("refuses a write to the ledger's totals and a sum over ledger lines outside the database functions", async () => {
+    const head = 'import { db } from "@/lib/db";\n\n';
+    expect(await rulesFor("lib/lint-sample.ts", `${head}export const w = () => db("stage_balances").where({ stage: "good" }).update({ quantity: 1 });\n`)).toContain("no-restricted-syntax");
+    expect(await rulesFor("lib/lint-sample.ts", `${head}export const s = () => db("ledger_lines as l").sum("quantity");\n`)).toContain("no-restricted-syntax");
+    expect(await rulesFor("lib/lint-sample.ts", `${head}export const r = () => db("stage_balances").where({ stage: "good" }).first("quantity");\n`)).toEqual([]);
+  });
+
   it("refuses an import cycle", async () => {
     // Both files exist before either is linted: the import plugin keeps what it resolved for a while.
     writeSample("lib/cycle/b.ts", 'import { a } from "./a";\n\nexport const b = (): unknown => a;\n');

@@ -1,6 +1,6 @@
 "use client";
 
-import { useState } from "react";
+import { useState, type ReactNode } from "react";
 import { Button } from "@/components/ui/button";
 import { FILL_SHAPE_LABEL, fillShape, LEVEL_LABEL } from "@/lib/drives/fill";
 import type { PublicDropPointView } from "@/lib/drives/types";
@@ -18,7 +18,19 @@ export function sortByDistance(points: Located[], from: { lat: number; lng: numb
   return points.map((p) => ({ ...p, km: haversineKm(from, p) })).sort((a, b) => (a.km ?? 0) - (b.km ?? 0));
 }
 
-export function DropPointList({ slug, points, selected }: { slug: string; points: PublicDropPointView[]; selected: string | null }) {
+export function DropPointList({
+  slug,
+  points,
+  selected,
+  links,
+  asOf,
+}: {
+  slug: string;
+  points: PublicDropPointView[];
+  selected: string | null;
+  links: Record<string, ReactNode>;
+  asOf: ReactNode;
+}) {
   const [here, setHere] = useState<{ lat: number; lng: number } | null>(null);
   const [locating, setLocating] = useState(false);
   const [locError, setLocError] = useState<string | null>(null);
@@ -54,6 +66,7 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
           {locating ? "Finding you…" : here ? "Update my location" : "Sort by distance from me"}
         </Button>
       </div>
+      {asOf}
       {locError ? <p role="status" className="text-sun">{locError}</p> : null}
       {numbered.length === 0 ? <p>No drop points are open right now. Check back soon.</p> : null}
       <ol className="flex flex-col gap-3">
@@ -69,11 +82,11 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
                 <span className="mr-2 inline-flex h-7 w-7 items-center justify-center rounded-full bg-ember text-sm text-white" aria-hidden="true">
                   {p.number}
                 </span>
-                {p.name}
+                <span className="[overflow-wrap:anywhere]">{p.name}</span>
               </h3>
               {p.km !== undefined ? <span className="font-semibold">{p.km < 1 ? `${Math.round(p.km * 1000)}\u00a0m` : `${p.km.toFixed(1)}\u00a0km`} away</span> : null}
             </div>
-            {p.address ? <p>{p.address}</p> : null}
+            {p.address ? <p className="[overflow-wrap:anywhere]">{p.address}</p> : null}
             <p>
               <span className="font-semibold">Open:</span> {p.hours || "Ask the organisers"}
             </p>
@@ -87,11 +100,12 @@ export function DropPointList({ slug, points, selected }: { slug: string; points
             {p.photos.length ? (
               <div className="mt-2 flex gap-2 overflow-x-auto">
                 {p.photos.map((url) => (
-                  // eslint-disable-next-line @next/next/no-img-element
+                  // eslint-disable-next-line @next/next/no-img-element -- photos come from the upload host at their own size; next/image would proxy them through the app
                   <img key={url} src={url} alt={`Photo of the bin at ${p.name}`} className="h-28 w-auto rounded-lg border border-paper-edge" />
                 ))}
               </div>
             ) : null}
+            {links[p.id]}
             <BinReport slug={slug} point={p} />
           </li>
         ))}

@@ -12,12 +12,12 @@ export type PledgeChoice = { id: string; name: string };
 // JavaScript has arrived (or with none at all; the page then comes back with
 // the answer), and once React runs it sends without leaving the page. The
 // server checks it with the pledge schema (zod stays out of this public page).
-export function PledgeForm({ slug, points }: { slug: string; points: PledgeChoice[] }) {
+export function PledgeForm({ slug, points, initialPoint = "" }: { slug: string; points: PledgeChoice[]; initialPoint?: string }) {
   const [round, setRound] = useState(0);
-  return <OnePledge key={round} slug={slug} points={points} again={() => setRound((n) => n + 1)} />;
+  return <OnePledge key={round} slug={slug} points={points} initialPoint={initialPoint} again={() => setRound((n) => n + 1)} />;
 }
 
-function OnePledge({ slug, points, again }: { slug: string; points: PledgeChoice[]; again: () => void }) {
+function OnePledge({ slug, points, initialPoint, again }: { slug: string; points: PledgeChoice[]; initialPoint: string; again: () => void }) {
   const [state, send, pending] = useActionState<ActionState<PledgeAnswer>, FormData>(pledgeAction, IDLE);
   const errors = state.fields;
 
@@ -44,7 +44,7 @@ function OnePledge({ slug, points, again }: { slug: string; points: PledgeChoice
         label="Drop point"
         placeholder="Choose a drop point…"
         options={points.map((p) => ({ value: p.id, label: p.name }))}
-        defaultValue={typed(state, "dropPointId")}
+        defaultValue={typed(state, "dropPointId", initialPoint)}
         error={errors.dropPointId}
       />
       <div className="grid gap-2 sm:grid-cols-2">

@@ -1,6 +1,7 @@
 import { randomBytes } from "node:crypto";
 import { testDb } from "@/tests/support/db";
 import { DEMO } from "@/tests/support/env";
+import { everyone, expects, row } from "./row";
 import type { AuthzRow } from "./types";
 
 // Records the rows below act on: one open invitation in each group, and the
@@ -28,119 +29,37 @@ async function accountIds() {
 
 const ids = await accountIds();
 
-const ORGANISERS_ONLY = { anonymous: 401, volunteer: 403, builder: 403 } as const;
-const ANYONE_INVALID = { anonymous: 422, volunteer: 422, builder: 422, organiser: 422, otherOrganiser: 422 } as const;
+const organisersOnly = (organiser: number, otherOrganiser: number) => expects(401, 403, 403, organiser, otherOrganiser);
+const ANYONE_INVALID = everyone(422);
 
 export const rows: AuthzRow[] = [
-  {
-    route: "app/api/signup/route.ts",
-    method: "POST",
-    path: () => "/api/signup",
+  row("POST", "signup", "/api/signup", ANYONE_INVALID, {
     body: () => ({ name: "", email: "not-an-email", password: "short", groupName: "" }),
-    expect: ANYONE_INVALID,
     note: "anyone may start a group; the invalid body shows the input is checked and nothing is written",
-  },
-  {
-    route: "app/api/invitations/route.ts",
-    method: "GET",
-    path: () => "/api/invitations",
-    expect: { ...ORGANISERS_ONLY, organiser: 200, otherOrganiser: 200 },
-    note: "each organiser sees their own group's open invitations",
-  },
-  {
-    route: "app/api/invitations/route.ts",
-    method: "POST",
-    path: () => "/api/invitations",
-    body: () => ({ email: "not-an-email", role: "captain" }),
-    expect: { ...ORGANISERS_ONLY, organiser: 422, otherOrganiser: 422 },
-  },
-  {
-    route: "app/api/invitations/[id]/route.ts",
-    method: "DELETE",
-    path: () => `/api/invitations/${ids.otherInvitation}`,
-    expect: { ...ORGANISERS_ONLY, organiser: 404, otherOrganiser: 200 },
+  }),
+  row("GET", "invitations", "/api/invitations", organisersOnly(200, 200), { note: "each organiser sees their own group's open invitations" }),
+  row("POST", "invitations", "/api/invitations", organisersOnly(422, 422), { body: () => ({ email: "not-an-email", role: "captain" }) }),
+  row("DELETE", "invitations/[id]", `/api/invitations/${ids.otherInvitation}`, organisersOnly(404, 200), {
     note: "the other group's invitation: the demo organiser gets 404 (filtered by group), its own organiser withdraws it",
-  },
-  {
-    route: "app/api/invitations/[id]/resend/route.ts",
-    method: "POST",
-    path: () => `/api/invitations/${ids.demoInvitation}/resend`,
-    expect: { ...ORGANISERS_ONLY, organiser: 200, otherOrganiser: 404 },
-  },
-  {
-    route: "app/api/invitations/accept/route.ts",
-    method: "POST",
-    path: () => "/api/invitations/accept",
+  }),
+  row("POST", "invitations/[id]/resend", `/api/invitations/${ids.demoInvitation}/resend`, organisersOnly(200, 404)),
+  row("POST", "invitations/accept", "/api/invitations/accept", ANYONE_INVALID, {
     body: () => ({ token: "too-short" }),
-    expect: ANYONE_INVALID,
     note: "the token is the credential, so the door is open to anyone holding one",
-  },
-  {
-    route: "app/api/members/route.ts",
-    method: "GET",
-    path: () => "/api/members",
-    expect: { ...ORGANISERS_ONLY, organiser: 200, otherOrganiser: 200 },
-  },
-  {
-    route: "app/api/members/[userId]/route.ts",
-    method: "PATCH",
-    path: () => `/api/members/${ids.demoVolunteer}`,
-    body: () => ({ role: "captain" }),
-    expect: { ...ORGANISERS_ONLY, organiser: 422, otherOrganiser: 404 },
-  },
-  {
-    route: "app/api/members/[userId]/route.ts",
-    method: "DELETE",
-    path: () => `/api/members/${ids.demoOrganiser}`,
-    expect: { ...ORGANISERS_ONLY, organiser: 409, otherOrganiser: 404 },
+  }),
+  row("GET", "members", "/api/members", organisersOnly(200, 200)),
+  row("PATCH", "members/[userId]", `/api/members/${ids.demoVolunteer}`, organisersOnly(422, 404), { body: () => ({ role: "captain" }) }),
+  row("DELETE", "members/[userId]", `/api/members/${ids.demoOrganiser}`, organisersOnly(409, 404), {
     note: "the demo group's only organiser: removing them would leave the group without one",
-  },
-  {
-    route: "app/api/password-reset/route.ts",
-    method: "POST",
-    path: () => "/api/password-reset",
-    body: () => ({ email: "not-an-email" }),
-    expect: ANYONE_INVALID,
-  },
-  {
-    route: "app/api/password-reset/confirm/route.ts",
-    method: "POST",
-    path: () => "/api/password-reset/confirm",
-    body: () => ({ token: "too-short", password: "x" }),
-    expect: ANYONE_INVALID,
-  },
-  {
-    route: "app/api/verify-email/route.ts",
-    method: "POST",
-    path: () => "/api/verify-email",
-    body: () => ({ token: "too-short" }),
-    expect: ANYONE_INVALID,
-  },
-  {
-    route: "app/api/verify-email/resend/route.ts",
-    method: "POST",
-    path: () => "/api/verify-email/resend",
-    body: () => ({ email: "not-an-email" }),
-    expect: ANYONE_INVALID,
-  },
-  {
-    route: "app/api/me/groups/route.ts",
-    method: "GET",
-    path: () => "/api/me/groups",
-    expect: { anonymous: 401, volunteer: 200, builder: 200, organiser: 200, otherOrganiser: 200 },
-  },
-  {
-    route: "app/api/group/look/route.ts",
-    method: "GET",
-    path: () => "/api/group/look",
-    expect: { anonymous: 401, volunteer: 200, builder: 200, organiser: 200, otherOrganiser: 200 },
-  },
-  {
-    route: "app/api/group/look/route.ts",
-    method: "PUT",
-    path: () => "/api/group/look",
+  }),
+  row("POST", "password-reset", "/api/password-reset", ANYONE_INVALID, { body: () => ({ email: "not-an-email" }) }),
+  row("POST", "password-reset/confirm", "/api/password-reset/confirm", ANYONE_INVALID, { body: () => ({ token: "too-short", password: "x" }) }),
+  row("POST", "verify-email", "/api/verify-email", ANYONE_INVALID, { body: () => ({ token: "too-short" }) }),
+  row("POST", "verify-email/resend", "/api/verify-email/resend", ANYONE_INVALID, { body: () => ({ email: "not-an-email" }) }),
+  row("GET", "me/groups", "/api/me/groups", expects(401, 200, 200, 200, 200)),
+  row("GET", "group/look", "/api/group/look", expects(401, 200, 200, 200, 200)),
+  row("PUT", "group/look", "/api/group/look", organisersOnly(422, 422), {
     body: () => ({ timeZone: "Not/AZone", locale: "xx", units: "cubits" }),
-    expect: { ...ORGANISERS_ONLY, organiser: 422, otherOrganiser: 422 },
-    note: "Each organiser acts on their own group only; the invalid body keeps every group's look as it is.",
-  },
+    note: "each organiser acts on their own group only; the invalid body keeps every group's look as it is",
+  }),
 ];

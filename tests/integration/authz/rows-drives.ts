@@ -1,96 +1,44 @@
+import { everyone, expects, row } from "./row";
 import type { AuthzRow } from "./types";
 
 // Drives, drop points and the public drive endpoints. Mutations send an
 // invalid body, so allowed callers get 422 and nothing is written; another
 // group's drive or drop point is 404 before the body is read.
-const organiserOnly = { anonymous: 401, volunteer: 403, builder: 403, organiser: 422, otherOrganiser: 404 };
-const anyone = { anonymous: 200, volunteer: 200, builder: 200, organiser: 200, otherOrganiser: 200 };
+const organiserOnly = expects(401, 403, 403, 422, 404);
+const anyone = everyone(200);
 
 export const rows: AuthzRow[] = [
-  {
-    route: "app/api/drives/route.ts",
-    method: "POST",
-    path: () => "/api/drives",
+  row("POST", "drives", "/api/drives", expects(401, 403, 403, 422, 422), {
     body: () => ({ name: "" }),
-    expect: { anonymous: 401, volunteer: 403, builder: 403, organiser: 422, otherOrganiser: 422 },
     note: "each organiser creates drives in their own group",
-  },
-  {
-    route: "app/api/drives/[id]/route.ts",
-    method: "GET",
-    path: (f) => `/api/drives/${f.demoDriveId}`,
-    expect: { anonymous: 401, volunteer: 200, builder: 200, organiser: 200, otherOrganiser: 404 },
-  },
-  {
-    route: "app/api/drives/[id]/route.ts",
-    method: "PUT",
-    path: (f) => `/api/drives/${f.demoDriveId}`,
-    body: () => ({ name: "" }),
-    expect: organiserOnly,
-  },
-  {
-    route: "app/api/drives/[id]/drop-points/route.ts",
-    method: "GET",
-    path: (f) => `/api/drives/${f.demoDriveId}/drop-points`,
-    expect: { anonymous: 401, volunteer: 403, builder: 403, organiser: 200, otherOrganiser: 404 },
+  }),
+  row("GET", "drives/[id]", (f) => `/api/drives/${f.demoDriveId}`, expects(401, 200, 200, 200, 404)),
+  row("PUT", "drives/[id]", (f) => `/api/drives/${f.demoDriveId}`, organiserOnly, { body: () => ({ name: "" }) }),
+  row("GET", "drives/[id]/drop-points", (f) => `/api/drives/${f.demoDriveId}/drop-points`, expects(401, 403, 403, 200, 404), {
     note: "holds the hosts' contact details, so organisers only",
-  },
-  {
-    route: "app/api/drives/[id]/drop-points/route.ts",
-    method: "POST",
-    path: (f) => `/api/drives/${f.demoDriveId}/drop-points`,
+  }),
+  row("POST", "drives/[id]/drop-points", (f) => `/api/drives/${f.demoDriveId}/drop-points`, organiserOnly, {
     body: () => ({ name: "x", lat: 200, lng: 0, capacityBags: 0 }),
-    expect: organiserOnly,
-  },
-  {
-    route: "app/api/drop-points/[id]/route.ts",
-    method: "PATCH",
-    path: (f) => `/api/drop-points/${f.demoDropPointId}`,
-    body: () => ({ lat: 95 }),
-    expect: organiserOnly,
-  },
-  {
-    route: "app/api/drop-points/[id]/fill-clear/route.ts",
-    method: "POST",
-    path: (f) => `/api/drop-points/${f.demoDropPointId}/fill-clear`,
+  }),
+  row("PATCH", "drop-points/[id]", (f) => `/api/drop-points/${f.demoDropPointId}`, organiserOnly, { body: () => ({ lat: 95 }) }),
+  row("POST", "drop-points/[id]/fill-clear", (f) => `/api/drop-points/${f.demoDropPointId}/fill-clear`, organiserOnly, {
     body: () => ({ asOf: "not a time" }),
-    expect: organiserOnly,
-  },
-  {
-    route: "app/api/public/drives/[slug]/route.ts",
-    method: "GET",
-    path: (f) => `/api/public/drives/${f.demoDriveSlug}`,
-    expect: anyone,
-  },
-  {
-    route: "app/api/public/drives/[slug]/drop-points/route.ts",
-    method: "GET",
-    path: (f) => `/api/public/drives/${f.demoDriveSlug}/drop-points`,
-    expect: anyone,
-  },
-  {
-    route: "app/api/public/drives/[slug]/pledges/route.ts",
-    method: "POST",
-    path: (f) => `/api/public/drives/${f.demoDriveSlug}/pledges`,
+  }),
+  row("GET", "public/drives/[slug]", (f) => `/api/public/drives/${f.demoDriveSlug}`, anyone),
+  row("GET", "public/drives/[slug]/drop-points", (f) => `/api/public/drives/${f.demoDriveSlug}/drop-points`, anyone),
+  row("POST", "public/drives/[slug]/pledges", (f) => `/api/public/drives/${f.demoDriveSlug}/pledges`, everyone(422), {
     body: () => ({ bags: 0 }),
-    expect: { anonymous: 422, volunteer: 422, builder: 422, organiser: 422, otherOrganiser: 422 },
     note: "anyone may pledge; the invalid body writes nothing",
-  },
-  {
-    route: "app/api/public/drives/[slug]/drop-points/[id]/fill-reports/route.ts",
-    method: "POST",
-    path: (f) => `/api/public/drives/${f.demoDriveSlug}/drop-points/${f.demoDropPointId}/fill-reports`,
+  }),
+  row("POST", "public/drives/[slug]/drop-points/[id]/fill-reports", (f) => `/api/public/drives/${f.demoDriveSlug}/drop-points/${f.demoDropPointId}/fill-reports`, everyone(422), {
     body: () => ({ level: 33 }),
-    expect: { anonymous: 422, volunteer: 422, builder: 422, organiser: 422, otherOrganiser: 422 },
     note: "anyone at the bin may report; the invalid body writes nothing",
-  },
+  }),
 ];
 
-rows.push({
-  route: "app/api/uploadthing/route.ts",
-  method: "POST",
-  path: () => "/api/uploadthing?actionType=upload&slug=fillReportPhoto",
-  body: () => ({ files: [{ name: "a.png", size: 10, type: "image/png", lastModified: 0 }], input: { fillReportId: "00000000-0000-4000-8000-000000000000" } }),
-  expect: { anonymous: [400, 404], volunteer: [400, 404], builder: [400, 404], organiser: [400, 404], otherOrganiser: [400, 404] },
-  note: "a fill report photo only attaches to a report made in the last 15 minutes; this one does not exist",
-});
+rows.push(
+  row("POST", "uploadthing", "/api/uploadthing?actionType=upload&slug=fillReportPhoto", everyone([400, 404]), {
+    body: () => ({ files: [{ name: "a.png", size: 10, type: "image/png", lastModified: 0 }], input: { fillReportId: "00000000-0000-4000-8000-000000000000" } }),
+    note: "a fill report photo only attaches to a report made in the last 15 minutes; this one does not exist",
+  }),
+);

@@ -1,4 +1,5 @@
 import { testDb } from "@/tests/support/db";
+import { everyone, expects, row } from "./row";
 import type { AuthzRow } from "./types";
 
 // A unit the demo organiser builds, counted against no drive so no target or
@@ -20,70 +21,33 @@ const organisersUnit = await organisersUnitId();
 
 // Heater planning and units. Mutations send invalid bodies on purpose: allowed
 // callers get 422 and nothing is written.
-const allAnswer = (status: number) => ({ anonymous: status, volunteer: status, builder: status, organiser: status, otherOrganiser: status });
 
 export const rows: AuthzRow[] = [
-  {
-    route: "app/api/plan/can-grid/route.ts",
-    method: "POST",
-    path: () => "/api/plan/can-grid",
-    body: () => ({ glazingWidth: -1 }),
-    expect: allAnswer(422),
-    note: "the planner works without an account",
-  },
-  {
-    route: "app/api/plan/heat-output/route.ts",
-    method: "POST",
-    path: () => "/api/plan/heat-output",
+  row("POST", "plan/can-grid", "/api/plan/can-grid", everyone(422), { body: () => ({ glazingWidth: -1 }), note: "the planner works without an account" }),
+  row("POST", "plan/heat-output", "/api/plan/heat-output", everyone(422), {
     body: () => ({ apertureAreaM2: 0 }),
-    expect: allAnswer(422),
     note: "the planner works without an account",
-  },
-  {
-    route: "app/api/heaters/route.ts",
-    method: "POST",
-    path: () => "/api/heaters",
+  }),
+  row("POST", "heaters", "/api/heaters", expects(401, 403, 422, 422, 422), {
     body: () => ({ name: "" }),
-    expect: { anonymous: 401, volunteer: 403, builder: 422, organiser: 422, otherOrganiser: 422 },
     note: "the other group's organiser may save to their own drives; the body is invalid for everyone",
-  },
-  {
-    route: "app/api/heaters/[id]/state/route.ts",
-    method: "POST",
-    path: (f) => `/api/heaters/${f.demoHeaterId}/state`,
-    body: () => ({ state: "scrapped" }),
-    expect: { anonymous: 401, volunteer: 403, builder: 422, organiser: 422, otherOrganiser: 404 },
-  },
+  }),
+  row("POST", "heaters/[id]/state", (f) => `/api/heaters/${f.demoHeaterId}/state`, expects(401, 403, 422, 422, 404), { body: () => ({ state: "scrapped" }) }),
 ];
 
-rows.push({
-  route: "app/api/heaters/[id]/claim-moves/route.ts",
-  method: "POST",
-  path: (f) => `/api/heaters/${f.demoHeaterId}/claim-moves`,
-  body: () => ({ quantity: -1 }),
-  expect: { anonymous: 401, volunteer: 403, builder: 403, organiser: 422, otherOrganiser: 404 },
-  note: "only organisers move claims between units",
-});
+rows.push(
+  row("POST", "heaters/[id]/claim-moves", (f) => `/api/heaters/${f.demoHeaterId}/claim-moves`, expects(401, 403, 403, 422, 404), {
+    body: () => ({ quantity: -1 }),
+    note: "only organisers move claims between units",
+  }),
+);
 
 // Builders act only on the units they build (issue 12, finding 7).
-const othersUnit = { anonymous: 401, volunteer: 403, builder: 403, organiser: 422, otherOrganiser: 404 };
+const othersUnit = expects(401, 403, 403, 422, 404);
+const refusedBuilder = "a unit the organiser builds: the builder is refused before the body is read";
 rows.push(
-  ...(["claims", "releases", "built-in"] as const).map(
-    (what): AuthzRow => ({
-      route: `app/api/heaters/[id]/${what}/route.ts`,
-      method: "POST",
-      path: () => `/api/heaters/${organisersUnit}/${what}`,
-      body: () => ({ quantity: 0 }),
-      expect: othersUnit,
-      note: "a unit the organiser builds: the builder is refused before the body is read",
-    }),
+  ...(["claims", "releases", "built-in"] as const).map((what) =>
+    row("POST", `heaters/[id]/${what}`, `/api/heaters/${organisersUnit}/${what}`, othersUnit, { body: () => ({ quantity: 0 }), note: refusedBuilder }),
   ),
-  {
-    route: "app/api/heaters/[id]/state/route.ts",
-    method: "POST",
-    path: () => `/api/heaters/${organisersUnit}/state`,
-    body: () => ({ state: "scrapped" }),
-    expect: othersUnit,
-    note: "a unit the organiser builds: the builder is refused before the body is read",
-  },
+  row("POST", "heaters/[id]/state", `/api/heaters/${organisersUnit}/state`, othersUnit, { body: () => ({ state: "scrapped" }), note: refusedBuilder }),
 );

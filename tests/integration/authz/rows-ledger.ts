@@ -1,4 +1,5 @@
 import { testDb } from "@/tests/support/db";
+import { everyone, expects, row } from "./row";
 import type { AuthzRow } from "./types";
 
 // The ledger's routes. Mutations send an invalid body, so allowed callers get
@@ -13,85 +14,31 @@ const sortedHaul = await testDb()("hauls as h")
   .first("h.movement_id");
 const movementId: string = sortedHaul?.movement_id ?? "00000000-0000-4000-8000-000000000000";
 
-const signedIn = { anonymous: 401, volunteer: 200, builder: 200, organiser: 200, otherOrganiser: 200 };
-const volunteerWrite = { anonymous: 401, volunteer: 422, builder: 403, organiser: 422, otherOrganiser: 404 };
-const builderWrite = { anonymous: 401, volunteer: 403, builder: 422, organiser: 422, otherOrganiser: 404 };
+const signedIn = expects(401, 200, 200, 200, 200);
+const volunteerWrite = expects(401, 422, 403, 422, 404);
+const builderWrite = expects(401, 403, 422, 422, 404);
 
 export const rows: AuthzRow[] = [
-  {
-    route: "app/api/drives/[id]/stock/route.ts",
-    method: "GET",
-    path: (f) => `/api/drives/${f.demoDriveId}/stock`,
-    expect: { ...signedIn, otherOrganiser: 404 },
-  },
-  {
-    route: "app/api/drives/[id]/hauls/route.ts",
-    method: "GET",
-    path: (f) => `/api/drives/${f.demoDriveId}/hauls?open=1`,
-    expect: { anonymous: 401, volunteer: 200, builder: 403, organiser: 200, otherOrganiser: 404 },
-  },
-  ...(["hauls", "sorts", "processing", "recycling"] as const).map(
-    (what): AuthzRow => ({
-      route: `app/api/drives/[id]/${what}/route.ts`,
-      method: "POST",
-      path: (f) => `/api/drives/${f.demoDriveId}/${what}`,
-      body: () => ({ quantity: -1, bags: -1 }),
-      expect: volunteerWrite,
-    }),
+  row("GET", "drives/[id]/stock", (f) => `/api/drives/${f.demoDriveId}/stock`, expects(401, 200, 200, 200, 404)),
+  row("GET", "drives/[id]/hauls", (f) => `/api/drives/${f.demoDriveId}/hauls?open=1`, expects(401, 200, 403, 200, 404)),
+  ...(["hauls", "sorts", "processing", "recycling"] as const).map((what) =>
+    row("POST", `drives/[id]/${what}`, (f) => `/api/drives/${f.demoDriveId}/${what}`, volunteerWrite, { body: () => ({ quantity: -1, bags: -1 }) }),
   ),
-  {
-    route: "app/api/drives/[id]/stock-counts/route.ts",
-    method: "POST",
-    path: (f) => `/api/drives/${f.demoDriveId}/stock-counts`,
+  row("POST", "drives/[id]/stock-counts", (f) => `/api/drives/${f.demoDriveId}/stock-counts`, expects(401, 403, 403, 422, 404), {
     body: () => ({ counted: {}, expected: {}, reason: "" }),
-    expect: { anonymous: 401, volunteer: 403, builder: 403, organiser: 422, otherOrganiser: 404 },
     note: "a stock count overrides running totals: organisers only",
-  },
-  {
-    route: "app/api/heaters/route.ts",
-    method: "GET",
-    path: () => "/api/heaters",
-    expect: signedIn,
-  },
-  ...(["claims", "releases", "built-in"] as const).map(
-    (what): AuthzRow => ({
-      route: `app/api/heaters/[id]/${what}/route.ts`,
-      method: "POST",
-      path: (f) => `/api/heaters/${f.demoHeaterId}/${what}`,
-      body: () => ({ quantity: 0 }),
-      expect: builderWrite,
-    }),
+  }),
+  row("GET", "heaters", "/api/heaters", signedIn),
+  ...(["claims", "releases", "built-in"] as const).map((what) =>
+    row("POST", `heaters/[id]/${what}`, (f) => `/api/heaters/${f.demoHeaterId}/${what}`, builderWrite, { body: () => ({ quantity: 0 }) }),
   ),
-  {
-    route: "app/api/movements/[id]/reversal/route.ts",
-    method: "POST",
-    path: () => `/api/movements/${movementId}/reversal`,
-    expect: { anonymous: 401, volunteer: 409, builder: 403, organiser: 409, otherOrganiser: 404 },
+  row("POST", "movements/[id]/reversal", `/api/movements/${movementId}/reversal`, expects(401, 409, 403, 409, 404), {
     note: "the volunteer is the author; the builder is neither author nor organiser",
-  },
-  {
-    route: "app/api/ledger/route.ts",
-    method: "GET",
-    path: (f) => `/api/ledger?driveId=${f.demoDriveId}&limit=5`,
-    expect: { anonymous: 401, volunteer: 403, builder: 403, organiser: 200, otherOrganiser: 200 },
+  }),
+  row("GET", "ledger", (f) => `/api/ledger?driveId=${f.demoDriveId}&limit=5`, expects(401, 403, 403, 200, 200), {
     note: "the other organiser sees only their own group's lines (filtered in SQL), none of the demo drive's",
-  },
-  {
-    route: "app/api/ledger/route.ts",
-    method: "GET",
-    path: () => `/api/ledger?mine=1`,
-    expect: signedIn,
-  },
-  {
-    route: "app/api/ledger/export/route.ts",
-    method: "GET",
-    path: (f) => `/api/ledger/export?driveId=${f.demoDriveId}`,
-    expect: { anonymous: 401, volunteer: 403, builder: 403, organiser: 200, otherOrganiser: 200 },
-  },
-  {
-    route: "app/api/public/drives/[slug]/tallies/route.ts",
-    method: "GET",
-    path: (f) => `/api/public/drives/${f.demoDriveSlug}/tallies`,
-    expect: { anonymous: 200, volunteer: 200, builder: 200, organiser: 200, otherOrganiser: 200 },
-  },
+  }),
+  row("GET", "ledger", `/api/ledger?mine=1`, signedIn),
+  row("GET", "ledger/export", (f) => `/api/ledger/export?driveId=${f.demoDriveId}`, expects(401, 403, 403, 200, 200)),
+  row("GET", "public/drives/[slug]/tallies", (f) => `/api/public/drives/${f.demoDriveSlug}/tallies`, everyone(200)),
 ];

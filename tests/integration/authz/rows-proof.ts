@@ -1,11 +1,8 @@
+import { everyone, row } from "./row";
 import type { AuthzRow } from "./types";
 
 export const rows: AuthzRow[] = [
-  {
-    route: "app/api/bench/naive-stock/[id]/route.ts",
-    method: "GET",
-    path: (f) => `/api/bench/naive-stock/${f.demoDriveId}`,
-    expect: { anonymous: 404, volunteer: 404, builder: 404, organiser: 404, otherOrganiser: 404 },
+  row("GET", "bench/naive-stock/[id]", (f) => `/api/bench/naive-stock/${f.demoDriveId}`, everyone(404), {
     note: "the benchmark's naive reference exists only when the server starts with CANTROVE_BENCH=1",
-  },
+  }),
 ];

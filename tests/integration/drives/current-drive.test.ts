@@ -1,14 +1,14 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import type { ApiClient } from "@/tests/support/http";
-import { closeTestDb, testDb } from "@/tests/support/db";
-import { demoFixture, type DemoFixture } from "@/tests/support/fixtures";
+import { testDb } from "@/tests/support/db";
+import { demoFixtureForFile } from "@/tests/support/fixtures";
 import { addDrive, dayFromToday, freshGroup, type FreshGroup } from "@/tests/support/ledger";
 
 // A group with a drive running today and a newer one that starts in three
 // months: every page where cans are entered opens on the running one until the
 // person chooses another; the choice is kept per person (PUT /api/me/drive).
 let g: FreshGroup;
-let f: DemoFixture;
+const f = demoFixtureForFile();
 let futureId: string;
 let volunteer: ApiClient;
 let organiser: ApiClient;
@@ -19,14 +19,12 @@ const futureStart = dayFromToday(90);
 beforeAll(async () => {
   const db = testDb();
   g = await freshGroup("current-drive");
-  f = await demoFixture();
   await db("drives").where({ id: g.driveId }).update({ name: runningName, starts_on: dayFromToday(-20), ends_on: dayFromToday(40) });
   // Newer in every way the old pages sorted by: starts and ends later, created later, has a drop point.
   futureId = await addDrive(g, { name: futureName, startsOn: futureStart, endsOn: dayFromToday(180) });
   volunteer = await g.client("volunteer");
   organiser = await g.client("organiser");
 });
-afterAll(closeTestDb);
 
 async function html(client: ApiClient, path: string): Promise<string> {
   const res = await client.get(path);

@@ -1,20 +1,18 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { signedIn, type ApiClient } from "@/tests/support/http";
 import { DEMO } from "@/tests/support/env";
-import { closeTestDb, testDb } from "@/tests/support/db";
-import { demoFixture, type DemoFixture } from "@/tests/support/fixtures";
+import { testDb } from "@/tests/support/db";
+import { demoFixtureForFile } from "@/tests/support/fixtures";
 
 type Err = { error: { code: string; message: string; fields?: Record<string, string> } };
 
 let organiser: ApiClient;
-let f: DemoFixture;
+const f = demoFixtureForFile();
 const tag = Date.now().toString(36);
 
 beforeAll(async () => {
   organiser = await signedIn(DEMO.organiser);
-  f = await demoFixture();
 });
-afterAll(closeTestDb);
 
 const drive = (over: Record<string, unknown> = {}) => ({
   name: "Larkhollow Spring Tidy Drive",

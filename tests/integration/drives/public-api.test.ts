@@ -1,16 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { ApiClient } from "@/tests/support/http";
-import { closeTestDb, testDb } from "@/tests/support/db";
-import { demoFixture, type DemoFixture } from "@/tests/support/fixtures";
+import { testDb } from "@/tests/support/db";
+import { demoFixtureForFile } from "@/tests/support/fixtures";
 import { freshGroup, haulAndSort } from "@/tests/support/ledger";
 import { DEMO_DROP_POINTS, DEMO_DRIVES } from "@/db/seeds/data/scenario";
 
 const anon = new ApiClient();
-let f: DemoFixture;
-beforeAll(async () => {
-  f = await demoFixture();
-});
-afterAll(closeTestDb);
+const f = demoFixtureForFile();
 
 const PRIVATE_WORDS = /host|phone|email|e-mail|contact|pledge/i;
 

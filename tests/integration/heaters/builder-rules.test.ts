@@ -29,6 +29,18 @@ afterAll(closeTestDb);
 
 const linesOf = async (unitId: string) => Number((await testDb()("ledger_lines").where({ heater_unit_id: unitId }).count({ n: "*" }).first())?.n);
 const heater = async (id: string) => (await bld.json<Heater[]>("GET", "/api/heaters")).body.find((h) => h.id === id)!;
+type Step = [what: string, body: unknown, status: number];
+/** Posts each step to the unit in turn and expects its status. */
+async function steps(client: ApiClient, unitId: string, list: Step[]) {
+  for (const [what, body, status] of list) expect((await client.json("POST", `/api/heaters/${unitId}/${what}`, body)).status, what).toBe(status);
+}
+/** Claim cans, start building, record some built in, release some: each one allowed. */
+const buildSteps = (claimed: number, builtIn: number, released: number): Step[] => [
+  ["claims", { quantity: claimed }, 201],
+  ["state", { state: "building" }, 200],
+  ["built-in", { quantity: builtIn }, 201],
+  ["releases", { quantity: released }, 201],
+];
 
 describe("a builder on a unit someone else builds", () => {
   it("may not claim, release, record built in or move its state: 403 naming who builds it", async () => {
@@ -55,10 +67,7 @@ describe("a builder on a unit someone else builds", () => {
 
   it("still works on their own units", async () => {
     const own = g.heaterIds[0];
-    expect((await bld.json("POST", `/api/heaters/${own}/claims`, { quantity: 20 })).status).toBe(201);
-    expect((await bld.json("POST", `/api/heaters/${own}/state`, { state: "building" })).status).toBe(200);
-    expect((await bld.json("POST", `/api/heaters/${own}/built-in`, { quantity: 4 })).status).toBe(201);
-    expect((await bld.json("POST", `/api/heaters/${own}/releases`, { quantity: 6 })).status).toBe(201);
+    await steps(bld, own, buildSteps(20, 4, 6));
     expect(await heater(own)).toMatchObject({ claimed: 10, builtIn: 4, state: "building" });
   });
 });
@@ -66,12 +75,11 @@ describe("a builder on a unit someone else builds", () => {
 describe("an organiser", () => {
   it("keeps every power over the builder's units", async () => {
     const theirs = g.heaterIds[1];
-    expect((await org.json("POST", `/api/heaters/${theirs}/claims`, { quantity: 12 })).status).toBe(201);
-    expect((await org.json("POST", `/api/heaters/${theirs}/state`, { state: "building" })).status).toBe(200);
-    expect((await org.json("POST", `/api/heaters/${theirs}/built-in`, { quantity: 2 })).status).toBe(201);
-    expect((await org.json("POST", `/api/heaters/${theirs}/releases`, { quantity: 1 })).status).toBe(201);
-    expect((await org.json("POST", `/api/heaters/${theirs}/claim-moves`, { toHeaterId: organisersUnit, quantity: 3 })).status).toBe(201);
-    expect((await org.json("POST", `/api/heaters/${theirs}/state`, { state: "claiming" })).status).toBe(200);
+    await steps(org, theirs, [
+      ...buildSteps(12, 2, 1),
+      ["claim-moves", { toHeaterId: organisersUnit, quantity: 3 }, 201],
+      ["state", { state: "claiming" }, 200],
+    ]);
     expect(await heater(theirs)).toMatchObject({ claimed: 6, builtIn: 2, state: "claiming" });
     expect((await heater(organisersUnit)).claimed).toBe(33);
   });

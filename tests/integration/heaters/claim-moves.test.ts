@@ -1,13 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { signedIn, type ApiClient } from "@/tests/support/http";
+import { beforeAll, describe, expect, it } from "vitest";
+import { signedInAll, type ApiClient } from "@/tests/support/http";
 import { DEMO } from "@/tests/support/env";
-import { demoFixture, type DemoFixture } from "@/tests/support/fixtures";
-import { closeTestDb, testDb } from "@/tests/support/db";
+import { demoFixtureForFile } from "@/tests/support/fixtures";
+import { testDb } from "@/tests/support/db";
 
 // Organisers move claimed cans between units of a drive: a release and a
 // claim in one transaction, never leaving a balance negative. Runs on the
 // ended harvest drive so the running winter drive's numbers stay as seeded.
-let f: DemoFixture;
+const f = demoFixtureForFile();
 let builder: ApiClient;
 let organiser: ApiClient;
 let other: ApiClient;
@@ -18,15 +18,12 @@ let b: string;
 type Heater = { id: string; claimed: number; builtIn: number; state: string };
 
 beforeAll(async () => {
-  f = await demoFixture();
-  [builder, organiser, other] = await Promise.all([signedIn(DEMO.builder), signedIn(DEMO.organiser), signedIn(DEMO.otherOrganiser)]);
+  [builder, organiser, other] = await signedInAll(DEMO.builder, DEMO.organiser, DEMO.otherOrganiser);
   harvestId = (await testDb()("drives").where({ slug: "larkhollow-harvest-2026" }).first()).id;
   const plan = { glazingWidth: 24, glazingHeight: 30, unit: "in", coverage: "chamber" };
   a = (await builder.json<{ id: string }>("POST", "/api/heaters", { name: "Move test A", driveId: harvestId, plan })).body.id;
   b = (await builder.json<{ id: string }>("POST", "/api/heaters", { name: "Move test B", driveId: harvestId, plan })).body.id;
 });
-
-afterAll(closeTestDb);
 
 async function heater(id: string): Promise<Heater> {
   const list = await builder.json<Heater[]>("GET", "/api/heaters");

@@ -1,12 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { ApiClient, signedIn } from "@/tests/support/http";
+import { ApiClient, signedInAll } from "@/tests/support/http";
 import { DEMO } from "@/tests/support/env";
-import { demoFixture, type DemoFixture } from "@/tests/support/fixtures";
-import { closeTestDb, testDb } from "@/tests/support/db";
+import { demoFixtureForFile } from "@/tests/support/fixtures";
+import { testDb } from "@/tests/support/db";
 
 // Saving plans as heater units and moving their state: group scoping, roles,
 // the forward-only rule, and the drive's target growing with each unit.
-let f: DemoFixture;
+const f = demoFixtureForFile();
 let builder: ApiClient;
 let organiser: ApiClient;
 let volunteer: ApiClient;
@@ -17,18 +17,11 @@ type Unit = { id: string; cans: number; columns: number; rows: number; state: st
 const plan = { glazingWidth: 30, glazingHeight: 60, unit: "in", coverage: "chamber" };
 
 beforeAll(async () => {
-  f = await demoFixture();
-  [builder, organiser, volunteer, other] = await Promise.all([
-    signedIn(DEMO.builder),
-    signedIn(DEMO.organiser),
-    signedIn(DEMO.volunteer),
-    signedIn(DEMO.otherOrganiser),
-  ]);
+  [builder, organiser, volunteer, other] = await signedInAll(DEMO.builder, DEMO.organiser, DEMO.volunteer, DEMO.otherOrganiser);
 });
 
 afterAll(async () => {
   if (created.length) await testDb()("heater_units").whereIn("id", created).delete();
-  await closeTestDb();
 });
 
 async function driveTargetText(client: ApiClient): Promise<number> {

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { ApiClient, signedIn } from "@/tests/support/http";
+import { ApiClient, signedIn, signedInAll } from "@/tests/support/http";
 import { closeTestDb, testDb } from "@/tests/support/db";
 import { createOwnGroup, type OwnGroup } from "@/tests/support/own-group";
 
@@ -17,7 +17,7 @@ let volunteerId: string;
 beforeAll(async () => {
   const db = testDb();
   g = await createOwnGroup(db, "inputs");
-  [organiser, volunteer] = await Promise.all([signedIn(g.emails.organiser), signedIn(g.emails.volunteer)]);
+  [organiser, volunteer] = await signedInAll(g.emails.organiser, g.emails.volunteer);
   volunteerId = (await db("users").where({ email: g.emails.volunteer }).first()).id;
 });
 afterAll(closeTestDb);

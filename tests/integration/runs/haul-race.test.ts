@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { signedIn, type ApiClient } from "@/tests/support/http";
+import { signedInAll, type ApiClient } from "@/tests/support/http";
 import { closeTestDb, testDb } from "@/tests/support/db";
 import { createOwnGroup, type OwnGroup } from "@/tests/support/own-group";
 
@@ -16,7 +16,7 @@ let volunteerId: string;
 
 beforeAll(async () => {
   g = await createOwnGroup(testDb(), "haul-race");
-  [organiser, volunteer] = await Promise.all([signedIn(g.emails.organiser), signedIn(g.emails.volunteer)]);
+  [organiser, volunteer] = await signedInAll(g.emails.organiser, g.emails.volunteer);
   volunteerId = (await testDb()("users").where({ email: g.emails.volunteer }).first()).id;
 });
 afterAll(closeTestDb);

@@ -1,8 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { signedIn, type ApiClient } from "@/tests/support/http";
+import { beforeAll, describe, expect, it } from "vitest";
+import { signedInAll, type ApiClient } from "@/tests/support/http";
 import { DEMO } from "@/tests/support/env";
-import { closeTestDb, testDb } from "@/tests/support/db";
-import { demoFixture, type DemoFixture } from "@/tests/support/fixtures";
+import { testDb } from "@/tests/support/db";
+import { demoFixtureForFile } from "@/tests/support/fixtures";
 
 interface Run {
   id: string;
@@ -14,14 +14,13 @@ interface Tally {
   bags: number;
 }
 
-let f: DemoFixture;
+const f = demoFixtureForFile();
 let organiser: ApiClient;
 let volunteer: ApiClient;
 let run: Run;
 
 beforeAll(async () => {
-  f = await demoFixture();
-  [organiser, volunteer] = await Promise.all([signedIn(DEMO.organiser), signedIn(DEMO.volunteer)]);
+  [organiser, volunteer] = await signedInAll(DEMO.organiser, DEMO.volunteer);
   const db = testDb();
   const points = await db("drop_points").where({ drive_id: f.demoDriveId, active: true }).orderBy("name").limit(3).pluck("id");
   const volunteerId = (await db("users").where({ email: DEMO.volunteer }).first()).id;
@@ -35,7 +34,6 @@ beforeAll(async () => {
   expect(created.status).toBe(201);
   run = (await volunteer.json<Run>("GET", `/api/runs/${created.body.id}`)).body;
 });
-afterAll(closeTestDb);
 
 const tallies = async () =>
   (await volunteer.json<Record<string, Tally>>("GET", `/api/public/drives/${f.demoDriveSlug}/tallies`)).body;

@@ -1,9 +1,9 @@
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import turfDistance from "@turf/distance";
-import { signedIn, type ApiClient } from "@/tests/support/http";
+import { signedInAll, type ApiClient } from "@/tests/support/http";
 import { DEMO } from "@/tests/support/env";
-import { closeTestDb, testDb } from "@/tests/support/db";
-import { demoFixture, type DemoFixture } from "@/tests/support/fixtures";
+import { testDb } from "@/tests/support/db";
+import { demoFixtureForFile } from "@/tests/support/fixtures";
 import { waitForMail } from "@/tests/support/mail";
 
 interface Run {
@@ -15,7 +15,7 @@ interface Run {
   stopList: { id: string; position: number; status: string; skipReason: string | null; dropPoint: { id: string; name: string; hours: string; hostPhone: string | null } }[];
 }
 
-let f: DemoFixture;
+const f = demoFixtureForFile();
 let organiser: ApiClient;
 let volunteer: ApiClient;
 let builder: ApiClient;
@@ -25,20 +25,13 @@ let volunteerId: string;
 let workshop: { lat: number; lng: number };
 
 beforeAll(async () => {
-  f = await demoFixture();
-  [organiser, volunteer, builder, other] = await Promise.all([
-    signedIn(DEMO.organiser),
-    signedIn(DEMO.volunteer),
-    signedIn(DEMO.builder),
-    signedIn(DEMO.otherOrganiser),
-  ]);
+  [organiser, volunteer, builder, other] = await signedInAll(DEMO.organiser, DEMO.volunteer, DEMO.builder, DEMO.otherOrganiser);
   const db = testDb();
   points = await db("drop_points").select("id", "name", "lat", "lng").where({ drive_id: f.demoDriveId, active: true }).orderBy("name");
   volunteerId = (await db("users").where({ email: DEMO.volunteer }).first()).id;
   const g = await db("groups").where({ id: f.demoGroupId }).first();
   workshop = { lat: g.workshop_lat, lng: g.workshop_lng };
 });
-afterAll(closeTestDb);
 
 async function planRun(ids: string[], plannedOn = "2026-12-09") {
   return organiser.json<{ id: string; order: string[]; distanceKm: number }>("POST", "/api/runs", {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { defaultDrive, driveTiming, longDay, pickDrive, spanText, timingWarning, type DriveSpan } from "@/lib/drives/current-drive";
+import { defaultDrive, driveTiming, groupByTiming, longDay, pickDrive, spanText, timingWarning, type DriveSpan } from "@/lib/drives/current-drive";
 
 // The rule a page uses to open on a drive when the person has not chosen one.
 // Calendar facts below (2027 is not a leap year; a drive's last day counts as
@@ -76,5 +76,26 @@ describe("the words shown beside the form", () => {
     expect(spanText(drive("x", "2026-11-01", "2026-12-31"))).toBe("1 Nov – 31 Dec 2026");
     expect(spanText(running)).toBe("1 Nov 2026 – 31 Jan 2027");
     expect(longDay("2027-09-09")).toBe("9 September 2027");
+  });
+});
+
+describe("groupByTiming", () => {
+  it("judges each drive against its own group's day, so the same dates can fall in different groups", () => {
+    // Two groups either side of midnight: one is already on 1 Nov, the other still on 31 Oct.
+    const east = { ...drive("east", "2026-11-01", "2026-11-30"), today: "2026-11-01" };
+    const west = { ...drive("west", "2026-11-01", "2026-11-30"), today: "2026-10-31" };
+    const grouped = groupByTiming([west, east]);
+    expect(grouped.running.map((d) => d.id)).toEqual(["east"]);
+    expect(grouped.upcoming.map((d) => d.id)).toEqual(["west"]);
+    expect(grouped.ended).toEqual([]);
+  });
+
+  it("puts the soonest start first among upcoming drives and the latest end first among the others", () => {
+    const t = (d: DriveSpan) => ({ ...d, today });
+    const soon = drive("soon", "2026-12-10", "2027-01-10");
+    const grouped = groupByTiming([past, future, soon, running, drive("old", "2026-01-01", "2026-02-01")].map(t));
+    expect(grouped.upcoming.map((d) => d.id)).toEqual(["soon", "future"]);
+    expect(grouped.ended.map((d) => d.id)).toEqual(["past", "old"]);
+    expect(grouped.running.map((d) => d.id)).toEqual(["running"]);
   });
 });

@@ -1,16 +1,14 @@
 import { describe, expect, it } from "vitest";
 import { driveProgress, type DriveProgressInput } from "@/lib/drives/progress";
 import { finishText, heatersCoveredText, paceText, remainingText } from "@/lib/drives/progress-wording";
+import { example, noStages } from "./progress-example";
 
-const noStages = { good: 0, washed: 0, opened: 0, punched: 0, claimed: 0, builtIn: 0 };
-// Worked by hand as in progress.test.ts: target 462, 250 good, 10 a day → 6 April.
+// The worked example (progress-example.ts: target 462, 250 good, 10 a day → 6 April),
+// with its 140 cans of the last 14 days on one day and the drive's dates set.
 const running: DriveProgressInput = {
-  unitCans: [120, 120, 200],
-  stages: { good: 150, washed: 40, opened: 30, punched: 20, claimed: 0, builtIn: 10 },
-  rejectedCans: 50,
+  ...example,
   hauledEstimate: 0,
   daily: [{ date: "2025-03-10", goodCans: 140 }],
-  today: "2025-03-15",
   startsOn: "2025-03-01",
   endsOn: "2025-04-30",
 };

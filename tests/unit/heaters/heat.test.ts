@@ -7,6 +7,8 @@ import {
   airTemperatureRiseC,
   collectorEfficiency,
   computeHeatOutput,
+  heatAtPeak,
+  RATING_IRRADIANCE_WM2,
   sensibleHeatBtuh,
 } from "@/lib/heaters/heat";
 
@@ -76,5 +78,22 @@ describe("computeHeatOutput", () => {
     const out = computeHeatOutput({ ...base, airflowM3h: 0 });
     expect(out).toEqual({ efficiency: 0, usefulW: 0, usefulBtuh: 0, airRiseC: 0, outletC: 20 });
     expect(Object.values(out).every(Number.isFinite)).toBe(true);
+  });
+});
+
+describe("heatAtPeak", () => {
+  const base = { apertureAreaM2: 1.5, eta0: 0.7, a1: 5, inletC: 18, ambientC: 5, airflowM3h: 170 };
+
+  it("uses the wall's peak sunlight in the straight-line efficiency, so a lower peak gives a lower efficiency than 800 W/m²", () => {
+    // Hottel–Whillier–Bliss, η = FR(τα) − FR·UL·ΔT/G (Duffie & Beckman, Solar Engineering of Thermal
+    // Processes, ch. 6): at G = 578 W/m², ΔT = 13 K: η = 0.7 − 65/578 = 0.58754…, worked by hand.
+    const out = heatAtPeak(base, 578);
+    expect(out.efficiency).toBeCloseTo(0.7 - 65 / 578, 12);
+    expect(out.usefulW).toBeCloseTo((0.7 - 65 / 578) * 578 * 1.5, 9);
+    expect(out.efficiency).toBeLessThan(computeHeatOutput({ ...base, irradianceWm2: RATING_IRRADIANCE_WM2 }).efficiency);
+  });
+
+  it("gives no heat, not an error, when the sun never reaches the wall that day", () => {
+    expect(heatAtPeak(base, 0)).toEqual({ efficiency: 0, usefulW: 0, usefulBtuh: 0, airRiseC: 0, outletC: 18 });
   });
 });

@@ -28,7 +28,7 @@ export default async function DropPointPage({ params }: { params: Promise<{ id: 
         {photos.length ? (
           <div className="mb-3 flex flex-wrap gap-2">
             {photos.map((p) => (
-              // eslint-disable-next-line @next/next/no-img-element
+              // eslint-disable-next-line @next/next/no-img-element -- photos come from the upload host at their own size; next/image would proxy them through the app
               <img key={p.id} src={p.url} alt={`Photo of the bin at ${point.name}`} className="h-32 w-auto rounded-lg border border-paper-edge" />
             ))}
           </div>

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { GridFigures } from "@/components/heaters/grid-figures";
-import { GridPreview } from "@/components/heaters/grid-preview";
+import { GridDimensions } from "@/components/heaters/grid-dimensions";
 import { MaterialsTable } from "@/components/heaters/materials-table";
 import { PrintButton } from "@/components/heaters/print-button";
 import { AppError } from "@/lib/api/errors";
@@ -58,25 +58,27 @@ export default async function BuildSheetPage({ params }: Props) {
         </p>
       </header>
 
-      <section className="break-inside-avoid">
-        <h2 className="mb-2 text-xl">Can grid</h2>
-        <div className="grid gap-4 md:grid-cols-[1fr_14rem] print:grid-cols-[1fr_12rem]">
-          <GridFigures grid={grid} />
-          <GridPreview plan={resolved} grid={grid} title={`${grid.columns} by ${grid.rows} cans`} />
+      {/* Figures and live counts beside the drawing, so materials still fit on page 1 of A4 or Letter. */}
+      <div className="grid gap-4 md:grid-cols-[1fr_20rem] print:grid-cols-[1fr_85mm]">
+        <div className="flex flex-col gap-4">
+          <section className="break-inside-avoid">
+            <h2 className="mb-2 text-xl">Can grid</h2>
+            <GridFigures grid={grid} />
+          </section>
+          <section className="break-inside-avoid" data-testid="sheet-cans">
+            <h2 className="mb-2 text-xl">Cans for this unit</h2>
+            <UnitFigures c={counts} printedAt={printedAt} />
+          </section>
         </div>
-      </section>
-
-      <section className="break-inside-avoid" data-testid="sheet-cans">
-        <h2 className="mb-2 text-xl">Cans for this unit</h2>
-        <UnitFigures c={counts} printedAt={printedAt} />
-      </section>
+        <GridDimensions plan={resolved} grid={grid} />
+      </div>
 
       <section className="break-inside-avoid">
         <h2 className="mb-2 text-xl">Materials</h2>
         <MaterialsTable list={materials} />
       </section>
 
-      <section>
+      <section className="print:break-before-page">
         <h2 className="mb-2 text-xl">Build steps</h2>
         <ol className="flex list-decimal flex-col gap-3 pl-6">
           {steps.map((s) => (
@@ -90,8 +92,11 @@ export default async function BuildSheetPage({ params }: Props) {
           ))}
         </ol>
       </section>
-      <p className="text-sm text-ink-faint">
-        The heat figures of the planner are estimates. Local building codes and licensed trades have the last word on wiring and wall openings.
+      <p className="break-inside-avoid border-l-4 border-sun bg-sun-soft px-3 py-2 text-sm font-semibold" data-testid="sheet-safety">
+        Work safely: cut can edges are sharp (gloves on, offcuts in a closed bin); use tools as their makers say, with eye and hearing
+        protection; the absorber, glazing and outlet get hot enough to burn in sun, so let a heater cool or cover it before working on it.
+        The heat figures of the planner are estimates. Local building codes and licensed trades have the last word on wiring and wall
+        openings.
       </p>
     </main>
   );
