@@ -4,7 +4,7 @@
  * above three quarters in an episode alerts the organisers; later reports in
  * the same episode do not.
  */
-import { formatAgo } from "@/lib/format/dates";
+import { formatAgo } from "@/lib/format/clock";
 export const ALERT_LEVEL = 75;
 
 /** The levels a report may give (percent full). Here, not in schemas.ts, so the public page needs no zod. */

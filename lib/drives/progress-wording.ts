@@ -1,5 +1,5 @@
 import { countOf } from "@/lib/plural";
-import { formatDay } from "@/lib/format/dates";
+import { formatDay } from "@/lib/format/clock";
 import { DEFAULT_LOOK } from "@/lib/format/default-look";
 import type { Look } from "@/lib/format/look";
 import type { DriveFinish } from "./progress";

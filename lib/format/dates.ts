@@ -1,39 +1,10 @@
-import type { Look } from "./look";
-import { memo } from "./memo";
+import { dayInstant, dtf, type Clock, type Locale } from "./clock";
 
 // Every date and time people read, in one style: "2 Dec 2026" for a day,
 // "2 Dec 2026, 13:55" for a moment, "1 Nov 2026 – 31 Jan 2027" for a span
 // (en-GB; other locales get their own order from Intl/CLDR). Machine columns
 // (the CSV's ISO UTC, <time dateTime>) keep ISO; everything shown goes through here.
-
-/**
- * Server and browser render the same text: ICU builds differ in small ways (CLDR 38+ has en-GB
- * "Sept", older data "Sep"; some put U+202F before "PM" and U+2009 round a range's dash), and a
- * page whose server and browser text disagree fails to hydrate. One spelling for each.
- */
-export const steady = (text: string) => text.replace(/\bSept\b/g, "Sep").replace(/\u202f/g, "\u00a0").replace(/\u2009/g, " ");
-
-function dtf(locale: string, options: Intl.DateTimeFormatOptions) {
-  const f = memo("date", locale, options, () => new Intl.DateTimeFormat(locale, options));
-  return { format: (d: Date) => steady(f.format(d)), formatRange: (a: Date, b: Date) => steady(f.formatRange(a, b)), formatToParts: (d: Date) => f.formatToParts(d) };
-}
-
-const DAY_SHAPE = /^(\d{4})-(\d{2})-(\d{2})$/;
-
-/** A calendar day ("2026-12-02") as an instant at noon UTC, formatted in UTC: the day never shifts with a zone. */
-function dayInstant(day: string): Date {
-  const m = DAY_SHAPE.exec(day);
-  if (!m) return new Date(day);
-  return new Date(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3]), 12));
-}
-
-type Locale = Pick<Look, "locale">;
-type Clock = Pick<Look, "locale" | "timeZone">;
-
-/** "2 Dec 2026": a calendar day. */
-export function formatDay(day: string, look: Locale): string {
-  return dtf(look.locale, { dateStyle: "medium", timeZone: "UTC" }).format(dayInstant(day));
-}
+export { formatAgo, formatDay, formatMoment, steady } from "./clock";
 
 /** "2 December 2026": a day spelled out, for sentences, warnings and mail. */
 export function formatLongDay(day: string, look: Locale): string {
@@ -54,10 +25,6 @@ export function formatDayRange(from: string, to: string, look: Locale): string {
   return a.getTime() > b.getTime() ? `${f.format(a)} – ${f.format(b)}` : f.formatRange(a, b);
 }
 
-/** "2 Dec 2026, 13:55": a moment on the group's clock. */
-export function formatMoment(at: string | Date, look: Clock): string {
-  return dtf(look.locale, { dateStyle: "medium", timeStyle: "short", timeZone: look.timeZone }).format(new Date(at));
-}
 
 /** "2 Dec 2026": the day a moment falls on, on the group's clock. */
 export function formatMomentDay(at: string | Date, look: Clock): string {
@@ -77,9 +44,4 @@ export function localDay(at: string | Date, timeZone: string): string {
       .map((p) => [p.type, p.value]),
   );
   return `${parts.year}-${parts.month}-${parts.day}`;
-}
-
-/** "3 hours ago", "1 day ago": Intl.RelativeTimeFormat, so the unit's plural is CLDR's. */
-export function formatAgo(amount: number, unit: "minute" | "hour" | "day", look: Pick<Look, "locale"> = { locale: "en-GB" }): string {
-  return memo("ago", look.locale, {}, () => new Intl.RelativeTimeFormat(look.locale, { numeric: "always" })).format(-amount, unit);
 }

@@ -12,8 +12,8 @@ import { PledgeForm } from "./pledge-form";
 import { useLiveQuery } from "@/hooks/queries/live-query";
 import { DriveProgressBar } from "./progress-bar";
 import { countOf } from "@/lib/plural";
-// dates and the default look only, not the lib/format barrel: this page's JavaScript budget is tight.
-import { formatMoment } from "@/lib/format/dates";
+// The clock and the default look only, not the lib/format barrel: this page's JavaScript budget is tight.
+import { formatMoment } from "@/lib/format/clock";
 import { DEFAULT_LOOK } from "@/lib/format/default-look";
 
 export function DriveLive({

@@ -5,7 +5,7 @@ import { Button } from "@/components/ui/button";
 import { FILL_SHAPE_LABEL, fillShape, LEVEL_LABEL } from "@/lib/drives/fill";
 import type { PublicDropPointView } from "@/lib/drives/types";
 import { haversineKm } from "@/lib/runs/great-circle";
-import { formatMoment } from "@/lib/format/dates";
+import { formatMoment } from "@/lib/format/clock";
 import { DEFAULT_LOOK } from "@/lib/format/default-look";
 import { countOf } from "@/lib/plural";
 
