@@ -65,7 +65,7 @@ export function DriveProgressCard({ drive, progress, fullBins, pledges, look }: 
         <div>
           <dt className="text-ink-faint">{progress.finish.kind === "expected" ? "Expected finish" : "Finish"}</dt>
           <dd className="font-semibold" data-testid="expected-finish">
-            {finishText(progress.finish, look)}
+            {finishText(progress.finish, f.day)}
           </dd>
         </div>
       </dl>

@@ -1,7 +1,4 @@
 import { countOf } from "@/lib/plural";
-import { formatDay } from "@/lib/format/clock";
-import { DEFAULT_LOOK } from "@/lib/format/default-look";
-import type { Look } from "@/lib/format/look";
 import type { DriveFinish } from "./progress";
 
 // The words shown beside a drive's progress, in one place so the public page
@@ -24,9 +21,12 @@ export function remainingText(target: { cans: number; heaters: number }, remaini
   return "Target reached — thank you!";
 }
 
-/** The dashboard's "Expected finish": a date only when a pace promises one for a running drive. Days in the group's style. */
-export function finishText(finish: DriveFinish, look: Pick<Look, "locale"> = DEFAULT_LOOK): string {
-  const day = (d: string) => formatDay(d, look);
+/**
+ * The dashboard's "Expected finish": a date only when a pace promises one for a running drive.
+ * `day` writes a day in the group's style (formatter(look).day); given, not imported, so the public
+ * drive page, which reads this file, takes no date formatter.
+ */
+export function finishText(finish: DriveFinish, day: (isoDay: string) => string): string {
   switch (finish.kind) {
     case "noTarget":
       return NO_HEATERS;

@@ -1,11 +1,17 @@
-import { dayInstant, steady, type Clock, type Locale } from "./clock";
+import { steady, type Clock } from "./clock";
+import type { Look } from "./look";
 import { memo } from "./memo";
 
 // Every date and time people read, in one style: "2 Dec 2026" for a day,
 // "2 Dec 2026, 13:55" for a moment, "1 Nov 2026 – 31 Jan 2027" for a span
 // (en-GB; other locales get their own order from Intl/CLDR). Machine columns
 // (the CSV's ISO UTC, <time dateTime>) keep ISO; everything shown goes through here.
-export { formatAgo, steady } from "./clock";
+export { steady } from "./clock";
+
+type Locale = Pick<Look, "locale">;
+
+/** A calendar day ("2026-12-02") as an instant at noon UTC, formatted in UTC: the day never shifts with a zone. */
+const dayInstant = (day: string) => new Date(/^\d{4}-\d{2}-\d{2}$/.test(day) ? `${day}T12:00:00Z` : day);
 
 // The formatters below are built once per locale and options (the screens and exports format many).
 function dtf(locale: string, options: Intl.DateTimeFormatOptions) {
@@ -13,8 +19,8 @@ function dtf(locale: string, options: Intl.DateTimeFormatOptions) {
   return { format: (d: Date) => steady(f.format(d)), formatRange: (a: Date, b: Date) => steady(f.formatRange(a, b)), formatToParts: (d: Date) => f.formatToParts(d) };
 }
 
-// formatDay and formatMoment as in clock.ts, with the formatter built once: the CSV export writes
-// two moments a line for up to 100,000 lines. clock.ts keeps the unmemoised pair for the drive page.
+// formatMoment as in clock.ts, with the formatter built once: the CSV export writes two moments a
+// line for up to 100,000 lines. clock.ts keeps an unmemoised one for the drive page.
 
 /** "2 Dec 2026": a calendar day. */
 export function formatDay(day: string, look: Locale): string {
@@ -64,4 +70,9 @@ export function localDay(at: string | Date, timeZone: string): string {
       .map((p) => [p.type, p.value]),
   );
   return `${parts.year}-${parts.month}-${parts.day}`;
+}
+
+/** "3 hours ago", "1 day ago": Intl.RelativeTimeFormat, so the unit's plural is CLDR's. */
+export function formatAgo(amount: number, unit: "minute" | "hour" | "day", look: Locale = { locale: "en-GB" }): string {
+  return new Intl.RelativeTimeFormat(look.locale, { numeric: "always" }).format(-amount, unit);
 }

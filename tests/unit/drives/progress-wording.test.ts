@@ -1,6 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { driveProgress, type DriveProgressInput } from "@/lib/drives/progress";
-import { finishText, heatersCoveredText, paceText, remainingText } from "@/lib/drives/progress-wording";
+import { finishText as finishWith, heatersCoveredText, paceText, remainingText } from "@/lib/drives/progress-wording";
+import { formatDay } from "@/lib/format/dates";
+
+const finishText = (f: Parameters<typeof finishWith>[0], look = { locale: "en-GB" }) => finishWith(f, (d) => formatDay(d, look));
 import { example, noStages } from "./progress-example";
 
 // The worked example (progress-example.ts: target 462, 250 good, 10 a day → 6 April),
