@@ -14,8 +14,14 @@ const securityHeaders = [
   { key: "Cross-Origin-Opener-Policy", value: "same-origin" },
 ];
 
+// Bench-only routes (app/api/bench/**/route.bench.ts) are part of the build only
+// when it is made with CANTROVE_BENCH=1, as `npm run bench` does; otherwise Next
+// sees no route there and the path is an ordinary 404.
+const PAGE_EXTENSIONS = ["tsx", "ts", "jsx", "js"];
+
 /** @type {import('next').NextConfig} */
 const nextConfig = {
+  pageExtensions: process.env.CANTROVE_BENCH === "1" ? [...PAGE_EXTENSIONS, "bench.ts"] : PAGE_EXTENSIONS,
   serverExternalPackages: ["knex", "pg", "nodemailer", "bcryptjs"],
   poweredByHeader: false,
   reactStrictMode: true,

@@ -13,7 +13,7 @@ import { measurePage } from "./bench/page";
 import { checkTargets, printTable } from "./bench/report";
 import { signIn } from "./bench/session";
 import { DEMO_PASSWORD } from "../db/seeds/data/scenario";
-import { serverCommand } from "./lib/serve";
+import { serverCommand, stopServer } from "./lib/serve";
 
 // `npm run bench`: a throwaway PostgreSQL with a big group, the production
 // build against it, autocannon over loopback, chromium for the page.
@@ -119,11 +119,7 @@ async function main() {
 }
 
 async function cleanup() {
-  if (server && server.exitCode === null) {
-    const exited = new Promise((r) => server!.once("exit", r));
-    server.kill("SIGTERM");
-    await Promise.race([exited, new Promise((r) => setTimeout(r, 5_000))]);
-  }
+  await stopServer(server);
   await stack?.stop().catch((e) => console.error("stop failed:", e));
   if (!opts.keep) rmSync(dir, { recursive: true, force: true });
 }

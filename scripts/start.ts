@@ -4,7 +4,7 @@ import { startStack, type Stack } from "./lib/stack";
 import { buildIfStale } from "./lib/build";
 import { waitForHealthy } from "./lib/wait";
 import { DEMO_PASSWORD, DEMO_PEOPLE } from "../db/seeds/data/scenario";
-import { serverCommand } from "./lib/serve";
+import { serverCommand, stopServer } from "./lib/serve";
 
 // `npm start`: the database, the local fakes, migrations, the demo seed (once),
 // a build when the sources changed, and the production server. SIGINT or
@@ -21,12 +21,7 @@ async function shutdown(code: number): Promise<never> {
   if (stopping) return new Promise(() => undefined);
   stopping = true;
   console.log("\nStopping Cantrove…");
-  if (server && server.exitCode === null) {
-    const exited = new Promise((resolve) => server!.once("exit", resolve));
-    server.kill("SIGTERM");
-    await Promise.race([exited, new Promise((r) => setTimeout(r, 8_000))]);
-    if (server.exitCode === null) server.kill("SIGKILL");
-  }
+  await stopServer(server, 8_000, true);
   try {
     await stack?.stop();
   } catch (error) {

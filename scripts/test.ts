@@ -5,7 +5,7 @@ import path from "node:path";
 import { startStack, type Stack } from "./lib/stack";
 import { buildIfStale } from "./lib/build";
 import { waitForHealthy } from "./lib/wait";
-import { serverCommand } from "./lib/serve";
+import { serverCommand, stopServer } from "./lib/serve";
 
 // `npm test`: a throwaway PostgreSQL and fakes on their own ports, the built
 // app, then vitest (unit, hooks, integration, e2e). Ends with "N passed, N failed".
@@ -25,11 +25,7 @@ let stack: Stack | null = null;
 let server: ChildProcess | null = null;
 
 async function cleanup() {
-  if (server && server.exitCode === null) {
-    const exited = new Promise((r) => server!.once("exit", r));
-    server.kill("SIGTERM");
-    await Promise.race([exited, new Promise((r) => setTimeout(r, 5_000))]);
-  }
+  await stopServer(server);
   await stack?.stop().catch((e) => console.error("stop failed:", e));
   rmSync(runDir, { recursive: true, force: true });
 }

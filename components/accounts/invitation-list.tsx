@@ -4,6 +4,7 @@ import { useQuery } from "@tanstack/react-query";
 import { Button } from "@/components/ui/button";
 import { EmptyState, Skeleton } from "@/components/ui/card";
 import { FormError } from "@/components/ui/field";
+import { LoadError } from "@/components/ui/load-error";
 import { ROLE_LABEL } from "@/lib/auth/roles";
 import { memberQueries, useResendInvitation, useRevokeInvitation } from "@/hooks/queries/members";
 import { useFormat } from "@/hooks/use-look";
@@ -17,15 +18,7 @@ export function InvitationList() {
   const revoke = useRevokeInvitation();
 
   if (isPending) return <ListSkeleton />;
-  if (error)
-    return (
-      <div className="flex flex-col gap-2">
-        <FormError message={error.message} />
-        <Button variant="secondary" onClick={() => refetch()}>
-          Try again
-        </Button>
-      </div>
-    );
+  if (error) return <LoadError message={error.message} onRetry={() => void refetch()} />;
   if (data.length === 0) return <EmptyState title="No open invitations">People you invite appear here until they accept.</EmptyState>;
   const actionError = resend.error?.message ?? revoke.error?.message ?? null;
   return (

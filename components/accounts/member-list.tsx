@@ -4,6 +4,7 @@ import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormError, SelectBox } from "@/components/ui/field";
+import { LoadError } from "@/components/ui/load-error";
 import type { Role } from "@/lib/auth/roles";
 import { memberQueries, useChangeRole, useRemoveMember, type Member } from "@/hooks/queries/members";
 import { ListSkeleton } from "./invitation-list";
@@ -16,15 +17,7 @@ export function MemberList({ currentUserId }: { currentUserId: string }) {
   const [confirming, setConfirming] = useState<string | null>(null);
 
   if (isPending) return <ListSkeleton />;
-  if (error)
-    return (
-      <div className="flex flex-col gap-2">
-        <FormError message={error.message} />
-        <Button variant="secondary" onClick={() => refetch()}>
-          Try again
-        </Button>
-      </div>
-    );
+  if (error) return <LoadError message={error.message} onRetry={() => void refetch()} />;
   const actionError = changeRole.error?.message ?? remove.error?.message ?? null;
   return (
     <div className="flex flex-col gap-2">

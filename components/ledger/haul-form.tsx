@@ -1,28 +1,21 @@
 "use client";
 
 import { useState } from "react";
-import { Button } from "@/components/ui/button";
-import { FormError, SelectField } from "@/components/ui/field";
+import { SelectField } from "@/components/ui/field";
 import { NumberField } from "@/components/ui/number-field";
-import { Notice } from "@/components/ui/notice";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { haulInputSchema } from "@/lib/ledger/schemas";
 import { HaulCaution } from "./cautions";
-import { ConfirmUnusual } from "./confirm-unusual";
+import { EntryActions, useEntrySubmit, type Submit } from "./entry-submit";
 import { NUMBER_SPECS, parseNumberInputs } from "@/lib/forms/number-input";
 import { countOf } from "@/lib/plural";
-import type { SubmitResult } from "./use-outbox";
-
-type Submit = (url: string, body: unknown, label: string) => Promise<SubmitResult>;
 
 export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { driveId: string; dropPoints: { id: string; name: string }[]; initialDropPointId?: string; submit: Submit }) {
   const [dropPointId, setDropPointId] = useState(dropPoints.some((p) => p.id === initialDropPointId) ? initialDropPointId! : "");
   const [bags, setBags] = useState("1");
   const [weight, setWeight] = useState("");
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const [message, setMessage] = useState<{ tone: "good" | "info" | "error"; text: string } | null>(null);
-  const [pending, setPending] = useState(false);
-  const [ask, setAsk] = useState<{ question: string; confirm: () => Promise<SubmitResult> } | null>(null);
+  const { send, clear: clearStatus, status } = useEntrySubmit();
 
   // A box's old error goes once it is edited; what is typed then speaks for itself.
   const edit = (key: string, set: (raw: string) => void) => (raw: string) => {
@@ -32,7 +25,7 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
 
   async function onSubmit(e: React.FormEvent) {
     e.preventDefault();
-    setMessage(null); // an earlier "recorded" must not stand above this try's errors
+    clearStatus(); // an earlier "recorded" must not stand above this try's errors
     // Anything typed that is not a number stops here; nothing else is ever sent in its place.
     const numbers = parseNumberInputs({ bags: [bags, NUMBER_SPECS.haulBags], weightKg: [weight, NUMBER_SPECS.haulWeightKg] });
     const parsed = haulInputSchema.safeParse({ dropPointId, bags: numbers.values.bags, weightKg: numbers.values.weightKg });
@@ -42,30 +35,17 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
       return;
     }
     setErrors({});
-    setPending(true);
     const name = dropPoints.find((p) => p.id === dropPointId)?.name ?? "drop point";
-    settle(await submit(`/api/drives/${driveId}/hauls`, parsed.data, `Haul: ${countOf(parsed.data.bags, "bag")} from ${name}`));
-  }
-
-  async function answerYes() {
-    if (!ask) return;
-    setPending(true);
-    settle(await ask.confirm());
-  }
-
-  function settle(result: SubmitResult) {
-    setPending(false);
-    setAsk(null);
-    if (result.kind === "refused" && result.question && result.confirm) return setAsk({ question: result.question, confirm: result.confirm });
-    if (result.kind === "refused") return setMessage({ tone: "error", text: result.message });
-    setBags("1");
-    setWeight("");
-    if (result.kind === "queued") return setMessage({ tone: "info", text: result.message });
-    const body = result.body as { estimatedCans: number; estimate: { countedHauls: number } };
-    setMessage({
-      tone: "good",
-      text: `Haul recorded: about ${countOf(body.estimatedCans, "can")} (an estimate${body.estimate.countedHauls ? `, from ${countOf(body.estimate.countedHauls, "counted haul")}` : ""}; the sort will count them).`,
-    });
+    await send(
+      () => submit(`/api/drives/${driveId}/hauls`, parsed.data, `Haul: ${countOf(parsed.data.bags, "bag")} from ${name}`),
+      (result) => {
+        setBags("1");
+        setWeight("");
+        if (result.kind === "queued") return result.message;
+        const body = result.body as { estimatedCans: number; estimate: { countedHauls: number } };
+        return `Haul recorded: about ${countOf(body.estimatedCans, "can")} (an estimate${body.estimate.countedHauls ? `, from ${countOf(body.estimate.countedHauls, "counted haul")}` : ""}; the sort will count them).`;
+      },
+    );
   }
 
   return (
@@ -90,11 +70,7 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
         onChange={edit("weightKg", setWeight)}
         error={errors.weightKg}
       />
-      {ask ? <ConfirmUnusual question={ask.question} pending={pending} onYes={() => void answerYes()} onNo={() => setAsk(null)} /> : null}
-      {message?.tone === "error" ? <FormError message={message.text} /> : message ? <Notice tone={message.tone === "good" ? "good" : "info"} title={message.text} /> : null}
-      <Button type="submit" disabled={pending || ask !== null}>
-        {pending ? "Saving…" : "Record haul"}
-      </Button>
+      <EntryActions status={status} label="Record haul" />
     </form>
   );
 }

@@ -2,9 +2,6 @@
 
 import { useState } from "react";
 import { useQuery } from "@tanstack/react-query";
-import { Button } from "@/components/ui/button";
-import { FormError } from "@/components/ui/field";
-import { Notice } from "@/components/ui/notice";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { LOSS_REASON_LABEL, processingInputSchema, type LossReason } from "@/lib/ledger/schemas";
 import { stageLabel } from "@/lib/ledger/labels";
@@ -14,9 +11,8 @@ import { NumberField } from "@/components/ui/number-field";
 import { NUMBER_SPECS, parseNumberInput, parseNumberInputs } from "@/lib/forms/number-input";
 import { countOf, noun } from "@/lib/plural";
 import { LossFields, lossReasonsFor, ownLossReason } from "./loss-fields";
-import type { SubmitResult } from "./use-outbox";
+import { EntryActions, useEntrySubmit, type Submit } from "./entry-submit";
 
-type Submit = (url: string, body: unknown, label: string) => Promise<SubmitResult>;
 const STEPS = [
   { from: "good", to: "washed", label: "Washed" },
   { from: "washed", to: "opened", label: "Opened (tops off)" },
@@ -30,8 +26,7 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
   const [lostText, setLost] = useState("0");
   const [chosenReason, setLossReason] = useState<LossReason | null>(null);
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const [message, setMessage] = useState<{ tone: "good" | "info" | "error"; text: string } | null>(null);
-  const [pending, setPending] = useState(false);
+  const { send, clear: clearStatus, status } = useEntrySubmit();
   const step = STEPS[stepIndex];
   const available = stock.data ? stock.data.stages[step.from] : null;
   const lossReason = chosenReason && lossReasonsFor(step.to).includes(chosenReason) ? chosenReason : ownLossReason(step.to);
@@ -42,7 +37,7 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
 
   async function onSubmit(e: React.FormEvent) {
     e.preventDefault();
-    setMessage(null); // an earlier "recorded" must not stand above this try's errors
+    clearStatus(); // an earlier "recorded" must not stand above this try's errors
     // Anything typed that is not a whole number stops here; nothing else is ever sent in its place.
     const numbers = parseNumberInputs({ quantity: [quantityText, NUMBER_SPECS.batchCans], "lost.quantity": [lostText, NUMBER_SPECS.lostCans] });
     const quantity = numbers.values.quantity;
@@ -52,16 +47,17 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
       return setErrors({ ...(parsed.success ? {} : fieldErrorsOf(parsed.error)), ...(numbers.errors as Record<string, string>) });
     }
     setErrors({});
-    setPending(true);
     const lostNote = lost > 0 ? `, ${lost} lost (${LOSS_REASON_LABEL[lossReason].toLowerCase()})` : "";
-    const result = await submit(`/api/drives/${driveId}/processing`, parsed.data, `${step.label}: ${countOf(parsed.data.quantity, "can")}${lostNote}`);
-    setPending(false);
-    if (result.kind === "refused") return setMessage({ tone: "error", text: result.message });
-    setQuantity("");
-    setLost("0");
-    if (result.kind === "queued") return setMessage({ tone: "info", text: result.message });
-    const body = result.body as { holes: number | null; holesPerCan: number | null };
-    setMessage({ tone: "good", text: `${step.label}: ${countOf(parsed.data.quantity, "can")} recorded${lostNote}.${body.holes ? ` That batch needed ${countOf(body.holes, "hole")} (${body.holesPerCan} a can).` : ""}` });
+    await send(
+      () => submit(`/api/drives/${driveId}/processing`, parsed.data, `${step.label}: ${countOf(parsed.data.quantity, "can")}${lostNote}`),
+      (result) => {
+        setQuantity("");
+        setLost("0");
+        if (result.kind === "queued") return result.message;
+        const body = result.body as { holes: number | null; holesPerCan: number | null };
+        return `${step.label}: ${countOf(parsed.data.quantity, "can")} recorded${lostNote}.${body.holes ? ` That batch needed ${countOf(body.holes, "hole")} (${body.holesPerCan} a can).` : ""}`;
+      },
+    );
   }
 
   return (
@@ -107,10 +103,7 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
         }}
         errors={errors}
       />
-      {message?.tone === "error" ? <FormError message={message.text} /> : message ? <Notice tone={message.tone === "good" ? "good" : "info"} title={message.text} /> : null}
-      <Button type="submit" disabled={pending}>
-        {pending ? "Saving…" : "Record processing"}
-      </Button>
+      <EntryActions status={status} label="Record processing" />
     </form>
   );
 }

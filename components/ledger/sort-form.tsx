@@ -2,22 +2,18 @@
 
 import { useState } from "react";
 import { useQuery } from "@tanstack/react-query";
-import { Button } from "@/components/ui/button";
 import { EmptyState, Skeleton } from "@/components/ui/card";
 import { FormError } from "@/components/ui/field";
-import { Notice } from "@/components/ui/notice";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { REJECT_REASON_LABEL, REJECT_REASONS, sortInputSchema, type RejectReason } from "@/lib/ledger/schemas";
 import { ledgerQueries } from "@/hooks/queries/ledger";
 import { SortCaution } from "./cautions";
-import { ConfirmUnusual } from "./confirm-unusual";
+import { EntryActions, useEntrySubmit, type Submit } from "./entry-submit";
 import { NumberField } from "@/components/ui/number-field";
 import { NUMBER_SPECS, parseNumberInput, parseNumberInputs } from "@/lib/forms/number-input";
 import { countOf, plural } from "@/lib/plural";
-import type { SubmitResult } from "./use-outbox";
 import { useFormat } from "@/hooks/use-look";
 
-type Submit = (url: string, body: unknown, label: string) => Promise<SubmitResult>;
 const zeroRejects = () => Object.fromEntries(REJECT_REASONS.map((r) => [r, "0"])) as Record<RejectReason, string>;
 // What the boxes hold as numbers, for the running "Counted" line; a box that is not a number counts nothing.
 const valueOf = (raw: string) => {
@@ -32,9 +28,7 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
   const [goodText, setGood] = useState("0");
   const [rejected, setRejected] = useState(zeroRejects);
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const [message, setMessage] = useState<{ tone: "good" | "info" | "error"; text: string } | null>(null);
-  const [pending, setPending] = useState(false);
-  const [ask, setAsk] = useState<{ question: string; confirm: () => Promise<SubmitResult> } | null>(null);
+  const { send, clear: clearStatus, status } = useEntrySubmit();
   const good = valueOf(goodText);
   const rejectTotal = Object.values(rejected).reduce((s, raw) => s + valueOf(raw), 0);
   const counted = good + rejectTotal;
@@ -42,7 +36,7 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
 
   async function onSubmit(e: React.FormEvent) {
     e.preventDefault();
-    setMessage(null); // an earlier "recorded" must not stand above this try's errors
+    clearStatus(); // an earlier "recorded" must not stand above this try's errors
     // Anything typed that is not a whole number stops here; nothing else is ever sent in its place.
     const numbers = parseNumberInputs({
       good: [goodText, NUMBER_SPECS.goodCans],
@@ -54,25 +48,15 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
       return setErrors({ ...(parsed.success ? {} : fieldErrorsOf(parsed.error)), ...(numbers.errors as Record<string, string>) });
     }
     setErrors({});
-    setPending(true);
-    settle(await submit(`/api/drives/${driveId}/sorts`, parsed.data, `Sort: ${good} good, ${rejectTotal} rejected`));
-  }
-
-  async function answerYes() {
-    if (!ask) return;
-    setPending(true);
-    settle(await ask.confirm());
-  }
-
-  function settle(result: SubmitResult) {
-    setPending(false);
-    setAsk(null);
-    if (result.kind === "refused" && result.question && result.confirm) return setAsk({ question: result.question, confirm: result.confirm });
-    if (result.kind === "refused") return setMessage({ tone: "error", text: result.message });
-    setChosen([]);
-    setGood("0");
-    setRejected(zeroRejects());
-    setMessage({ tone: result.kind === "done" ? "good" : "info", text: result.kind === "done" ? `Sort recorded: ${good} good ${plural(good, "can")}, ${rejectTotal} rejected.` : result.message });
+    await send(
+      () => submit(`/api/drives/${driveId}/sorts`, parsed.data, `Sort: ${good} good, ${rejectTotal} rejected`),
+      (result) => {
+        setChosen([]);
+        setGood("0");
+        setRejected(zeroRejects());
+        return result.kind === "done" ? `Sort recorded: ${good} good ${plural(good, "can")}, ${rejectTotal} rejected.` : result.message;
+      },
+    );
   }
 
   return (
@@ -140,11 +124,7 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
       <p className="text-ink-soft" aria-live="polite">
         Counted {countOf(counted, "can")}{counted > 0 ? ` · yield ${Math.round((good / counted) * 100)} %` : ""}
       </p>
-      {ask ? <ConfirmUnusual question={ask.question} pending={pending} onYes={() => void answerYes()} onNo={() => setAsk(null)} /> : null}
-      {message?.tone === "error" ? <FormError message={message.text} /> : message ? <Notice tone={message.tone === "good" ? "good" : "info"} title={message.text} /> : null}
-      <Button type="submit" disabled={pending || ask !== null}>
-        {pending ? "Saving…" : "Record sort"}
-      </Button>
+      <EntryActions status={status} label="Record sort" />
     </form>
   );
 }

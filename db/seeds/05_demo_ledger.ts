@@ -13,14 +13,16 @@ export async function seed(knex: Knex): Promise<void> {
   if (!group) return;
   const person = async (email: string, role: Actor["role"]): Promise<Actor> => {
     const u = await knex("users").where({ email }).first();
+    if (!u) throw new Error(`The demo seed needs ${email}: run the seeds in order.`);
     return { user: { id: u.id, email: u.email, name: u.name }, group: { id: group.id, slug: group.slug, name: group.name }, role };
   };
   const volunteer = await person("volunteer@cantrove.test", "volunteer");
   const organiser = await person("organiser@cantrove.test", "organiser");
   const builder = await person("builder@cantrove.test", "builder");
-  const drive = async (slug: string) => (await knex("drives").where({ slug, group_id: group.id }).first()).id as string;
-  const point = async (name: string) => (await knex("drop_points").where({ name, group_id: group.id }).first()).id as string;
-  const unit = async (name: string) => (await knex("heater_units").where({ name, group_id: group.id }).first()).id as string;
+  // Seeded by the earlier demo seeds, so each is there.
+  const drive = async (slug: string) => (await knex("drives").where({ slug, group_id: group.id }).first())!.id;
+  const point = async (name: string) => (await knex("drop_points").where({ name, group_id: group.id }).first())!.id;
+  const unit = async (name: string) => (await knex("heater_units").where({ name, group_id: group.id }).first())!.id;
 
   await knex.transaction(async (trx) => {
     // Harvest fair drive (ended): two weighed hauls, sorted, processed, built into the test panel.

@@ -14,6 +14,7 @@ export async function seed(knex: Knex): Promise<void> {
     .where({ drive_id: drive.id })
     .whereIn("name", ["Hilltop Corner Shop", "Greenfold Allotments shed", "Quayside Community Hall"]);
   if (points.length === 0) return;
+  if (group.workshop_lat === null || group.workshop_lng === null) return;
   const start = { lat: group.workshop_lat, lng: group.workshop_lng };
   const plan = planRoute({ start, stops: points, returnToStart: true });
   const [run] = await knex("pickup_runs")

@@ -7,7 +7,7 @@ import { after } from "next/server";
 import { redirect } from "next/navigation";
 import { action } from "@/lib/api/action";
 import type { ActionState } from "@/lib/api/action-state";
-import { ACCOUNT_LIMITS } from "./limits";
+import { INVITE_LIMITS, RESET_REQUEST_LIMITS, SIGN_UP_LIMITS, TOKEN_LIMITS } from "./limits";
 import { acceptInvitation, createInvitation } from "./invitations";
 import { confirmPasswordReset, requestPasswordReset } from "./resets";
 import { acceptInvitationInputSchema, invitationInputSchema, passwordSchema, personNameSchema, RESET_ANSWER, resetConfirmInputSchema, resetRequestInputSchema, signUpInputSchema } from "./schemas";
@@ -17,10 +17,7 @@ const signUpRun = action(
   {
     who: "anyone",
     schema: signUpInputSchema,
-    limits: [
-      { rule: ACCOUNT_LIMITS.signUpPerClient, by: "client" },
-      { rule: ACCOUNT_LIMITS.signUpPerAddress, by: (input) => input.email },
-    ],
+    limits: SIGN_UP_LIMITS,
   },
   // An address that already has an account gets this same answer (its owner gets a mail).
   async ({ input }) => {
@@ -36,10 +33,7 @@ const resetRequestRun = action(
   {
     who: "anyone",
     schema: resetRequestInputSchema,
-    limits: [
-      { rule: ACCOUNT_LIMITS.resetPerClient, by: "client" },
-      { rule: ACCOUNT_LIMITS.resetPerAddress, by: (input) => input.email },
-    ],
+    limits: RESET_REQUEST_LIMITS,
   },
   // The same answer at the same speed whether or not the address has an account: the work runs after.
   async ({ input }) => {
@@ -52,7 +46,7 @@ export async function resetRequestAction(previous: ActionState<{ message: string
 }
 
 const resetConfirmRun = action(
-  { who: "anyone", schema: resetConfirmInputSchema, secret: ["password", "token"], limits: [{ rule: ACCOUNT_LIMITS.tokenPerClient, by: "client" }] },
+  { who: "anyone", schema: resetConfirmInputSchema, secret: ["password", "token"], limits: TOKEN_LIMITS },
   async ({ input }) => {
     await confirmPasswordReset(input.token, input.password);
     return { changed: true };
@@ -63,7 +57,7 @@ export async function resetConfirmAction(previous: ActionState<{ changed: boolea
 }
 
 const inviteRun = action(
-  { who: ["organiser"], schema: invitationInputSchema, limits: [{ rule: ACCOUNT_LIMITS.invitePerAddress, by: (input) => input.email }] },
+  { who: ["organiser"], schema: invitationInputSchema, limits: INVITE_LIMITS },
   async ({ actor, input }) => {
     await createInvitation(actor, input);
     return { email: input.email };
@@ -75,7 +69,7 @@ export async function inviteAction(previous: ActionState<{ email: string }>, for
 
 const newPersonSchema = acceptInvitationInputSchema.extend({ name: personNameSchema, password: passwordSchema });
 const acceptRun = action(
-  { who: "anyone", schema: newPersonSchema, secret: ["password", "token"], limits: [{ rule: ACCOUNT_LIMITS.tokenPerClient, by: "client" }] },
+  { who: "anyone", schema: newPersonSchema, secret: ["password", "token"], limits: TOKEN_LIMITS },
   // A new person: no session to read (someone signed in uses the one-click form, which needs the session).
   async ({ input }) => acceptInvitation(input, null),
 );

@@ -57,7 +57,7 @@ export async function createInvitation(actor: Actor, input: InvitationInput): Pr
     })
     .onConflict(db.raw("(group_id, email) where accepted_at is null and revoked_at is null"))
     .ignore()
-    .returning(PENDING_COLUMNS);
+    .returning<Invitation[]>(PENDING_COLUMNS);
   if (!row) throw conflict("This address already has an open invitation. Resend it from the list instead.", { rule: "already_invited" });
   await mailInvitation(actor, input.email, input.role, token);
   return row;
@@ -70,7 +70,7 @@ export async function resendInvitation(actor: Actor, id: string): Promise<Invita
     .update({ token_hash: hash, sent_at: db.fn.now(), expires_at: db.raw(`now() + interval '${INVITATION_DAYS} days'`) })
     .where({ id, group_id: actor.group.id })
     .modify(open)
-    .returning(PENDING_COLUMNS);
+    .returning<Invitation[]>(PENDING_COLUMNS);
   if (!row) throw notFound("That invitation");
   await mailInvitation(actor, row.email, row.role, token);
   return row;

@@ -9,7 +9,7 @@ import { BCRYPT_COST } from "./queries";
 import { RESET_MAIL_RULE, mayMail } from "./mail-limits";
 import { clearSignInTries } from "./sign-in-limits";
 import { resetMail } from "./mail-text";
-import { RESET_MINUTES, hashToken, newToken } from "./tokens";
+import { RESET_MINUTES, newToken, openLinkRow } from "./tokens";
 
 /** Sends a reset link if the address has an account; says nothing either way. */
 export async function requestPasswordReset(email: string): Promise<void> {
@@ -33,19 +33,15 @@ export async function requestPasswordReset(email: string): Promise<void> {
 export async function confirmPasswordReset(token: string, password: string): Promise<void> {
   const hash = await bcrypt.hash(password, BCRYPT_COST);
   const email = await db.transaction(async (trx) => {
-    const reset = await trx("password_resets")
-      .where({ token_hash: hashToken(token) })
-      .whereNull("used_at")
-      .andWhere("expires_at", ">", trx.fn.now())
-      .forUpdate()
-      .first();
+    const reset = await openLinkRow(trx, "password_resets", token);
     if (!reset) throw notFound("That reset link is not valid any more: it was used or it expired. Ask for a new one.");
     await trx("users")
       .update({ password_hash: hash, email_verified_at: trx.raw("coalesce(email_verified_at, now())") })
       .where({ id: reset.user_id });
     await endSessions(reset.user_id, trx);
     await trx("password_resets").update({ used_at: trx.fn.now() }).where({ user_id: reset.user_id }).whereNull("used_at");
-    return (await trx("users").select("email").where({ id: reset.user_id }).first()).email as string;
+    // password_resets.user_id is a foreign key: the person is there.
+    return (await trx("users").select("email").where({ id: reset.user_id }).first())!.email;
   });
   await clearSignInTries(email);
 }

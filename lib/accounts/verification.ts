@@ -6,7 +6,7 @@ import { forgetReads } from "@/lib/cache/read-cache";
 import { sendMail } from "@/lib/mail/outbox";
 import { SIGN_UP_MAIL_RULE, mayMail } from "./mail-limits";
 import { verificationMail } from "./mail-text";
-import { VERIFY_HOURS, hashToken, newToken } from "./tokens";
+import { VERIFY_HOURS, newToken, openLinkRow } from "./tokens";
 
 /** A fresh link to prove the address (within the per-address mail limit); earlier links keep working until they expire. */
 export async function mailVerification(userId: string, email: string): Promise<void> {
@@ -26,12 +26,7 @@ export async function resendVerification(email: string): Promise<void> {
 /** Opening the link proves the address; every link of that person is used up. Returns the proven address. */
 export async function proveEmail(token: string): Promise<string> {
   const email = await db.transaction(async (trx) => {
-    const row = await trx("email_verifications")
-      .where({ token_hash: hashToken(token) })
-      .whereNull("used_at")
-      .andWhere("expires_at", ">", trx.fn.now())
-      .forUpdate()
-      .first();
+    const row = await openLinkRow(trx, "email_verifications", token);
     if (!row) throw notFound("That confirmation link is not valid any more: it was used or it expired. Ask for a new one.");
     const [user] = await trx("users")
       .update({ email_verified_at: trx.raw("coalesce(email_verified_at, now())") })

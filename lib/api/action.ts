@@ -6,7 +6,8 @@ import type { ActionState } from "./action-state";
 import { actorFor, type Access } from "./endpoint";
 import { AppError, invalidInput, type FieldErrors } from "./errors";
 import { toAppError } from "./handler";
-import { consumeLimit, type LimitRule } from "./rate-limit";
+import { consumeLimit } from "./rate-limit";
+import type { KeyedLimit } from "./rate-limit-rules";
 import { assertNoNul } from "./request-guards";
 import type { Actor } from "@/lib/auth/queries";
 import { forgetReads } from "@/lib/cache/read-cache";
@@ -24,11 +25,6 @@ import { clientAddress } from "@/lib/net/client-address";
 
 type ActorOf<A extends Access> = A extends "anyone" ? Actor | null : Actor;
 
-export interface ActionLimit<I> {
-  rule: LimitRule;
-  by: "client" | ((input: I) => string | null | undefined);
-}
-
 export interface ActionSpec<A extends Access, I, P, R> extends FormShape {
   who: A;
   /** The same schema as the route's body. */
@@ -36,7 +32,8 @@ export interface ActionSpec<A extends Access, I, P, R> extends FormShape {
   /** Hidden fields naming the record (an id, a slug), parsed like endpoint()'s path: a failure is 404. */
   params?: ZodType<P>;
   resource?: (actor: Actor, params: P) => Promise<R>;
-  limits?: readonly ActionLimit<I>[];
+  /** The route's own limits (one constant, lib/<domain>/limits.ts): a function gets the hidden fields as `params`, the input as `body`. */
+  limits?: readonly KeyedLimit<P, I>[];
   keepsPeople?: boolean;
   /** Fields never echoed back into the page. */
   secret?: readonly string[];
@@ -83,7 +80,7 @@ export function action<A extends Access, I, T, P = undefined, R = undefined>(
       const input = parsed.data;
       const address = clientAddress(await headers());
       for (const limit of spec.limits ?? []) {
-        const key = limit.by === "client" ? address : limit.by(input);
+        const key = limit.by === "client" ? address : limit.by({ params, body: input });
         if (key) await consumeLimit(limit.rule, key.toLowerCase());
       }
       const data = await work({ actor, input, params, resource, values });

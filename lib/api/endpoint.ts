@@ -6,7 +6,8 @@ import { AppError, invalidInput, notFound } from "./errors";
 import { toErrorResponse } from "./handler";
 import { withIdempotency, withIdempotentStatement, withKeyedAnswer, type PreparedStatement } from "./idempotency";
 import { assertJsonContent, assertNoNul, assertSameOrigin } from "./request-guards";
-import { consumeLimit, type LimitRule } from "./rate-limit";
+import { consumeLimit } from "./rate-limit";
+import type { KeyedLimit } from "./rate-limit-rules";
 import { requireRole, requireUser } from "@/lib/auth/session";
 import type { Actor } from "@/lib/auth/queries";
 import type { Role } from "@/lib/auth/roles";
@@ -30,11 +31,8 @@ type ActorOf<A extends Access> = A extends "anyone" ? Actor | null : Actor;
 /** Loads the record a route acts on, or throws 404 (another group's record is 404 too) or 403. */
 export type Resolver<P, R> = (actor: Actor, params: P) => Promise<R>;
 
-export interface Limit<P, B> {
-  rule: LimitRule;
-  /** "client": the caller's address (from the app's own server); a function: a key from the path or body (an e-mail address, say), or null to skip. */
-  by: "client" | ((input: { params: P; body: B }) => string | null | undefined);
-}
+/** "client": the caller's address (from the app's own server); a function: a key from the path or body (an e-mail address, say), or null to skip. */
+export type Limit<P, B> = KeyedLimit<P, B>;
 
 export interface EndpointSpec<A extends Access, P, Q, B, R> {
   who: A;

@@ -55,6 +55,7 @@ function answer(result: IdempotentResult & { replayed: boolean }): Response {
 
 /** The first answer stored under the key, or 409 when the key was used for another request. */
 async function replay(conn: Knex, actor: Actor, r: KeyedRequest) {
+  if (r.key === null) throw new Error("replay() needs a request with an Idempotency-Key");
   const first = await conn("idempotency_keys").where({ actor_id: actor.user.id, key: r.key }).first();
   if (!first || first.method !== r.method || first.path !== r.path || first.body_hash !== r.bodyHash) {
     throw conflict("This Idempotency-Key was already used for a different request. Send a new key for a new entry.");

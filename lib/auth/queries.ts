@@ -36,7 +36,7 @@ export async function loadActor(userId: string, groupId?: string | null): Promis
     user: { id: row.userId, email: row.email, name: row.userName },
     group: { id: row.groupId, slug: row.slug, name: row.groupName },
     role: row.role as Role,
-    sessionVersion: Number(row.sessionVersion),
+    sessionVersion: row.sessionVersion,
   };
 }
 
@@ -51,7 +51,7 @@ export async function listMemberships(userId: string): Promise<Membership[]> {
 /** The session version of a person whose address is proven; null when there is no such person. */
 export async function loadSessionVersion(userId: string): Promise<number | null> {
   const row = await db("users").select("session_version").where({ id: userId }).whereNotNull("email_verified_at").first();
-  return row ? Number(row.session_version) : null;
+  return row ? row.session_version : null;
 }
 
 /** Ends every session of a person (inside the caller's transaction when given). */

@@ -19,7 +19,7 @@ export async function naiveStock(groupId: string, driveId: string) {
      ) m group by stage`,
     [driveId, driveId],
   );
-  const t = Object.fromEntries((rows as { stage: string; quantity: string }[]).map((r) => [r.stage, Number(r.quantity)]));
+  const t = Object.fromEntries((rows as { stage: string; quantity: number }[]).map((r) => [r.stage, r.quantity]));
   const of = (s: string) => t[s] ?? 0;
   const claimed = of("claimed");
   return {

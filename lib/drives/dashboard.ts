@@ -20,7 +20,7 @@ export async function organiserDashboard(groupId: string) {
     return byTimingOrder(ta, a, b);
   });
   const spare = await db("drives").select("id", "spare_percent").where({ group_id: groupId });
-  const spareOf = new Map(spare.map((d) => [d.id as string, Number(d.spare_percent)]));
+  const spareOf = new Map(spare.map((d) => [d.id, d.spare_percent]));
   return Promise.all(
     drives.map(async (d) => {
       const [progress, fills, pledges] = await Promise.all([

@@ -18,7 +18,7 @@ export async function listFullBins(groupId: string, driveId: string): Promise<Fu
   return rows.map((r: Record<string, unknown>) => ({
     dropPointId: r.id as string,
     dropPointName: r.name as string,
-    level: Number(r.fill_level),
+    level: r.fill_level as number,
     reportedAt: new Date(r.fill_at as string).toISOString(),
   }));
 }
@@ -33,6 +33,7 @@ export async function clearFill(groupId: string, dropPointId: string, asOf?: str
     // Reports carry microseconds, the ISO time the page saw only milliseconds: the report of that millisecond counts as seen.
     .update({ fill_cleared_at: asOf ? db.raw("least(now(), ?::timestamptz + interval '1 millisecond')", [asOf]) : db.fn.now() })
     .returning(["id", "fill_cleared_at"]);
-  if (!row) throw notFound("That drop point");
-  return { dropPointId: row.id as string, clearedAt: new Date(row.fill_cleared_at).toISOString() };
+  // The update just set it, so it is never null here.
+  if (!row?.fill_cleared_at) throw notFound("That drop point");
+  return { dropPointId: row.id, clearedAt: row.fill_cleared_at.toISOString() };
 }

@@ -12,7 +12,7 @@ import { idPath, slugPath, slugSegment, uuidSegment } from "@/lib/api/path";
 import { NUMBER_SPECS, type NumberSpec } from "@/lib/forms/number-input";
 import { noun } from "@/lib/plural";
 import { createDrive, createDropPoint, updateDrive, updateDropPoint } from "./commands";
-import { PUBLIC_LIMITS } from "./limits";
+import { FILL_REPORT_LIMITS, PLEDGE_LIMITS } from "./limits";
 import { createFillReport, createPledge } from "./public-actions";
 import { ownDrive, ownDropPoint } from "./resource";
 import { driveInput, dropPointInput, fillReportInput, pledgeInput } from "./schemas";
@@ -25,10 +25,7 @@ const pledgeRun = action(
     params: slugPath(),
     schema: pledgeInput,
     numbers: { bags: NUMBER_SPECS.pledgeBags },
-    limits: [
-      { rule: PUBLIC_LIMITS.pledgePerClient, by: "client" },
-      { rule: PUBLIC_LIMITS.pledgePerAddress, by: (input) => input.email },
-    ],
+    limits: PLEDGE_LIMITS,
   },
   async ({ params, input }) => ({ ...(await createPledge(params.slug, input)), email: input.email }),
 );
@@ -43,7 +40,7 @@ const fillRun = action(
     params: z.object({ slug: slugSegment("That drive"), pointId: uuidSegment("That drop point") }),
     schema: fillReportInput,
     numbers: { level: levelSpec },
-    limits: [{ rule: PUBLIC_LIMITS.fillReportPerClient, by: "client" }],
+    limits: FILL_REPORT_LIMITS,
   },
   async ({ params, input }) => ({ id: (await createFillReport(params.slug, params.pointId, input)).id }),
 );

@@ -73,8 +73,8 @@ export async function createFillReport(slug: string, dropPointId: string, input:
   const result = await db.transaction(async (trx) => {
     // The row lock serialises reports for one bin, so two reports at once cannot both alert.
     await trx("drop_points").where({ id: point.id }).forUpdate().first();
-    const lastAlert = await trx("fill_reports").where({ drop_point_id: point.id, alerted: true }).max("created_at as at").first();
-    const alert = shouldAlert(input.level, lastAlert?.at ? new Date(lastAlert.at) : null, haulAt);
+    const lastAlert = await trx("fill_reports").where({ drop_point_id: point.id, alerted: true }).max<{ at: Date | null }[]>("created_at as at").first();
+    const alert = shouldAlert(input.level, lastAlert?.at ?? null, haulAt);
     const [row] = await trx("fill_reports")
       .insert({ group_id: drive.groupId, drop_point_id: point.id, level: input.level, note: input.note, alerted: alert })
       .returning(["id"]);

@@ -15,16 +15,12 @@ export interface PublicDriveSummary {
   endsOn: string;
 }
 
-// Dates leave as plain YYYY-MM-DD strings, never shifted by a time zone.
-const spanColumns = (table = "") => {
-  const t = table ? `${table}.` : "";
-  return [db.raw(`to_char(${t}starts_on, 'YYYY-MM-DD') as "startsOn"`), db.raw(`to_char(${t}ends_on, 'YYYY-MM-DD') as "endsOn"`)];
-};
-export const publicDriveColumns = () => ["slug", "name", ...spanColumns()];
+// Dates leave as plain YYYY-MM-DD strings (knexfile.ts's date parser), never shifted by a time zone.
+const publicDriveColumns = ["slug", "name", "starts_on as startsOn", "ends_on as endsOn"] as const;
 
 export async function listPublicDrives(): Promise<PublicDriveSummary[]> {
   return db("drives")
-    .select(publicDriveColumns())
+    .select(...publicDriveColumns)
     .where({ is_public: true })
     .orderBy([{ column: "starts_on", order: "desc" }, { column: "name" }]);
 }
@@ -37,8 +33,9 @@ export async function listPublicDrivesWithDay(): Promise<(PublicDriveSummary & {
       "d.slug",
       "d.name",
       "g.name as groupName",
-      ...spanColumns("d"),
-      db.raw(`to_char((now() at time zone g.time_zone)::date, 'YYYY-MM-DD') as "today"`),
+      "d.starts_on as startsOn",
+      "d.ends_on as endsOn",
+      db.raw(`(now() at time zone g.time_zone)::date as "today"`),
     )
     .where({ "d.is_public": true })
     .orderBy([{ column: "d.name" }]);
@@ -76,20 +73,20 @@ export async function findPublicDrive(slug: string): Promise<PublicDriveRow | un
       "d.description",
       "d.wanted",
       "d.spare_percent as sparePercent",
-      db.raw(`to_char(d.starts_on, 'YYYY-MM-DD') as "startsOn"`),
-      db.raw(`to_char(d.ends_on, 'YYYY-MM-DD') as "endsOn"`),
+      "d.starts_on as startsOn",
+      "d.ends_on as endsOn",
     )
     .where({ "d.slug": slug, "d.is_public": true })
     .first();
   if (!row) return undefined;
   const { timeZone, locale, units, ...rest } = row;
-  return { ...rest, sparePercent: Number(row.sparePercent), look: { timeZone, locale, units } };
+  return { ...rest, look: { timeZone, locale, units } };
 }
 
 /** Cans each heater unit of the drive needs, oldest unit first. */
 export async function unitCansOf(driveId: string, groupId: string): Promise<number[]> {
   const rows = await db("heater_units").select("cans").where({ drive_id: driveId, group_id: groupId }).orderBy([{ column: "created_at" }, { column: "name" }]);
-  return rows.map((r) => Number(r.cans));
+  return rows.map((r) => r.cans);
 }
 
 /**
@@ -125,9 +122,9 @@ export async function listPublicDropPointsWithTallies(slug: string): Promise<Pub
     capacityBags: r.capacityBags as number,
     fillLevel: (r.fillLevel as number | null) ?? null,
     fillReportedAt: r.fillReportedAt ? new Date(r.fillReportedAt as string).toISOString() : null,
-    fill: r.fill_level === null || r.fill_level === undefined ? null : { level: Number(r.fill_level), reportedAt: new Date(r.fill_at as string).toISOString() },
+    fill: r.fill_level === null || r.fill_level === undefined ? null : { level: r.fill_level as number, reportedAt: new Date(r.fill_at as string).toISOString() },
     photos: r.photos as string[],
-    tallies: { hauls: Number(r.hauls), bags: Number(r.bags), goodCans: Number(r.goodCans), rejectedCans: Number(r.rejectedCans) },
+    tallies: { hauls: r.hauls as number, bags: r.bags as number, goodCans: r.goodCans as number, rejectedCans: r.rejectedCans as number },
   }));
 }
 

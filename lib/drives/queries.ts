@@ -11,8 +11,8 @@ export async function listDrives(groupId: string) {
       "d.id",
       "d.slug",
       "d.name",
-      db.raw(`to_char(d.starts_on, 'YYYY-MM-DD') as "startsOn"`),
-      db.raw(`to_char(d.ends_on, 'YYYY-MM-DD') as "endsOn"`),
+      "d.starts_on as startsOn",
+      "d.ends_on as endsOn",
       "d.is_public as isPublic",
       db.raw(`(select count(*)::int from drop_points p where p.drive_id = d.id and p.group_id = d.group_id) as "dropPoints"`),
       db.raw(`(select count(*)::int from heater_units h where h.drive_id = d.id and h.group_id = d.group_id) as "heaterUnits"`),
@@ -42,8 +42,8 @@ export async function findDrive(groupId: string, id: string): Promise<DriveRecor
       "description",
       "wanted",
       "is_public as isPublic",
-      db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`),
-      db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`),
+      "starts_on as startsOn",
+      "ends_on as endsOn",
     )
     .where({ id, group_id: groupId })
     .first();
@@ -65,12 +65,12 @@ const dropPointColumns = [
 ];
 
 export async function listDropPoints(groupId: string, driveId: string): Promise<DropPointRecord[]> {
-  return db("drop_points").select(dropPointColumns).where({ group_id: groupId, drive_id: driveId }).orderBy("name");
+  return db("drop_points").select<DropPointRecord[]>(dropPointColumns).where({ group_id: groupId, drive_id: driveId }).orderBy("name");
 }
 
 export async function findDropPoint(groupId: string, id: string): Promise<DropPointRecord | undefined> {
   if (!UUID.test(id)) return undefined;
-  return db("drop_points").select(dropPointColumns).where({ group_id: groupId, id }).first();
+  return db("drop_points").select<DropPointRecord[]>(dropPointColumns).where({ group_id: groupId, id }).first();
 }
 
 export async function listDropPointPhotos(groupId: string, dropPointId: string) {
@@ -88,7 +88,7 @@ export async function listPledges(groupId: string, driveId: string): Promise<Dri
       "pl.name",
       db.raw(`pl.email::text as email`),
       "pl.bags",
-      db.raw(`to_char(pl.bring_on, 'YYYY-MM-DD') as "bringOn"`),
+      "pl.bring_on as bringOn",
       "p.name as dropPointName",
       "pl.created_at as createdAt",
     )
@@ -111,7 +111,7 @@ export async function listFillReports(groupId: string, driveId: string, limit = 
 /** Drives with their dates and active drop points, for the entry forms; latest end first (pages choose with pageDrive). */
 export async function listLogDrives(groupId: string): Promise<LogDrive[]> {
   const drives = await db("drives")
-    .select("id", "name", db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`), db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`))
+    .select("id", "name", "starts_on as startsOn", "ends_on as endsOn")
     .where({ group_id: groupId })
     .orderBy([{ column: "ends_on", order: "desc" }, { column: "name" }]);
   const points = await db("drop_points").select("id", "name", "drive_id").where({ group_id: groupId, active: true }).orderBy("name");

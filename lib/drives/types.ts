@@ -9,7 +9,8 @@ export interface PublicDriveView {
   progress: { goodCans: number; estimatedUnsorted: number; yield: number; remaining: number; heatersCovered: number };
 }
 
-export interface PublicDropPointRow {
+/** Where a drop point is, when it is open and how many bags its bin holds: what every view of one shows. */
+export interface DropPointPlace {
   id: string;
   name: string;
   address: string;
@@ -17,6 +18,9 @@ export interface PublicDropPointRow {
   lng: number;
   hours: string;
   capacityBags: number;
+}
+
+export interface PublicDropPointRow extends DropPointPlace {
   fillLevel: number | null;
   fillReportedAt: string | null;
   /** The bin's fill now: its newest report since the last haul or clear (lib/drives/fill.ts); null when none. */

@@ -125,8 +125,8 @@ export async function listGroupDrives(groupId: string) {
       "name",
       "slug",
       db.raw("spare_percent::float as \"sparePercent\""),
-      db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`),
-      db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`),
+      "starts_on as startsOn",
+      "ends_on as endsOn",
     )
     .where({ group_id: groupId })
     .orderBy([{ column: "starts_on", order: "desc" }, { column: "name" }]);
@@ -183,7 +183,7 @@ export async function listHeatersWithClaims(groupId: string): Promise<HeaterSumm
       .leftJoin("drives as d", function () {
         this.on("d.id", "=", "h.drive_id").andOn("d.group_id", "=", "h.group_id");
       })
-      .select("h.id", "h.name", "h.drive_id", "h.builder_id", "h.cans", "h.state", db.raw("coalesce(d.spare_percent, 0)::float as spare_percent"))
+      .select("h.id", "h.name", "h.drive_id", "h.builder_id", "h.cans", "h.state", db.raw("coalesce(d.spare_percent, 0) as spare_percent"))
       .where("h.group_id", groupId)
       .orderBy("h.created_at"),
     heaterClaims(groupId),
@@ -191,7 +191,7 @@ export async function listHeatersWithClaims(groupId: string): Promise<HeaterSumm
   return units.map((u) => {
     const claimed = claims[u.id]?.claimed ?? 0;
     const builtIn = claims[u.id]?.builtIn ?? 0;
-    const n = unitNeed(u.cans as number, Number(u.spare_percent), claimed, builtIn);
+    const n = unitNeed(u.cans as number, u.spare_percent as number, claimed, builtIn);
     return {
       id: u.id as string,
       name: u.name as string,

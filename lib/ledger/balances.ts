@@ -16,13 +16,13 @@ export interface DropPointTally {
 
 async function driveTotals(driveId: string): Promise<Record<string, number>> {
   const rows = await db("stage_balances").select("stage", "quantity").where({ drive_id: driveId }).whereNull("drop_point_id").whereNull("heater_unit_id");
-  return Object.fromEntries(rows.map((r) => [r.stage, Number(r.quantity)]));
+  return Object.fromEntries(rows.map((r) => [r.stage, r.quantity]));
 }
 
 async function rejectedByReason(driveId: string): Promise<Record<TallyReason, number>> {
   const rows = await db("reject_tallies").select("reason", "quantity").where({ drive_id: driveId }).whereNull("drop_point_id");
   const out = Object.fromEntries(TALLY_REASONS.map((r) => [r, 0])) as Record<TallyReason, number>;
-  for (const r of rows) out[r.reason as TallyReason] = Number(r.quantity);
+  for (const r of rows) out[r.reason as TallyReason] = r.quantity;
   return out;
 }
 
@@ -55,7 +55,7 @@ export async function dropPointTallies(driveId: string): Promise<Record<string, 
   return Object.fromEntries(
     rows.map((r) => [
       r.id,
-      { hauls: Number(r.hauls ?? 0), bags: Number(r.bags ?? 0), goodCans: Number(r.good_cans ?? 0), rejectedCans: Number(r.rejected_cans ?? 0) },
+      { hauls: r.hauls ?? 0, bags: r.bags ?? 0, goodCans: r.good_cans ?? 0, rejectedCans: r.rejected_cans ?? 0 },
     ]),
   );
 }
@@ -63,11 +63,11 @@ export async function dropPointTallies(driveId: string): Promise<Record<string, 
 /** Good cans counted per day (UTC calendar), net of undos, from `sinceDate` (YYYY-MM-DD) on. */
 export async function driveGoodDaily(driveId: string, sinceDate: string): Promise<{ date: string; goodCans: number }[]> {
   const rows = await db("drive_daily_good")
-    .select(db.raw(`to_char(day, 'YYYY-MM-DD') as date`), "good_cans")
+    .select("day as date", "good_cans")
     .where({ drive_id: driveId })
     .andWhere("day", ">=", sinceDate)
     .orderBy("day");
-  return rows.map((r) => ({ date: r.date as string, goodCans: Number(r.good_cans) }));
+  return rows.map((r) => ({ date: r.date, goodCans: r.good_cans }));
 }
 
 /** Cans claimed (still reserved) and built in, per heater unit of the group. */
@@ -82,9 +82,9 @@ export async function heaterClaims(groupId: string, driveId?: string): Promise<R
     });
   const out: Record<string, { claimed: number; builtIn: number }> = {};
   for (const r of rows) {
-    const entry = (out[r.heater_unit_id] ??= { claimed: 0, builtIn: 0 });
-    if (r.stage === "claimed") entry.claimed = Number(r.quantity);
-    else entry.builtIn = Number(r.quantity);
+    const entry = (out[r.heater_unit_id!] ??= { claimed: 0, builtIn: 0 }); // whereNotNull above
+    if (r.stage === "claimed") entry.claimed = r.quantity;
+    else entry.builtIn = r.quantity;
   }
   return out;
 }

@@ -1,3 +1,4 @@
+import type { Tables } from "knex/types/tables";
 import { calibrationFrom, type Calibration } from "./estimate";
 
 // The group's running sums for the ratio estimators (Σ counted ÷ Σ kg and
@@ -5,12 +6,14 @@ import { calibrationFrom, type Calibration } from "./estimate";
 // ledger_sort and ledger_reverse (db/functions/ledger_writers.sql), which add
 // calibrationDelta's sums with sign +1 or -1.
 
-/** A group_calibration row (or none yet) as the estimator's sums. */
-export function calibrationOfRow(row: Record<string, unknown> | undefined | null): Calibration {
-  if (!row || row.weight_hauls === null || row.weight_hauls === undefined) return calibrationFrom([]);
+type CalibrationRow = Pick<Tables["group_calibration"], "weight_hauls" | "weight_cans" | "weight_kg" | "bag_hauls" | "bag_cans" | "bags">;
+
+/** A group_calibration row (or none yet: no row, or a left join's nulls) as the estimator's sums. */
+export function calibrationOfRow(row: CalibrationRow | { [K in keyof CalibrationRow]: null } | undefined | null): Calibration {
+  if (!row || row.weight_hauls === null) return calibrationFrom([]);
   return {
-    weight: { hauls: Number(row.weight_hauls), cans: Number(row.weight_cans), kg: Number(row.weight_kg) },
-    bags: { hauls: Number(row.bag_hauls), cans: Number(row.bag_cans), bags: Number(row.bags) },
+    weight: { hauls: row.weight_hauls, cans: row.weight_cans, kg: row.weight_kg },
+    bags: { hauls: row.bag_hauls, cans: row.bag_cans, bags: row.bags },
   };
 }
 

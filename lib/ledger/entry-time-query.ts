@@ -15,7 +15,7 @@ export async function resolveEntryTime(
   const value = given.happenedAt ?? given.legacy;
   if (!value) return new Date();
   const row = await conn("drives")
-    .select(conn.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`))
+    .select("starts_on as startsOn")
     .where({ id: m.driveId, group_id: m.groupId })
     .first();
   if (!row) throw notFound("That drive");

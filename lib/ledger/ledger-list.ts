@@ -1,4 +1,5 @@
 import "server-only";
+import type { Tables } from "knex/types/tables";
 import type { Knex } from "knex";
 import { db } from "@/lib/db";
 import { notFound } from "@/lib/api/errors";
@@ -59,21 +60,34 @@ export async function listLedgerPage(groupId: string, f: Filter, pageSize: numbe
       })
       .orderBy([{ column: "l.occurred_at", order: "desc" }, { column: "l.id", order: "desc" }])
       .limit(limit + 1),
-    filtered(groupId, f, zone).count<{ n: string }[]>({ n: "*" }),
+    filtered(groupId, f, zone).count<{ n: number }[]>({ n: "*" }),
   ]);
-  const more = rows.length > limit;
-  const page = (more ? rows.slice(0, limit) : rows).map(toRow);
-  return { rows: page, total: Number(count[0].n), nextCursor: more ? page[page.length - 1].id : null };
+  const lines: ListedLine[] = rows; // a join: the row type is said here
+  const more = lines.length > limit;
+  const page = (more ? lines.slice(0, limit) : lines).map(toRow);
+  return { rows: page, total: count[0]?.n ?? 0, nextCursor: more ? page[page.length - 1].id : null };
 }
 
-// eslint-disable-next-line @typescript-eslint/no-explicit-any -- a joined row of several tables, not yet typed
-function toRow(r: any): LedgerRow {
+type Line = Tables["ledger_lines"];
+type ListedLine = Pick<Line, "id" | "movement_id" | "occurred_at" | "recorded_at" | "from_stage" | "to_stage" | "quantity" | "reason" | "is_estimate" | "reverses_id" | "note"> & {
+  kind: string;
+  person: string;
+  person_id: string;
+  drive: string;
+  drive_id: string;
+  drop_point: string | null;
+  heater_unit: string | null;
+  reversed_by_id: number | null;
+  reversal_reason: string | null;
+};
+
+function toRow(r: ListedLine): LedgerRow {
   return {
     id: String(r.id),
     movementId: r.movement_id,
     kind: r.kind,
-    occurredAt: new Date(r.occurred_at).toISOString(),
-    recordedAt: new Date(r.recorded_at).toISOString(),
+    occurredAt: r.occurred_at.toISOString(),
+    recordedAt: r.recorded_at.toISOString(),
     person: r.person,
     personId: r.person_id,
     drive: r.drive,
@@ -100,6 +114,6 @@ export async function listLedger(groupId: string, f: Filter, limit = 500): Promi
 /** The drive's slug and dates, for the export's file name; null for another group's drive (its rows are filtered out anyway). */
 export async function exportDrive(groupId: string, driveId: string | undefined) {
   if (!driveId) return null;
-  const d = await db("drives").select("slug", db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`), db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`)).where({ id: driveId, group_id: groupId }).first();
+  const d = await db("drives").select("slug", "starts_on as startsOn", "ends_on as endsOn").where({ id: driveId, group_id: groupId }).first();
   return (d ?? null) as { slug: string; startsOn: string; endsOn: string } | null;
 }

@@ -46,7 +46,8 @@ export interface LineSpec {
 
 export interface MovementSpec {
   groupId: string;
-  driveId: string;
+  /** Null only for a unit on no drive (ledger_unit then locks the unit alone and moves nothing). */
+  driveId: string | null;
   actorId: string;
   kind: MovementKind;
   occurredAt?: Date;

@@ -1,12 +1,19 @@
 import "server-only";
+import type { Tables } from "knex/types/tables";
 import { db } from "@/lib/db";
 import { notFound } from "@/lib/api/errors";
 import type { MyEntry, OpenHaul } from "./types";
 
+type HaulListRow = Pick<
+  Tables["hauls"],
+  "id" | "movement_id" | "drop_point_id" | "bags" | "weight_kg" | "estimated_cans" | "estimate_method" | "estimate_counted_hauls" | "hauled_at" | "sort_id"
+> & { drop_point_name: string };
+
 export async function listHauls(groupId: string, driveId: string, opts: { open?: boolean } = {}): Promise<OpenHaul[]> {
   const drive = await db("drives").select("id").where({ id: driveId, group_id: groupId }).first();
   if (!drive) throw notFound("That drive");
-  const rows = await db("hauls as h")
+  // A join: the row type is said here (the columns of "hauls" as types/tables/*.d.ts has them).
+  const rows: HaulListRow[] = await db("hauls as h")
     .join("drop_points as p", "p.id", "h.drop_point_id")
     .select("h.id", "h.movement_id", "h.drop_point_id", "p.name as drop_point_name", "h.bags", "h.weight_kg", "h.estimated_cans", "h.estimate_method", "h.estimate_counted_hauls", "h.hauled_at", "h.sort_id")
     .where({ "h.group_id": groupId, "h.drive_id": driveId })
@@ -16,17 +23,16 @@ export async function listHauls(groupId: string, driveId: string, opts: { open?:
     })
     .orderBy("h.hauled_at", "desc")
     .limit(200);
-  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- a joined row of several tables, not yet typed
-  return rows.map((r: any) => ({
-    id: r.id as string,
-    movementId: r.movement_id as string,
-    dropPointId: r.drop_point_id as string,
-    dropPointName: r.drop_point_name as string,
-    bags: r.bags as number,
-    weightKg: r.weight_kg === null ? null : Number(r.weight_kg),
-    estimatedCans: r.estimated_cans as number,
-    estimate: { method: r.estimate_method as string, countedHauls: r.estimate_counted_hauls as number },
-    hauledAt: new Date(r.hauled_at).toISOString(),
+  return rows.map((r) => ({
+    id: r.id,
+    movementId: r.movement_id,
+    dropPointId: r.drop_point_id,
+    dropPointName: r.drop_point_name,
+    bags: r.bags,
+    weightKg: r.weight_kg,
+    estimatedCans: r.estimated_cans,
+    estimate: { method: r.estimate_method, countedHauls: r.estimate_counted_hauls },
+    hauledAt: r.hauled_at.toISOString(),
     sorted: r.sort_id !== null,
   }));
 }
@@ -54,16 +60,16 @@ export async function listMyEntries(groupId: string, userId: string, limit = 15)
     drive: r.drive as string,
     dropPoint: (r.drop_point as string | null) ?? null,
     details: r.details as Record<string, unknown>,
-    counted: Number(r.counted),
-    estimated: Number(r.estimated),
+    counted: r.counted as number,
+    estimated: r.estimated as number,
     undone: r.reversed_by !== null,
   }));
 }
 
 /** What the organiser's charts need about one drive: its start, spare and the cans of its units. */
 export async function driveChartBasics(groupId: string, driveId: string) {
-  const drive = await db("drives").select("id", "name", db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`), db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`), "spare_percent").where({ id: driveId, group_id: groupId }).first();
+  const drive = await db("drives").select("id", "name", "starts_on as startsOn", "ends_on as endsOn", "spare_percent").where({ id: driveId, group_id: groupId }).first();
   if (!drive) throw notFound("That drive");
   const units = await db("heater_units").select("cans").where({ drive_id: driveId, group_id: groupId }).orderBy("created_at");
-  return { name: drive.name as string, startsOn: drive.startsOn as string, endsOn: drive.endsOn as string, sparePercent: Number(drive.spare_percent), unitCans: units.map((u) => Number(u.cans)) };
+  return { name: drive.name, startsOn: drive.startsOn, endsOn: drive.endsOn, sparePercent: drive.spare_percent, unitCans: units.map((u) => u.cans) };
 }

@@ -47,7 +47,7 @@ export async function reverseMovement(actor: Actor, movementId: string, conn: Co
   }
   if (movement.kind === "sort") {
     const sort = movement.sort;
-    const calibration = calibrationDelta({ counted: sort.counted, haulCount: sort.haul_count, bags: sort.bags, weightKg: sort.weight_kg === null ? null : Number(sort.weight_kg) });
+    const calibration = calibrationDelta({ counted: sort.counted, haulCount: sort.haul_count, bags: sort.bags, weightKg: sort.weight_kg });
     undo = { ...undo, sortId: sort.id, calibration };
   }
 

@@ -55,7 +55,7 @@ async function writeHaul(actor: Actor, driveId: string, input: HaulInput, conn: 
   const groupId = actor.group.id;
   // The drive, the drop point and the group's calibration in one read.
   const { rows } = await conn.raw(
-    `select to_char(d.starts_on, 'YYYY-MM-DD') as "startsOn", p.id as point_id, p.name as point_name, p.capacity_bags, c.*
+    `select d.starts_on as "startsOn", p.id as point_id, p.name as point_name, p.capacity_bags, c.*
      from drives d
      left join drop_points p on p.id = ? and p.drive_id = d.id and p.group_id = d.group_id
      left join group_calibration c on c.group_id = d.group_id
@@ -115,7 +115,7 @@ const SORT_REFUSALS: OwnRefusals = {
 export async function recordSort(actor: Actor, driveId: string, input: SortInput, conn: Conn) {
   const groupId = actor.group.id;
   const { rows } = await conn.raw(
-    `select to_char(d.starts_on, 'YYYY-MM-DD') as "startsOn",
+    `select d.starts_on as "startsOn",
             coalesce((select json_agg(json_build_object('id', h.id, 'drop_point_id', h.drop_point_id, 'bags', h.bags, 'weight_kg', h.weight_kg,
                                                         'estimated_cans', h.estimated_cans, 'sort_id', h.sort_id, 'reversed_at', h.reversed_at)
                                       order by h.hauled_at)
@@ -134,7 +134,7 @@ export async function recordSort(actor: Actor, driveId: string, input: SortInput
   const counted = input.good + rejectedTotal;
   const bags = hauls.reduce((s, h) => s + h.bags, 0);
   const allWeighed = hauls.every((h) => h.weight_kg !== null);
-  const weightKg = allWeighed ? hauls.reduce((s, h) => s + Number(h.weight_kg), 0) : null;
+  const weightKg = allWeighed ? hauls.reduce((s, h) => s + (h.weight_kg ?? 0), 0) : null;
   const estimated = hauls.reduce((s, h) => s + h.estimated_cans, 0);
   askUnlessConfirmed(checkSort({ counted, estimated, bags, hauls: hauls.length }), input.confirmUnusual);
   const sortedAt = entryTimeOf({ happenedAt: input.happenedAt, legacy: input.sortedAt, legacyField: "sortedAt" }, rows[0].startsOn);
@@ -226,7 +226,7 @@ export async function drivesHolesPerCan(conn: Conn, groupId: string, driveId: st
     .groupBy("holes_per_can")
     .orderBy([{ column: "n", order: "desc" }, { column: "holes_per_can", order: "desc" }])
     .first()) as { holes_per_can: number } | undefined;
-  return row ? Number(row.holes_per_can) : 4;
+  return row ? row.holes_per_can : 4;
 }
 
 export async function recordRecycling(actor: Actor, driveId: string, input: RecyclingInput, conn: Conn) {

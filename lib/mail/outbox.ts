@@ -89,7 +89,7 @@ export async function sendMail(mail: OutgoingMail): Promise<{ id: number; sent: 
       next_attempt_at: db.raw("now() + interval '60 seconds'"),
     })
     .returning("id");
-  const id = Number(row.id);
+  const id = row.id;
   return { id, sent: await deliver(id) };
 }
 
@@ -99,13 +99,13 @@ export async function sendMail(mail: OutgoingMail): Promise<{ id: number; sent: 
  * database was away) — goes back on the queue. Run at start and on a schedule.
  */
 export async function sweepMail(limit = 100): Promise<number> {
-  const overdue: { id: string }[] = await db("outbox")
+  const overdue = await db("outbox")
     .select("id")
     .where("status", "queued")
     .andWhere("next_attempt_at", "<=", db.raw("now() - interval '1 minute'"))
     .orderBy("id")
     .limit(limit);
-  for (const { id } of overdue) await queueRetry(Number(id), 0);
+  for (const { id } of overdue) await queueRetry(id, 0);
   return overdue.length;
 }
 

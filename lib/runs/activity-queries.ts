@@ -28,7 +28,7 @@ export async function recentHauls(groupId: string, dropPointIds: string[]): Prom
     .where("n", "<=", RECENT_HAULS)
     .orderBy([{ column: "drop_point_id" }, { column: "at", order: "desc" }]);
   for (const r of rows) {
-    out.set(r.drop_point_id, [...(out.get(r.drop_point_id) ?? []), { at: new Date(r.at), bags: Number(r.bags) }]);
+    out.set(r.drop_point_id, [...(out.get(r.drop_point_id) ?? []), { at: r.at as Date, bags: r.bags as number }]);
   }
   return out;
 }
@@ -46,7 +46,7 @@ export async function latestFillReports(
     .where("group_id", groupId)
     .whereIn("drop_point_id", dropPointIds)
     .orderBy([{ column: "drop_point_id" }, { column: "created_at", order: "desc" }]);
-  for (const r of rows) out.set(r.drop_point_id, { fraction: Number(r.fraction), at: new Date(r.at) });
+  for (const r of rows) out.set(r.drop_point_id, { fraction: r.fraction as number, at: r.at as Date });
   return out;
 }
 

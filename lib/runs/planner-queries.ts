@@ -9,7 +9,7 @@ export interface PlannerPoint extends Suggestion, PlannerPlace {}
 
 export async function plannerDrives(groupId: string) {
   return db("drives")
-    .select("id", "name", "slug", db.raw(`to_char(starts_on, 'YYYY-MM-DD') as "startsOn"`), db.raw(`to_char(ends_on, 'YYYY-MM-DD') as "endsOn"`))
+    .select("id", "name", "slug", "starts_on as startsOn", "ends_on as endsOn")
     .where({ group_id: groupId })
     .orderBy([{ column: "ends_on", order: "desc" }, { column: "name" }]);
 }
@@ -70,7 +70,7 @@ export async function pickupHistory(groupId: string) {
       "h.bags as haulBags",
       "s.drop_point_id as dropPointId",
       "r.id as runId",
-      db.raw(`to_char(r.planned_on, 'YYYY-MM-DD') as "plannedOn"`),
+      "r.planned_on as plannedOn",
       "s.status",
       "s.skip_reason as skipReason",
       "s.haul_id as haulId",

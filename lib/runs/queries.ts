@@ -11,7 +11,7 @@ const summaryColumns = (k: Knex) => [
   "r.id",
   "r.drive_id as driveId",
   "d.name as driveName",
-  k.raw(`to_char(r.planned_on, 'YYYY-MM-DD') as "plannedOn"`),
+  "r.planned_on as plannedOn",
   "r.state",
   "r.distance_km as distanceKm",
   "r.assignee_id as assigneeId",
@@ -90,7 +90,7 @@ export async function getRun(actor: Actor, runId: string, trx: Knex = db): Promi
       haulId: s.haulId,
       resolvedAt: s.resolvedAt ? new Date(s.resolvedAt).toISOString() : null,
       haul: s.haulId
-        ? { bags: s.haulBags, weightKg: s.haulWeightKg === null ? null : Number(s.haulWeightKg), estimatedCans: s.haulCans, movementId: s.haulMovementId }
+        ? { bags: s.haulBags, weightKg: s.haulWeightKg, estimatedCans: s.haulCans, movementId: s.haulMovementId }
         : null,
       dropPoint: {
         id: s.pointId,

@@ -1,5 +1,6 @@
 import type { RunState, StopStatus } from "./schemas";
 import type { Suggestion } from "./suggest";
+import type { DropPointPlace } from "@/lib/drives/types";
 
 // The pickup-run endpoints' answers, as both sides see them: the server's
 // queries declare they return these, and the client's hooks read them. Safe
@@ -29,19 +30,8 @@ export interface RunStop {
   resolvedAt: string | null;
   /** `movementId` is the ledger entry to undo (POST /api/movements/{id}/reversal), which reopens the stop. */
   haul: { bags: number; weightKg: number | null; estimatedCans: number; movementId: string } | null;
-  dropPoint: {
-    id: string;
-    name: string;
-    address: string;
-    lat: number;
-    lng: number;
-    hours: string;
-    accessNotes: string;
-    hostName: string | null;
-    hostPhone: string | null;
-    hostEmail: string | null;
-    capacityBags: number;
-  };
+  /** The place, with what the driver needs and the public never sees. */
+  dropPoint: DropPointPlace & { accessNotes: string; hostName: string | null; hostPhone: string | null; hostEmail: string | null };
 }
 
 export interface RunDetail extends RunSummary {
@@ -53,15 +43,8 @@ export interface RunDetail extends RunSummary {
   stopList: RunStop[];
 }
 
-/** Where a drop point is and what it holds, as the planner shows it. */
-export interface PlannerPlace {
-  name: string;
-  address: string;
-  lat: number;
-  lng: number;
-  hours: string;
-  capacityBags: number;
-}
+/** Where a drop point is and what it holds, as the planner shows it (its id comes with the suggestion). */
+export type PlannerPlace = Omit<DropPointPlace, "id">;
 
 /**
  * One drop point as the planner offers it (GET /api/runs/suggestions), as JSON:

@@ -25,6 +25,7 @@ const LNG = -1.6;
 
 export async function generateDataset(db: Knex, o: DatasetOptions): Promise<Dataset> {
   const group = await db("groups").where({ slug: "larkhollow-warm-rooms" }).first();
+  if (!group) throw new Error("The bench needs the demo group: seed the demo first.");
   const user = await db("memberships as m").join("users as u", "u.id", "m.user_id").where({ "m.group_id": group.id, "m.role": "organiser" }).select("u.id").first();
   const existing = await db("drives").where("slug", "like", "bench-drive-%").orderBy("slug").select("id", "slug");
   if (existing.length === o.drives) {

@@ -21,15 +21,19 @@ function walk(root: string, file: string, hash: ReturnType<typeof createHash>): 
   }
 }
 
-export function sourceHash(root: string): string {
+// What the build reads from its environment: NEXT_PUBLIC_* is inlined, and
+// CANTROVE_BENCH=1 adds the bench-only routes (*.bench.ts, next.config.mjs).
+const BUILD_ENV = (k: string) => k.startsWith("NEXT_PUBLIC_") || k === "CANTROVE_BENCH";
+
+export function sourceHash(root: string, env: NodeJS.ProcessEnv = process.env): string {
   const hash = createHash("sha256");
   for (const input of INPUTS) walk(root, input, hash);
-  for (const [k, v] of Object.entries(process.env).sort()) if (k.startsWith("NEXT_PUBLIC_")) hash.update(`${k}=${v}`);
+  for (const [k, v] of Object.entries(env).sort()) if (BUILD_ENV(k)) hash.update(`${k}=${v}`);
   return hash.digest("hex");
 }
 
 export function buildIfStale(root: string, env: NodeJS.ProcessEnv, log: (s: string) => void = console.log): boolean {
-  const wanted = sourceHash(root);
+  const wanted = sourceHash(root, env);
   const stampFile = path.join(root, STAMP);
   if (existsSync(path.join(root, ".next/BUILD_ID")) && existsSync(stampFile) && readFileSync(stampFile, "utf8") === wanted) {
     log("Build is up to date.");

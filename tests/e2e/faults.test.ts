@@ -2,7 +2,7 @@ import { spawn, type ChildProcess } from "node:child_process";
 import { randomUUID } from "node:crypto";
 import { chmodSync, mkdtempSync, readFileSync, rmSync } from "node:fs";
 import path from "node:path";
-import knex, { type Knex } from "knex";
+import knex from "knex";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { startStack, type Stack } from "@/scripts/lib/stack";
 import { startClusterAt, stopClusterAt } from "@/scripts/lib/postgres";
@@ -14,6 +14,7 @@ import { freePort } from "@/tests/support/ports";
 import { ApiClient } from "@/tests/support/http";
 import { DEMO } from "@/tests/support/env";
 import { serverCommand } from "@/scripts/lib/serve";
+import type { TestDb } from "@/tests/support/db";
 
 // Faults on a stack of its own: the database stopped under writes, the mail
 // service down while a pledge is mailed, the upload service down for an upload.
@@ -24,7 +25,7 @@ const ports = { pg: 0, app: 0, smtp: 0, mailApi: 0, upload: 0 };
 let stack: Stack;
 let server: ChildProcess;
 let appUrl = "";
-let db: Knex;
+let db: TestDb;
 
 beforeAll(async () => {
   for (const k of Object.keys(ports) as (keyof typeof ports)[]) ports[k] = await freePort();
@@ -39,7 +40,7 @@ beforeAll(async () => {
     stdio: "ignore",
   });
   await waitForHealthy(`${appUrl}/api/health`, 60_000);
-  db = knex({ client: "pg", connection: stack.env.DATABASE_URL, pool: { min: 0, max: 2 } });
+  db = knex({ client: "pg", connection: stack.env.DATABASE_URL, pool: { min: 0, max: 2 } }) as TestDb;
 });
 
 afterAll(async () => {

@@ -2,10 +2,19 @@ import knex, { type Knex } from "knex";
 import { afterAll, beforeAll } from "vitest";
 
 // Direct database access for fixtures and assertions in integration tests.
-let instance: Knex | undefined;
+let instance: TestDb | undefined;
 
-export function testDb(): Knex {
-  instance ??= knex({ client: "pg", connection: process.env.DATABASE_URL, pool: { min: 0, max: 4 } });
+/**
+ * The app's table reads are typed (types/tables/*.d.ts, which assumes knexfile.ts's
+ * type parsers). A test's own connection may run without them (bigint as text) and
+ * reads rows it has just written, where a missing row fails the test at its first
+ * use, so its table reads stay untyped: this call signature is tried before Knex's.
+ */
+// eslint-disable-next-line @typescript-eslint/no-explicit-any -- see above: test rows are not the app's row types
+export type TestDb = ((table: string) => Knex.QueryBuilder<any, any[]>) & Knex;
+
+export function testDb(): TestDb {
+  instance ??= knex({ client: "pg", connection: process.env.DATABASE_URL, pool: { min: 0, max: 4 } }) as TestDb;
   return instance;
 }
 

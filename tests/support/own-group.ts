@@ -1,6 +1,6 @@
 import { randomBytes } from "node:crypto";
 import bcrypt from "bcryptjs";
-import type { Knex } from "knex";
+import type { TestDb } from "./db";
 import { DEMO_PASSWORD } from "./env";
 
 // A group of its own for a test that must see its ledger untouched by the
@@ -14,7 +14,7 @@ export interface OwnGroup {
   emails: { organiser: string; volunteer: string; builder: string };
 }
 
-export async function createOwnGroup(db: Knex, label: string, names: { drive?: string; dropPoint?: string; heater?: string } = {}): Promise<OwnGroup> {
+export async function createOwnGroup(db: TestDb, label: string, names: { drive?: string; dropPoint?: string; heater?: string } = {}): Promise<OwnGroup> {
   const tag = `${label}-${randomBytes(4).toString("hex")}`;
   const hash = await bcrypt.hash(DEMO_PASSWORD, 4);
   const [group] = await db("groups").insert({ slug: tag, name: `Larkhollow ${label} circle`, town: "Larkhollow" }).returning("id");
@@ -38,7 +38,7 @@ export async function createOwnGroup(db: Knex, label: string, names: { drive?: s
 }
 
 /** One digest of everything the ledger holds for a group: lines, movements, hauls, sorts and every running total. */
-export async function ledgerDigest(db: Knex, groupId: string): Promise<string> {
+export async function ledgerDigest(db: TestDb, groupId: string): Promise<string> {
   const { rows } = await db.raw(
     `select md5(concat_ws('|',
        (select string_agg(concat_ws(',', id, movement_id, from_stage, to_stage, quantity, reason, drop_point_id, heater_unit_id, reverses_id), ';' order by id) from ledger_lines where group_id = :g),

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { ButtonLink } from "@/components/ui/button-link";
 import { Card, EmptyState } from "@/components/ui/card";
+import { PageHeading } from "@/components/ui/page-heading";
 import { DriveProgressCard } from "@/components/dashboard/drive-progress-card";
 import { requirePageRole } from "@/lib/auth/session";
 import { organiserDashboard } from "@/lib/drives/dashboard";
@@ -14,15 +15,14 @@ export default async function DashboardPage() {
   const [drives, look] = await Promise.all([organiserDashboard(actor.group.id), groupLook(actor.group.id)]);
   return (
     <main className="flex flex-col gap-6">
-      <div className="flex flex-wrap items-center justify-between gap-3">
-        <h1 className="text-3xl">{actor.group.name}</h1>
+      <PageHeading title={actor.group.name}>
         <div className="flex flex-wrap gap-2">
           <ButtonLink href="/organise/drives/new">New drive</ButtonLink>
           <ButtonLink href="/runs/new" variant="secondary">
             Plan a pickup run
           </ButtonLink>
         </div>
-      </div>
+      </PageHeading>
       {drives.length === 0 ? (
         <Card>
           <EmptyState title="No drives yet">

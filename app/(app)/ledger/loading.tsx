@@ -1,11 +1,5 @@
-import { Skeleton } from "@/components/ui/card";
+import { PageSkeleton } from "@/components/ui/page-skeleton";
 
 export default function Loading() {
-  return (
-    <main className="flex flex-col gap-4" aria-busy="true">
-      <Skeleton className="h-9 w-40" />
-      <Skeleton className="h-64 w-full" />
-      <Skeleton className="h-48 w-full" />
-    </main>
-  );
+  return <PageSkeleton title="w-40" blocks={["h-64", "h-48"]} />;
 }

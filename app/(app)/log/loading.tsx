@@ -1,11 +1,5 @@
-import { Skeleton } from "@/components/ui/card";
+import { PageSkeleton } from "@/components/ui/page-skeleton";
 
 export default function Loading() {
-  return (
-    <main className="mx-auto flex max-w-xl flex-col gap-4" aria-busy="true">
-      <Skeleton className="h-9 w-48" />
-      <Skeleton className="h-12 w-full" />
-      <Skeleton className="h-72 w-full" />
-    </main>
-  );
+  return <PageSkeleton narrow title="w-48" blocks={["h-12", "h-72"]} />;
 }

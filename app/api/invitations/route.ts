@@ -1,7 +1,7 @@
 import { endpoint } from "@/lib/api/endpoint";
 import { invitationInputSchema } from "@/lib/accounts/schemas";
 import { createInvitation, listPendingInvitations } from "@/lib/accounts/invitations";
-import { ACCOUNT_LIMITS } from "@/lib/accounts/limits";
+import { INVITE_LIMITS } from "@/lib/accounts/limits";
 
 export const dynamic = "force-dynamic";
 
@@ -12,7 +12,7 @@ export const POST = endpoint(
     who: ["organiser"],
     body: invitationInputSchema,
     status: 201,
-    limits: [{ rule: ACCOUNT_LIMITS.invitePerAddress, by: ({ body }) => body.email }],
+    limits: INVITE_LIMITS,
   },
   async ({ actor, body }) => createInvitation(actor, body),
 );

@@ -1,6 +1,6 @@
 import { after } from "next/server";
 import { endpoint } from "@/lib/api/endpoint";
-import { ACCOUNT_LIMITS } from "@/lib/accounts/limits";
+import { RESET_REQUEST_LIMITS } from "@/lib/accounts/limits";
 import { RESET_ANSWER, resetRequestInputSchema } from "@/lib/accounts/schemas";
 import { requestPasswordReset } from "@/lib/accounts/resets";
 
@@ -13,10 +13,7 @@ export const POST = endpoint(
     who: "anyone",
     body: resetRequestInputSchema,
     status: 202,
-    limits: [
-      { rule: ACCOUNT_LIMITS.resetPerClient, by: "client" },
-      { rule: ACCOUNT_LIMITS.resetPerAddress, by: ({ body }) => body.email },
-    ],
+    limits: RESET_REQUEST_LIMITS,
   },
   async ({ body }) => {
     after(() => requestPasswordReset(body.email).catch((error) => console.error("[cantrove] reset mail failed", error)));

@@ -1,5 +1,5 @@
 import { endpoint } from "@/lib/api/endpoint";
-import { ACCOUNT_LIMITS } from "@/lib/accounts/limits";
+import { SIGN_UP_LIMITS } from "@/lib/accounts/limits";
 import { signUpInputSchema } from "@/lib/accounts/schemas";
 import { signUp } from "@/lib/accounts/sign-up";
 
@@ -12,10 +12,7 @@ export const POST = endpoint(
     who: "anyone",
     body: signUpInputSchema,
     status: 201,
-    limits: [
-      { rule: ACCOUNT_LIMITS.signUpPerClient, by: "client" },
-      { rule: ACCOUNT_LIMITS.signUpPerAddress, by: ({ body }) => body.email },
-    ],
+    limits: SIGN_UP_LIMITS,
   },
   async ({ body }) => {
     const { groupId, slug } = await signUp(body);

@@ -1,5 +1,5 @@
 import { endpoint } from "@/lib/api/endpoint";
-import { ACCOUNT_LIMITS } from "@/lib/accounts/limits";
+import { TOKEN_LIMITS } from "@/lib/accounts/limits";
 import { verifyEmailInputSchema } from "@/lib/accounts/schemas";
 import { proveEmail } from "@/lib/accounts/verification";
 
@@ -7,7 +7,7 @@ export const dynamic = "force-dynamic";
 
 // Open to anyone holding the link: the token, mailed to the address, is the proof.
 export const POST = endpoint(
-  { who: "anyone", body: verifyEmailInputSchema, limits: [{ rule: ACCOUNT_LIMITS.tokenPerClient, by: "client" }] },
+  { who: "anyone", body: verifyEmailInputSchema, limits: TOKEN_LIMITS },
   async ({ body }) => {
     const email = await proveEmail(body.token);
     return { email, message: "Your e-mail address is confirmed. You can sign in now." };

@@ -22,7 +22,7 @@ function routeFiles(dir: string): string[] {
   return readdirSync(dir).flatMap((entry) => {
     const full = path.join(dir, entry);
     if (statSync(full).isDirectory()) return routeFiles(full);
-    return entry === "route.ts" ? [path.relative(root, full)] : [];
+    return /^route(\.bench)?\.ts$/.test(entry) ? [path.relative(root, full)] : [];
   });
 }
 
@@ -83,7 +83,9 @@ describe("authorisation table", () => {
         if (res.status === 401 || res.status === 403 || res.status === 404) {
           // Refusals from our own handlers must carry the contract's error JSON.
           const type = res.headers.get("content-type") ?? "";
-          if (row.route.includes("/api/") && !row.route.includes("[...nextauth]") && !row.route.includes("uploadthing") && !type.includes("json")) {
+          // A *.bench.ts route is not in this build (only CANTROVE_BENCH=1 adds it): its 404 is Next's own page.
+          const ours = !row.route.includes("[...nextauth]") && !row.route.includes("uploadthing") && !row.route.endsWith(".bench.ts");
+          if (row.route.includes("/api/") && ours && !type.includes("json")) {
             failures.push(`${row.method} ${row.path(fixture)} as ${who}: ${res.status} without JSON`);
           }
         }

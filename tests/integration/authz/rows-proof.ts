@@ -2,7 +2,10 @@ import { everyone, row } from "./row";
 import type { AuthzRow } from "./types";
 
 export const rows: AuthzRow[] = [
-  row("GET", "bench/naive-stock/[id]", (f) => `/api/bench/naive-stock/${f.demoDriveId}`, everyone(404), {
-    note: "the benchmark's naive reference exists only when the server starts with CANTROVE_BENCH=1",
-  }),
+  {
+    ...row("GET", "bench/naive-stock/[id]", (f) => `/api/bench/naive-stock/${f.demoDriveId}`, everyone(404), {
+      note: "the benchmark's naive reference is built (and answers) only with CANTROVE_BENCH=1",
+    }),
+    route: "app/api/bench/naive-stock/[id]/route.bench.ts",
+  },
 ];

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { ButtonLink } from "@/components/ui/button-link";
 import { Card, EmptyState } from "@/components/ui/card";
+import { PageHeading } from "@/components/ui/page-heading";
 import { requirePageRole } from "@/lib/auth/session";
 import { listDrives } from "@/lib/drives/queries";
 import { countOf } from "@/lib/plural";
@@ -15,10 +16,9 @@ export default async function OrganiseDrivesPage() {
   const [drives, look] = await Promise.all([listDrives(actor.group.id), groupLook(actor.group.id)]);
   return (
     <main className="flex flex-col gap-6">
-      <div className="flex flex-wrap items-center justify-between gap-3">
-        <h1 className="text-3xl">Drives</h1>
+      <PageHeading title="Drives">
         <ButtonLink href="/organise/drives/new">New drive</ButtonLink>
-      </div>
+      </PageHeading>
       <Card>
         {drives.length === 0 ? (
           <EmptyState title="No drives yet">Start one with “New drive”, then place its drop points on the map.</EmptyState>

@@ -1,15 +1,9 @@
-import { Skeleton } from "@/components/ui/card";
+import { PageSkeleton } from "@/components/ui/page-skeleton";
 
 // In a route group so the pages with an id (../[id]) are not under this
 // loading boundary: once it has streamed, notFound() can no longer make the
 // answer a 404, and another group's record must be one.
 
 export default function Loading() {
-  return (
-    <main className="flex flex-col gap-4" aria-busy="true" aria-label="Loading the pickup run page">
-      <Skeleton className="h-9 w-64" />
-      <Skeleton className="h-40 w-full" />
-      <Skeleton className="h-40 w-full" />
-    </main>
-  );
+  return <PageSkeleton title="w-64" blocks={["h-40", "h-40"]} label="Loading the pickup run page" />;
 }

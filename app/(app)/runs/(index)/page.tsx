@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { ButtonLink } from "@/components/ui/button-link";
 import { Card } from "@/components/ui/card";
+import { PageHeading } from "@/components/ui/page-heading";
 import { PickupHistory } from "@/components/runs/pickup-history";
 import { RunList } from "@/components/runs/run-list";
 import { requirePageRole } from "@/lib/auth/session";
@@ -27,10 +28,9 @@ export default async function RunsPage() {
   const by = (state: string) => runs.filter((r) => r.state === state);
   return (
     <main className="flex flex-col gap-4">
-      <div className="flex flex-wrap items-center justify-between gap-3">
-        <h1 className="text-3xl">Pickup runs</h1>
+      <PageHeading title="Pickup runs">
         <ButtonLink href="/runs/new">Plan a run</ButtonLink>
-      </div>
+      </PageHeading>
       <Card title="Under way">
         <RunList look={look} runs={by("under_way")} empty="No run is under way." />
       </Card>

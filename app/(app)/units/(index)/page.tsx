@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { Card, EmptyState } from "@/components/ui/card";
 import { ButtonLink } from "@/components/ui/button-link";
+import { PageHeading } from "@/components/ui/page-heading";
 import { DriveProgressLine } from "@/components/heaters/drive-progress-line";
 import { StateBadge } from "@/components/heaters/state-badge";
 import { requirePageRole } from "@/lib/auth/session";
@@ -22,10 +23,9 @@ export default async function UnitsPage() {
   ]);
   return (
     <main className="flex flex-col gap-6">
-      <div className="flex flex-wrap items-center justify-between gap-3">
-        <h1 className="text-3xl">Heater units</h1>
+      <PageHeading title="Heater units">
         <ButtonLink href="/plan">Plan a unit</ButtonLink>
-      </div>
+      </PageHeading>
       {units.length === 0 ? (
         <Card>
           <EmptyState title="No heater units yet">Plan one from its glazing sheet to see how many cans it needs.</EmptyState>

@@ -1,7 +1,7 @@
 import { endpoint } from "@/lib/api/endpoint";
 import { idPath } from "@/lib/api/path";
 import { resendInvitation } from "@/lib/accounts/invitations";
-import { ACCOUNT_LIMITS } from "@/lib/accounts/limits";
+import { RESEND_INVITATION_LIMITS } from "@/lib/accounts/limits";
 
 export const dynamic = "force-dynamic";
 
@@ -10,10 +10,7 @@ export const POST = endpoint(
   {
     who: ["organiser"],
     params: idPath("That invitation"),
-    limits: [
-      { rule: ACCOUNT_LIMITS.resendPerClient, by: "client" },
-      { rule: ACCOUNT_LIMITS.resendPerInvitation, by: ({ params }) => params.id },
-    ],
+    limits: RESEND_INVITATION_LIMITS,
   },
   async ({ actor, params }) => resendInvitation(actor, params.id),
 );

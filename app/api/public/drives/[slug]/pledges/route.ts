@@ -1,7 +1,7 @@
 import { endpoint } from "@/lib/api/endpoint";
 import { slugPath } from "@/lib/api/path";
 import { createPledge } from "@/lib/drives/public-actions";
-import { PUBLIC_LIMITS } from "@/lib/drives/limits";
+import { PLEDGE_LIMITS } from "@/lib/drives/limits";
 import { pledgeInput } from "@/lib/drives/schemas";
 
 export const dynamic = "force-dynamic";
@@ -13,10 +13,7 @@ export const POST = endpoint(
     params: slugPath(),
     body: pledgeInput,
     status: 201,
-    limits: [
-      { rule: PUBLIC_LIMITS.pledgePerClient, by: "client" },
-      { rule: PUBLIC_LIMITS.pledgePerAddress, by: ({ body }) => body.email },
-    ],
+    limits: PLEDGE_LIMITS,
   },
   async ({ params, body }) => createPledge(params.slug, body),
 );

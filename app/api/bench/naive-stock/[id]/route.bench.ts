@@ -6,8 +6,9 @@ import { benchRoutesEnabled, naiveStock } from "@/lib/bench/naive-stock";
 
 export const dynamic = "force-dynamic";
 
-// Exists only when the server was started with CANTROVE_BENCH=1 (npm run bench): 404 for
-// everyone otherwise, before any sign-in is asked for, as for a path that does not exist.
+// Built only with CANTROVE_BENCH=1 (npm run bench; the ".bench.ts" page extension in
+// next.config.mjs). The server must also be started with it: a bench build served
+// without it answers 404 for everyone, before any sign-in is asked for.
 export const GET = endpoint({ who: "anyone", params: idPath("That drive") }, async ({ params }) => {
   if (!benchRoutesEnabled()) throw notFound("That page");
   const actor = await requireUser();
