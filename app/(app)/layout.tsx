@@ -4,6 +4,8 @@ import { AppHeader } from "@/components/layout/app-header";
 import { DatabaseDown } from "@/components/system/database-down";
 import { getActor } from "@/lib/auth/session";
 import { isDatabaseUnreachable } from "@/lib/db";
+import { groupLook } from "@/lib/format/group-look-queries";
+import { LookProvider } from "@/hooks/use-look";
 
 export const dynamic = "force-dynamic";
 
@@ -19,12 +21,16 @@ export default async function AppLayout({ children }: { children: React.ReactNod
     throw error;
   }
   if (!actor) redirect("/signin");
+  // How the group shows dates, numbers and measures, for the client components below.
+  const look = await groupLook(actor.group.id);
   return (
     <SessionBoundary>
-      <AppHeader groupName={actor.group.name} role={actor.role} userName={actor.user.name} />
-      <div id="main" className="mx-auto max-w-5xl px-4 py-6">
-        {children}
-      </div>
+      <LookProvider look={look}>
+        <AppHeader groupName={actor.group.name} role={actor.role} userName={actor.user.name} />
+        <div id="main" className="mx-auto max-w-5xl px-4 py-6">
+          {children}
+        </div>
+      </LookProvider>
     </SessionBoundary>
   );
 }

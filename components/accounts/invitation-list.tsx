@@ -7,10 +7,12 @@ import { FormError } from "@/components/ui/field";
 import { LoadError } from "@/components/ui/load-error";
 import { ROLE_LABEL } from "@/lib/auth/roles";
 import { memberQueries, useResendInvitation, useRevokeInvitation } from "@/hooks/queries/members";
+import { useFormat } from "@/hooks/use-look";
 
-const day = (iso: string) => new Date(iso).toLocaleDateString(undefined, { day: "numeric", month: "short" });
 
 export function InvitationList() {
+  // The group's style (lib/format), not the browser's own locale.
+  const day = useFormat().dayOf;
   const { data, isPending, error, refetch } = useQuery(memberQueries.invitations());
   const resend = useResendInvitation();
   const revoke = useRevokeInvitation();

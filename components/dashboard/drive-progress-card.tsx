@@ -6,6 +6,7 @@ import type { DriveProgress } from "@/lib/drives/progress";
 import { finishText, heatersCoveredText, paceText } from "@/lib/drives/progress-wording";
 import { countOf } from "@/lib/plural";
 import { spanText } from "@/lib/drives/current-drive";
+import { formatter, type Look } from "@/lib/format";
 
 interface Props {
   drive: { id: string; slug: string; name: string; startsOn: string; endsOn: string; isPublic: boolean; dropPoints: number; heaterUnits: number };
@@ -14,9 +15,10 @@ interface Props {
   pledges: { id: string; bags: number; bringOn: string | null; dropPointName: string }[];
 }
 
-const fmt = (n: number) => n.toLocaleString("en-GB");
 
-export function DriveProgressCard({ drive, progress, fullBins, pledges }: Props) {
+export function DriveProgressCard({ drive, progress, fullBins, pledges, look }: Props & { look: Look }) {
+  const f = formatter(look);
+  const fmt = (n: number) => f.number(n);
   const share = progress.target.cans > 0 ? Math.min(1, progress.goodCans / progress.target.cans) : 0;
   return (
     <Card
@@ -24,7 +26,7 @@ export function DriveProgressCard({ drive, progress, fullBins, pledges }: Props)
         <span className="flex flex-wrap items-baseline justify-between gap-2">
           <Link href={`/organise/drives/${drive.id}`} className="tap">{drive.name}</Link>
           <span className="text-base font-normal text-ink-faint">
-            {spanText(drive)}
+            {spanText(drive, look)}
             {drive.isPublic ? (
               <>
                 {" "}
@@ -40,7 +42,7 @@ export function DriveProgressCard({ drive, progress, fullBins, pledges }: Props)
       <p className="text-lg font-semibold" data-testid="heaters-covered">
         {heatersCoveredText(progress.heatersCovered.covered, progress.heatersCovered.total)}
       </p>
-      <div className="mt-2 h-4 overflow-hidden rounded-full bg-paper-deep" role="img" aria-label={progress.target.cans > 0 ? `${Math.round(share * 100)} % of the target` : "No target yet"}>
+      <div className="mt-2 h-4 overflow-hidden rounded-full bg-paper-deep" role="img" aria-label={progress.target.cans > 0 ? `${f.percent(share)} of the target` : "No target yet"}>
         <div className="h-full bg-moss" style={{ width: `${share * 100}%` }} />
       </div>
       <dl className="mt-3 grid grid-cols-2 gap-x-4 gap-y-1 text-sm sm:grid-cols-4">
@@ -57,13 +59,13 @@ export function DriveProgressCard({ drive, progress, fullBins, pledges }: Props)
         <div>
           <dt className="text-ink-faint">Yield</dt>
           <dd className="font-semibold">
-            {Math.round(progress.yield * 100)} %{progress.yieldSource === "default" ? " (assumed until the first sort)" : ""}
+            {f.percent(progress.yield)}{progress.yieldSource === "default" ? " (assumed until the first sort)" : ""}
           </dd>
         </div>
         <div>
           <dt className="text-ink-faint">{progress.finish.kind === "expected" ? "Expected finish" : "Finish"}</dt>
           <dd className="font-semibold" data-testid="expected-finish">
-            {finishText(progress.finish)}
+            {finishText(progress.finish, f.day)}
           </dd>
         </div>
       </dl>
@@ -78,7 +80,7 @@ export function DriveProgressCard({ drive, progress, fullBins, pledges }: Props)
             {pledges.map((p) => (
               <li key={p.id}>
                 about {countOf(p.bags, "bag", fmt)} to {p.dropPointName}
-                {p.bringOn ? ` on ${p.bringOn}` : ""}
+                {p.bringOn ? ` on ${f.day(p.bringOn)}` : ""}
               </li>
             ))}
           </ul>

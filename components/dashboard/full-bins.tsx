@@ -7,12 +7,14 @@ import { Notice } from "@/components/ui/notice";
 import { useClearFullBin } from "@/hooks/queries/drive-writes";
 import { LEVEL_LABEL, timeAgo } from "@/lib/drives/fill";
 import type { FullBin } from "@/lib/drives/types";
-import { formatDateTime } from "@/lib/format";
+import { useFormat } from "@/hooks/use-look";
+import { NBSP } from "@/lib/format";
 import { countOf } from "@/lib/plural";
 
 /** Every bin full now, once each; a haul from it or "Clear" takes it off the list. */
 export function FullBins({ bins }: { bins: FullBin[] }) {
   const router = useRouter();
+  const f = useFormat();
   const [cleared, setCleared] = useState<string[]>([]);
   const clear = useClearFullBin({
     onSuccess: (_data, b) => {
@@ -29,8 +31,8 @@ export function FullBins({ bins }: { bins: FullBin[] }) {
           {shown.map((b) => (
             <li key={b.dropPointId} className="flex flex-wrap items-center justify-between gap-2" data-testid="full-bin">
               <span>
-                <strong>{b.dropPointName}</strong>: {LEVEL_LABEL[b.level] ?? `${b.level} %`},{" "}
-                <time dateTime={b.reportedAt} title={formatDateTime(b.reportedAt)}>
+                <strong>{b.dropPointName}</strong>: {LEVEL_LABEL[b.level] ?? `${b.level}${NBSP}%`},{" "}
+                <time dateTime={b.reportedAt} title={f.moment(b.reportedAt)}>
                   reported {timeAgo(b.reportedAt)}
                 </time>
               </span>

@@ -15,7 +15,7 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
   const [bags, setBags] = useState("1");
   const [weight, setWeight] = useState("");
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const { send, status } = useEntrySubmit();
+  const { send, clear: clearStatus, status } = useEntrySubmit();
 
   // A box's old error goes once it is edited; what is typed then speaks for itself.
   const edit = (key: string, set: (raw: string) => void) => (raw: string) => {
@@ -25,6 +25,7 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
 
   async function onSubmit(e: React.FormEvent) {
     e.preventDefault();
+    clearStatus(); // an earlier "recorded" must not stand above this try's errors
     // Anything typed that is not a number stops here; nothing else is ever sent in its place.
     const numbers = parseNumberInputs({ bags: [bags, NUMBER_SPECS.haulBags], weightKg: [weight, NUMBER_SPECS.haulWeightKg] });
     const parsed = haulInputSchema.safeParse({ dropPointId, bags: numbers.values.bags, weightKg: numbers.values.weightKg });

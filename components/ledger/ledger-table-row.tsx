@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { useUndoMovement } from "@/hooks/queries/ledger";
-import { formatDateTime } from "@/lib/format";
+import { useFormat } from "@/hooks/use-look";
 import { entryLabel, kindLabel, lineLabel, moveLabel, reasonLabel } from "@/lib/ledger/labels";
 import { sentLabel } from "@/lib/ledger/entry-time";
 import type { LedgerRow } from "@/lib/ledger/ledger-row";
@@ -11,16 +11,17 @@ import type { LedgerRow } from "@/lib/ledger/ledger-row";
 const cell = "px-2 py-1 align-top";
 
 /** One ledger line; an organiser can undo the entry it belongs to (anyone's), with a reason. */
-export function LedgerLine({ r, siblings, showDrive, timeZone }: { r: LedgerRow; siblings: string[]; showDrive: boolean; timeZone: string }) {
+export function LedgerLine({ r, siblings, showDrive }: { r: LedgerRow; siblings: string[]; showDrive: boolean }) {
   const [asking, setAsking] = useState(false);
+  const f = useFormat();
   const undoable = r.kind !== "reversal" && !r.reversedById;
-  const sent = sentLabel(r.occurredAt, r.recordedAt, timeZone);
+  const sent = sentLabel(r.occurredAt, r.recordedAt, f.look);
   return (
     <>
       <tr className={r.reversesId ? "bg-paper-deep" : ""} data-line={r.id}>
         <td className={`${cell} tabular-nums font-semibold`}>{r.id}</td>
         <td className={`${cell} whitespace-nowrap`}>
-          {formatDateTime(r.occurredAt, timeZone)}
+          {f.moment(r.occurredAt)}
           {/* An entry kept offline is shown at when it happened, and when it reached the server. */}
           {sent ? <span className="block text-sm text-ink-faint">{sent}</span> : null}
         </td>
@@ -34,7 +35,7 @@ export function LedgerLine({ r, siblings, showDrive, timeZone }: { r: LedgerRow;
         <td className={cell}>{moveLabel(r.from, r.to)}</td>
         <td className={`${cell} tabular-nums`}>
           {r.isEstimate ? <abbr title="estimate">≈</abbr> : null}
-          {r.quantity.toLocaleString("en-GB")}
+          {f.number(r.quantity)}
         </td>
         <td className={cell}>{reasonLabel(r.reason)}</td>
         <td className={cell}>{r.person}</td>
@@ -59,6 +60,7 @@ export function LedgerLine({ r, siblings, showDrive, timeZone }: { r: LedgerRow;
 
 function UndoForm({ row, lines, onClose }: { row: LedgerRow; lines: string[]; onClose: () => void }) {
   const [reason, setReason] = useState("");
+  const f = useFormat();
   const undo = useUndoMovement({ onSuccess: () => onClose() });
   const which = lines.length > 1 ? `lines ${lines.join(", ")}` : lineLabel(row.id);
   return (
@@ -71,7 +73,7 @@ function UndoForm({ row, lines, onClose }: { row: LedgerRow; lines: string[]; on
       }}
     >
       <p className="font-semibold">
-        Undo the {kindLabel(row.kind)} {row.person} recorded on {formatDateTime(row.occurredAt)} ({which})?
+        Undo the {kindLabel(row.kind)} {row.person} recorded on {f.moment(row.occurredAt)} ({which})?
       </p>
       <p className="text-sm text-ink-soft">A new entry runs the other way; both stay in the ledger with your reason.</p>
       <label className="flex flex-col text-sm font-semibold">

@@ -9,11 +9,10 @@ import type { LogDrive } from "@/lib/drives/types";
 import { LedgerFilters } from "./ledger-table-filters";
 import { LedgerLine } from "./ledger-table-row";
 import { useLedgerFilters } from "./ledger-table-url";
-import { countOf } from "@/lib/plural";
+import { useFormat } from "@/hooks/use-look";
 
-const fmt = (n: number) => n.toLocaleString("en-GB");
-
-export function LedgerTable({ drives, people, initialDriveId, timeZone }: { drives: LogDrive[]; people: { id: string; name: string }[]; initialDriveId: string; timeZone: string }) {
+export function LedgerTable({ drives, people, initialDriveId }: { drives: LogDrive[]; people: { id: string; name: string }[]; initialDriveId: string }) {
+  const f = useFormat();
   const { filters, set, query } = useLedgerFilters(initialDriveId);
   const pages = useInfiniteQuery(ledgerQueries.list(filters as Record<string, string>, query));
   const rows = useMemo(() => pages.data?.pages.flatMap((p) => p.rows) ?? [], [pages.data]);
@@ -53,14 +52,14 @@ export function LedgerTable({ drives, people, initialDriveId, timeZone }: { driv
               </thead>
               <tbody className="divide-y divide-paper-edge">
                 {rows.map((r) => (
-                  <LedgerLine key={r.id} r={r} siblings={byMovement.get(r.movementId) ?? [r.id]} showDrive={!filters.driveId} timeZone={timeZone} />
+                  <LedgerLine key={r.id} r={r} siblings={byMovement.get(r.movementId) ?? [r.id]} showDrive={!filters.driveId} />
                 ))}
               </tbody>
             </table>
           </div>
           <p role="status" className="flex flex-wrap items-center gap-3 text-sm">
             <span data-testid="ledger-count">
-              Showing {fmt(rows.length)} of {countOf(total, "line", fmt)}
+              Showing {f.number(rows.length)} of {f.count(total, "line")}
             </span>
             {pages.hasNextPage ? (
               <Button variant="secondary" onClick={() => pages.fetchNextPage()} disabled={pages.isFetchingNextPage}>

@@ -2,6 +2,7 @@
 
 import { useState } from "react";
 import { DriveBanner } from "@/components/drives/drive-banner";
+import { useFormat } from "@/hooks/use-look";
 import { SelectField } from "@/components/ui/field";
 import { useRememberDrive } from "@/hooks/queries/current-drive";
 import { HaulForm } from "./haul-form";
@@ -22,6 +23,7 @@ const TABS = [
 export function LogHome({ drives, initialDriveId, initialDropPointId, today }: { drives: LogDrive[]; initialDriveId: string; initialDropPointId?: string; today: string }) {
   const [driveId, setDriveId] = useState(initialDriveId);
   const remembered = useRememberDrive();
+  const { look } = useFormat();
   const [tab, setTab] = useState<(typeof TABS)[number]["id"]>("haul");
   const outbox = useOutbox();
   const drive = drives.find((d) => d.id === driveId) ?? drives[0];
@@ -40,7 +42,7 @@ export function LogHome({ drives, initialDriveId, initialDropPointId, today }: {
           options={drives.map((d) => ({ value: d.id, label: d.name }))}
         />
       ) : null}
-      <DriveBanner drive={drive} today={today} rememberError={remembered.error} />
+      <DriveBanner drive={drive} today={today} rememberError={remembered.error} look={look} />
       <OutboxList items={outbox.items} refusals={outbox.refusals} onRetry={() => void outbox.retryNow()} onDismiss={outbox.dismissRefusal} onConfirm={outbox.confirmRefusal} />
       <div role="tablist" aria-label="What to log" className="grid grid-cols-3 gap-2">
         {TABS.map((t) => (

@@ -2,7 +2,7 @@
 
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import type { OutboxItem } from "@/lib/ledger/browser-queue";
+import { attemptsText, type OutboxItem } from "@/lib/ledger/browser-queue";
 import type { Refusal } from "./use-outbox";
 import { countOf, noun } from "@/lib/plural";
 
@@ -30,7 +30,7 @@ export function OutboxList({
             {items.map((i) => (
               <li key={i.key}>
                 {i.label}
-                {i.attempts ? <span className="text-ink-faint"> · {i.attempts} tries ({i.lastError})</span> : null}
+                {i.attempts ? <span className="block text-sm text-ink-faint">{attemptsText(i.attempts, i.lastError)}</span> : null}
               </li>
             ))}
           </ul>

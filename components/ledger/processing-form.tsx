@@ -4,6 +4,7 @@ import { useState } from "react";
 import { useQuery } from "@tanstack/react-query";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { LOSS_REASON_LABEL, processingInputSchema, type LossReason } from "@/lib/ledger/schemas";
+import { stageLabel } from "@/lib/ledger/labels";
 import { ledgerQueries } from "@/hooks/queries/ledger";
 import { ProcessingCaution } from "./cautions";
 import { NumberField } from "@/components/ui/number-field";
@@ -25,7 +26,7 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
   const [lostText, setLost] = useState("0");
   const [chosenReason, setLossReason] = useState<LossReason | null>(null);
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const { send, status } = useEntrySubmit();
+  const { send, clear: clearStatus, status } = useEntrySubmit();
   const step = STEPS[stepIndex];
   const available = stock.data ? stock.data.stages[step.from] : null;
   const lossReason = chosenReason && lossReasonsFor(step.to).includes(chosenReason) ? chosenReason : ownLossReason(step.to);
@@ -36,6 +37,7 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
 
   async function onSubmit(e: React.FormEvent) {
     e.preventDefault();
+    clearStatus(); // an earlier "recorded" must not stand above this try's errors
     // Anything typed that is not a whole number stops here; nothing else is ever sent in its place.
     const numbers = parseNumberInputs({ quantity: [quantityText, NUMBER_SPECS.batchCans], "lost.quantity": [lostText, NUMBER_SPECS.lostCans] });
     const quantity = numbers.values.quantity;
@@ -73,7 +75,7 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
       </fieldset>
       <ProcessingCaution to={step.to} />
       <p className="text-ink-soft">
-        {available === null ? "Loading what is on hand…" : `${countOf(available, noun("can is", "cans are"))} ${step.from} and can move on.`}
+        {available === null ? "Loading what is on hand…" : `${countOf(available, noun("can is", "cans are"))} ${stageLabel(step.from)} and can move on.`}
       </p>
       <NumberField
         id="processing-quantity"

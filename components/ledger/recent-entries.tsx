@@ -6,8 +6,9 @@ import { Button } from "@/components/ui/button";
 import { Card, EmptyState, Skeleton } from "@/components/ui/card";
 import { FormError } from "@/components/ui/field";
 import { ledgerQueries, useUndoMovement, type MyEntry } from "@/hooks/queries/ledger";
-import { formatDateTime } from "@/lib/format";
-import { countOf } from "@/lib/plural";
+import { useFormat } from "@/hooks/use-look";
+import { capitalise, kindLabel, stageLabel } from "@/lib/ledger/labels";
+import { countOf, noun } from "@/lib/plural";
 
 function describe(e: MyEntry): string {
   const d = e.details as Record<string, unknown>;
@@ -15,25 +16,26 @@ function describe(e: MyEntry): string {
     case "haul":
       return `Haul from ${e.dropPoint ?? "a drop point"}: ≈${countOf(Number(e.estimated), "can")}`;
     case "sort":
-      return `Sort: ${d.good} good, ${Number(d.counted) - Number(d.good)} rejected`;
+      return `Sort: ${Number(d.good)} good, ${Number(d.counted) - Number(d.good)} rejected`;
     case "processing": {
       // Older entries carry no quantity in their details; their lines all went to `to`.
       const lost = d.lost as { quantity: number } | undefined;
       const moved = typeof d.quantity === "number" ? d.quantity : e.counted;
-      return `${String(d.to).replace(/^./, (c) => c.toUpperCase())}: ${countOf(Number(moved), "can")}${lost ? `, ${lost.quantity} lost` : ""}`;
+      return `${capitalise(stageLabel(String(d.to)))}: ${countOf(Number(moved), "can")}${lost ? `, ${lost.quantity} lost` : ""}`;
     }
     case "stockCount":
-      return `Stock count: ${(d.lines as unknown[] | undefined)?.length ?? 0} stages adjusted`;
+      return `Stock count: ${countOf((d.lines as unknown[] | undefined)?.length ?? 0, noun("stage"))} adjusted`;
     case "claim":
       return `Claimed ${countOf(Number(e.counted), "can")}`;
     case "builtIn":
       return `Built in ${countOf(Number(e.counted), "can")}`;
     default:
-      return `${e.kind}: ${countOf(Number(e.counted), "can")}`;
+      return `${capitalise(kindLabel(e.kind))}: ${countOf(Number(e.counted), "can")}`;
   }
 }
 
 export function RecentEntries() {
+  const f = useFormat();
   const entries = useQuery(ledgerQueries.mine());
   const [error, setError] = useState<string | null>(null);
   const undo = useUndoMovement({ onSuccess: () => setError(null), onError: (e) => setError(e.message) });
@@ -53,7 +55,7 @@ export function RecentEntries() {
               <span className={e.undone ? "text-ink-faint line-through" : ""}>
                 {describe(e)}
                 <span className="block text-sm text-ink-faint">
-                  {formatDateTime(e.occurredAt)} {e.undone ? "· undone" : ""}
+                  {f.moment(e.occurredAt)}{e.undone ? " · undone" : ""}
                 </span>
               </span>
               {e.undone ? null : (

@@ -57,7 +57,7 @@ export function RecyclingForm({ driveId }: { driveId: string }) {
   };
   return (
     <form onSubmit={onSubmit} className="flex flex-col gap-3" aria-label="Rejects taken to recycling" noValidate>
-      <p className="text-ink-soft">{stock.data ? `${stock.data.rejectedOnHand} rejected cans are waiting to go.` : "Loading…"}</p>
+      <p className="text-ink-soft">{stock.data ? `${countOf(stock.data.rejectedOnHand, noun("rejected can is", "rejected cans are"))} waiting to go.` : "Loading…"}</p>
       <div className="grid gap-3 sm:grid-cols-3">
         <NumberField id="recycle-quantity" label="Cans" spec={NUMBER_SPECS.recycledCans} value={form.quantity} onChange={set("quantity")} error={errors.quantity} />
         <NumberField id="recycle-weight" label="Weight in kg (optional)" spec={NUMBER_SPECS.recycledWeightKg} value={form.weightKg} onChange={set("weightKg")} error={errors.weightKg} />

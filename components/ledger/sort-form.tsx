@@ -12,7 +12,7 @@ import { EntryActions, useEntrySubmit, type Submit } from "./entry-submit";
 import { NumberField } from "@/components/ui/number-field";
 import { NUMBER_SPECS, parseNumberInput, parseNumberInputs } from "@/lib/forms/number-input";
 import { countOf, plural } from "@/lib/plural";
-import { formatDateTime } from "@/lib/format";
+import { useFormat } from "@/hooks/use-look";
 
 const zeroRejects = () => Object.fromEntries(REJECT_REASONS.map((r) => [r, "0"])) as Record<RejectReason, string>;
 // What the boxes hold as numbers, for the running "Counted" line; a box that is not a number counts nothing.
@@ -22,12 +22,13 @@ const valueOf = (raw: string) => {
 };
 
 export function SortForm({ driveId, submit }: { driveId: string; submit: Submit }) {
+  const f = useFormat();
   const hauls = useQuery(ledgerQueries.openHauls(driveId));
   const [chosen, setChosen] = useState<string[]>([]);
   const [goodText, setGood] = useState("0");
   const [rejected, setRejected] = useState(zeroRejects);
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const { send, status } = useEntrySubmit();
+  const { send, clear: clearStatus, status } = useEntrySubmit();
   const good = valueOf(goodText);
   const rejectTotal = Object.values(rejected).reduce((s, raw) => s + valueOf(raw), 0);
   const counted = good + rejectTotal;
@@ -35,6 +36,7 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
 
   async function onSubmit(e: React.FormEvent) {
     e.preventDefault();
+    clearStatus(); // an earlier "recorded" must not stand above this try's errors
     // Anything typed that is not a whole number stops here; nothing else is ever sent in its place.
     const numbers = parseNumberInputs({
       good: [goodText, NUMBER_SPECS.goodCans],
@@ -78,8 +80,8 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
                 onChange={(e) => setChosen((c) => (e.target.checked ? [...c, h.id] : c.filter((x) => x !== h.id)))}
               />
               <span>
-                {h.dropPointName} · {countOf(h.bags, "bag")}{h.weightKg !== null ? ` · ${h.weightKg} kg` : ""} · ≈{countOf(h.estimatedCans, "can")}
-                <span className="block text-sm text-ink-faint">{formatDateTime(h.hauledAt)}</span>
+                {h.dropPointName} · {countOf(h.bags, "bag")}{h.weightKg !== null ? ` · ${f.mass(h.weightKg)}` : ""} · ≈{countOf(h.estimatedCans, "can")}
+                <span className="block text-sm text-ink-faint">{f.moment(h.hauledAt)}</span>
               </span>
             </label>
           ))

@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { formatter, type Look } from "@/lib/format";
 import { countOf } from "@/lib/plural";
 
 export interface HistoryPoint {
@@ -10,7 +11,8 @@ export interface HistoryPoint {
 
 const STATUS_TEXT = { pending: "planned", logged: "haul logged", skipped: "skipped" } as const;
 
-export function PickupHistory({ points }: { points: HistoryPoint[] }) {
+export function PickupHistory({ points, look }: { points: HistoryPoint[]; look: Look }) {
+  const f = formatter(look);
   return (
     <ul className="flex flex-col gap-2">
       {points.map((p) => (
@@ -25,7 +27,7 @@ export function PickupHistory({ points }: { points: HistoryPoint[] }) {
               <ol className="mt-2 flex flex-col gap-1">
                 {p.history.map((h) => (
                   <li key={h.runId}>
-                    <Link href={`/runs/${h.runId}`}>{h.plannedOn}</Link> · {h.assigneeName ?? "nobody"} · {STATUS_TEXT[h.status]}
+                    <Link href={`/runs/${h.runId}`}>{f.day(h.plannedOn)}</Link> · {h.assigneeName ?? "nobody"} · {STATUS_TEXT[h.status]}
                     {h.haulBags !== null ? `: ${countOf(h.haulBags, "bag")}` : null}
                     {h.skipReason ? <span className="text-ink-faint"> — “{h.skipReason}”</span> : null}
                   </li>

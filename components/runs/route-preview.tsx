@@ -5,6 +5,7 @@ import { runQueries } from "@/hooks/queries/runs";
 import type { SuggestionRow } from "@/lib/runs/types";
 import { RouteMap } from "./route-map";
 import { ROUTE_MAP_BOX } from "./route-map-box";
+import { useFormat } from "@/hooks/use-look";
 
 const bar = "inline-block h-4 animate-pulse rounded bg-paper-deep align-middle";
 
@@ -47,6 +48,7 @@ export function RoutePreview({
     returnToStart,
   };
   const route = useQuery({ ...runQueries.route(input), enabled: ready });
+  const f = useFormat();
   if (!ready) {
     return <p className="text-ink-soft">Choose a start point and at least one drop point to see the route.</p>;
   }
@@ -57,7 +59,7 @@ export function RoutePreview({
   return (
     <div className="flex flex-col gap-3">
       <p className="text-lg">
-        Route length <strong data-testid="route-length">{route.data.distanceKm.toFixed(2)} km</strong>{" "}
+        Route length <strong data-testid="route-length">{f.distance(route.data.distanceKm)}</strong>{" "}
         <span className="text-sm text-ink-faint">(straight lines between stops; roads are longer)</span>
       </p>
       <RouteMap start={start} stops={ordered} returnToStart={returnToStart} tileUrl={tileUrl} attribution={attribution} />
@@ -69,10 +71,10 @@ export function RoutePreview({
               <span className="mr-2 inline-flex h-6 w-6 items-center justify-center rounded-full bg-ember text-sm font-bold text-white">{i + 1}</span>
               {s.name}
             </span>
-            <span className="text-ink-faint">+{route.data.legs[i]!.distanceKm.toFixed(2)} km</span>
+            <span className="text-ink-faint">+{f.distance(route.data.legs[i]!.distanceKm)}</span>
           </li>
         ))}
-        {returnToStart ? <li className="text-ink-soft">Back to the start (+{route.data.legs.at(-1)!.distanceKm.toFixed(2)} km)</li> : null}
+        {returnToStart ? <li className="text-ink-soft">Back to the start (+{f.distance(route.data.legs.at(-1)!.distanceKm)})</li> : null}
       </ol>
     </div>
   );

@@ -6,6 +6,7 @@ import { useMemo, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Card, Skeleton } from "@/components/ui/card";
 import { DriveBanner } from "@/components/drives/drive-banner";
+import { useFormat } from "@/hooks/use-look";
 import { Field, FormError, SelectField } from "@/components/ui/field";
 import { fieldErrors } from "@/lib/api/client";
 import { fieldErrorsOf } from "@/lib/api/errors";
@@ -35,6 +36,7 @@ export function RunPlanner(props: PlannerProps) {
   const router = useRouter();
   const [driveId, setDriveId] = useState(props.initialDriveId);
   const remembered = useRememberDrive();
+  const { look } = useFormat();
   const drive = props.drives.find((d) => d.id === driveId) ?? props.drives[0];
   const suggestions = useQuery({
     ...runQueries.suggestions(driveId),
@@ -103,7 +105,7 @@ export function RunPlanner(props: PlannerProps) {
           />
           {drive ? (
             <div className="mt-3">
-              <DriveBanner drive={drive} today={props.today} lead="Planning for" rememberError={remembered.error} />
+              <DriveBanner drive={drive} today={props.today} lead="Planning for" rememberError={remembered.error} look={look} />
             </div>
           ) : null}
           <div className="mt-4">

@@ -8,10 +8,11 @@ import { RunStateBadge } from "./run-list";
 import { RouteMap } from "./route-map";
 import { StopActions } from "./stop-actions";
 import { UndoStopHaul, UnskipStop } from "./stop-undo";
-import { countOf } from "@/lib/plural";
+import { useFormat } from "@/hooks/use-look";
 
 function StopCard({ run, stop, canAct, isNext }: { run: RunDetail; stop: RunStop; canAct: boolean; isNext: boolean }) {
   const p = stop.dropPoint;
+  const f = useFormat();
   return (
     <li
       className={`rounded-card border-2 bg-white p-4 ${isNext ? "border-ember" : "border-paper-edge"}`}
@@ -23,7 +24,7 @@ function StopCard({ run, stop, canAct, isNext }: { run: RunDetail; stop: RunStop
           <span className="mr-2 inline-flex h-8 w-8 items-center justify-center rounded-full bg-ember text-base text-white">{stop.position}</span>
           {p.name}
         </h2>
-        <span className="text-sm text-ink-faint">+{stop.legKm.toFixed(2)} km</span>
+        <span className="text-sm text-ink-faint">+{f.distance(stop.legKm)}</span>
       </div>
       <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-base">
         <dt className="font-semibold">Where</dt>
@@ -47,8 +48,8 @@ function StopCard({ run, stop, canAct, isNext }: { run: RunDetail; stop: RunStop
               {stop.haul ? (
                 <span className="font-normal text-ink-soft">
                   {" "}
-                  — {countOf(stop.haul.bags, "bag")}
-                  {stop.haul.weightKg !== null ? `, ${stop.haul.weightKg} kg` : ""}, about {countOf(stop.haul.estimatedCans, "can")} (estimate)
+                  — {f.count(stop.haul.bags, "bag")}
+                  {stop.haul.weightKg !== null ? `, ${f.mass(stop.haul.weightKg)}` : ""}, about {f.count(stop.haul.estimatedCans, "can")} (estimate)
                 </span>
               ) : null}
             </p>
@@ -73,15 +74,16 @@ export function RunView({ initial, canAct, tileUrl, attribution }: { initial: Ru
   // The stop actions' hooks put each answer in this read's cache, and read it again after an undo.
   const { data: run } = useQuery({ ...runQueries.detail(initial.id), initialData: initial });
   const next = run.stopList.find((s) => s.status === "pending");
+  const f = useFormat();
   return (
     <div className="flex flex-col gap-4">
       <div className="flex flex-wrap items-center gap-3">
-        <h1 className="text-3xl">Run on {run.plannedOn}</h1>
+        <h1 className="text-3xl">Run on {f.day(run.plannedOn)}</h1>
         <RunStateBadge state={run.state} />
       </div>
       <p className="text-ink-soft" aria-live="polite" data-testid="run-progress">
-        {run.driveName} · {run.assigneeName ?? "nobody assigned"} · {run.logged} logged, {run.skipped} skipped of {countOf(run.stops, "stop")} ·{" "}
-        {run.distanceKm.toFixed(1)} km
+        {run.driveName} · {run.assigneeName ?? "nobody assigned"} · {f.number(run.logged)} logged, {f.number(run.skipped)} skipped of {f.count(run.stops, "stop")} ·{" "}
+        {f.distance(run.distanceKm)}
       </p>
       {run.state === "done" ? (
         <Notice tone="good" title="Run done">Every stop is logged or skipped. Thank you!</Notice>

@@ -3,7 +3,7 @@ import { db } from "@/lib/db";
 import { notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
 import { groupTimeZone } from "@/lib/ledger/ledger-list";
-import { localTime } from "@/lib/ledger/csv";
+import { localDay } from "@/lib/format/dates";
 import { pickDrive, type DriveSpan } from "./current-drive";
 
 // The person's remembered drive (memberships.current_drive_id), read and stored
@@ -11,7 +11,7 @@ import { pickDrive, type DriveSpan } from "./current-drive";
 
 /** The group's calendar day now, in its own time zone. */
 export async function groupToday(groupId: string, now = new Date()): Promise<string> {
-  return localTime(now.toISOString(), await groupTimeZone(groupId)).slice(0, 10);
+  return localDay(now, await groupTimeZone(groupId));
 }
 
 /** The remembered drive's id, or null. It is not checked here: pickDrive only takes it when it is one of the group's drives. */

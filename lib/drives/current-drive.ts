@@ -1,6 +1,8 @@
 // Which drive a page opens on when the person has not said (pure; safe in the client).
 // Dates are calendar days `YYYY-MM-DD`, which compare correctly as strings; `today`
 // is the group's own day (groups.time_zone), worked out by the caller.
+import { formatDayRange, formatLongDay } from "@/lib/format/dates";
+import { DEFAULT_LOOK, type Look } from "@/lib/format/look";
 
 export interface DriveSpan {
   id: string;
@@ -59,33 +61,23 @@ export function pickDrive<D extends DriveSpan>(drives: readonly D[], today: stri
   return defaultDrive(drives, today);
 }
 
-// Our own month names: the server's and the browser's Intl data can differ ("Sep"/"Sept"),
-// which would make the rendered page and the hydrated one disagree.
-const SHORT = ["Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"];
-const LONG = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
-
-function parts(day: string) {
-  const [y, m, d] = day.split("-").map(Number);
-  return { y, m: m - 1, d };
-}
+// The words come from lib/format (Intl with the group's locale); its steady() spelling
+// keeps the server's and the browser's text the same ("Sep", not "Sept" from newer ICU data).
 
 /** "1 March 2027". */
-export function longDay(day: string): string {
-  const { y, m, d } = parts(day);
-  return `${d} ${LONG[m]} ${y}`;
+export function longDay(day: string, look: Pick<Look, "locale"> = DEFAULT_LOOK): string {
+  return formatLongDay(day, look);
 }
 
 /** "1 Nov – 31 Dec 2026", or "1 Nov 2026 – 31 Jan 2027" across a new year. */
-export function spanText(drive: Pick<DriveSpan, "startsOn" | "endsOn">): string {
-  const a = parts(drive.startsOn);
-  const b = parts(drive.endsOn);
-  return a.y === b.y ? `${a.d} ${SHORT[a.m]} – ${b.d} ${SHORT[b.m]} ${b.y}` : `${a.d} ${SHORT[a.m]} ${a.y} – ${b.d} ${SHORT[b.m]} ${b.y}`;
+export function spanText(drive: Pick<DriveSpan, "startsOn" | "endsOn">, look: Pick<Look, "locale"> = DEFAULT_LOOK): string {
+  return formatDayRange(drive.startsOn, drive.endsOn, look);
 }
 
 /** What to say plainly when entries go to a drive that is not running today; null while it runs. */
-export function timingWarning(drive: Pick<DriveSpan, "startsOn" | "endsOn">, today: string): string | null {
+export function timingWarning(drive: Pick<DriveSpan, "startsOn" | "endsOn">, today: string, look: Pick<Look, "locale"> = DEFAULT_LOOK): string | null {
   const timing = driveTiming(drive, today);
-  if (timing === "upcoming") return `This drive starts on ${longDay(drive.startsOn)}.`;
-  if (timing === "ended") return `This drive ended on ${longDay(drive.endsOn)}.`;
+  if (timing === "upcoming") return `This drive starts on ${longDay(drive.startsOn, look)}.`;
+  if (timing === "ended") return `This drive ended on ${longDay(drive.endsOn, look)}.`;
   return null;
 }

@@ -4,6 +4,7 @@
  * above three quarters in an episode alerts the organisers; later reports in
  * the same episode do not.
  */
+import { countOf } from "@/lib/plural";
 export const ALERT_LEVEL = 75;
 
 /** The levels a report may give (percent full). Here, not in schemas.ts, so the public page needs no zod. */
@@ -72,13 +73,12 @@ export const FILL_SHAPE_LABEL: Record<FillShape, string> = {
   full: "reported full",
 };
 
-/** "3 hours ago", "2 days ago": how long ago a report came in. */
+/** "3 hours ago", "2 days ago": how long ago a report came in (plurals by Intl.PluralRules, lib/plural; no date formatter on the drive page). */
 export function timeAgo(iso: string, now: Date = new Date()): string {
   const minutes = Math.max(0, Math.round((now.getTime() - new Date(iso).getTime()) / 60_000));
-  const unit = (n: number, w: string) => `${n} ${w}${n === 1 ? "" : "s"} ago`;
   if (minutes < 1) return "just now";
-  if (minutes < 60) return unit(minutes, "minute");
+  if (minutes < 60) return `${countOf(minutes, "minute")} ago`;
   const hours = Math.round(minutes / 60);
-  if (hours < 48) return unit(hours, "hour");
-  return unit(Math.round(hours / 24), "day");
+  if (hours < 48) return `${countOf(hours, "hour")} ago`;
+  return `${countOf(Math.round(hours / 24), "day")} ago`;
 }

@@ -21,21 +21,25 @@ export function remainingText(target: { cans: number; heaters: number }, remaini
   return "Target reached — thank you!";
 }
 
-/** The dashboard's "Expected finish": a date only when a pace promises one for a running drive. */
-export function finishText(finish: DriveFinish): string {
+/**
+ * The dashboard's "Expected finish": a date only when a pace promises one for a running drive.
+ * `day` writes a day in the group's style (formatter(look).day); given, not imported, so the public
+ * drive page, which reads this file, takes no date formatter.
+ */
+export function finishText(finish: DriveFinish, day: (isoDay: string) => string): string {
   switch (finish.kind) {
     case "noTarget":
       return NO_HEATERS;
     case "reached":
       return "Target reached";
     case "ended":
-      return `The drive ended on ${finish.endsOn}`;
+      return `The drive ended on ${day(finish.endsOn)}`;
     case "notStarted":
-      return `No pace yet: the drive starts on ${finish.startsOn}`;
+      return `No pace yet: the drive starts on ${day(finish.startsOn)}`;
     case "noPace":
       return `No pace yet: nothing counted in the last ${countOf(finish.windowDays, "day")}`;
     case "expected":
-      return finish.afterEnd && finish.endsOn ? `${finish.date}, after the drive ends on ${finish.endsOn}` : finish.date;
+      return finish.afterEnd && finish.endsOn ? `${day(finish.date)}, after the drive ends on ${day(finish.endsOn)}` : day(finish.date);
   }
 }
 

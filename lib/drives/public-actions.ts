@@ -6,6 +6,7 @@ import { sendMail } from "@/lib/mail/outbox";
 import { LEVEL_LABEL, shouldAlert } from "./fill";
 import { findPublicDrive, findPublicDropPoint } from "./public-queries";
 import type { FillReportInput, PledgeInput } from "./schemas";
+import { groupLook } from "@/lib/format/group-look-queries";
 import { binFullAlert, confirmationAddressKey, pledgeConfirmation } from "./public-mail";
 import { lastHauls } from "./tallies";
 
@@ -52,6 +53,7 @@ export async function createPledge(slug: string, input: PledgeInput) {
       bringOn: input.bringOn,
       donorName: input.name,
       driveUrl: `${env().APP_URL}/drives/${drive.slug}`,
+      look: await groupLook(drive.groupId),
     });
     await sendMail({ groupId: drive.groupId, to: input.email, ...mail, kind: "pledge-confirmation" });
     mailed = true;

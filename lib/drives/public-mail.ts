@@ -1,4 +1,5 @@
 import { createHash } from "node:crypto";
+import { DEFAULT_LOOK, formatter, type Look } from "@/lib/format";
 import { inertName, inertNote } from "@/lib/mail/inert-text";
 
 // The e-mails anonymous visitors cause. Whatever they typed is quoted inert
@@ -14,14 +15,17 @@ export interface PledgeMailFacts {
   bringOn: string;
   donorName: string;
   driveUrl: string;
+  /** The drive's group's look, for the day and the count. */
+  look?: Look;
 }
 
 export function pledgeConfirmation(f: PledgeMailFacts): { subject: string; text: string } {
   const name = inertName(f.donorName);
+  const show = formatter(f.look ?? DEFAULT_LOOK);
   const lines = [
     `Thank you for your pledge to the ${f.driveName}.`,
     "",
-    `You plan to bring about ${f.bags} bag${f.bags === 1 ? "" : "s"} of cans to ${f.pointName} on ${f.bringOn}.`,
+    `You plan to bring about ${show.count(f.bags, "bag")} of cans to ${f.pointName} on ${show.longDay(f.bringOn)}.`,
     f.pointHours ? `Opening hours: ${f.pointHours}.` : null,
     name ? `Name given with the pledge: ${name}` : null,
     "",

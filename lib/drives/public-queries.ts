@@ -4,6 +4,7 @@ import { notFound } from "@/lib/api/errors";
 import { UUID } from "@/lib/api/path";
 import { CURRENT_FILL_LATERAL } from "./fill";
 import type { PublicDropPointRow, PublicDropPointWithTallies } from "./types";
+import type { Look } from "@/lib/format/look";
 
 export type { PublicDropPointRow, PublicDropPointWithTallies };
 
@@ -53,6 +54,8 @@ export interface PublicDriveRow extends PublicDriveSummary {
   description: string;
   wanted: string;
   sparePercent: number;
+  /** The group's look (lib/format): its day for the pace, its words for dates and measures. */
+  look: Look;
 }
 
 export async function findPublicDrive(slug: string): Promise<PublicDriveRow | undefined> {
@@ -62,6 +65,9 @@ export async function findPublicDrive(slug: string): Promise<PublicDriveRow | un
       "d.id",
       "d.group_id as groupId",
       "g.name as groupName",
+      "g.time_zone as timeZone",
+      "g.locale",
+      "g.units",
       "d.slug",
       "d.name",
       "d.description",
@@ -72,7 +78,9 @@ export async function findPublicDrive(slug: string): Promise<PublicDriveRow | un
     )
     .where({ "d.slug": slug, "d.is_public": true })
     .first();
-  return row;
+  if (!row) return undefined;
+  const { timeZone, locale, units, ...rest } = row;
+  return { ...rest, look: { timeZone, locale, units } };
 }
 
 /** Cans each heater unit of the drive needs, oldest unit first. */

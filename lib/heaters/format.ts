@@ -1,31 +1,37 @@
 /**
  * How the planner, unit pages and build sheet print numbers, so every screen
- * (and the tests that compare them with the API) round the same way.
+ * (and the tests that compare them with the API) round the same way. Built on
+ * lib/format: lengths as a tape measure reads them (inches to the nearest
+ * eighth, millimetres whole), and a no-break space between number and unit.
  */
+import { DEFAULT_LOOK, formatInches, formatMillimetres, formatNumber as formatIn, MM_PER_INCH, NBSP, type Look } from "@/lib/format";
 import type { LengthUnit } from "./schemas";
 
-export function formatNumber(value: number, maxDigits = 0): string {
-  return value.toLocaleString("en-GB", { maximumFractionDigits: maxDigits, minimumFractionDigits: 0 });
+type Locale = Pick<Look, "locale">;
+
+export function formatNumber(value: number, maxDigits = 0, look: Locale = DEFAULT_LOOK): string {
+  return formatIn(value, look, maxDigits);
 }
 
-/** A length in the plan's unit: inches to 0.1, millimetres whole. */
-export function formatLength(value: number, unit: LengthUnit): string {
-  return `${formatNumber(value, unit === "in" ? 2 : 0)} ${unit}`;
+/** A length in the plan's unit: inches to the nearest ⅛, millimetres whole. */
+export function formatLength(value: number, unit: LengthUnit, look: Locale = DEFAULT_LOOK): string {
+  return unit === "in" ? formatInches(value, look) : formatMillimetres(value, look);
 }
 
-/** An area in the plan's unit squared: in² to 0.1, mm² whole. */
-export function formatArea(value: number, unit: LengthUnit): string {
-  return `${formatNumber(value, unit === "in" ? 1 : 0)} ${unit}²`;
+/** An area in the plan's unit squared, whole: a tape measure's precision gives no more. */
+export function formatArea(value: number, unit: LengthUnit, look: Locale = DEFAULT_LOOK): string {
+  return `${formatNumber(value, 0, look)}${NBSP}${unit}²`;
 }
 
 export function areaToM2(value: number, unit: LengthUnit): number {
-  return unit === "mm" ? value / 1e6 : (value * 25.4 * 25.4) / 1e6;
+  return unit === "mm" ? value / 1e6 : (value * MM_PER_INCH * MM_PER_INCH) / 1e6;
 }
 
-export function formatM2(m2: number): string {
-  return `${formatNumber(m2, 3)} m²`;
+/** Square metres to 0.01 (a square of 10 cm). */
+export function formatM2(m2: number, look: Locale = DEFAULT_LOOK): string {
+  return `${formatNumber(m2, 2, look)}${NBSP}m²`;
 }
 
-export function formatPercent(share: number): string {
-  return `${formatNumber(share * 100, 1)} %`;
+export function formatPercent(share: number, look: Locale = DEFAULT_LOOK): string {
+  return `${formatNumber(share * 100, 1, look)}${NBSP}%`;
 }

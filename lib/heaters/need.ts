@@ -7,6 +7,7 @@
  * Pure; safe to import in the client.
  */
 import { formatNumber } from "./format";
+import { plural } from "@/lib/plural";
 
 /**
  * The unit's spare: cans × spare % / 100, rounded UP to a whole can, so a unit
@@ -40,6 +41,6 @@ export function unitNeed(cans: number, sparePercent: number, claimed: number, bu
 export function needRefusalMessage(n: { remaining: number; cans: number; spare: number }): string {
   const what = `its ${formatNumber(n.cans)} cans plus ${formatNumber(n.spare)} spare`;
   if (n.remaining <= 0) return `This unit needs no more cans: ${what} are all claimed or built in already.`;
-  const cans = n.remaining === 1 ? "can" : "cans";
+  const cans = plural(n.remaining, "can");
   return `This unit needs only ${formatNumber(n.remaining)} more ${cans} (${what}). Claim ${formatNumber(n.remaining)} or fewer.`;
 }

@@ -6,7 +6,7 @@ import { UUID } from "@/lib/api/path";
 import { heaterClaims } from "@/lib/ledger/balances";
 import { computeCanGrid } from "./can-grid";
 import { unitNeed } from "./need";
-import type { CanGridInput, LengthUnit } from "./schemas";
+import { fromMm, toMm, type CanGridInput, type LengthUnit } from "./schemas";
 import type { HeaterState } from "./unit-schemas";
 import type { HeaterSummary, SavedHeater } from "./types";
 
@@ -96,12 +96,17 @@ export async function getHeaterUnit(groupId: string, id: string): Promise<Heater
 }
 
 /** The plan as the can-grid computation takes it, nulls left to the defaults. */
-export function planOf(u: HeaterUnitRow): CanGridInput {
-  const opt = (v: number | null) => (v === null ? undefined : v);
+/**
+ * The unit's plan, in `unit` when given (the group's units on its pages and
+ * sheets: a plan saved in inches reads in millimetres for a metric group), else as saved.
+ */
+export function planOf(u: HeaterUnitRow, unit: LengthUnit = u.unit): CanGridInput {
+  const len = (v: number) => (unit === u.unit ? v : fromMm(toMm(v, u.unit), unit));
+  const opt = (v: number | null) => (v === null ? undefined : len(v));
   return {
-    glazingWidth: u.glazingWidth,
-    glazingHeight: u.glazingHeight,
-    unit: u.unit,
+    glazingWidth: len(u.glazingWidth),
+    glazingHeight: len(u.glazingHeight),
+    unit,
     coverage: u.coverage,
     manifoldHeight: opt(u.manifoldHeight),
     canDiameter: opt(u.canDiameter),

@@ -4,9 +4,10 @@
  * the handler would return. Safe to import in the client.
  */
 import { z } from "zod";
+import { MM_PER_INCH } from "@/lib/format/measures";
 
-/** Exact by definition of the international inch (NIST SP 811). */
-export const MM_PER_INCH = 25.4;
+/** Exact by definition of the international inch (NIST SP 811); one constant, in lib/format. */
+export { MM_PER_INCH };
 
 export type LengthUnit = "mm" | "in";
 

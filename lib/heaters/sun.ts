@@ -24,9 +24,9 @@ export const SOLAR_CONSTANT_WM2 = 1367;
 export const CLEAR_DAY_ASSUMPTIONS: readonly string[] = [
   "A cloudless sky all day; real days, with cloud and haze, average less.",
   "Direct sunlight through a standard clear atmosphere (Hottel's model, about 23 km visibility), corrected for climate and season.",
-  "Sky light from a clear-day relation, spread evenly over the sky; the ground reflects 20 % unless stated.",
+  "Sky light from a clear-day relation, spread evenly over the sky; the ground reflects 20 % unless stated.",
   "Light reaching the outside of the glazing; no shade from trees, buildings or eaves, no glazing losses.",
-  "Sun positions from the suncalc package every 5 minutes through the solar day.",
+  "The sun's place in the sky worked out every 5 minutes from sunrise to sunset, for the latitude and date given.",
 ];
 
 /** Day of the year, 1 on 1 January, of the date's UTC calendar day. */

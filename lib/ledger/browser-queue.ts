@@ -3,6 +3,8 @@
 // request that reached the server but lost its answer is never recorded twice.
 // Pure helpers over a storage-like object, so they are testable without a browser.
 
+import { countOf } from "@/lib/plural";
+
 export interface OutboxItem {
   key: string;
   url: string;
@@ -83,8 +85,13 @@ export type SendOutcome =
  * server's considered refusal and will not change on retry; anything else —
  * no network, a 5xx, a timeout — waits for the next try.
  */
-export function classify(status: number | null, body: unknown, networkError?: string): SendOutcome {
-  if (status === null) return { kind: "retry", message: networkError ?? "No connection" };
+// Why an entry is still waiting, in words a volunteer understands: the browser's
+// own text ("Failed to fetch", "Load failed", "NetworkError…") differs by browser and says nothing.
+export const NO_CONNECTION = "no connection yet";
+export const SERVER_BUSY = "the server did not answer";
+
+export function classify(status: number | null, body: unknown, _networkError?: string): SendOutcome {
+  if (status === null) return { kind: "retry", message: NO_CONNECTION };
   if (status >= 200 && status < 300) return { kind: "done", status, body };
   if (status >= 400 && status < 500 && status !== 408 && status !== 429) {
     const error = (body as { error?: { message?: string; fields?: Record<string, string>; confirm?: string } } | null)?.error;
@@ -93,5 +100,11 @@ export function classify(status: number | null, body: unknown, networkError?: st
     const question = status === 409 && error?.confirm === "implausible" ? message : undefined;
     return { kind: "refused", status, message, ...(error?.fields ? { fields: error.fields } : {}), ...(question ? { question } : {}) };
   }
-  return { kind: "retry", message: `Server busy (${status})` };
+  return { kind: "retry", message: SERVER_BUSY };
+}
+
+/** "Tried 4 times, no connection yet": what the waiting list says under an entry (older items kept the browser's text). */
+export function attemptsText(attempts: number, lastError?: string): string {
+  const why = lastError === SERVER_BUSY ? SERVER_BUSY : NO_CONNECTION;
+  return `Tried ${countOf(attempts, "time")}, ${why}. It is sent by itself once it can be.`;
 }

@@ -1,4 +1,6 @@
 import { stringify } from "csv-stringify/sync";
+import { formatMoment } from "@/lib/format/dates";
+import type { Look } from "@/lib/format/look";
 import { entryLabel, moveLabel, reasonLabel, stageLabel } from "./labels";
 import type { LedgerRow } from "./ledger-row";
 
@@ -17,15 +19,9 @@ export function neutraliseCell(value: string): string {
   return FORMULA_START.test(value) ? `'${value}` : value;
 }
 
-/** "2026-11-03 14:05:09" in the zone given (an IANA name such as Europe/London). */
-export function localTime(iso: string, timeZone: string): string {
-  const parts = Object.fromEntries(
-    new Intl.DateTimeFormat("en-GB", { timeZone, year: "numeric", month: "2-digit", day: "2-digit", hour: "2-digit", minute: "2-digit", second: "2-digit", hourCycle: "h23" })
-      .formatToParts(new Date(iso))
-      .map((p) => [p.type, p.value]),
-  );
-  return `${parts.year}-${parts.month}-${parts.day} ${parts.hour}:${parts.minute}:${parts.second}`;
-}
+// The *_at columns are the machine's (ISO 8601, UTC); the *_local columns are
+// for people, in the style of every screen ("3 Nov 2026, 14:05", lib/format).
+type Clock = Pick<Look, "timeZone" | "locale">;
 
 export function ledgerCsvColumns(timeZone: string) {
   return [
@@ -52,13 +48,14 @@ export function ledgerCsvColumns(timeZone: string) {
   ];
 }
 
-export function ledgerCsv(rows: LedgerRow[], timeZone: string): string {
+export function ledgerCsv(rows: LedgerRow[], look: Clock): string {
+  const timeZone = look.timeZone;
   const records = rows.map((r) => ({
     line: r.id,
     occurredAt: r.occurredAt,
-    occurredLocal: localTime(r.occurredAt, timeZone),
+    occurredLocal: formatMoment(r.occurredAt, look),
     recordedAt: r.recordedAt,
-    recordedLocal: localTime(r.recordedAt, timeZone),
+    recordedLocal: formatMoment(r.recordedAt, look),
     entry: entryLabel(r.kind, r.reversesId),
     drive: r.drive,
     dropPoint: r.dropPoint ?? "",

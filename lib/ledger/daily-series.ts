@@ -2,6 +2,9 @@
 // from the first to the last appears at its own place, days without entries
 // as zero, so a quiet week shows as a gap rather than vanishing.
 
+import { formatDayMonth } from "@/lib/format/dates";
+import { DEFAULT_LOOK, type Look } from "@/lib/format/look";
+
 export interface DailyPoint {
   /** YYYY-MM-DD */
   date: string;
@@ -28,5 +31,5 @@ export function dailySeries(days: { date: string; goodCans: number }[], from: st
   return out;
 }
 
-/** "3 Nov" for a chart tick. */
-export const dayTick = (t: number) => new Date(t).toLocaleDateString("en-GB", { day: "numeric", month: "short", timeZone: "UTC" });
+/** "3 Nov" for a chart tick (the axis spans one drive; the tooltip gives the year), in the group's locale. */
+export const dayTick = (t: number, look: Pick<Look, "locale"> = DEFAULT_LOOK) => formatDayMonth(new Date(t).toISOString().slice(0, 10), look);

@@ -4,6 +4,8 @@
  * within bounds the server can vouch for.
  */
 import { AppError } from "@/lib/api/errors";
+import { formatMoment, formatTime, localDay } from "@/lib/format/dates";
+import type { Look } from "@/lib/format/look";
 
 /**
  * How far ahead of the server a phone's clock may be. Phones set their clocks
@@ -59,10 +61,8 @@ export function receivedLater(occurredAt: string, recordedAt: string): boolean {
 }
 
 /** "sent 16:00" (or "sent 3 Dec 2026, 16:00" on another day) when received more than a minute after it happened, else null. */
-export function sentLabel(occurredAt: string, recordedAt: string, timeZone?: string): string | null {
+export function sentLabel(occurredAt: string, recordedAt: string, look: Pick<Look, "timeZone" | "locale">): string | null {
   if (!receivedLater(occurredAt, recordedAt)) return null;
-  const day = (v: string) => new Date(v).toLocaleDateString("en-GB", { timeZone });
-  const sameDay = day(occurredAt) === day(recordedAt);
-  const sent = new Date(recordedAt).toLocaleString("en-GB", sameDay ? { timeStyle: "short", timeZone } : { dateStyle: "medium", timeStyle: "short", timeZone });
-  return `sent ${sent}`;
+  const sameDay = localDay(occurredAt, look.timeZone) === localDay(recordedAt, look.timeZone);
+  return `sent ${sameDay ? formatTime(recordedAt, look) : formatMoment(recordedAt, look)}`;
 }

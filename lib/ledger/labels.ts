@@ -24,6 +24,10 @@ export const REASON_LABEL: Record<string, string> = {
   notAluminium: "not aluminium",
   damaged: "torn or dirty",
   other: "other",
+  damagedWashing: "damaged in washing",
+  damagedOpening: "damaged in opening",
+  damagedPunching: "damaged in punching",
+  stockCount: "stock count",
 };
 
 export const KIND_LABEL: Record<string, string> = {
@@ -35,6 +39,7 @@ export const KIND_LABEL: Record<string, string> = {
   builtIn: "built in",
   recycling: "taken to recycling",
   reversal: "undo",
+  stockCount: "stock count",
 };
 
 /** "wrongSize" → "wrong size"; "not_aluminium" → "not aluminium". */

@@ -8,6 +8,7 @@
  */
 import { conflict } from "@/lib/api/errors";
 import { DEFAULT_CANS_PER_BAG } from "./estimate";
+import { countOf } from "@/lib/plural";
 
 /**
  * A sort counting more than 3× its hauls' estimate, or under a third of it,
@@ -56,7 +57,8 @@ export interface Unusual {
 }
 
 const n = (x: number) => Math.round(x).toLocaleString("en-GB");
-const plural = (x: number, one: string, many = `${one}s`) => `${n(x)} ${x === 1 ? one : many}`;
+// Counts with their noun through Intl.PluralRules (lib/plural.ts), the number rounded as shown.
+const plural = (x: number, one: string) => countOf(Math.round(x), one, n);
 
 /** Outside [expected ÷ factor, expected × factor], and by more than a bag's worth. */
 function farFrom(value: number, expected: number, factor: number): boolean {

@@ -1,4 +1,6 @@
-/** The e-mail a volunteer gets when a run is given to them. Pure, so it is easy to read in tests. */
+import { DEFAULT_LOOK, formatter, type Look } from "@/lib/format";
+
+/** The e-mail a volunteer gets when a run is given to them, in the group's look. Pure, so it is easy to read in tests. */
 export function runAssignedMail(args: {
   appUrl: string;
   runId: string;
@@ -8,16 +10,19 @@ export function runAssignedMail(args: {
   plannedOn: string;
   distanceKm: number;
   stopNames: string[];
+  look?: Look;
 }) {
+  const f = formatter(args.look ?? DEFAULT_LOOK);
+  const day = f.longDay(args.plannedOn);
   const link = `${args.appUrl.replace(/\/$/, "")}/runs/${args.runId}`;
   const first = args.assigneeName.split(" ")[0];
   const lines = args.stopNames.map((name, i) => `  ${i + 1}. ${name}`);
-  const subject = `Pickup run on ${args.plannedOn}: ${args.stopNames.length} stop${args.stopNames.length === 1 ? "" : "s"}`;
+  const subject = `Pickup run on ${f.day(args.plannedOn)}: ${f.count(args.stopNames.length, "stop")}`;
   const text = [
     `Hello ${first},`,
     "",
-    `${args.organiserName} has given you a pickup run for ${args.driveName} on ${args.plannedOn}.`,
-    `About ${args.distanceKm.toFixed(1)} km in a straight line between stops, in this order:`,
+    `${args.organiserName} has given you a pickup run for ${args.driveName} on ${day}.`,
+    `About ${f.distance(args.distanceKm)} in a straight line between stops, in this order:`,
     ...lines,
     "",
     `Open the run on your phone: ${link}`,

@@ -42,7 +42,8 @@ describe("public drive map", () => {
     await page.getByRole("heading", { name: "Drop points nearest first" }).waitFor();
     const first = await page.getByTestId("drop-point").first().textContent();
     expect(first).toContain("Quayside Community Hall");
-    expect(first).toMatch(/\d+ m away/);
+    // A no-break space joins the number and its unit (\s matches U+00A0).
+    expect(first).toMatch(/\d+\sm away/);
     await context.close();
   });
 });

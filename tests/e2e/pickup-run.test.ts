@@ -51,7 +51,7 @@ describe("pickup run journey", () => {
     await context.close();
 
     const mail = await waitForMail(DEMO.volunteer, (m) => m.text.includes(`/runs/${runId}`));
-    expect(mail.subject).toBe("Pickup run on 2026-12-12: 3 stops");
+    expect(mail.subject).toBe("Pickup run on 12 Dec 2026: 3 stops");
     const stored = await testDb()("pickup_run_stops").where({ run_id: runId }).orderBy("position").pluck("drop_point_id");
     expect([...stored].sort()).toEqual(WANTED.map(idOf).sort());
 
@@ -109,7 +109,8 @@ describe("pickup run journey", () => {
     await org.page.goto("/runs");
     const card = (title: string) => org.page.locator("section", { has: org.page.getByRole("heading", { name: title, exact: true }) });
     const done = card("Done");
-    await done.getByRole("link", { name: /2026-12-12 · Tobin Ashgrove/ }).waitFor();
+    // The run is named by its day in the group's style (CLDR en-GB medium date), not the ISO code.
+    await done.getByRole("link", { name: /12 Dec 2026 · Tobin Ashgrove/ }).waitFor();
     const history = card("Pickup history by drop point");
     await history.getByText(/^Hilltop Corner Shop/).click();
     await history.getByText(/haul logged: 2 bags/).first().waitFor();

@@ -57,7 +57,8 @@ describe("/plan shows the API's numbers", () => {
     expect(await page.locator("#sheet-1-coverage-chamber").isChecked()).toBe(true);
     const cells = await page.locator('[data-cell="covers"]').allInnerTexts();
     expect(cells).toEqual(["Chamber only", "Chamber and manifolds"]);
-    expect(await page.locator('[data-cell="manifolds"]').nth(1).innerText()).toBe("5 in each, inside the sheet");
+    // A no-break space joins a number and its unit (lib/format).
+    expect(await page.locator('[data-cell="manifolds"]').nth(1).innerText()).toBe("5\u00a0in each, inside the sheet");
 
     // The headline heat uses the clear-day peak sunlight on the chosen wall and day, as computed
     // by lib/heaters/sun (the same function the page runs); 800 W/m² is shown apart as a rating-style figure.
@@ -120,7 +121,8 @@ describe("/plan shows the API's numbers", () => {
     // 66 / 25.4 = 2.598 in (NIST SP 811 inch), more than the 2 in sheet.
     const message = await page.getByTestId("fit-problem").first().innerText();
     expect(message).toContain("Too narrow for one column of cans");
-    expect(message).toContain("2.6 in across");
+    // 66 mm = 2.598 in, to the nearest eighth as a tape measure reads it: 2⅝ in.
+    expect(message).toContain("2⅝\u00a0in across");
     expect(await page.getByTestId("grid-fit-problem").first().innerText()).toBe(message);
     expect(await figure("cans")).toBe("0");
   });

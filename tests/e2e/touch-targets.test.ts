@@ -46,7 +46,7 @@ describe("the signed-in header on a phone", () => {
 // sentence or block of running text is exempt (see pages/targets.ts).
 describe("every screen's targets on a 390 px phone", () => {
   it("has no clickable element smaller than 44 × 44 px", { timeout: 240_000 }, async () => {
-    const sessions = new RoleSessions(browser, { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
+    const sessions = new RoleSessions(browser(), { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
     const found: string[] = [];
     try {
       for (const screen of await screensByRole()) {

@@ -48,8 +48,9 @@ describe("CSV export of the ledger screen", () => {
     // OWASP (owasp.org/www-community/attacks/CSV_Injection): prefix ' and quote the cell.
     expect(text).toContain(`"'=HYPERLINK(""http://evil.example/x"",""Open me"")"`);
     expect(text).not.toMatch(/(^|,)=HYPERLINK/m);
-    // 23:30 UTC on 30 Nov is 23:30 in London (GMT in winter; IANA tz database).
-    expect(text).toContain("2026-11-30T23:30:00.000Z,2026-11-30 23:30:00,");
+    // 23:30 UTC on 30 Nov is 23:30 in London (GMT in winter; IANA tz database), written as every
+    // screen writes a moment (CLDR en-GB medium date, short time).
+    expect(text).toContain('2026-11-30T23:30:00.000Z,"30 Nov 2026, 23:30",');
     const all = await (await org.get(`/api/ledger/export?driveId=${g.driveId}`)).text();
     expect(all).toContain(",wrong size,");
     expect(all).not.toMatch(/wrongSize|builtIn/);

@@ -9,6 +9,7 @@
 // This file: People, groups and what the app keeps for them (mail, files, limits, idempotency keys).
 import "knex/types/tables";
 import type { Role } from "@/lib/auth/roles";
+import type { Units } from "@/lib/format/look";
 
 declare module "knex/types/tables" {
   interface UsersRow {
@@ -29,6 +30,9 @@ declare module "knex/types/tables" {
     workshop_lng: number | null;
     created_at: Date;
     time_zone: string;
+    /** 20261204030000_group_look: a BCP 47 tag from lib/format LOCALES. */
+    locale: string;
+    units: Units;
   }
   interface MembershipsRow {
     group_id: string;

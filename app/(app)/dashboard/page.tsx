@@ -6,12 +6,13 @@ import { PageHeading } from "@/components/ui/page-heading";
 import { DriveProgressCard } from "@/components/dashboard/drive-progress-card";
 import { requirePageRole } from "@/lib/auth/session";
 import { organiserDashboard } from "@/lib/drives/dashboard";
+import { groupLook } from "@/lib/format/group-look-queries";
 
 export const metadata: Metadata = { title: "Dashboard" };
 
 export default async function DashboardPage() {
   const actor = await requirePageRole("/dashboard", "organiser");
-  const drives = await organiserDashboard(actor.group.id);
+  const [drives, look] = await Promise.all([organiserDashboard(actor.group.id), groupLook(actor.group.id)]);
   return (
     <main className="flex flex-col gap-6">
       <PageHeading title={actor.group.name}>
@@ -29,7 +30,7 @@ export default async function DashboardPage() {
           </EmptyState>
         </Card>
       ) : (
-        drives.map((d) => <DriveProgressCard key={d.drive.id} {...d} />)
+        drives.map((d) => <DriveProgressCard key={d.drive.id} {...d} look={look} />)
       )}
     </main>
   );

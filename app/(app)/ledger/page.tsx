@@ -12,8 +12,8 @@ import { driveGoodDaily, dropPointTallies } from "@/lib/ledger/balances";
 import { driveChartBasics } from "@/lib/ledger/queries";
 import { listGroupPeople } from "@/lib/accounts/queries";
 import { listLogDrives } from "@/lib/drives/queries";
-import { groupTimeZone } from "@/lib/ledger/ledger-list";
 import { dailySeries } from "@/lib/ledger/daily-series";
+import { groupLook } from "@/lib/format/group-look-queries";
 import { countOf } from "@/lib/plural";
 import { NO_HEATERS } from "@/lib/drives/progress-wording";
 
@@ -24,7 +24,7 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
   // ?driveId= is the table's filter (kept in the address); ?drive= is the older link form.
   const { drive: oldLink, driveId } = await searchParams;
   const wanted = driveId ?? oldLink;
-  const [drives, people, timeZone] = await Promise.all([listLogDrives(actor.group.id), listGroupPeople(actor.group.id), groupTimeZone(actor.group.id)]);
+  const [drives, people, look] = await Promise.all([listLogDrives(actor.group.id), listGroupPeople(actor.group.id), groupLook(actor.group.id)]);
   // The address wins (links, the table's filter); else the remembered drive, else the one running today.
   const { drive, today } = await pageDrive(actor, drives, wanted);
   if (!drive) {
@@ -49,7 +49,7 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
     <main className="flex flex-col gap-5">
       <h1 className="text-3xl">Ledger</h1>
       <DriveLinks drives={drives} currentId={drive.id} path="/ledger" param="driveId" />
-      <DriveBanner drive={drive} today={today} lead="Entering for" />
+      <DriveBanner drive={drive} today={today} lead="Entering for" look={look} />
       <div className="grid gap-5 lg:grid-cols-2">
         <Card title={`Good cans per day · ${drive.name}`}>
           <GoodCansChart daily={dailyPoints} target={target.cans} />
@@ -70,7 +70,7 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
         <RecyclingForm driveId={drive.id} />
       </Card>
       <Card title="Every line">
-        <LedgerTable drives={drives} people={people} initialDriveId={drive.id} timeZone={timeZone} />
+        <LedgerTable drives={drives} people={people} initialDriveId={drive.id} />
       </Card>
     </main>
   );

@@ -4,12 +4,16 @@ import { Notice } from "@/components/ui/notice";
 import { requirePageRole } from "@/lib/auth/session";
 import { listOutbox } from "@/lib/mail/outbox";
 import { listCapturedMail } from "@/lib/mail/captured";
+import { formatter } from "@/lib/format";
+import { groupLook } from "@/lib/format/group-look-queries";
+import { noun } from "@/lib/plural";
 
 export const metadata: Metadata = { title: "Sent mail" };
 
 export default async function SentMailPage() {
   const actor = await requirePageRole("/mail", "organiser");
-  const [outbox, captured] = await Promise.all([listOutbox(actor.group.id), listCapturedMail(actor.group.id)]);
+  const [outbox, captured, look] = await Promise.all([listOutbox(actor.group.id), listCapturedMail(actor.group.id), groupLook(actor.group.id)]);
+  const f = formatter(look);
   const waiting = outbox.filter((m) => m.status !== "sent");
   return (
     <main className="flex flex-col gap-6">
@@ -19,11 +23,11 @@ export default async function SentMailPage() {
         mail service is a local capture: nothing leaves the machine.
       </p>
       {waiting.length > 0 ? (
-        <Notice tone="caution" title={`${waiting.length} message(s) not delivered yet`}>
+        <Notice tone="caution" title={`${f.count(waiting.length, noun("message"))} not delivered yet`}>
           <ul className="list-disc pl-5">
             {waiting.map((m) => (
               <li key={m.id}>
-                {m.subject} → {m.to}: {m.status === "failed" ? "gave up" : "will retry"} after {m.attempts} attempt(s)
+                {m.subject} → {m.to}: {m.status === "failed" ? "gave up" : "will retry"} after {f.count(m.attempts, "attempt")}
               </li>
             ))}
           </ul>
@@ -43,7 +47,7 @@ export default async function SentMailPage() {
                 <summary className="min-h-11 cursor-pointer py-2.5">
                   <span className="font-semibold">{m.subject}</span>{" "}
                   <span className="text-ink-faint">
-                    to {m.to.join(", ")} · {new Date(m.receivedAt).toLocaleString("en-GB")}
+                    to {m.to.join(", ")} · {f.moment(m.receivedAt)}
                   </span>
                 </summary>
                 <pre className="mt-3 whitespace-pre-wrap break-words font-sans text-ink-soft">{m.text}</pre>

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { Card } from "@/components/ui/card";
 import { InviteForm } from "@/components/accounts/invite-form";
 import { InvitationList } from "@/components/accounts/invitation-list";
@@ -15,6 +16,9 @@ export default async function MembersPage() {
   return (
     <main className="flex flex-col gap-6">
       <h1 className="text-3xl">People in {actor.group.name}</h1>
+      <p className="text-ink-soft">
+        The group&rsquo;s time zone, date style and units: <Link href="/organise/group">group settings</Link>.
+      </p>
       <div className="grid gap-6 md:grid-cols-[1fr_1.4fr]">
         <Card title="Invite someone">
           <InviteForm />

@@ -1,5 +1,6 @@
 import { endpoint } from "@/lib/api/endpoint";
 import { env } from "@/lib/env";
+import { groupLook } from "@/lib/format/group-look-queries";
 import { sendMail } from "@/lib/mail/outbox";
 import { runAssignedMail } from "@/lib/runs/mail";
 import { createRun } from "@/lib/runs/commands";
@@ -22,6 +23,7 @@ export const POST = endpoint({ who: ["organiser"], body: createRunInputSchema, s
     plannedOn: body.plannedOn,
     distanceKm: run.plan.distanceKm,
     stopNames: run.stopNames,
+    look: await groupLook(actor.group.id),
   });
   await sendMail({ groupId: actor.group.id, to: run.assignee.email, ...mail, kind: "pickup_run" });
   return { id: run.id, order: run.plan.order, distanceKm: run.plan.distanceKm, assigneeId: run.assignee.id };

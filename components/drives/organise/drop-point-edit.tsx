@@ -44,6 +44,7 @@ export function DropPointEdit({ point, tileUrl, attribution }: { point: DropPoin
           setSaved(true);
           router.refresh();
         }}
+        onRefused={() => setSaved(false)}
       />
       {saved ? <p role="status" className="font-semibold text-moss-deep">Saved.</p> : null}
     </div>

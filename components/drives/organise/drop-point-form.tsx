@@ -33,18 +33,23 @@ export function DropPointForm({
   values,
   onChange,
   onSaved,
+  onRefused,
   submitLabel,
 }: {
   target: { driveId: string } | { id: string };
   values: DropPointValues;
   onChange: (v: DropPointValues) => void;
   onSaved: () => void;
+  /** A refusal came back: a "Saved." from an earlier answer must not stand under the new error. */
+  onRefused?: () => void;
   submitLabel: string;
 }) {
   const [state, send, pending] = useActionState<ActionState<unknown>, FormData>("driveId" in target ? createDropPointAction : updateDropPointAction, IDLE);
   const saved = useEffectEvent(onSaved);
+  const refused = useEffectEvent(() => onRefused?.());
   useEffect(() => {
     if (state.ok) saved();
+    else if (state.ok === false) refused();
   }, [state]);
   const errors = state.fields;
   const text = (k: keyof DropPointValues) => (e: React.ChangeEvent<HTMLInputElement>) => onChange({ ...values, [k]: e.target.value });

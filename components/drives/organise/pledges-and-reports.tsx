@@ -1,13 +1,12 @@
 import Link from "next/link";
 import { Card, EmptyState } from "@/components/ui/card";
 import { LEVEL_LABEL } from "@/lib/drives/fill";
-import { formatDateTime } from "@/lib/format";
-import { countOf } from "@/lib/plural";
+import { formatter, NBSP, type Look } from "@/lib/format";
 import type { DriveFillReport, DrivePledge } from "@/lib/drives/types";
 
 
-export function PledgesAndReports({ pledges, reports, points, slug }: { pledges: DrivePledge[]; reports: DriveFillReport[]; points: { id: string; name: string }[]; slug: string }) {
-  const when = (d: Date) => formatDateTime(d, "UTC");
+export function PledgesAndReports({ pledges, reports, points, slug, look }: { pledges: DrivePledge[]; reports: DriveFillReport[]; points: { id: string; name: string }[]; slug: string; look: Look }) {
+  const f = formatter(look);
   return (
     <>
       <Card title={`Pledges (${pledges.length})`}>
@@ -17,7 +16,7 @@ export function PledgesAndReports({ pledges, reports, points, slug }: { pledges:
           <ul className="divide-y divide-paper-edge" aria-label="Pledges">
             {pledges.map((p) => (
               <li key={p.id} className="py-2">
-                <strong>{countOf(p.bags, "bag")}</strong> to {p.dropPointName} on {p.bringOn}
+                <strong>{f.count(p.bags, "bag")}</strong> to {p.dropPointName} on {f.day(p.bringOn)}
                 <span className="block text-sm text-ink-soft">{p.name || "Anonymous"}{p.email ? ` · ${p.email}` : ""}</span>
               </li>
             ))}
@@ -31,8 +30,8 @@ export function PledgesAndReports({ pledges, reports, points, slug }: { pledges:
           <ul className="divide-y divide-paper-edge" aria-label="Fill reports">
             {reports.map((r) => (
               <li key={r.id} className="py-2">
-                <strong>{r.dropPointName}</strong>: {LEVEL_LABEL[r.level] ?? `${r.level}%`} {r.alerted ? <span className="font-semibold text-alarm">· alert sent</span> : null}
-                <span className="block text-sm text-ink-soft">{when(r.createdAt)} UTC{r.note ? ` · “${r.note}”` : ""}</span>
+                <strong>{r.dropPointName}</strong>: {LEVEL_LABEL[r.level] ?? `${r.level}${NBSP}%`} {r.alerted ? <span className="font-semibold text-alarm">· alert sent</span> : null}
+                <span className="block text-sm text-ink-soft">{f.moment(r.createdAt)}{r.note ? ` · “${r.note}”` : ""}</span>
                 {r.photoUrl ? <a href={r.photoUrl}>See the photo</a> : null}
               </li>
             ))}

@@ -12,7 +12,9 @@ import { PledgeForm } from "./pledge-form";
 import { useLiveQuery } from "@/hooks/queries/live-query";
 import { DriveProgressBar } from "./progress-bar";
 import { countOf } from "@/lib/plural";
-import { formatDateTime } from "@/lib/format";
+// The clock and the default look only, not the lib/format barrel: this page's JavaScript budget is tight.
+import { formatMoment } from "@/lib/format/clock";
+import { DEFAULT_LOOK } from "@/lib/format/default-look";
 
 export function DriveLive({
   slug,
@@ -105,7 +107,7 @@ export function DriveLive({
 function AsOf({ at, timeZone }: { at: number; timeZone: string }) {
   return (
     <p className="mt-1 text-sm text-ink-faint" data-testid="as-of">
-      Figures as of {formatDateTime(new Date(at), timeZone)}; they refresh every 30 seconds while this page is open.
+      Figures as of {formatMoment(new Date(at), { locale: DEFAULT_LOOK.locale, timeZone })}; they refresh every 30 seconds while this page is open.
     </p>
   );
 }

@@ -5,7 +5,8 @@ import { Button } from "@/components/ui/button";
 import { FILL_SHAPE_LABEL, fillShape, LEVEL_LABEL } from "@/lib/drives/fill";
 import type { PublicDropPointView } from "@/lib/drives/types";
 import { haversineKm } from "@/lib/runs/great-circle";
-import { formatDateTime } from "@/lib/format";
+import { formatMoment } from "@/lib/format/clock";
+import { DEFAULT_LOOK } from "@/lib/format/default-look";
 import { countOf } from "@/lib/plural";
 
 import { FillReportForm } from "./fill-report-form";
@@ -83,7 +84,7 @@ export function DropPointList({
                 </span>
                 <span className="[overflow-wrap:anywhere]">{p.name}</span>
               </h3>
-              {p.km !== undefined ? <span className="font-semibold">{p.km < 1 ? `${Math.round(p.km * 1000)} m` : `${p.km.toFixed(1)} km`} away</span> : null}
+              {p.km !== undefined ? <span className="font-semibold">{p.km < 1 ? `${Math.round(p.km * 1000)}\u00a0m` : `${p.km.toFixed(1)}\u00a0km`} away</span> : null}
             </div>
             {p.address ? <p className="[overflow-wrap:anywhere]">{p.address}</p> : null}
             <p>
@@ -94,7 +95,7 @@ export function DropPointList({
             </p>
             <p className={`text-sm font-semibold ${fillShape(p.fill?.level) === "full" ? "text-alarm" : "text-ink-soft"}`} data-testid="fill" data-fill={fillShape(p.fill?.level)}>
               Bin: {FILL_SHAPE_LABEL[fillShape(p.fill?.level)]}
-              {p.fill ? ` — ${LEVEL_LABEL[p.fill.level] ?? `${p.fill.level} %`} (${formatDateTime(p.fill.reportedAt)})` : " since the last pickup"}
+              {p.fill ? ` — ${LEVEL_LABEL[p.fill.level] ?? `${p.fill.level}\u00a0%`} (${formatMoment(p.fill.reportedAt, DEFAULT_LOOK)})` : " since the last pickup"}
             </p>
             {p.photos.length ? (
               <div className="mt-2 flex gap-2 overflow-x-auto">

@@ -57,4 +57,9 @@ export const rows: AuthzRow[] = [
   row("POST", "verify-email", "/api/verify-email", ANYONE_INVALID, { body: () => ({ token: "too-short" }) }),
   row("POST", "verify-email/resend", "/api/verify-email/resend", ANYONE_INVALID, { body: () => ({ email: "not-an-email" }) }),
   row("GET", "me/groups", "/api/me/groups", expects(401, 200, 200, 200, 200)),
+  row("GET", "group/look", "/api/group/look", expects(401, 200, 200, 200, 200)),
+  row("PUT", "group/look", "/api/group/look", organisersOnly(422, 422), {
+    body: () => ({ timeZone: "Not/AZone", locale: "xx", units: "cubits" }),
+    note: "each organiser acts on their own group only; the invalid body keeps every group's look as it is",
+  }),
 ];

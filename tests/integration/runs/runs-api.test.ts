@@ -67,7 +67,7 @@ describe("planning a run", () => {
     expect(run.body.stopList[0]!.dropPoint.hours.length).toBeGreaterThan(0);
 
     const mail = await waitForMail(DEMO.volunteer, (m) => m.text.includes(`/runs/${res.body.id}`));
-    expect(mail.subject).toBe("Pickup run on 2026-12-10: 4 stops");
+    expect(mail.subject).toBe("Pickup run on 10 Dec 2026: 4 stops");
     expect(mail.headers["x-cantrove-group"]).toBe(f.demoGroupId);
     for (const p of chosen) expect(mail.text).toContain(p.name);
   });

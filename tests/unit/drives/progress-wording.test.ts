@@ -1,6 +1,9 @@
 import { describe, expect, it } from "vitest";
 import { driveProgress, type DriveProgressInput } from "@/lib/drives/progress";
-import { finishText, heatersCoveredText, paceText, remainingText } from "@/lib/drives/progress-wording";
+import { finishText as finishWith, heatersCoveredText, paceText, remainingText } from "@/lib/drives/progress-wording";
+import { formatDay } from "@/lib/format/dates";
+
+const finishText = (f: Parameters<typeof finishWith>[0], look = { locale: "en-GB" }) => finishWith(f, (d) => formatDay(d, look));
 import { example, noStages } from "./progress-example";
 
 // The worked example (progress-example.ts: target 462, 250 good, 10 a day → 6 April),
@@ -17,12 +20,14 @@ describe("the drive's finish, said honestly", () => {
   it("gives the paced date for a running drive", () => {
     const p = driveProgress(running);
     expect(p.finish).toEqual({ kind: "expected", date: "2025-04-06", afterEnd: false, endsOn: "2025-04-30" });
-    expect(finishText(p.finish)).toBe("2025-04-06");
+    // Days as every screen writes them: CLDR en-GB medium date.
+    expect(finishText(p.finish)).toBe("6 Apr 2025");
+    expect(finishText(p.finish, { locale: "en-US" })).toBe("Apr 6, 2025");
   });
 
   it("says when the pace runs past the drive's end", () => {
     const p = driveProgress({ ...running, endsOn: "2025-03-31" });
-    expect(finishText(p.finish)).toBe("2025-04-06, after the drive ends on 2025-03-31");
+    expect(finishText(p.finish)).toBe("6 Apr 2025, after the drive ends on 31 Mar 2025");
   });
 
   it("promises no date without a pace", () => {
@@ -34,13 +39,13 @@ describe("the drive's finish, said honestly", () => {
   it("promises no date after the drive has ended", () => {
     const p = driveProgress({ ...running, today: "2025-05-02" });
     expect(p.expectedFinish).toBeNull();
-    expect(finishText(p.finish)).toBe("The drive ended on 2025-04-30");
+    expect(finishText(p.finish)).toBe("The drive ended on 30 Apr 2025");
   });
 
   it("promises no date before the drive starts", () => {
     const p = driveProgress({ ...running, today: "2025-02-20" });
     expect(p.expectedFinish).toBeNull();
-    expect(finishText(p.finish)).toBe("No pace yet: the drive starts on 2025-03-01");
+    expect(finishText(p.finish)).toBe("No pace yet: the drive starts on 1 Mar 2025");
   });
 
   it("says no heaters are planned, never 'finished today', for a drive with no target", () => {

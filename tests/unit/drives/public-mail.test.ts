@@ -33,7 +33,8 @@ describe("pledge confirmation", () => {
 
   it("says what was pledged where, and leaves the name line out when none was given", () => {
     const mail = pledge("");
-    expect(mail.text).toContain("about 3 bags of cans to North porch on 2026-12-12");
+    // The day in words (CLDR en-GB long date), not the ISO code.
+    expect(mail.text).toContain("about 3 bags of cans to North porch on 12 December 2026");
     expect(mail.text).toContain("Opening hours: Mon–Fri 9–17.");
     expect(mail.text).not.toContain("Name given");
     expect(mail.text).not.toMatch(/\n\n\n/);

@@ -25,14 +25,16 @@ describe("fitProblems", () => {
     const [problem, ...rest] = fitProblems(input);
     expect(rest).toEqual([]);
     expect(inch(66)).toBeCloseTo(2.598, 3);
-    expect(problem).toBe("Too narrow for one column of cans: a column needs 2.6 in across (one 2.6 in can), and this sheet is 2 in. Use a wider sheet or a smaller clearance.");
+    // Lengths as a tape measure reads them, to the nearest eighth: 2.598 in → 2⅝ in; a no-break space before the unit.
+    expect(problem).toBe("Too narrow for one column of cans: a column needs 2⅝\u00a0in across (one 2⅝\u00a0in can), and this sheet is 2\u00a0in. Use a wider sheet or a smaller clearance.");
   });
 
   it("blames the manifolds when a full-coverage sheet loses its only row to them", () => {
     // 20 in of sheet minus two 5 in manifolds leaves 10 in, above the 4.8 in can (122 mm); 8 in leaves none.
     expect(fitProblems({ glazingWidth: 30, glazingHeight: 20, unit: "in", coverage: "full", manifoldHeight: 5 })).toEqual([]);
     const [problem] = fitProblems({ glazingWidth: 30, glazingHeight: 8, unit: "in", coverage: "full", manifoldHeight: 5 });
-    expect(problem).toMatch(/^Too short for one row of cans: a row needs 14\.8 in up \(one 4\.8 in can, two 5 in manifolds\), and this sheet is 8 in\./);
+    // 122 mm = 4.803 in → 4¾ in to the nearest eighth; with two 5 in manifolds, 14¾ in.
+    expect(problem).toMatch(/^Too short for one row of cans: a row needs 14¾\u00a0in up \(one 4¾\u00a0in can, two 5\u00a0in manifolds\), and this sheet is 8\u00a0in\./);
     expect(problem).toContain("lower manifolds");
   });
 

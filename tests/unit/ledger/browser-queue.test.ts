@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { addToOutbox, classify, confirmedCopy, markAttempt, newOutboxItem, readOutbox, removeFromOutbox, type OutboxItem } from "@/lib/ledger/browser-queue";
+import { addToOutbox, attemptsText, classify, confirmedCopy, markAttempt, newOutboxItem, readOutbox, removeFromOutbox, type OutboxItem } from "@/lib/ledger/browser-queue";
 
 function memory() {
   const m = new Map<string, string>();
@@ -26,7 +26,11 @@ describe("outbox", () => {
 
   it("retries network failures, 5xx, 408 and 429, and stops on other answers", () => {
     // RFC 9110 §15: 4xx are client errors a repeat will not fix, except 408 (timeout); 429 is RFC 6585's "try later".
-    expect(classify(null, null, "Failed to fetch").kind).toBe("retry");
+    expect(classify(null, null, "Failed to fetch")).toEqual({ kind: "retry", message: "no connection yet" });
+    expect(classify(503, null)).toEqual({ kind: "retry", message: "the server did not answer" });
+    // The waiting list says it in words, never the browser's "Failed to fetch".
+    expect(attemptsText(4, "Failed to fetch")).toBe("Tried 4 times, no connection yet. It is sent by itself once it can be.");
+    expect(attemptsText(1, "the server did not answer")).toBe("Tried 1 time, the server did not answer. It is sent by itself once it can be.");
     expect(classify(503, null).kind).toBe("retry");
     expect(classify(408, null).kind).toBe("retry");
     expect(classify(429, null).kind).toBe("retry");

@@ -44,11 +44,13 @@ describe("entryTime", () => {
   });
 });
 
+const UTC = { timeZone: "UTC", locale: "en-GB" };
+
 describe("sentLabel", () => {
   it("says when a line was received if that is over a minute after it happened", () => {
     expect(receivedLater("2026-12-02T10:00:00Z", "2026-12-02T10:01:00Z")).toBe(false);
-    expect(sentLabel("2026-12-02T10:00:00Z", "2026-12-02T10:00:40Z", "UTC")).toBeNull();
-    expect(sentLabel("2026-12-02T10:00:00Z", "2026-12-02T16:00:00Z", "UTC")).toBe("sent 16:00");
-    expect(sentLabel("2026-12-02T10:00:00Z", "2026-12-03T08:30:00Z", "UTC")).toBe("sent 3 Dec 2026, 08:30");
+    expect(sentLabel("2026-12-02T10:00:00Z", "2026-12-02T10:00:40Z", UTC)).toBeNull();
+    expect(sentLabel("2026-12-02T10:00:00Z", "2026-12-02T16:00:00Z", UTC)).toBe("sent 16:00");
+    expect(sentLabel("2026-12-02T10:00:00Z", "2026-12-03T08:30:00Z", UTC)).toBe("sent 3 Dec 2026, 08:30");
   });
 });

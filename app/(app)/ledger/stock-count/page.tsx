@@ -7,13 +7,14 @@ import { DriveLinks } from "@/components/drives/drive-links";
 import { requirePageRole } from "@/lib/auth/session";
 import { pageDrive } from "@/lib/drives/current-drive-queries";
 import { listLogDrives } from "@/lib/drives/queries";
+import { groupLook } from "@/lib/format/group-look-queries";
 
 export const metadata: Metadata = { title: "Stock count" };
 
 export default async function StockCountPage({ searchParams }: { searchParams: Promise<{ drive?: string }> }) {
   const actor = await requirePageRole("/ledger/stock-count", "organiser");
   const { drive: wanted } = await searchParams;
-  const drives = await listLogDrives(actor.group.id);
+  const [drives, look] = await Promise.all([listLogDrives(actor.group.id), groupLook(actor.group.id)]);
   const { drive, today } = await pageDrive(actor, drives, wanted);
   return (
     <main className="mx-auto flex max-w-3xl flex-col gap-5">
@@ -28,7 +29,7 @@ export default async function StockCountPage({ searchParams }: { searchParams: P
           {drives.length > 1 ? (
             <DriveLinks drives={drives} currentId={drive.id} path="/ledger/stock-count" param="drive" />
           ) : null}
-          <DriveBanner drive={drive} today={today} lead="Counting for" />
+          <DriveBanner drive={drive} today={today} lead="Counting for" look={look} />
           <p className="text-ink-soft">
             Count the cans in each box or bag and type what is really there. The differences from the running totals are posted as one
             adjustment entry with your reason, and can be undone like any other entry. Hauled cans (an estimate until sorted), claimed and

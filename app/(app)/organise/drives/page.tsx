@@ -7,12 +7,13 @@ import { requirePageRole } from "@/lib/auth/session";
 import { listDrives } from "@/lib/drives/queries";
 import { countOf } from "@/lib/plural";
 import { spanText } from "@/lib/drives/current-drive";
+import { groupLook } from "@/lib/format/group-look-queries";
 
 export const metadata: Metadata = { title: "Drives" };
 
 export default async function OrganiseDrivesPage() {
   const actor = await requirePageRole("/organise/drives", "organiser");
-  const drives = await listDrives(actor.group.id);
+  const [drives, look] = await Promise.all([listDrives(actor.group.id), groupLook(actor.group.id)]);
   return (
     <main className="flex flex-col gap-6">
       <PageHeading title="Drives">
@@ -27,7 +28,7 @@ export default async function OrganiseDrivesPage() {
               <li key={d.id} className="flex flex-wrap items-baseline justify-between gap-2 py-3">
                 <Link href={`/organise/drives/${d.id}`} className="tap text-lg font-semibold">{d.name}</Link>
                 <span className="text-ink-faint">
-                  {spanText(d)} · {countOf(d.dropPoints, "drop point")} · {d.isPublic ? "public" : "not public"}
+                  {spanText(d, look)} · {countOf(d.dropPoints, "drop point")} · {d.isPublic ? "public" : "not public"}
                 </span>
               </li>
             ))}

@@ -5,6 +5,7 @@ import { PageHeading } from "@/components/ui/page-heading";
 import { PickupHistory } from "@/components/runs/pickup-history";
 import { RunList } from "@/components/runs/run-list";
 import { requirePageRole } from "@/lib/auth/session";
+import { groupLook } from "@/lib/format/group-look-queries";
 import { pickupHistory } from "@/lib/runs/planner-queries";
 import { listRuns } from "@/lib/runs/queries";
 
@@ -12,13 +13,13 @@ export const metadata: Metadata = { title: "Pickup runs" };
 
 export default async function RunsPage() {
   const actor = await requirePageRole("/runs", "organiser", "volunteer");
-  const runs = await listRuns(actor);
+  const [runs, look] = await Promise.all([listRuns(actor), groupLook(actor.group.id)]);
   if (actor.role !== "organiser") {
     return (
       <main className="flex flex-col gap-4">
         <h1 className="text-3xl">Your pickup runs</h1>
         <Card>
-          <RunList runs={runs} empty="No runs for you yet. An organiser will send you one by e-mail." />
+          <RunList look={look} runs={runs} empty="No runs for you yet. An organiser will send you one by e-mail." />
         </Card>
       </main>
     );
@@ -31,16 +32,16 @@ export default async function RunsPage() {
         <ButtonLink href="/runs/new">Plan a run</ButtonLink>
       </PageHeading>
       <Card title="Under way">
-        <RunList runs={by("under_way")} empty="No run is under way." />
+        <RunList look={look} runs={by("under_way")} empty="No run is under way." />
       </Card>
       <Card title="Planned">
-        <RunList runs={by("planned")} empty="No runs planned. Plan one to empty the fullest bins." />
+        <RunList look={look} runs={by("planned")} empty="No runs planned. Plan one to empty the fullest bins." />
       </Card>
       <Card title="Done">
-        <RunList runs={by("done")} empty="No finished runs yet." />
+        <RunList look={look} runs={by("done")} empty="No finished runs yet." />
       </Card>
       <Card title="Pickup history by drop point">
-        <PickupHistory points={history} />
+        <PickupHistory points={history} look={look} />
       </Card>
     </main>
   );

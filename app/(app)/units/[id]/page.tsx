@@ -14,6 +14,8 @@ import { requirePageRole } from "@/lib/auth/session";
 import { computeCanGrid } from "@/lib/heaters/can-grid";
 import { listDriveTargets } from "@/lib/heaters/drive-targets";
 import { formatLength } from "@/lib/heaters/format";
+import { groupLook } from "@/lib/format/group-look-queries";
+import { lengthUnitOf } from "@/lib/format/measures";
 import { getHeaterUnit, listHeaterUnits, planOf } from "@/lib/heaters/queries";
 import { driveStock } from "@/lib/ledger/balances";
 import { listHeatersWithClaims } from "@/lib/heaters/queries";
@@ -32,7 +34,9 @@ export default async function UnitPage({ params }: Props) {
     if (e instanceof AppError && e.code === "not_found") notFound();
     throw e;
   });
-  const plan = planOf(unit);
+  // Lengths in the group's units, whatever unit the plan was saved in.
+  const look = await groupLook(actor.group.id);
+  const plan = planOf(unit, lengthUnitOf(look.units));
   const grid = computeCanGrid(plan);
   const [drive] = unit.driveId ? await listDriveTargets(actor.group.id, unit.driveId) : [];
   const [summaries, stock, siblings] = unit.driveId
@@ -99,7 +103,7 @@ export default async function UnitPage({ params }: Props) {
 
       <Card title="Can grid">
         <p className="mb-3 text-ink-soft">
-          Glazing {formatLength(unit.glazingWidth, unit.unit)} × {formatLength(unit.glazingHeight, unit.unit)}, covering{" "}
+          Glazing {formatLength(plan.glazingWidth, plan.unit, look)} × {formatLength(plan.glazingHeight, plan.unit, look)}, covering{" "}
           {unit.coverage === "full" ? "the chamber and both manifolds" : "the can chamber only"}.
         </p>
         <div className="grid gap-4 md:grid-cols-[1fr_18rem]">

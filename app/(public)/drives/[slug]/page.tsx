@@ -5,8 +5,8 @@ import { PointLinks } from "@/components/drives/public/point-links";
 import { CanSafetyNote, WantedCans } from "@/components/drives/public/wanted-cans";
 import { Card } from "@/components/ui/card";
 import { AppError } from "@/lib/api/errors";
-import { publicDrive, publicDropPoints } from "@/lib/drives/public-service";
-import { publicDriveTimeZone } from "@/lib/drives/public-queries";
+import { publicDrive, publicDriveLook, publicDropPoints } from "@/lib/drives/public-service";
+import { formatLongDay } from "@/lib/format/dates";
 import { tileConfig } from "@/lib/map/config";
 
 export const dynamic = "force-dynamic";
@@ -18,7 +18,7 @@ type Props = { params: Promise<{ slug: string }>; searchParams?: Promise<{ point
 async function load(slug: string) {
   try {
     const readAt = new Date().getTime();
-    return [...(await Promise.all([publicDrive(slug), publicDropPoints(slug), publicDriveTimeZone(slug)])), readAt] as const;
+    return [...(await Promise.all([publicDrive(slug), publicDropPoints(slug), publicDriveLook(slug)])), readAt] as const;
   } catch (error) {
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;
@@ -34,13 +34,9 @@ export async function generateMetadata({ params }: Props): Promise<Metadata> {
   }
 }
 
-function formatDate(d: string) {
-  return new Date(`${d}T12:00:00Z`).toLocaleDateString("en-GB", { day: "numeric", month: "long", year: "numeric" });
-}
-
 export default async function PublicDrivePage({ params, searchParams }: Props) {
   const { slug } = await params;
-  const [drive, points, timeZone, readAt] = await load(slug);
+  const [drive, points, look, readAt] = await load(slug);
   const tiles = tileConfig();
   // "Pledge cans here" links carry ?point=<id>; anything not one of this drive's points is ignored.
   const asked = (await searchParams)?.point;
@@ -52,7 +48,7 @@ export default async function PublicDrivePage({ params, searchParams }: Props) {
         <p className="font-semibold text-ember-deep">{drive.drive.groupName}</p>
         <h1 className="text-3xl [overflow-wrap:anywhere] sm:text-4xl">{drive.drive.name}</h1>
         <p className="mt-1 text-ink-soft">
-          {formatDate(drive.drive.startsOn)} to {formatDate(drive.drive.endsOn)}
+          {formatLongDay(drive.drive.startsOn, look)} to {formatLongDay(drive.drive.endsOn, look)}
         </p>
         {drive.drive.description ? <p className="mt-3 max-w-prose text-lg [overflow-wrap:anywhere]">{drive.drive.description}</p> : null}
       </header>
@@ -71,7 +67,7 @@ export default async function PublicDrivePage({ params, searchParams }: Props) {
         pointLinks={pointLinks}
         pledgePoint={pledgePoint}
         readAt={readAt}
-        timeZone={timeZone}
+        timeZone={look.timeZone}
       />
     </main>
   );

@@ -5,14 +5,11 @@ import { RunPlanner } from "@/components/runs/run-planner";
 import { requirePageRole } from "@/lib/auth/session";
 import { pageDrive } from "@/lib/drives/current-drive-queries";
 import { env } from "@/lib/env";
+import { addDays } from "@/lib/drives/progress";
 import { groupWorkshop, plannerDrives, suggestedStops } from "@/lib/runs/planner-queries";
 import { listDrivers } from "@/lib/runs/queries";
 
 export const metadata: Metadata = { title: "Plan a pickup run" };
-
-function tomorrow(): string {
-  return new Date(Date.now() + 86_400_000).toISOString().slice(0, 10);
-}
 
 export default async function NewRunPage({ searchParams }: { searchParams: Promise<{ drive?: string }> }) {
   const actor = await requirePageRole("/runs/new", "organiser");
@@ -27,6 +24,7 @@ export default async function NewRunPage({ searchParams }: { searchParams: Promi
   }
   const wanted = (await searchParams).drive;
   // The address wins; else the remembered drive, else the one running today, where bins are filling now.
+  // "Today" is the group's day (its time zone), so the run's default day is the group's tomorrow.
   const picked = await pageDrive(actor, drives, wanted);
   const drive = picked.drive!;
   const [suggestions, workshop, drivers] = await Promise.all([
@@ -45,7 +43,7 @@ export default async function NewRunPage({ searchParams }: { searchParams: Promi
         initialSuggestions={suggestions.map((s) => ({ ...s, lastHaulAt: s.lastHaulAt ? s.lastHaulAt.toISOString() : null }))}
         workshop={workshop}
         drivers={drivers}
-        defaultDate={tomorrow()}
+        defaultDate={addDays(picked.today, 1)}
         tileUrl={env().TILE_URL}
         attribution={env().TILE_ATTRIBUTION}
       />

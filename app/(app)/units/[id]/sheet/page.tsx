@@ -10,6 +10,9 @@ import { requirePageRole } from "@/lib/auth/session";
 import { buildSteps } from "@/lib/heaters/build-steps";
 import { computeCanGrid } from "@/lib/heaters/can-grid";
 import { formatLength } from "@/lib/heaters/format";
+import { formatMoment } from "@/lib/format/dates";
+import { groupLook } from "@/lib/format/group-look-queries";
+import { lengthUnitOf } from "@/lib/format/measures";
 import { computeMaterials } from "@/lib/heaters/materials";
 import { getHeaterUnit, planOf } from "@/lib/heaters/queries";
 import { resolveCanGridInput } from "@/lib/heaters/schemas";
@@ -29,7 +32,9 @@ export default async function BuildSheetPage({ params }: Props) {
     if (e instanceof AppError && e.code === "not_found") notFound();
     throw e;
   });
-  const plan = planOf(unit);
+  // Lengths in the group's units, whatever unit the plan was saved in; the time on the group's clock.
+  const look = await groupLook(actor.group.id);
+  const plan = planOf(unit, lengthUnitOf(look.units));
   const resolved = resolveCanGridInput(plan);
   const grid = computeCanGrid(plan);
   const materials = computeMaterials(plan);
@@ -37,7 +42,7 @@ export default async function BuildSheetPage({ params }: Props) {
   // The same figures as the unit page, as they stand when the sheet is printed.
   const summary = (await listHeatersWithClaims(actor.group.id)).find((u) => u.id === unit.id);
   const counts = summary ?? { ...unitNeed(unit.cans, unit.sparePercent, 0, 0), claimed: 0, builtIn: 0 };
-  const printedAt = new Date().toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" }) + " UTC";
+  const printedAt = formatMoment(new Date(), look);
   return (
     <main className="build-sheet flex flex-col gap-5 print:gap-3">
       <div className="no-print flex flex-wrap items-center justify-between gap-3">
@@ -48,8 +53,8 @@ export default async function BuildSheetPage({ params }: Props) {
         <h1 className="text-3xl">Build sheet: {unit.name}</h1>
         <p className="text-ink-soft">
           {actor.group.name}
-          {unit.driveName ? ` · ${unit.driveName}` : ""} · {HEATER_STATE_LABEL[unit.state]} · glazing {formatLength(unit.glazingWidth, unit.unit)} ×{" "}
-          {formatLength(unit.glazingHeight, unit.unit)} ({unit.coverage === "full" ? "chamber and manifolds" : "chamber only"})
+          {unit.driveName ? ` · ${unit.driveName}` : ""} · {HEATER_STATE_LABEL[unit.state]} · glazing {formatLength(plan.glazingWidth, plan.unit, look)} ×{" "}
+          {formatLength(plan.glazingHeight, plan.unit, look)} ({unit.coverage === "full" ? "chamber and manifolds" : "chamber only"})
         </p>
       </header>
 
