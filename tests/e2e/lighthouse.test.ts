@@ -51,9 +51,14 @@ beforeAll(async () => {
   }
 });
 
-afterAll(() => {
-  chromium?.kill("SIGTERM");
-  if (profile) rmSync(profile, { recursive: true, force: true });
+afterAll(async () => {
+  // Wait for chromium to leave before its profile folder goes, or it may still be writing there.
+  if (chromium && chromium.exitCode === null) {
+    const exited = new Promise((resolve) => chromium.once("exit", resolve));
+    chromium.kill("SIGTERM");
+    await Promise.race([exited, new Promise((resolve) => setTimeout(resolve, 5_000))]);
+  }
+  if (profile) rmSync(profile, { recursive: true, force: true, maxRetries: 5, retryDelay: 200 });
 });
 
 interface Scores {
