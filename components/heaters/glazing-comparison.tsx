@@ -18,7 +18,7 @@ export function GlazingComparison({ options }: { options: GlazingOption[] }) {
         </p>
       ) : null}
       {/* Wider than a phone: focusable, so the table can be scrolled from the keyboard. */}
-      <div className="overflow-x-auto" tabIndex={0} role="region" aria-label="Glazing options compared">
+      <div className="relative overflow-x-auto" tabIndex={0} role="region" aria-label="Glazing options compared">
         <table className="w-full min-w-[44rem] border-collapse text-left">
           <caption className="sr-only">Glazing options compared</caption>
           <thead>

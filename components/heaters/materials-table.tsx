@@ -25,7 +25,7 @@ export const MEASURE_LABEL: Record<TradeMeasure, string> = {
 export function MaterialsTable({ list, priceCell }: { list: MaterialsList; priceCell?: (key: MaterialKey) => React.ReactNode }) {
   return (
     <div className="flex flex-col gap-2">
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <table className="w-full border-collapse text-left">
           <caption className="sr-only">Materials</caption>
           <thead>

@@ -14,10 +14,13 @@ const NAV: Record<Role, { href: string; label: string }[]> = {
     { href: "/units", label: "Heater units" },
     { href: "/members", label: "Members" },
     { href: "/mail", label: "Sent mail" },
+    { href: "/plan", label: "Planner" },
+    { href: "/organise/group", label: "Settings" },
   ],
   volunteer: [
     { href: "/log", label: "Log" },
     { href: "/runs", label: "My runs" },
+    { href: "/plan", label: "Planner" },
   ],
   builder: [
     { href: "/units", label: "My units" },

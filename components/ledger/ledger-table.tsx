@@ -40,7 +40,7 @@ export function LedgerTable({ drives, people, initialDriveId }: { drives: LogDri
         <EmptyState title="No ledger lines match">Widen the dates or clear a filter.</EmptyState>
       ) : (
         <>
-          <div className="overflow-x-auto">
+          <div className="relative overflow-x-auto">
             <table className="w-full min-w-[820px] text-left text-sm">
               <caption className="sr-only">Ledger lines, newest first by when they happened</caption>
               <thead className="border-b-2 border-ink/30">

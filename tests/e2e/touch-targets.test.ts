@@ -45,9 +45,10 @@ describe("the signed-in header on a phone", () => {
 // 390 px wide phone. WCAG 2.5.5's "Inline" exception is taken: a link inside a
 // sentence or block of running text is exempt (see pages/targets.ts).
 describe("every screen's targets on a 390 px phone", () => {
-  it("has no clickable element smaller than 44 × 44 px", { timeout: 240_000 }, async () => {
+  it("has no clickable element smaller than 44 × 44 px, and no screen wider than the phone", { timeout: 240_000 }, async () => {
     const sessions = new RoleSessions(browser(), { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
     const found: string[] = [];
+    const wide: string[] = [];
     try {
       for (const screen of await screensByRole()) {
         const page = await sessions.open(screen);
@@ -55,10 +56,14 @@ describe("every screen's targets on a 390 px phone", () => {
         expect(measured, `${screen.path}: targets were found and measured`).toBeGreaterThan(3);
         console.log(`[touch] ${screen.path} (${screen.role}): ${measured} targets, ${small.length} too small`);
         for (const t of small) found.push(`${screen.path} (${screen.role}) ${t}`);
+        // Nothing pushes the page sideways either (an escaped absolutely placed label once made /ledger 770 px wide).
+        const width = await page.evaluate(() => document.documentElement.scrollWidth);
+        if (width > 390) wide.push(`${screen.path} (${screen.role}) is ${width} px wide`);
       }
     } finally {
       await sessions.close();
     }
     expect(found).toEqual([]);
+    expect(wide).toEqual([]);
   });
 });

@@ -98,7 +98,7 @@ export function DropPointList({
               {p.fill ? ` — ${LEVEL_LABEL[p.fill.level] ?? `${p.fill.level}\u00a0%`} (${formatMoment(p.fill.reportedAt, DEFAULT_LOOK)})` : " since the last pickup"}
             </p>
             {p.photos.length ? (
-              <div className="mt-2 flex gap-2 overflow-x-auto">
+              <div className="relative mt-2 flex gap-2 overflow-x-auto">
                 {p.photos.map((url) => (
                   // eslint-disable-next-line @next/next/no-img-element -- photos come from the upload host at their own size; next/image would proxy them through the app
                   <img key={url} src={url} alt={`Photo of the bin at ${p.name}`} className="h-28 w-auto rounded-lg border border-paper-edge" />
