@@ -59,6 +59,18 @@ describe("every screen's targets on a 390 px phone", () => {
         // Nothing pushes the page sideways either (an escaped absolutely placed label once made /ledger 770 px wide).
         const width = await page.evaluate(() => document.documentElement.scrollWidth);
         if (width > 390) wide.push(`${screen.path} (${screen.role}) is ${width} px wide`);
+        // Our own one-word labels stay whole (a narrow column once showed "Und/o" and "Lin/e").
+        const broken = await page.evaluate(() =>
+          [...document.querySelectorAll("button, th, summary")].flatMap((el) => {
+            const text = (el.textContent ?? "").trim();
+            if (!/^\p{L}+$/u.test(text) || el.getClientRects().length === 0) return [];
+            const range = document.createRange();
+            range.selectNodeContents(el);
+            const tops = new Set([...range.getClientRects()].filter((r) => r.width > 0).map((r) => Math.round(r.top)));
+            return tops.size > 1 ? [text] : [];
+          }),
+        );
+        for (const word of broken) wide.push(`${screen.path} (${screen.role}): "${word}" breaks mid-word`);
       }
     } finally {
       await sessions.close();
