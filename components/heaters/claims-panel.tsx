@@ -9,7 +9,6 @@ import { needRefusalMessage } from "@/lib/heaters/need";
 import { heaterQueries, moveClaimsTo, postClaimAction } from "@/hooks/queries/heaters";
 import { ledgerQueries } from "@/hooks/queries/ledger";
 import type { HeaterSummary } from "@/lib/heaters/types";
-import type { DriveStock } from "@/lib/ledger/types";
 import { QuantityAction } from "./quantity-action";
 import { UnitFigures } from "./unit-figures";
 import { countOf } from "@/lib/plural";
@@ -18,7 +17,6 @@ export interface ClaimsView {
   unit: HeaterSummary;
   driveId: string;
   rows: number;
-  stock: DriveStock;
   installed: boolean;
   isOrganiser: boolean;
   /** Why this person may not change the unit's cans (a builder on someone else's unit), or null. */
@@ -28,10 +26,11 @@ export interface ClaimsView {
 
 /** Cans claimed for the unit and built into it, live, with the ledger actions that change them. */
 export function ClaimsPanel({ v }: { v: ClaimsView }) {
-  // Live figures: both reads start from the server's render and refresh after every action.
+  // Live figures: both reads start from what the page prefetched (<Prefetched>) and refresh after every action.
   const unit = useQuery({ ...heaterQueries.list(), select: (list) => list.find((u) => u.id === v.unit.id) }).data ?? v.unit;
-  const stock = useQuery({ ...ledgerQueries.stock(v.driveId), initialData: v.stock }).data;
+  const stock = useQuery(ledgerQueries.stock(v.driveId)).data;
   const [moveTo, setMoveTo] = useState(v.otherUnits[0]?.id ?? "");
+  if (!stock) return null; // only before the page's prefetched stock reaches the cache
   return (
     <div className="flex flex-col gap-4">
       <UnitFigures c={unit} />

@@ -70,11 +70,12 @@ function StopCard({ run, stop, canAct, isNext }: { run: RunDetail; stop: RunStop
   );
 }
 
-export function RunView({ initial, canAct, tileUrl, attribution }: { initial: RunDetail; canAct: boolean; tileUrl: string; attribution: string }) {
-  // The stop actions' hooks put each answer in this read's cache, and read it again after an undo.
-  const { data: run } = useQuery({ ...runQueries.detail(initial.id), initialData: initial });
-  const next = run.stopList.find((s) => s.status === "pending");
+export function RunView({ runId, canAct, tileUrl, attribution }: { runId: string; canAct: boolean; tileUrl: string; attribution: string }) {
+  // Starts from what the page prefetched (<Prefetched>); the stop actions' hooks put each answer in this read's cache, and read it again after an undo.
+  const { data: run } = useQuery(runQueries.detail(runId));
   const f = useFormat();
+  if (!run) return null; // only before the page's prefetched run reaches the cache
+  const next = run.stopList.find((s) => s.status === "pending");
   return (
     <div className="flex flex-col gap-4">
       <div className="flex flex-wrap items-center gap-3">

@@ -1,7 +1,9 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { Prefetched } from "@/components/query/prefetched";
 import { RunView } from "@/components/runs/run-view";
+import { runKeys } from "@/hooks/queries/runs";
 import { AppError } from "@/lib/api/errors";
 import { UUID } from "@/lib/api/path";
 import { requirePageRole } from "@/lib/auth/session";
@@ -21,12 +23,14 @@ export default async function RunPage({ params }: { params: Promise<{ id: string
   return (
     <main className="flex flex-col gap-4">
       <p><Link href="/runs" className="tap">← Pickup runs</Link></p>
-      <RunView
-        initial={run}
-        canAct={actor.role === "organiser" || run.assigneeId === actor.user.id}
-        tileUrl={env().TILE_URL}
-        attribution={env().TILE_ATTRIBUTION}
-      />
+      <Prefetched data={[[runKeys.detail(run.id), run]]}>
+        <RunView
+          runId={run.id}
+          canAct={actor.role === "organiser" || run.assigneeId === actor.user.id}
+          tileUrl={env().TILE_URL}
+          attribution={env().TILE_ATTRIBUTION}
+        />
+      </Prefetched>
     </main>
   );
 }

@@ -6,6 +6,9 @@ import { ButtonLink } from "@/components/ui/button-link";
 import { GridFigures } from "@/components/heaters/grid-figures";
 import { GridPreview } from "@/components/heaters/grid-preview";
 import { ClaimsPanel } from "@/components/heaters/claims-panel";
+import { Prefetched } from "@/components/query/prefetched";
+import { heaterKeys } from "@/hooks/queries/heaters";
+import { ledgerKeys } from "@/hooks/queries/ledger";
 import { DriveProgressLine } from "@/components/heaters/drive-progress-line";
 import { StateBadge } from "@/components/heaters/state-badge";
 import { StateMover } from "@/components/heaters/state-mover";
@@ -85,18 +88,19 @@ export default async function UnitPage({ params }: Props) {
 
       {summary && stock && unit.driveId ? (
         <Card title="Cans for this unit">
+          <Prefetched data={[[ledgerKeys.stock(unit.driveId), stock], [heaterKeys.list(), summaries]]}>
           <ClaimsPanel
             v={{
               unit: { ...summary, state: unit.state },
               driveId: unit.driveId,
               rows: unit.rows,
-              stock,
               installed: unit.state === "installed",
               isOrganiser: actor.role === "organiser",
               refusal,
               otherUnits: siblings.filter((u) => u.id !== unit.id && u.state !== "installed").map((u) => ({ id: u.id, name: u.name })),
             }}
           />
+          </Prefetched>
           <p className="mt-3 text-sm text-ink-faint">Cut and punched cans are sharp: handle them with gloves.</p>
         </Card>
       ) : null}
