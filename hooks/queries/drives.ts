@@ -1,9 +1,12 @@
 import { queryOptions, useQueryClient } from "@tanstack/react-query";
+import { driveKeys } from "./keys";
 import { useCallback } from "react";
 import { fetchJson } from "@/lib/api/client";
 import type { PublicDriveView, PublicDropPointView } from "@/lib/drives/types";
 
 export type { PublicDriveView, PublicDropPointView };
+
+export { driveKeys };
 
 // The drive domain's keys and reads. Every key starts with "drives". The
 // public drive page reads these through useLiveQuery (./live-query.ts), never
@@ -12,13 +15,6 @@ export type { PublicDriveView, PublicDropPointView };
 // writes are in ./drive-writes.ts for the same reason.
 export const LIVE_REFRESH_MS = 30_000;
 
-export const driveKeys = {
-  all: ["drives"] as const,
-  list: () => [...driveKeys.all, "list"] as const,
-  detail: (id: string) => [...driveKeys.all, "detail", id] as const,
-  public: (slug: string) => [...driveKeys.all, "public", slug] as const,
-  publicDropPoints: (slug: string) => [...driveKeys.public(slug), "drop-points"] as const,
-};
 
 export const driveQueries = {
   public: (slug: string) =>

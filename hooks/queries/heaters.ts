@@ -1,6 +1,7 @@
 "use client";
 
 import { queryOptions, useMutation, useQueryClient } from "@tanstack/react-query";
+import { heaterKeys } from "./keys";
 import { fetchJson } from "@/lib/api/client";
 import type { HeaterCreateInput, HeaterState } from "@/lib/heaters/unit-schemas";
 import type { ClaimAction, ClaimResult, HeaterSummary, SavedHeater } from "@/lib/heaters/types";
@@ -8,13 +9,10 @@ import { ledgerKeys, type After } from "./ledger";
 
 export type { ClaimAction, HeaterSummary, SavedHeater };
 
+export { heaterKeys };
+
 // The heater domain's keys, reads and writes. Every key starts with
 // "heaters"; a write that moves cans also refreshes the ledger's reads.
-export const heaterKeys = {
-  all: ["heaters"] as const,
-  list: () => [...heaterKeys.all, "list"] as const,
-  detail: (id: string) => [...heaterKeys.all, "detail", id] as const,
-};
 
 export const heaterQueries = {
   list: () => queryOptions({ queryKey: heaterKeys.list(), queryFn: () => fetchJson<HeaterSummary[]>("/api/heaters") }),

@@ -1,6 +1,7 @@
 "use client";
 
 import { infiniteQueryOptions, queryOptions, useMutation, useQueryClient } from "@tanstack/react-query";
+import { ledgerKeys } from "./keys";
 import { useCallback } from "react";
 import { fetchJson, fetchJsonWithHeaders } from "@/lib/api/client";
 import { NEXT_CURSOR_HEADER, TOTAL_HEADER } from "@/lib/ledger/ledger-row";
@@ -8,16 +9,10 @@ import type { DriveStock, LedgerPage, LedgerRow, MyEntry, OpenHaul, PostedStockC
 
 export type { MyEntry, OpenHaul };
 
+export { ledgerKeys };
+
 // The ledger domain's keys, reads and writes. Every key starts with "ledger";
 // any write that moves cans refreshes them all (stock, hauls, entries, list).
-export const ledgerKeys = {
-  all: ["ledger"] as const,
-  list: (filters: Record<string, string>) => [...ledgerKeys.all, "list", filters] as const,
-  detail: (movementId: string) => [...ledgerKeys.all, "movement", movementId] as const,
-  stock: (driveId: string) => [...ledgerKeys.all, "stock", driveId] as const,
-  openHauls: (driveId: string) => [...ledgerKeys.all, "hauls", driveId, "open"] as const,
-  mine: () => [...ledgerKeys.all, "mine"] as const,
-};
 
 async function fetchPage(query: string, cursor: string | null): Promise<LedgerPage> {
   const qs = cursor ? `${query}${query ? "&" : ""}cursor=${cursor}` : query;

@@ -1,6 +1,7 @@
 "use client";
 
 import { queryOptions, useMutation, useQueryClient } from "@tanstack/react-query";
+import { memberKeys } from "./keys";
 import { useCallback } from "react";
 import { fetchJson } from "@/lib/api/client";
 import type { Role } from "@/lib/auth/roles";
@@ -8,15 +9,10 @@ import type { Invitation, Member, MyGroup } from "@/lib/accounts/types";
 
 export type { Invitation, Member, MyGroup };
 
+export { memberKeys };
+
 // The accounts domain's keys, reads and writes. Every key starts with
 // "members"; each mutation refreshes the keys it changes.
-export const memberKeys = {
-  all: ["members"] as const,
-  list: () => [...memberKeys.all, "list"] as const,
-  detail: (userId: string) => [...memberKeys.all, "detail", userId] as const,
-  invitations: () => [...memberKeys.all, "invitations"] as const,
-  myGroups: () => [...memberKeys.all, "me", "groups"] as const,
-};
 
 export const memberQueries = {
   list: () => queryOptions({ queryKey: memberKeys.list(), queryFn: ({ signal }) => fetchJson<Member[]>("/api/members", { signal }) }),

@@ -1,6 +1,7 @@
 "use client";
 
 import { queryOptions, useMutation, useQueryClient, type QueryClient } from "@tanstack/react-query";
+import { runKeys } from "./keys";
 import { fetchJson } from "@/lib/api/client";
 import type { RouteInputRaw } from "@/lib/runs/route-schemas";
 import type { RouteAnswer, RunDetail, SuggestionRow } from "@/lib/runs/types";
@@ -8,15 +9,10 @@ import type { After } from "./ledger";
 
 export type { RouteAnswer, SuggestionRow };
 
+export { runKeys };
+
 // The pickup-run domain's keys, reads and writes. Every key starts with
 // "runs"; a write to a run puts its new state in the cache and refreshes the rest.
-export const runKeys = {
-  all: ["runs"] as const,
-  list: () => [...runKeys.all, "list"] as const,
-  detail: (id: string) => [...runKeys.all, "detail", id] as const,
-  suggestions: (driveId: string) => [...runKeys.all, "suggestions", driveId] as const,
-  route: (input: RouteInputRaw) => [...runKeys.all, "route", input] as const,
-};
 
 /**
  * Marks the runs' reads stale after a write. The planner's route is left

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { Prefetched } from "@/components/query/prefetched";
 import { RunView } from "@/components/runs/run-view";
-import { runKeys } from "@/hooks/queries/runs";
+import { runKeys } from "@/hooks/queries/keys";
 import { AppError } from "@/lib/api/errors";
 import { UUID } from "@/lib/api/path";
 import { requirePageRole } from "@/lib/auth/session";
