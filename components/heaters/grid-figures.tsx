@@ -1,5 +1,5 @@
 import type { CanGridResult } from "@/lib/heaters/can-grid";
-import { areaToM2, formatArea, formatLength, formatM2, formatNumber } from "@/lib/heaters/format";
+import { formatAperture, formatLength, formatNumber } from "@/lib/heaters/format";
 
 /** The counts of one can grid, in the plan's unit. Shared by the planner, unit page and build sheet. */
 export function GridFigures({ grid }: { grid: CanGridResult }) {
@@ -11,7 +11,7 @@ export function GridFigures({ grid }: { grid: CanGridResult }) {
     ["holes", "Holes to punch", formatNumber(grid.holes)],
     ["slack-width", "Slack across", formatLength(grid.slack.width, unit)],
     ["slack-height", "Slack up", formatLength(grid.slack.height, unit)],
-    ["aperture", "Aperture area", `${formatArea(grid.apertureArea, unit)} (${formatM2(areaToM2(grid.apertureArea, unit))})`],
+    ["aperture", "Aperture area", formatAperture(grid.apertureArea, unit)],
     ["outer", "Outer box size", `${formatLength(grid.outerSize.width, unit)} × ${formatLength(grid.outerSize.height, unit)}`],
   ];
   return (

@@ -23,6 +23,12 @@ export function formatArea(value: number, unit: LengthUnit, look: Locale = DEFAU
   return `${formatNumber(value, 0, look)}${NBSP}${unit}²`;
 }
 
+/** A glazing's aperture: square metres for a metric plan (mm² would be seven digits no one measures); in² with m² for an inch plan. */
+export function formatAperture(value: number, unit: LengthUnit, look: Locale = DEFAULT_LOOK): string {
+  const m2 = formatM2(areaToM2(value, unit), look);
+  return unit === "mm" ? m2 : `${formatArea(value, unit, look)} (${m2})`;
+}
+
 export function areaToM2(value: number, unit: LengthUnit): number {
   return unit === "mm" ? value / 1e6 : (value * MM_PER_INCH * MM_PER_INCH) / 1e6;
 }
