@@ -9,6 +9,8 @@ import { HaulCaution } from "./cautions";
 import { EntryActions, useEntrySubmit, type Submit } from "./entry-submit";
 import { NUMBER_SPECS, parseNumberInputs } from "@/lib/forms/number-input";
 import { countOf } from "@/lib/plural";
+import { weightEntry } from "@/lib/format/weight-entry";
+import { useFormat } from "@/hooks/use-look";
 
 export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { driveId: string; dropPoints: { id: string; name: string }[]; initialDropPointId?: string; submit: Submit }) {
   const [dropPointId, setDropPointId] = useState(dropPoints.some((p) => p.id === initialDropPointId) ? initialDropPointId! : "");
@@ -16,6 +18,7 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
   const [weight, setWeight] = useState("");
   const [errors, setErrors] = useState<Record<string, string>>({});
   const { send, clear: clearStatus, status } = useEntrySubmit();
+  const weighed = weightEntry(useFormat().look.units); // typed in the group's units, sent in kg
 
   // A box's old error goes once it is edited; what is typed then speaks for itself.
   const edit = (key: string, set: (raw: string) => void) => (raw: string) => {
@@ -27,8 +30,8 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
     e.preventDefault();
     clearStatus(); // an earlier "recorded" must not stand above this try's errors
     // Anything typed that is not a number stops here; nothing else is ever sent in its place.
-    const numbers = parseNumberInputs({ bags: [bags, NUMBER_SPECS.haulBags], weightKg: [weight, NUMBER_SPECS.haulWeightKg] });
-    const parsed = haulInputSchema.safeParse({ dropPointId, bags: numbers.values.bags, weightKg: numbers.values.weightKg });
+    const numbers = parseNumberInputs({ bags: [bags, NUMBER_SPECS.haulBags], weightKg: [weight, weighed.spec] });
+    const parsed = haulInputSchema.safeParse({ dropPointId, bags: numbers.values.bags, weightKg: weighed.toKg(numbers.values.weightKg) });
     const found = { ...(parsed.success ? {} : fieldErrorsOf(parsed.error)), ...numbers.errors };
     if (!parsed.success || Object.keys(numbers.errors).length > 0) {
       setErrors(found as Record<string, string>);
@@ -63,9 +66,9 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
       <NumberField id="haul-bags" label="Bags" spec={NUMBER_SPECS.haulBags} steppers value={bags} onChange={edit("bags", setBags)} error={errors.bags} />
       <NumberField
         id="haul-weight"
-        label="Weight in kg (optional)"
+        label={`Weight in ${weighed.unit} (optional)`}
         hint="Net weight of the cans if you weighed them; it gives a better estimate."
-        spec={NUMBER_SPECS.haulWeightKg}
+        spec={weighed.spec}
         value={weight}
         onChange={edit("weightKg", setWeight)}
         error={errors.weightKg}

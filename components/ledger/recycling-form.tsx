@@ -1,5 +1,7 @@
 "use client";
 
+import { useFormat } from "@/hooks/use-look";
+import { weightEntry } from "@/lib/format/weight-entry";
 import { useState } from "react";
 import { useQuery } from "@tanstack/react-query";
 import { Button } from "@/components/ui/button";
@@ -25,6 +27,7 @@ const MONEY: NumberSpec = {
 /** Rejected cans taken to a scrap dealer or recycling point, with weight and money if any. */
 export function RecyclingForm({ driveId }: { driveId: string }) {
   const stock = useQuery(ledgerQueries.stock(driveId));
+  const weighed = weightEntry(useFormat().look.units); // typed in the group's units, sent in kg
   const [form, setForm] = useState({ quantity: "", weightKg: "", moneyReceived: "" });
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [done, setDone] = useState<string | null>(null);
@@ -40,10 +43,10 @@ export function RecyclingForm({ driveId }: { driveId: string }) {
     setDone(null);
     const numbers = parseNumberInputs({
       quantity: [form.quantity, NUMBER_SPECS.recycledCans],
-      weightKg: [form.weightKg, NUMBER_SPECS.recycledWeightKg],
+      weightKg: [form.weightKg, weighed.spec],
       moneyReceived: [form.moneyReceived, MONEY],
     });
-    const parsed = recyclingInputSchema.safeParse(numbers.values);
+    const parsed = recyclingInputSchema.safeParse({ ...numbers.values, weightKg: weighed.toKg(numbers.values.weightKg) });
     if (!parsed.success || Object.keys(numbers.errors).length > 0) {
       return setErrors({ ...(parsed.success ? {} : fieldErrorsOf(parsed.error)), ...(numbers.errors as Record<string, string>) });
     }
@@ -60,7 +63,7 @@ export function RecyclingForm({ driveId }: { driveId: string }) {
       <p className="text-ink-soft">{stock.data ? `${countOf(stock.data.rejectedOnHand, noun("rejected can is", "rejected cans are"))} waiting to go.` : "Loading…"}</p>
       <div className="grid gap-3 sm:grid-cols-3">
         <NumberField id="recycle-quantity" label="Cans" spec={NUMBER_SPECS.recycledCans} value={form.quantity} onChange={set("quantity")} error={errors.quantity} />
-        <NumberField id="recycle-weight" label="Weight in kg (optional)" spec={NUMBER_SPECS.recycledWeightKg} value={form.weightKg} onChange={set("weightKg")} error={errors.weightKg} />
+        <NumberField id="recycle-weight" label={`Weight in ${weighed.unit} (optional)`} spec={weighed.spec} value={form.weightKg} onChange={set("weightKg")} error={errors.weightKg} />
         <NumberField id="recycle-money" label="Money received (optional)" spec={MONEY} value={form.moneyReceived} onChange={set("moneyReceived")} error={errors.moneyReceived} />
       </div>
       <FormError message={save.error?.message} />

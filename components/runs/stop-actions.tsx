@@ -1,5 +1,7 @@
 "use client";
 
+import { useFormat } from "@/hooks/use-look";
+import { weightEntry } from "@/lib/format/weight-entry";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
@@ -26,6 +28,7 @@ export function StopActions({ runId, stopId, dropPointName }: Props) {
   const [mode, setMode] = useState<"idle" | "log" | "skip">("idle");
   const [bags, setBags] = useState("");
   const [weight, setWeight] = useState("");
+  const weighed = weightEntry(useFormat().look.units); // typed in the group's units, sent in kg
   const [reason, setReason] = useState("");
   const [fields, setFields] = useState<Record<string, string>>({});
   const edit = (key: string, set: (raw: string) => void) => (raw: string) => {
@@ -65,15 +68,15 @@ export function StopActions({ runId, stopId, dropPointName }: Props) {
         onSubmit={(e) => {
           e.preventDefault();
           // The same boxes as the Log page's haul form: anything but a number stops here, nothing else is sent.
-          const numbers = parseNumberInputs({ bags: [bags, NUMBER_SPECS.stopBags], weightKg: [weight, NUMBER_SPECS.haulWeightKg] });
+          const numbers = parseNumberInputs({ bags: [bags, NUMBER_SPECS.stopBags], weightKg: [weight, weighed.spec] });
           setFields(numbers.errors as Record<string, string>);
           if (numbers.values.bags === null || Object.keys(numbers.errors).length > 0) return;
-          log.mutate({ bags: numbers.values.bags, weightKg: numbers.values.weightKg, confirmUnusual: false, idempotencyKey: haulKey });
+          log.mutate({ bags: numbers.values.bags, weightKg: weighed.toKg(numbers.values.weightKg), confirmUnusual: false, idempotencyKey: haulKey });
         }}
       >
         <div className="grid grid-cols-2 gap-3">
           <NumberField id={`bags-${stopId}`} label="Bags" spec={NUMBER_SPECS.stopBags} value={bags} onChange={edit("bags", setBags)} error={fields.bags} />
-          <NumberField id={`weight-${stopId}`} label="Weight, kg (optional)" spec={NUMBER_SPECS.haulWeightKg} value={weight} onChange={edit("weightKg", setWeight)} error={fields.weightKg} />
+          <NumberField id={`weight-${stopId}`} label={`Weight, ${weighed.unit} (optional)`} spec={weighed.spec} value={weight} onChange={edit("weightKg", setWeight)} error={fields.weightKg} />
         </div>
         {question ? (
           <ConfirmUnusual
