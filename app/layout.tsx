@@ -1,8 +1,6 @@
 import type { Metadata, Viewport } from "next";
 import { connection } from "next/server";
-import "@fontsource/source-sans-3/400.css";
-import "@fontsource/source-sans-3/600.css";
-import "@fontsource/source-sans-3/700.css";
+import "./fonts.css";
 import "./globals.css";
 import { Providers } from "@/components/system/providers";
 

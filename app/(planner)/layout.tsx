@@ -1,5 +1,4 @@
-import { SessionBoundary } from "@/components/auth/session-boundary";
-import { AppHeader } from "@/components/layout/app-header";
+import { SignedInShell } from "@/components/layout/signed-in-shell-on-demand";
 import { PublicFooter, PublicHeader } from "@/components/layout/public-header";
 import { getActor } from "@/lib/auth/session";
 import { isDatabaseUnreachable } from "@/lib/db";
@@ -26,9 +25,8 @@ export default async function PlannerLayout({ children }: { children: React.Reac
     );
   }
   return (
-    <SessionBoundary>
-      <AppHeader groupName={actor.group.name} role={actor.role} userName={actor.user.name} />
+    <SignedInShell groupName={actor.group.name} role={actor.role} userName={actor.user.name}>
       {children}
-    </SessionBoundary>
+    </SignedInShell>
   );
 }

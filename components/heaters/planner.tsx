@@ -1,5 +1,6 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useState } from "react";
 import { Card } from "@/components/ui/card";
 import { Notice } from "@/components/ui/notice";
@@ -15,7 +16,10 @@ import { HeatPanel } from "./heat-panel";
 import { MaterialsPanel } from "./materials-panel";
 import { convertText, evaluate, INITIAL_OPTIONS, INITIAL_SETTINGS, SETTING_FIELDS, type PlanSettings } from "./plan-form-state";
 import { PlanSettingsFields } from "./plan-settings-fields";
-import { SavePlan, type DriveChoice } from "./save-plan";
+import type { DriveChoice } from "./save-plan";
+
+// Only a signed-in builder or organiser can save, so only they load the saving form's code.
+const SavePlan = dynamic(() => import("./save-plan").then((m) => m.SavePlan));
 
 /**
  * The heater planner. Everything is computed in the browser with the same

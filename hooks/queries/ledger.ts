@@ -4,7 +4,7 @@ import { infiniteQueryOptions, queryOptions, useMutation, useQueryClient } from 
 import { ledgerKeys } from "./keys";
 import { useCallback } from "react";
 import { fetchJson, fetchJsonWithHeaders } from "@/lib/api/client";
-import { NEXT_CURSOR_HEADER, TOTAL_HEADER } from "@/lib/ledger/ledger-row";
+import { LEDGER_SCREEN_PAGE, NEXT_CURSOR_HEADER, TOTAL_HEADER } from "@/lib/ledger/ledger-page";
 import type { DriveStock, LedgerPage, LedgerRow, MyEntry, OpenHaul, PostedStockCount } from "@/lib/ledger/types";
 
 export type { MyEntry, OpenHaul };
@@ -15,7 +15,8 @@ export { ledgerKeys };
 // any write that moves cans refreshes them all (stock, hauls, entries, list).
 
 async function fetchPage(query: string, cursor: string | null): Promise<LedgerPage> {
-  const qs = cursor ? `${query}${query ? "&" : ""}cursor=${cursor}` : query;
+  // A screen's worth at a time; the CSV export (built from the same filters) has no limit.
+  const qs = [query, `limit=${LEDGER_SCREEN_PAGE}`, cursor ? `cursor=${cursor}` : ""].filter(Boolean).join("&");
   const { body, headers } = await fetchJsonWithHeaders<LedgerRow[]>(`/api/ledger?${qs}`);
   return { rows: body, total: Number(headers.get(TOTAL_HEADER) ?? body.length), nextCursor: headers.get(NEXT_CURSOR_HEADER) };
 }

@@ -33,14 +33,10 @@ export interface LedgerPage {
   nextCursor: string | null;
 }
 
-export const TOTAL_HEADER = "x-total-count";
-export const NEXT_CURSOR_HEADER = "x-next-cursor";
+export { LEDGER_PAGE, NEXT_CURSOR_HEADER, TOTAL_HEADER } from "./ledger-page";
 
 /** The ledger list's query: the shared filters plus the cursor of "Load more" (the last line shown). */
 export const ledgerListQuerySchema = ledgerFilterSchema.extend({
   cursor: z.string().regex(/^\d{1,18}$/, "The cursor is the line number of the last line shown.").optional(),
 });
 export type LedgerListQuery = z.infer<typeof ledgerListQuerySchema>;
-
-/** Page size of the ledger screen; "Load more" fetches the next page. */
-export const LEDGER_PAGE = 500;

@@ -52,7 +52,7 @@ export default async function LedgerPage({ searchParams }: { searchParams: Promi
       <DriveBanner drive={drive} today={today} lead="Entering for" look={look} />
       <div className="grid gap-5 lg:grid-cols-2">
         <Card title={`Good cans per day · ${drive.name}`}>
-          <GoodCansChart daily={dailyPoints} target={target.cans} />
+          <GoodCansChart daily={dailyPoints} target={target.cans} look={look} />
           <p className="mt-2 text-sm text-ink-soft">
             {target.heaters > 0
               ? `Target ${countOf(target.cans, "can")}: ${target.heaterCans} for ${countOf(target.heaters, "heater unit")} plus ${target.spare} spare.`
