@@ -1,5 +1,5 @@
 import { queryOptions, useQueryClient } from "@tanstack/react-query";
-import { driveKeys } from "./keys";
+import { driveKeys } from "./drive-keys";
 import { useCallback } from "react";
 import { fetchJson } from "@/lib/api/client";
 import type { PublicDriveView, PublicDropPointView } from "@/lib/drives/types";

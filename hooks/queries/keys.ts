@@ -3,13 +3,9 @@
 // Each key starts with its domain's name; the domain's hooks file re-exports its factory.
 import type { RouteInputRaw } from "@/lib/runs/route-schemas";
 
-export const driveKeys = {
-  all: ["drives"] as const,
-  list: () => [...driveKeys.all, "list"] as const,
-  detail: (id: string) => [...driveKeys.all, "detail", id] as const,
-  public: (slug: string) => [...driveKeys.all, "public", slug] as const,
-  publicDropPoints: (slug: string) => [...driveKeys.public(slug), "drop-points"] as const,
-};
+// The drive keys have their own file: the public drive page loads them and nothing else here.
+export { driveKeys } from "./drive-keys";
+
 
 export const heaterKeys = {
   all: ["heaters"] as const,

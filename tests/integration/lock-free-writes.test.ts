@@ -57,7 +57,7 @@ describe("two moves of one unit at once", () => {
       expect(answers.map((a) => a.status).sort(), `round ${round}: ${seen}`).toEqual([200, 409]);
       expect(answers.find((a) => a.status === 200)!.body).toMatchObject({ state: "installed", released: 10 });
       // The loser is told what the rule says from the state it finds now (lib/heaters/states.ts).
-      expect(answers.find((a) => a.status === 409)!.body.error).toMatchObject({ code: "conflict", message: "The unit is already installed." });
+      expect(answers.find((a) => a.status === 409)!.body.error).toMatchObject({ code: "conflict", message: "The unit is already at “On the wall”." });
       expect((await unitRow(id)).state).toBe("installed");
       expect(await claimedOf(id)).toBe(0);
       expect(await releasesOf(id)).toBe(releasesBefore + 1);
