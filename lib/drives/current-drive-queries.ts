@@ -2,7 +2,7 @@ import "server-only";
 import { db } from "@/lib/db";
 import { notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
-import { groupTimeZone } from "@/lib/ledger/ledger-list";
+import { groupTimeZone } from "@/lib/format/group-look-queries";
 import { localDay } from "@/lib/format/dates";
 import { pickDrive, type DriveSpan } from "./current-drive";
 

@@ -1,8 +1,8 @@
 import "server-only";
+import { groupTimeZone } from "@/lib/format/group-look-queries";
 import type { Tables } from "knex/types/tables";
 import type { Knex } from "knex";
 import { db } from "@/lib/db";
-import { notFound } from "@/lib/api/errors";
 import type { LedgerListQuery, LedgerPage, LedgerRow } from "./ledger-row";
 
 // The organiser's ledger: newest first by when it happened, then by line, so
@@ -12,12 +12,6 @@ import type { LedgerListQuery, LedgerPage, LedgerRow } from "./ledger-row";
 
 type Filter = LedgerListQuery & { personId?: string };
 
-/** The group's IANA time zone; day filters and the CSV's local times use it. */
-export async function groupTimeZone(groupId: string): Promise<string> {
-  const row = await db("groups").select("time_zone").where({ id: groupId }).first();
-  if (!row) throw notFound("That group");
-  return row.time_zone as string;
-}
 
 function filtered(groupId: string, f: Filter, timeZone: string): Knex.QueryBuilder {
   return db("ledger_lines as l")
