@@ -16,7 +16,7 @@ const config: Config = {
         alarm: { DEFAULT: "#a11d2b", soft: "#f9dfe2" },
       },
       fontFamily: {
-        sans: ['"Source Sans 3"', '"Source Sans 3 Fallback"', "system-ui", "sans-serif"],
+        sans: ["var(--cantrove-font)"],
       },
       borderRadius: { card: "0.9rem" },
     },

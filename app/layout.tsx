@@ -1,5 +1,6 @@
 import type { Metadata, Viewport } from "next";
 import { connection } from "next/server";
+import { fontStack } from "./font";
 import "./fonts.css";
 import "./globals.css";
 import { Providers } from "@/components/system/providers";
@@ -16,7 +17,7 @@ export default async function RootLayout({ children }: { children: React.ReactNo
   // nonce, and the Content-Security-Policy (proxy.ts) would block its scripts.
   await connection();
   return (
-    <html lang="en">
+    <html lang="en" style={{ "--cantrove-font": fontStack() } as React.CSSProperties}>
       <body className="min-h-dvh">
         <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-paper focus:p-2">
           Skip to content

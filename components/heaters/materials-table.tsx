@@ -1,5 +1,6 @@
-import type { MaterialKey, MaterialsList, TradeMeasure } from "@/lib/heaters/materials";
-import { formatLength, formatNumber } from "@/lib/heaters/format";
+import { DEFAULT_BEAD_DIAMETER_MM, type MaterialKey, type MaterialsList, type TradeMeasure } from "@/lib/heaters/materials";
+import { MM_PER_INCH, NBSP } from "@/lib/format";
+import { formatLength, formatNumber, formatRunLength } from "@/lib/heaters/format";
 
 export const MATERIAL_LABEL: Record<MaterialKey, string> = {
   glazing: "Glazing sheet",
@@ -51,8 +52,9 @@ export function MaterialsTable({ list, priceCell }: { list: MaterialsList; price
         </table>
       </div>
       <p className="text-sm text-ink-soft">
-        Adhesive: {list.adhesive.joints} joints, a bead of {formatLength(list.adhesive.beadLength, list.unit)} in all; one cartridge lays about{" "}
-        {formatLength(list.adhesive.beadLengthPerCartridge, list.unit)} of a 3/8 in bead (10 % extra allowed for starts and squeeze-out).
+        Adhesive: {list.adhesive.joints} joints, a bead of {formatRunLength(list.adhesive.beadLength, list.unit)} in all; one cartridge lays about{" "}
+        {formatRunLength(list.adhesive.beadLengthPerCartridge, list.unit)} of a{" "}
+        {formatLength(list.unit === "mm" ? DEFAULT_BEAD_DIAMETER_MM : DEFAULT_BEAD_DIAMETER_MM / MM_PER_INCH, list.unit)} bead (10{NBSP}% extra allowed for starts and squeeze-out).
       </p>
       {list.cost ? (
         <p className="font-bold" data-testid="materials-cost">

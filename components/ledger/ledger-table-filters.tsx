@@ -1,7 +1,7 @@
 "use client";
 
 import { SelectField } from "@/components/ui/field";
-import { STAGES } from "@/lib/ledger/schemas";
+import { STAGES } from "@/lib/ledger/codes";
 import { capitalise, stageLabel } from "@/lib/ledger/labels";
 import type { LogDrive } from "@/lib/drives/types";
 import type { LedgerFilterKey } from "./ledger-table-url";

@@ -1,6 +1,6 @@
 "use client";
 
-import { LOSS_REASON_LABEL, LOSS_REASONS, LOSS_STEP, PROCESS_TO, type LossReason } from "@/lib/ledger/schemas";
+import { LOSS_REASON_LABEL, LOSS_REASONS, LOSS_STEP, PROCESS_TO, type LossReason } from "@/lib/ledger/codes";
 import { SelectField } from "@/components/ui/field";
 import { NumberField } from "@/components/ui/number-field";
 import { NUMBER_SPECS } from "@/lib/forms/number-input";

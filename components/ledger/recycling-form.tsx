@@ -11,7 +11,7 @@ import { NUMBER_SPECS, parseNumberInputs, type NumberSpec } from "@/lib/forms/nu
 import { countOf, noun } from "@/lib/plural";
 import { Notice } from "@/components/ui/notice";
 import { fieldErrorsOf } from "@/lib/api/errors";
-import { recyclingInputSchema } from "@/lib/ledger/schemas";
+import { ledgerSchemas, useLazySchemas } from "@/hooks/use-lazy-schemas";
 import { ledgerQueries, useRecordRecycling } from "@/hooks/queries/ledger";
 
 // Money is not a count or a weight; a decimal with "." or "," like 12.50, with no sign or letters.
@@ -31,6 +31,7 @@ export function RecyclingForm({ driveId }: { driveId: string }) {
   const [form, setForm] = useState({ quantity: "", weightKg: "", moneyReceived: "" });
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [done, setDone] = useState<string | null>(null);
+  const schemas = useLazySchemas(ledgerSchemas);
   const save = useRecordRecycling(driveId, {
     onSuccess: (_res, body) => {
       setDone(`Recorded ${countOf(body.quantity, "can")} taken to recycling.`);
@@ -38,7 +39,7 @@ export function RecyclingForm({ driveId }: { driveId: string }) {
     },
   });
 
-  function onSubmit(e: React.FormEvent) {
+  async function onSubmit(e: React.FormEvent) {
     e.preventDefault();
     setDone(null);
     const numbers = parseNumberInputs({
@@ -46,7 +47,7 @@ export function RecyclingForm({ driveId }: { driveId: string }) {
       weightKg: [form.weightKg, weighed.spec],
       moneyReceived: [form.moneyReceived, MONEY],
     });
-    const parsed = recyclingInputSchema.safeParse({ ...numbers.values, weightKg: weighed.toKg(numbers.values.weightKg) });
+    const parsed = (await schemas()).recyclingInputSchema.safeParse({ ...numbers.values, weightKg: weighed.toKg(numbers.values.weightKg) });
     if (!parsed.success || Object.keys(numbers.errors).length > 0) {
       return setErrors({ ...(parsed.success ? {} : fieldErrorsOf(parsed.error)), ...(numbers.errors as Record<string, string>) });
     }

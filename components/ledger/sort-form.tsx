@@ -5,7 +5,8 @@ import { useQuery } from "@tanstack/react-query";
 import { EmptyState, Skeleton } from "@/components/ui/card";
 import { FormError } from "@/components/ui/field";
 import { fieldErrorsOf } from "@/lib/api/errors";
-import { REJECT_REASON_LABEL, REJECT_REASONS, sortInputSchema, type RejectReason } from "@/lib/ledger/schemas";
+import { REJECT_REASON_LABEL, REJECT_REASONS, type RejectReason } from "@/lib/ledger/codes";
+import { ledgerSchemas, useLazySchemas } from "@/hooks/use-lazy-schemas";
 import { ledgerQueries } from "@/hooks/queries/ledger";
 import { SortCaution } from "./cautions";
 import { EntryActions, useEntrySubmit, type Submit } from "./entry-submit";
@@ -29,6 +30,7 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
   const [rejected, setRejected] = useState(zeroRejects);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const { send, clear: clearStatus, status } = useEntrySubmit();
+  const schemas = useLazySchemas(ledgerSchemas);
   const good = valueOf(goodText);
   const rejectTotal = Object.values(rejected).reduce((s, raw) => s + valueOf(raw), 0);
   const counted = good + rejectTotal;
@@ -43,7 +45,7 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
       ...Object.fromEntries(REJECT_REASONS.map((r) => [`rejected.${r}`, [rejected[r], NUMBER_SPECS.rejectedCans]])),
     } as Record<string, [string, typeof NUMBER_SPECS.goodCans]>);
     const nonZero = Object.fromEntries(REJECT_REASONS.map((r) => [r, numbers.values[`rejected.${r}`] ?? 0]).filter(([, n]) => (n as number) > 0));
-    const parsed = sortInputSchema.safeParse({ haulIds: chosen, good: numbers.values.good, rejected: nonZero });
+    const parsed = (await schemas()).sortInputSchema.safeParse({ haulIds: chosen, good: numbers.values.good, rejected: nonZero });
     if (!parsed.success || Object.keys(numbers.errors).length > 0) {
       return setErrors({ ...(parsed.success ? {} : fieldErrorsOf(parsed.error)), ...(numbers.errors as Record<string, string>) });
     }

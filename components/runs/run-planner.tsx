@@ -10,7 +10,7 @@ import { useFormat } from "@/hooks/use-look";
 import { Field, FormError, SelectField } from "@/components/ui/field";
 import { fieldErrors } from "@/lib/api/client";
 import { fieldErrorsOf } from "@/lib/api/errors";
-import { createRunInputSchema } from "@/lib/runs/schemas";
+import { runSchemas, useLazySchemas } from "@/hooks/use-lazy-schemas";
 import { runQueries, useCreateRun } from "@/hooks/queries/runs";
 import type { SuggestionRow } from "@/lib/runs/types";
 import { useRememberDrive } from "@/hooks/queries/current-drive";
@@ -35,6 +35,7 @@ export interface PlannerProps {
 export function RunPlanner(props: PlannerProps) {
   const router = useRouter();
   const [driveId, setDriveId] = useState(props.initialDriveId);
+  const schemas = useLazySchemas(runSchemas);
   const remembered = useRememberDrive();
   const { look } = useFormat();
   const drive = props.drives.find((d) => d.id === driveId) ?? props.drives[0];
@@ -64,7 +65,7 @@ export function RunPlanner(props: PlannerProps) {
 
   const create = useCreateRun({ onSuccess: (run) => router.push(`/runs/${run.id}`), onError: (error) => setErrors(fieldErrors(error)) });
 
-  function submit(event: React.FormEvent) {
+  async function submit(event: React.FormEvent) {
     event.preventDefault();
     const body = {
       driveId,
@@ -75,7 +76,7 @@ export function RunPlanner(props: PlannerProps) {
       assigneeId,
       notes,
     };
-    const parsed = createRunInputSchema.safeParse(body);
+    const parsed = (await schemas()).createRunInputSchema.safeParse(body);
     if (!parsed.success) return setErrors(fieldErrorsOf(parsed.error));
     setErrors({});
     create.mutate(parsed.data);

@@ -1,4 +1,4 @@
-import { ZodError } from "zod";
+import type { ZodError } from "zod";
 
 // The one typed error of the app. Handlers throw it; lib/api/handler.ts turns
 // it into the contract's JSON error with the matching status.

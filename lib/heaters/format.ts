@@ -18,6 +18,16 @@ export function formatLength(value: number, unit: LengthUnit, look: Locale = DEF
   return unit === "in" ? formatInches(value, look) : formatMillimetres(value, look);
 }
 
+/**
+ * A long run of something (an adhesive bead, a seam) as it is bought and laid:
+ * metres to 0.1 in a millimetre plan, feet to 0.1 in an inch plan, under a metre
+ * or four feet it stays a tape-measure length.
+ */
+export function formatRunLength(value: number, unit: LengthUnit, look: Locale = DEFAULT_LOOK): string {
+  if (unit === "mm") return value >= 1000 ? `${formatNumber(value / 1000, 1, look)}${NBSP}m` : formatMillimetres(value, look);
+  return value >= 48 ? `${formatNumber(value / 12, 1, look)}${NBSP}ft` : formatInches(value, look);
+}
+
 /** An area in the plan's unit squared, whole: a tape measure's precision gives no more. */
 export function formatArea(value: number, unit: LengthUnit, look: Locale = DEFAULT_LOOK): string {
   return `${formatNumber(value, 0, look)}${NBSP}${unit}²`;

@@ -2,47 +2,10 @@ import { z } from "zod";
 import { day, moment } from "@/lib/dates";
 import { DEFAULT_GRAMS_PER_CAN } from "./estimate";
 
-// Inputs of the ledger endpoints; shared by the forms and the handlers. Safe to import in the client.
-export const REJECT_REASONS = ["dented", "crushed", "wrongSize", "notAluminium", "damaged", "other"] as const;
-export type RejectReason = (typeof REJECT_REASONS)[number];
-
-export const REJECT_REASON_LABEL: Record<RejectReason, string> = {
-  dented: "Dented",
-  crushed: "Crushed",
-  wrongSize: "Wrong size",
-  notAluminium: "Not aluminium",
-  damaged: "Torn or dirty",
-  other: "Other",
-};
-
-/** Why cans were lost on the way through processing; each names the step it happened in (PRODUCT.md "Loss"). */
-export const LOSS_REASONS = ["damagedWashing", "damagedOpening", "damagedPunching"] as const;
-export type LossReason = (typeof LOSS_REASONS)[number];
-export const LOSS_REASON_LABEL: Record<LossReason, string> = {
-  damagedWashing: "Damaged in washing",
-  damagedOpening: "Damaged in opening",
-  damagedPunching: "Damaged in punching",
-};
-/** The stage a loss reason's step leads to: a step that stops earlier cannot lose cans in it. */
-export const LOSS_STEP: Record<LossReason, (typeof PROCESS_TO)[number]> = { damagedWashing: "washed", damagedOpening: "opened", damagedPunching: "punched" };
-/** Every reason the reject tallies (and the stock's `rejected`) are kept by: a sort's and processing losses'. */
-export const TALLY_REASONS = [...REJECT_REASONS, ...LOSS_REASONS] as const;
-export type TallyReason = (typeof TALLY_REASONS)[number];
-/** A ledger line's reason: a reject's or loss's, or `stockCount` on the lines of a stock count's adjustment. */
-export const LINE_REASONS = [...TALLY_REASONS, "stockCount"] as const;
-export type LineReason = (typeof LINE_REASONS)[number];
-
-// The one list of stages, reasons (above) and movement kinds. The database's CHECK
-// constraints allow exactly these (tests/integration/ledger-codes.test.ts); a new
-// code is added here and in a migration that widens those checks.
-export const STAGES = ["hauled", "good", "washed", "opened", "punched", "claimed", "builtIn", "rejected", "recycled"] as const;
-export type Stage = (typeof STAGES)[number];
-
-export const MOVEMENT_KINDS = ["haul", "sort", "processing", "claim", "release", "builtIn", "recycling", "reversal", "stockCount"] as const;
-export type MovementKind = (typeof MOVEMENT_KINDS)[number];
-
-export const PROCESS_FROM = ["good", "washed", "opened"] as const;
-export const PROCESS_TO = ["washed", "opened", "punched"] as const;
+// Inputs of the ledger endpoints; shared by the forms and the handlers. Safe to import in the
+// client, but it brings zod: a form loads it when it is sent (lib/forms/lazy-schemas.ts).
+import { LOSS_REASONS, LOSS_STEP, PROCESS_FROM, PROCESS_TO, REJECT_REASONS, STAGES, type TallyReason } from "./codes";
+export * from "./codes";
 
 const MAX_CANS = 1_000_000;
 const wholeCans = (label: string) =>
