@@ -45,6 +45,12 @@ export async function screensByRole(): Promise<Screen[]> {
     { path: "/runs", role: "volunteer" },
     { path: "/units", role: "builder" },
     { path: `/units/${demo.demoHeaterId}`, role: "builder" },
+    { path: "/search?q=porch", role: "organiser" },
+    { path: "/account", role: "organiser" },
+    { path: "/account", role: "volunteer" },
+    { path: "/account", role: "builder" },
+    // A link that does not work: the page that says so (a working one needs a signed token; notify tests cover it).
+    { path: `/unsubscribe/${"0".repeat(32)}.runReminder.${"A".repeat(43)}`, role: "public" },
   ];
 }
 
