@@ -1,9 +1,9 @@
 import { buttonClass } from "@/components/ui/button";
 
 /** The organiser's search box: a plain GET form to /search, so it works before any script arrives. */
-export function SearchBox({ value = "", id = "site-search" }: { value?: string; id?: string }) {
+export function SearchBox({ value = "", id = "site-search", name = "Search the group" }: { value?: string; id?: string; name?: string }) {
   return (
-    <form role="search" action="/search" method="get" className="flex w-full min-w-0 items-center gap-2 sm:w-auto">
+    <form role="search" aria-label={name} action="/search" method="get" className="flex w-full min-w-0 items-center gap-2 sm:w-auto">
       <label htmlFor={id} className="sr-only">
         Search drives, drop points, units, people and ledger notes
       </label>

@@ -17,7 +17,7 @@ export default async function SearchPage({ searchParams }: { searchParams: Promi
   return (
     <main className="flex flex-col gap-5">
       <h1 className="text-3xl">Search {actor.group.name}</h1>
-      <SearchBox value={typed} id="page-search" />
+      <SearchBox value={typed} id="page-search" name="Search again" />
       {parsed && !parsed.success ? <Notice tone="caution" title="Search not run">{parsed.error.issues[0]?.message}</Notice> : null}
       {results && parsed?.success ? <SearchResults q={parsed.data.q} results={results} /> : null}
       {!parsed ? <p className="text-ink-soft">Find a drive, drop point, heater unit, person or ledger note by any word in it.</p> : null}
