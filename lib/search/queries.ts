@@ -31,9 +31,36 @@ export function snippet(text: string, q: string, width = 90): string {
   const flat = text.replace(/\s+/g, " ").trim();
   const at = flat.toLowerCase().indexOf(q.toLowerCase());
   if (flat.length <= width) return flat;
-  const start = at < 0 ? 0 : Math.max(0, at - Math.floor(width / 3));
+  let start = at < 0 ? 0 : Math.max(0, at - Math.floor(width / 3));
+  // Begin at a word, never in the middle of one.
+  if (start > 0) {
+    const space = flat.indexOf(" ", start);
+    start = space >= 0 && space < (at < 0 ? flat.length : at) ? space + 1 : start;
+  }
   const piece = flat.slice(start, start + width);
   return `${start > 0 ? "…" : ""}${piece}${start + width < flat.length ? "…" : ""}`;
+}
+
+interface PointRow {
+  drive: string;
+  address: string;
+  hours: string;
+  notes: string;
+  host: string | null;
+}
+
+/** The drive, address and hours, and the notes or host where the words were found there. */
+function pointDetail(r: PointRow, q: string): string {
+  const has = (text: string | null) => !!text && text.toLowerCase().includes(q.toLowerCase());
+  return [
+    r.drive,
+    r.address,
+    r.hours,
+    has(r.notes) ? `Notes: ${snippet(r.notes, q, 70)}` : null,
+    has(r.host) ? `Host: ${r.host}` : null,
+  ]
+    .filter(Boolean)
+    .join(" · ");
 }
 
 export async function searchGroup(groupId: string, q: string): Promise<SearchHit[]> {
@@ -45,7 +72,8 @@ export async function searchGroup(groupId: string, q: string): Promise<SearchHit
       b,
     ),
     db.raw(
-      `select x.id, x.name, ${TEXT.dropPoint} as detail, d.name as drive from drop_points x join drives d on d.id = x.drive_id
+      `select x.id, x.name, x.address, x.hours, x.access_notes as notes, x.host_name as host, d.name as drive
+         from drop_points x join drives d on d.id = x.drive_id
         where x.group_id = :g and ${matches(TEXT.dropPoint)} order by ${rank(TEXT.dropPoint)} desc, x.name limit :n`,
       b,
     ),
@@ -71,7 +99,7 @@ export async function searchGroup(groupId: string, q: string): Promise<SearchHit
   const rows = (r: { rows: Row[] }) => r.rows;
   return [
     ...rows(drives).map((r) => ({ kind: "drive" as const, id: String(r.id), title: String(r.name), detail: snippet(String(r.detail || "Drive"), q), href: `/organise/drives/${r.id}` })),
-    ...rows(points).map((r) => ({ kind: "dropPoint" as const, id: String(r.id), title: String(r.name), detail: `${r.drive} · ${snippet(String(r.detail), q)}`, href: `/organise/drop-points/${r.id}` })),
+    ...rows(points).map((r) => ({ kind: "dropPoint" as const, id: String(r.id), title: String(r.name), detail: pointDetail(r as unknown as PointRow, q), href: `/organise/drop-points/${r.id}` })),
     ...rows(units).map((r) => ({ kind: "heaterUnit" as const, id: String(r.id), title: String(r.name), detail: r.detail ? snippet(String(r.detail), q) : `${r.cans} cans`, href: `/units/${r.id}` })),
     ...rows(people).map((r) => ({ kind: "member" as const, id: String(r.id), title: String(r.name), detail: `${r.email} · ${ROLE_LABEL[r.role as Role]}`, href: `/members#member-${r.id}` })),
     ...rows(notes).map((r) => ({ kind: "ledgerNote" as const, id: String(r.id), title: snippet(String(r.note), q, 70), detail: String(r.drive), href: `/ledger?driveId=${r.drive_id}` })),
