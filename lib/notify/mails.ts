@@ -90,10 +90,13 @@ export function weeklySummaryMail(args: {
   const f = formatter(args.look);
   const subject = `${args.groupName}: your week from ${f.day(args.weekOf)}`;
   const driveLines = args.drives.flatMap((d) => {
+    const good = f.count(d.goodCans, "good can");
     const progress =
-      d.targetCans > 0
-        ? `${f.count(d.goodCans, "good can")} of ${f.number(d.targetCans)} (${f.percent(Math.min(1, d.goodCans / d.targetCans))}); ${f.number(d.remaining)} still to come`
-        : `${f.count(d.goodCans, "good can")}; no heater units planned yet, so no target`;
+      d.targetCans <= 0
+        ? `${good}; no heater units planned yet, so no target`
+        : d.remaining <= 0
+          ? `${good} of ${f.number(d.targetCans)}: target reached`
+          : `${good} of ${f.number(d.targetCans)} (${f.percent(d.goodCans / d.targetCans)}); ${f.number(d.remaining)} still to come`;
     const pledges = d.pledgesDue.map((p) => `     ${f.day(p.bringOn)}: ${f.count(p.bags, "bag")} at ${p.dropPointName}`);
     return [
       `${d.name}`,
