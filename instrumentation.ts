@@ -1,13 +1,19 @@
 // Runs once when a server process starts: the job queue's workers (queued
-// e-mail keeps moving while the mail service comes and goes). If the database
-// is not there yet, it tries again until it is.
+// e-mail keeps moving while the mail service comes and goes; notifications
+// are swept on a schedule). If the database is not there yet, each tries
+// again until it is.
 export async function register() {
   if (process.env.NEXT_RUNTIME !== "nodejs") return;
   const { startMailWork } = await import("@/lib/mail/work");
-  const start = () =>
-    startMailWork().catch((error: Error) => {
-      console.warn("[cantrove] background work not started yet:", error.message);
-      setTimeout(start, 15_000).unref();
-    });
-  void start();
+  const { startNotifyWork } = await import("@/lib/notify/work");
+  const keepTrying = (what: string, work: () => Promise<void>) => {
+    const start = () =>
+      work().catch((error: Error) => {
+        console.warn(`[cantrove] ${what} not started yet:`, error.message);
+        setTimeout(start, 15_000).unref();
+      });
+    void start();
+  };
+  keepTrying("background mail work", startMailWork);
+  keepTrying("notification sweep", startNotifyWork);
 }

@@ -10,7 +10,7 @@ let template: string | undefined;
 // before the page renders. Every page and handler still checks the session and
 // role itself (lib/auth/session.ts); a forged cookie gets no further than here.
 const SESSION_COOKIES = ["next-auth.session-token", "__Secure-next-auth.session-token"];
-const SIGNED_IN_AREAS = ["/dashboard", "/log", "/units", "/members", "/mail", "/home", "/ledger", "/organise", "/runs"];
+const SIGNED_IN_AREAS = ["/dashboard", "/log", "/units", "/members", "/mail", "/home", "/ledger", "/organise", "/runs", "/search", "/account"];
 
 function needsSession(pathname: string): boolean {
   return SIGNED_IN_AREAS.some((area) => pathname === area || pathname.startsWith(`${area}/`));

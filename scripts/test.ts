@@ -54,7 +54,8 @@ async function main(): Promise<number> {
     seed: "demo",
     log: (line) => console.log(`[stack] ${line}`),
   });
-  const env: NodeJS.ProcessEnv = { ...process.env, ...stack.env, NODE_ENV: "production", TRUSTED_PROXY_HOPS: "1" };
+  // NOTIFY_SCHEDULE=off: the notification tests run the sweep at chosen moments (lib/notify/sweep.ts).
+  const env: NodeJS.ProcessEnv = { ...process.env, ...stack.env, NODE_ENV: "production", TRUSTED_PROXY_HOPS: "1", NOTIFY_SCHEDULE: "off" };
   buildIfStale(root, env, (line) => console.log(`[build] ${line}`));
   server = spawn(...serverCommand(root, ports.app), {
     cwd: root,

@@ -24,7 +24,7 @@ export function MemberList({ currentUserId }: { currentUserId: string }) {
       <FormError message={actionError} />
       <ul className="divide-y divide-paper-edge" aria-label="Members">
         {data.map((m: Member) => (
-          <li key={m.userId} className="flex flex-wrap items-center justify-between gap-2 py-3">
+          <li key={m.userId} id={`member-${m.userId}`} className="flex flex-wrap items-center justify-between gap-2 py-3">
             <span className="min-w-0">
               <span className="block font-semibold">
                 {m.name}

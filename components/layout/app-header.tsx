@@ -2,6 +2,7 @@ import Link from "next/link";
 import { Brand } from "./brand";
 import { SignOutButton } from "@/components/auth/sign-out-button";
 import { GroupSwitcher } from "@/components/accounts/group-switcher";
+import { SearchBox } from "@/components/search/search-box";
 import { ROLE_LABEL, type Role } from "@/lib/auth/roles";
 
 const NAV: Record<Role, { href: string; label: string }[]> = {
@@ -15,16 +16,19 @@ const NAV: Record<Role, { href: string; label: string }[]> = {
     { href: "/members", label: "Members" },
     { href: "/mail", label: "Sent mail" },
     { href: "/plan", label: "Planner" },
-    { href: "/organise/group", label: "Settings" },
+    { href: "/organise/group", label: "Group settings" },
+    { href: "/account", label: "My settings" },
   ],
   volunteer: [
     { href: "/log", label: "Log" },
     { href: "/runs", label: "My runs" },
     { href: "/plan", label: "Planner" },
+    { href: "/account", label: "My settings" },
   ],
   builder: [
     { href: "/units", label: "My units" },
     { href: "/plan", label: "Planner" },
+    { href: "/account", label: "My settings" },
   ],
 };
 
@@ -36,6 +40,8 @@ export function AppHeader({ groupName, role, userName }: { groupName: string; ro
         <div className="text-sm text-ink-soft">
           <span className="font-semibold text-ink">{groupName}</span> · {ROLE_LABEL[role]} · {userName}
         </div>
+        {/* Organisers search everything of their group; the others' pages are few enough to need none. */}
+        {role === "organiser" ? <SearchBox /> : null}
       </div>
       <nav aria-label="Group" className="mx-auto flex max-w-5xl flex-wrap items-center gap-x-4 px-4 pb-2 font-semibold">
         {NAV[role].map((item) => (

@@ -65,3 +65,21 @@ export function useGroupSwitched() {
   const client = useQueryClient();
   return useCallback(() => client.invalidateQueries(), [client]);
 }
+
+/** Leaving the active group ends the person's sessions: the caller signs out after. */
+export function useLeaveGroup() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: () => fetchJson<{ left: true; groupsLeft: number }>("/api/me/leave", { method: "POST", body: {} }),
+    onSuccess: () => client.invalidateQueries({ queryKey: memberKeys.all }),
+  });
+}
+
+export function useHandOver() {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: ({ userId, then }: { userId: string; then: "volunteer" | "builder" | "leave" }) =>
+      fetchJson<{ organiser: string; then: string }>(`/api/members/${userId}/hand-over`, { method: "POST", body: { then } }),
+    onSuccess: () => client.invalidateQueries({ queryKey: memberKeys.all }),
+  });
+}

@@ -49,6 +49,16 @@ export type AcceptInvitationInput = z.infer<typeof acceptInvitationInputSchema>;
 
 export const memberRoleInputSchema = z.object({ role: roleSchema });
 
+/** Handing the organiser role to another member: what the one handing over becomes (or leaves). */
+export const HAND_OVER_THEN = ["volunteer", "builder", "leave"] as const;
+export const handOverInputSchema = z.object({
+  then: z.enum(HAND_OVER_THEN, { message: "Choose what you become after handing over: volunteer, builder, or leave the group." }),
+});
+export type HandOverInput = z.infer<typeof handOverInputSchema>;
+
+/** Leaving needs no input; the optional flag is for forms that ask first. */
+export const leaveGroupInputSchema = z.object({ confirm: z.boolean().optional() });
+
 export const resetRequestInputSchema = z.object({ email: emailSchema });
 export const resetConfirmInputSchema = z.object({ token: tokenSchema, password: passwordSchema });
 

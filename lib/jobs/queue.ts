@@ -13,6 +13,8 @@ export const QUEUES = {
   mailDeliver: "mail-deliver",
   /** Now and then: any queued e-mail whose retry was never put on the queue (a server stopped in between). */
   mailSweep: "mail-sweep",
+  /** Every 10 minutes: run reminders, weekly summaries and unit-ready notes that are due (lib/notify/sweep.ts). */
+  notifySweep: "notify-sweep",
 } as const;
 
 const shared = globalThis as typeof globalThis & { cantroveJobs?: Promise<PgBoss> };
@@ -24,6 +26,7 @@ async function startQueue(): Promise<PgBoss> {
   // "stately": at most one waiting and one running job per singletonKey, so a retry is never queued twice.
   await boss.createQueue(QUEUES.mailDeliver, { name: QUEUES.mailDeliver, policy: "stately" });
   await boss.createQueue(QUEUES.mailSweep, { name: QUEUES.mailSweep, policy: "singleton" });
+  await boss.createQueue(QUEUES.notifySweep, { name: QUEUES.notifySweep, policy: "singleton" });
   return boss;
 }
 

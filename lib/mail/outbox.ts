@@ -1,5 +1,6 @@
 import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
+import type { Knex } from "knex";
 import { db } from "@/lib/db";
 import { env } from "@/lib/env";
 import { jobs, QUEUES } from "@/lib/jobs/queue";
@@ -11,6 +12,8 @@ export interface OutgoingMail {
   text: string;
   html?: string;
   kind?: string;
+  /** Extra headers, e.g. List-Unsubscribe and List-Unsubscribe-Post (RFC 8058). */
+  headers?: Record<string, string>;
 }
 
 const MAX_ATTEMPTS = 8;
@@ -54,7 +57,7 @@ export async function deliver(id: number): Promise<boolean> {
       subject: row.subject,
       text: row.text_body,
       html: row.html_body ?? undefined,
-      headers: { "X-Cantrove-Group": row.group_id ?? "", "X-Cantrove-Kind": row.kind, "X-Cantrove-Outbox": String(id) },
+      headers: { ...(row.headers ?? {}), "X-Cantrove-Group": row.group_id ?? "", "X-Cantrove-Kind": row.kind, "X-Cantrove-Outbox": String(id) },
     });
     await db("outbox").where({ id }).update({ status: "sent", sent_at: db.fn.now(), attempts: row.attempts + 1 });
     return true;
@@ -75,9 +78,12 @@ export async function deliver(id: number): Promise<boolean> {
   }
 }
 
-/** Queues a message and tries to send it at once; false means a retry is queued. */
-export async function sendMail(mail: OutgoingMail): Promise<{ id: number; sent: boolean }> {
-  const [row] = await db("outbox")
+/**
+ * Writes a message to the outbox only, inside the caller's transaction (so a
+ * claim and its e-mail commit together); the caller then calls deliver(id).
+ */
+export async function queueMail(mail: OutgoingMail, trx: Knex | Knex.Transaction = db): Promise<number> {
+  const [row] = await trx("outbox")
     .insert({
       group_id: mail.groupId,
       to_address: mail.to,
@@ -85,11 +91,17 @@ export async function sendMail(mail: OutgoingMail): Promise<{ id: number; sent: 
       text_body: mail.text,
       html_body: mail.html ?? null,
       kind: mail.kind ?? "notice",
+      headers: mail.headers ?? null,
       // Keeps the sweep away while this first attempt runs.
       next_attempt_at: db.raw("now() + interval '60 seconds'"),
     })
     .returning("id");
-  const id = row.id;
+  return row.id;
+}
+
+/** Queues a message and tries to send it at once; false means a retry is queued. */
+export async function sendMail(mail: OutgoingMail): Promise<{ id: number; sent: boolean }> {
+  const id = await queueMail(mail);
   return { id, sent: await deliver(id) };
 }
 

@@ -52,6 +52,11 @@ export async function startMailFake(opts: { dir: string; smtpPort: number; apiPo
           for (const [key, value] of parsed.headers) {
             if (typeof value === "string") headers[key] = value;
           }
+          // mailparser folds every List-* header into one parsed "list" object; keep each as it was
+          // sent (unfolded), so checks can read List-Unsubscribe and List-Unsubscribe-Post as text.
+          for (const { key, line } of parsed.headerLines) {
+            if (key.startsWith("list-")) headers[key] = line.slice(line.indexOf(":") + 1).replace(/\r?\n[ \t]+/g, " ").trim();
+          }
           const mail: CapturedMail = {
             id,
             receivedAt: new Date().toISOString(),

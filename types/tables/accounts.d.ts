@@ -10,6 +10,7 @@
 import "knex/types/tables";
 import type { Role } from "@/lib/auth/roles";
 import type { Units } from "@/lib/format/look";
+import type { NotificationKind } from "@/lib/notify/kinds";
 
 declare module "knex/types/tables" {
   interface UsersRow {
@@ -93,6 +94,24 @@ declare module "knex/types/tables" {
     created_at: Date;
     next_attempt_at: Date;
     sent_at: Date | null;
+    /** 20261208010000: extra headers (List-Unsubscribe…), or null. */
+    headers: Record<string, string> | null;
+  }
+  /** 20261208010000: a person's switch for one kind of notification (no row: sent). */
+  interface NotificationOptoutsRow {
+    user_id: string;
+    kind: NotificationKind;
+    via: "settings" | "oneClick" | "link";
+    created_at: Date;
+  }
+  /** 20261208010000: one row per notification sent; (kind, key) is the claim. */
+  interface NotificationSendsRow {
+    kind: NotificationKind;
+    key: string;
+    group_id: string;
+    user_id: string | null;
+    outbox_id: number | null;
+    created_at: Date;
   }
   interface FilesRow {
     id: string;
@@ -118,5 +137,7 @@ declare module "knex/types/tables" {
     idempotency_keys: IdempotencyKeysRow;
     outbox: OutboxRow;
     files: FilesRow;
+    notification_optouts: NotificationOptoutsRow;
+    notification_sends: NotificationSendsRow;
   }
 }

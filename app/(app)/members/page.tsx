@@ -4,6 +4,7 @@ import { Card } from "@/components/ui/card";
 import { InviteForm } from "@/components/accounts/invite-form";
 import { InvitationList } from "@/components/accounts/invitation-list";
 import { MemberList } from "@/components/accounts/member-list";
+import { HandOver } from "@/components/accounts/hand-over";
 import { requirePageRole } from "@/lib/auth/session";
 
 export const metadata: Metadata = { title: "Members" };
@@ -31,6 +32,15 @@ export default async function MembersPage() {
         <p className="mb-3 text-sm text-ink-faint">A group always keeps at least one organiser.</p>
         <MemberList currentUserId={actor.user.id} />
       </Card>
+      <div id="hand-over">
+        <Card title="Hand the group over">
+          <p className="mb-3 text-sm text-ink-faint">
+            Make another member the organiser, then stay in another role or leave. To leave while others organise too, use{" "}
+            <Link href="/account">My settings</Link>.
+          </p>
+          <HandOver currentUserId={actor.user.id} />
+        </Card>
+      </div>
     </main>
   );
 }

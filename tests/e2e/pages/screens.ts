@@ -1,6 +1,7 @@
 import { DEMO } from "@/tests/support/env";
 import { testDb } from "@/tests/support/db";
 import { demoFixture } from "@/tests/support/fixtures";
+import { unsubscribeToken } from "@/lib/notify/unsubscribe";
 
 // The screens people open most, each as the role that uses it (the issue
 // "fast, steady, readable screens on a mid-range phone"). Shared by the
@@ -32,6 +33,7 @@ export const SCREENS: Screen[] = [
 /** Every role's view of the pages it uses, for the accessibility and touch checks. */
 export async function screensByRole(): Promise<Screen[]> {
   const demo = await demoFixture();
+  const volunteerId = (await testDb()("users").where({ email: DEMO.volunteer }).first()).id as string;
   const run = await testDb()("pickup_runs").where({ drive_id: demo.demoDriveId }).orderBy("created_at").first();
   return [
     ...SCREENS,
@@ -45,6 +47,12 @@ export async function screensByRole(): Promise<Screen[]> {
     { path: "/runs", role: "volunteer" },
     { path: "/units", role: "builder" },
     { path: `/units/${demo.demoHeaterId}`, role: "builder" },
+    { path: "/search?q=porch", role: "organiser" },
+    { path: "/account", role: "organiser" },
+    { path: "/account", role: "volunteer" },
+    { path: "/account", role: "builder" },
+    // An e-mail's unsubscribe link (opening it changes nothing; the button would).
+    { path: `/unsubscribe/${unsubscribeToken(volunteerId, "weeklySummary")}`, role: "public" },
   ];
 }
 

@@ -27,7 +27,7 @@ export class RoleSessions {
     const page = await this.page(screen.role);
     await page.goto(screen.path);
     await page.waitForLoadState("networkidle");
-    if (new URL(page.url()).pathname !== screen.path) throw new Error(`${screen.path} as ${screen.role} ended on ${page.url()}`);
+    if (new URL(page.url()).pathname !== new URL(screen.path, page.url()).pathname) throw new Error(`${screen.path} as ${screen.role} ended on ${page.url()}`);
     return page;
   }
 
