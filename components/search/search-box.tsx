@@ -5,7 +5,7 @@ export function SearchBox({ value = "", id = "site-search", name = "Search the g
   return (
     <form role="search" aria-label={name} action="/search" method="get" className="flex w-full min-w-0 items-center gap-2 sm:w-auto">
       <label htmlFor={id} className="sr-only">
-        Search drives, drop points, units, people and ledger notes
+        Search the group&rsquo;s records
       </label>
       <input
         id={id}

@@ -70,7 +70,7 @@ export function useGroupSwitched() {
 export function useLeaveGroup() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: () => fetchJson<{ left: true; groupsLeft: number }>("/api/me/leave", { method: "POST", body: {} }),
+    mutationFn: () => fetchJson<{ left: true; groupsLeft: number }>("/api/me/leave", { method: "POST", body: { confirm: true } }),
     onSuccess: () => client.invalidateQueries({ queryKey: memberKeys.all }),
   });
 }

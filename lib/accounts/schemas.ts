@@ -56,8 +56,8 @@ export const handOverInputSchema = z.object({
 });
 export type HandOverInput = z.infer<typeof handOverInputSchema>;
 
-/** Leaving needs no input; the optional flag is for forms that ask first. */
-export const leaveGroupInputSchema = z.object({ confirm: z.boolean().optional() });
+/** Leaving must be meant: the body says so ({confirm: true}), so no stray or generated request leaves by accident. */
+export const leaveGroupInputSchema = z.object({ confirm: z.literal(true, { message: "Send confirm: true to leave the group." }) });
 
 export const resetRequestInputSchema = z.object({ email: emailSchema });
 export const resetConfirmInputSchema = z.object({ token: tokenSchema, password: passwordSchema });

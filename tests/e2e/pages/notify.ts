@@ -4,7 +4,7 @@ import type { Page } from "playwright-core";
 export const searchBox = {
   /** The header's search box, as an organiser types into it. */
   async search(page: Page, words: string) {
-    await page.getByRole("search").first().getByLabel(/Search drives/).fill(words);
+    await page.getByRole("search").first().getByLabel("Search the group\u2019s records").fill(words);
     await page.getByRole("search").first().getByRole("button", { name: "Search" }).click();
     await page.waitForURL((url) => url.pathname === "/search");
     await page.getByRole("heading", { name: /^Search / }).waitFor();

@@ -29,7 +29,7 @@ const roleIn = async (groupId: string, userId: string) =>
 describe("leaving a group", () => {
   it("refuses the last organiser with 409 and a message that says what to do", async () => {
     const organiser = await signedIn(g.main.emails.organiser);
-    const res = await organiser.json<{ error: { code: string; message: string } }>("POST", "/api/me/leave", {});
+    const res = await organiser.json<{ error: { code: string; message: string } }>("POST", "/api/me/leave", { confirm: true });
     expect(res.status).toBe(409);
     expect(res.body.error.code).toBe("conflict");
     expect(res.body.error.message).toBe(LAST_ORGANISER_LEAVING);
@@ -44,7 +44,7 @@ describe("leaving a group", () => {
       .insert({ group_id: g.main.groupId, drive_id: g.main.driveId, planned_on: "2027-01-20", start_lat: 52, start_lng: -1.6, distance_km: 1, assignee_id: g.ids.volunteer })
       .returning("id");
     const volunteer = await signedIn(g.main.emails.volunteer);
-    const res = await volunteer.json<{ left: boolean; groupsLeft: number }>("POST", "/api/me/leave", {});
+    const res = await volunteer.json<{ left: boolean; groupsLeft: number }>("POST", "/api/me/leave", { confirm: true });
     expect(res.status).toBe(200);
     expect(res.body).toEqual({ left: true, groupsLeft: 0 });
     expect(await roleIn(g.main.groupId, g.ids.volunteer)).toBeNull();
@@ -75,7 +75,7 @@ describe("handing the group over", () => {
     // The new organiser is now the last one: the same rule holds for them.
     const next = await signedIn(g.main.emails.builder);
     expect((await next.get("/api/me")).status).toBe(200);
-    expect((await next.json("POST", "/api/me/leave", {})).status).toBe(409);
+    expect((await next.json("POST", "/api/me/leave", { confirm: true })).status).toBe(409);
   });
 
   it("can keep the old organiser as a volunteer instead", async () => {
