@@ -33,7 +33,8 @@ const replica = (shared.__cantroveReplica ??= (() => {
   const s: ReplicaState = { db: null, up: false, replayed: 0n, caughtUpAt: 0, lagMs: Infinity, timer: null };
   if (!url) return s;
   const config = knexConfig(url);
-  s.db = knex({ ...config, pool: { min: 0, max: Number(process.env.DB_READ_POOL_MAX ?? process.env.DB_POOL_MAX ?? 10) }, acquireConnectionTimeout: 2_000 });
+  // Named, so the replica's pg_stat_activity shows which of its sessions are Cantrove's public reads.
+  s.db = knex({ ...config, connection: { connectionString: url, application_name: "cantrove-read" }, pool: { min: 0, max: Number(process.env.DB_READ_POOL_MAX ?? process.env.DB_POOL_MAX ?? 10) }, acquireConnectionTimeout: 2_000 });
   return s;
 })());
 

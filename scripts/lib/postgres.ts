@@ -29,7 +29,7 @@ export function ensurePostgresInstalled(log: (line: string) => void = console.lo
   return bin;
 }
 
-function asPostgres(bin: string, tool: string, args: string[]): void {
+export function asPostgres(bin: string, tool: string, args: string[]): void {
   const isRoot = process.getuid?.() === 0;
   const cmd = isRoot ? "runuser" : path.join(bin, tool);
   const fullArgs = isRoot ? ["-u", "postgres", "--", path.join(bin, tool), ...args] : args;
