@@ -21,6 +21,7 @@ const maxLagMs = Math.max(0, Number(process.env.READ_REPLICA_MAX_LAG_MS ?? 1_000
 
 interface ReplicaState {
   db: Knex | null;
+  probeDb: Knex | null; // its own connection, named apart, so the probe never shows as a public read
   up: boolean;
   replayed: bigint; // the replica's replay position at the last probe
   caughtUpAt: number; // when the probe last saw it at the primary's position
@@ -30,11 +31,12 @@ interface ReplicaState {
 const shared = globalThis as typeof globalThis & { __cantroveReplica?: ReplicaState };
 const replica = (shared.__cantroveReplica ??= (() => {
   const url = process.env.DATABASE_READ_URL;
-  const s: ReplicaState = { db: null, up: false, replayed: 0n, caughtUpAt: 0, lagMs: Infinity, timer: null };
+  const s: ReplicaState = { db: null, probeDb: null, up: false, replayed: 0n, caughtUpAt: 0, lagMs: Infinity, timer: null };
   if (!url) return s;
   const config = knexConfig(url);
   // Named, so the replica's pg_stat_activity shows which of its sessions are Cantrove's public reads.
   s.db = knex({ ...config, connection: { connectionString: url, application_name: "cantrove-read" }, pool: { min: 0, max: Number(process.env.DB_READ_POOL_MAX ?? process.env.DB_POOL_MAX ?? 10) }, acquireConnectionTimeout: 2_000 });
+  s.probeDb = knex({ ...config, connection: { connectionString: url, application_name: "cantrove-read-probe" }, pool: { min: 0, max: 1 }, acquireConnectionTimeout: 1_000 });
   return s;
 })());
 
@@ -43,13 +45,13 @@ const withTimeout = <T>(p: Promise<T>, ms: number) =>
 
 let probing = false;
 async function probe(): Promise<void> {
-  if (!replica.db || probing) return;
+  if (!replica.probeDb || probing) return;
   probing = true;
   try {
     // The primary's position first: a replica at or past it has everything committed before this probe.
     const primary = await withTimeout(db.raw(`select pg_current_wal_lsn()::text as lsn`), 1_000);
     const seen = await withTimeout(
-      replica.db.raw(`select pg_is_in_recovery() as standby, coalesce(pg_last_wal_replay_lsn(), pg_current_wal_lsn())::text as lsn`),
+      replica.probeDb.raw(`select pg_is_in_recovery() as standby, coalesce(pg_last_wal_replay_lsn(), pg_current_wal_lsn())::text as lsn`),
       1_000,
     );
     const p = lsnValue(primary.rows[0]?.lsn) ?? 0n;

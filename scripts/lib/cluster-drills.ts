@@ -143,7 +143,7 @@ export async function drillKillOneServer(ctx: DrillContext, seconds: number, con
     await ctx.cluster.killApp(0, "SIGKILL");
   })();
   await Promise.all([...Array.from({ length: concurrency }, (_, w) => worker(w)), killer]);
-  const acked = ctx.acknowledged.slice(ackedBefore);
+  const acked = [...new Set(ctx.acknowledged.slice(ackedBefore))];
   const [found] = await query<{ n: number }>(ctx.cluster.primaryUrl, "select count(*)::int as n from hauls where id = any($1::uuid[])", [acked]);
   await ctx.cluster.startApp(0); // back for the next drills
   return { requests, errors, errorRate: requests ? errors / requests : 1, acknowledged: acked.length, acknowledgedFound: found.n };
@@ -169,8 +169,12 @@ export async function drillFailOver(ctx: DrillContext) {
   await ctx.cluster.failOver();
   for (let i = 0; i < 2; i++) await ctx.cluster.killApp(i, "SIGTERM");
   for (let i = 0; i < 2; i++) await ctx.cluster.startApp(i, ctx.cluster.promotedEnv());
-  const [found] = await query<{ n: number }>(ctx.cluster.standbyUrl, "select count(*)::int as n from hauls where id = any($1::uuid[])", [ctx.acknowledged]);
+  const ids = [...new Set(ctx.acknowledged)];
+  const there = await query<{ id: string }>(ctx.cluster.standbyUrl, "select id from hauls where id = any($1::uuid[])", [ids]);
+  const have = new Set(there.map((r) => r.id));
+  const missing = ids.filter((id) => !have.has(id));
+  const found = { n: have.size };
   const [role] = await query<{ standby: boolean }>(ctx.cluster.standbyUrl, "select pg_is_in_recovery() as standby");
   const after = await haul(ctx, ctx.cluster.url);
-  return { acknowledged: ctx.acknowledged.length, foundOnPromoted: found.n, promotedIsPrimary: !role.standby, writeAfterFailOver: after.status };
+  return { acknowledged: ids.length, foundOnPromoted: found.n, missing, promotedIsPrimary: !role.standby, writeAfterFailOver: after.status };
 }

@@ -2,7 +2,7 @@ import { spawn, spawnSync, execFileSync, type ChildProcess } from "node:child_pr
 import { existsSync, mkdirSync, writeFileSync, chmodSync, rmSync } from "node:fs";
 import path from "node:path";
 import { startStack, type Stack } from "./stack";
-import { asPostgres, ensurePostgresInstalled, startClusterAt, stopClusterAt } from "./postgres";
+import { asPostgres, ensurePostgresInstalled, ownByPostgres, startClusterAt, stopClusterAt } from "./postgres";
 import { serverCommand, stopServer } from "./serve";
 import { waitForHealthy } from "./wait";
 
@@ -209,6 +209,8 @@ export async function startAppCluster(opts: ClusterOptions): Promise<AppCluster>
     // primary_conninfo and standby.signal). initdb --auth=trust allows replication from loopback.
     log(`Making the hot standby with pg_basebackup (port ${ports.standby})…`);
     rmSync(standbyDir, { recursive: true, force: true });
+    mkdirSync(standbyDir, { recursive: true });
+    ownByPostgres(standbyDir);
     const bin = ensurePostgresInstalled(log);
     asPostgres(bin, "pg_basebackup", ["-h", "127.0.0.1", "-p", String(ports.primary), "-U", "postgres", "-D", standbyDir, "-R", "-X", "stream", "-c", "fast"]);
     startClusterAt(standbyDir, ports.standby);

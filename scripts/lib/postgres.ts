@@ -39,7 +39,7 @@ export function asPostgres(bin: string, tool: string, args: string[]): void {
   }
 }
 
-function ownByPostgres(dir: string): void {
+export function ownByPostgres(dir: string): void {
   if (process.getuid?.() !== 0) return;
   const uid = Number(execFileSync("id", ["-u", "postgres"], { encoding: "utf8" }).trim());
   const gid = Number(execFileSync("id", ["-g", "postgres"], { encoding: "utf8" }).trim());
