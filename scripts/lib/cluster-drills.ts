@@ -101,11 +101,12 @@ export async function drillFreshAcrossServers(ctx: DrillContext, rounds: number)
 /** (2) With no recent write, public reads are answered by the standby (its sessions named cantrove-read). */
 export async function drillReadsOnStandby(ctx: DrillContext, reads: number) {
   await sleep(1_500); // past the probe interval: the standby has replayed the last write
+  // The query's opening words: pg_stat_activity keeps only the first track_activity_query_size (1 kB) of it.
   const seen = new Set<number>();
   const sample = async () => {
     const rows = await query<{ pid: number }>(
       ctx.cluster.standbyUrl,
-      `select pid from pg_stat_activity where application_name = 'cantrove-read' and query ilike '%drop_point_tallies%'`,
+      `select pid from pg_stat_activity where application_name = 'cantrove-read' and query ilike 'select p.id, p.name, p.address%'`,
     );
     for (const r of rows) seen.add(r.pid);
   };
