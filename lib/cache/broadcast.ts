@@ -22,19 +22,38 @@ const shared = globalThis as typeof globalThis & {
 };
 const state = (shared.__cantroveBroadcast ??= { origin: randomUUID(), client: null, started: false, connected: false, retryMs: 250 });
 
+// A sent message's own echo: PostgreSQL hands a NOTIFY to every listener at
+// once, so once this server's listener has it back the others have been sent
+// it too; the write's answer waits for that (at most ECHO_WAIT_MS), so the
+// writer's next request to another server finds that server's cache cleared.
+const ECHO_WAIT_MS = 200;
+const echoes = new Map<string, () => void>();
+
 /** Clears this process's read cache at once, then tells every other server to clear theirs. Await it before answering the write. */
 export async function forgetEverywhere(scope: Scope = "all"): Promise<void> {
   forgetReads(scope);
+  const nonce = randomUUID();
+  let timer: NodeJS.Timeout | undefined;
+  const echoed = state.connected
+    ? new Promise<void>((resolve) => {
+        echoes.set(nonce, resolve);
+        timer = setTimeout(resolve, ECHO_WAIT_MS);
+      })
+    : Promise.resolve();
   try {
     // pg_notify in its own statement: sent when that statement commits, after the write it follows.
     const { rows } = await db.raw(
       `select pg_current_wal_lsn()::text as lsn, pg_notify(?, ? || '|' || pg_current_wal_lsn()::text)`,
-      [CHANNEL, `${state.origin}|${scope}`],
+      [CHANNEL, `${state.origin}:${nonce}|${scope}`],
     );
     noteWriteLsn(rows[0]?.lsn);
+    await echoed;
   } catch (error) {
     // The write itself is done; other servers catch up within READ_CACHE_MS.
     console.warn("[cantrove] could not tell other servers to clear their read cache:", (error as Error).message);
+  } finally {
+    clearTimeout(timer);
+    echoes.delete(nonce);
   }
 }
 
@@ -66,7 +85,9 @@ function connect(): void {
     const m = parseMessage(message.payload);
     if (!m) return;
     noteWriteLsn(m.lsn);
-    if (m.origin !== state.origin) forgetReads(m.scope);
+    const [origin, nonce] = m.origin.split(":");
+    if (origin !== state.origin) forgetReads(m.scope);
+    else echoes.get(nonce)?.();
   });
   client
     .connect()
