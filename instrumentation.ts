@@ -4,6 +4,9 @@
 // again until it is.
 export async function register() {
   if (process.env.NEXT_RUNTIME !== "nodejs") return;
+  // Other servers' writes clear this one's short read cache (lib/cache/broadcast.ts).
+  const { startReadCacheListener } = await import("@/lib/cache/broadcast");
+  startReadCacheListener();
   const { startMailWork } = await import("@/lib/mail/work");
   const { startNotifyWork } = await import("@/lib/notify/work");
   const keepTrying = (what: string, work: () => Promise<void>) => {

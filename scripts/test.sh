@@ -9,6 +9,12 @@ if [ ! -x /usr/bin/chromium ]; then
   export DEBIAN_FRONTEND=noninteractive
   apt-get update -qq && apt-get install -y -qq chromium >/dev/null
 fi
+# The cluster drills (tests/integration/cluster-drills.test.ts) run PgBouncer and HAProxy.
+if [ ! -x /usr/sbin/pgbouncer ] || [ ! -x /usr/sbin/haproxy ]; then
+  echo "Installing Debian's pgbouncer and haproxy for the cluster drills…"
+  export DEBIAN_FRONTEND=noninteractive
+  apt-get update -qq && apt-get install -y -qq --no-install-recommends pgbouncer haproxy >/dev/null
+fi
 export NEXT_TELEMETRY_DISABLED=1
 # The whole suite starts with the linter (eslint.config.mjs: Next's rules, layers,
 # cycles, file size); `npm test -- <paths>` runs just those tests.

@@ -2,7 +2,7 @@ import "server-only";
 import { db } from "@/lib/db";
 import { env } from "@/lib/env";
 import { notFound } from "@/lib/api/errors";
-import { forgetReads } from "@/lib/cache/read-cache";
+import { forgetEverywhere } from "@/lib/cache/broadcast";
 import { sendMail } from "@/lib/mail/outbox";
 import { SIGN_UP_MAIL_RULE, mayMail } from "./mail-limits";
 import { verificationMail } from "./mail-text";
@@ -36,6 +36,6 @@ export async function proveEmail(token: string): Promise<string> {
     return user.email as string;
   });
   // Also reached from the link's page, outside endpoint(): nothing cached may still say "unproven".
-  forgetReads();
+  await forgetEverywhere();
   return email;
 }

@@ -10,7 +10,7 @@ import { consumeLimit } from "./rate-limit";
 import type { KeyedLimit } from "./rate-limit-rules";
 import { assertNoNul } from "./request-guards";
 import type { Actor } from "@/lib/auth/queries";
-import { forgetReads } from "@/lib/cache/read-cache";
+import { forgetEverywhere } from "@/lib/cache/broadcast";
 import { formInput, formValues, type FormShape } from "@/lib/forms/form-data";
 import { clientAddress } from "@/lib/net/client-address";
 
@@ -91,7 +91,7 @@ export function action<A extends Access, I, T, P = undefined, R = undefined>(
       const kept = Object.fromEntries(Object.entries(values).filter(([k]) => !secret.has(k)));
       return { ok: false, message: refused.message, fields: refused.fields ?? {}, values: kept };
     } finally {
-      forgetReads(spec.keepsPeople ? "data" : "all");
+      await forgetEverywhere(spec.keepsPeople ? "data" : "all");
     }
   };
 }

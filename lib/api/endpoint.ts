@@ -11,7 +11,7 @@ import type { KeyedLimit } from "./rate-limit-rules";
 import { requireRole, requireUser } from "@/lib/auth/session";
 import type { Actor } from "@/lib/auth/queries";
 import type { Role } from "@/lib/auth/roles";
-import { forgetReads } from "@/lib/cache/read-cache";
+import { forgetEverywhere } from "@/lib/cache/broadcast";
 import { clientAddress } from "@/lib/net/client-address";
 
 // One declaration per route handler: who may call it, the schemas of its path,
@@ -128,7 +128,7 @@ function wrap<A extends Access, P, Q, B, R>(
     } catch (error) {
       return toErrorResponse(error);
     } finally {
-      if (writes) forgetReads(spec.keepsPeople ? "data" : "all");
+      if (writes) await forgetEverywhere(spec.keepsPeople ? "data" : "all");
     }
   };
 }

@@ -9,12 +9,26 @@ import type { LimitRule } from "./rate-limit-rules";
 // shares the counts and parallel requests cannot slip past the limit.
 export const LIMITS_TABLE = "rate_limits";
 
+// The library names its statements (server-side prepared statements, kept per
+// connection). Behind PgBouncer in transaction mode (1.18 does not track them)
+// the next use may land on a server connection that never saw the PREPARE, so
+// every query goes out unnamed (prepared and run in one go, as PgBouncer's
+// docs allow) — the library's own internal method, checked by
+// tests/unit/api/rate-limit-unnamed.test.ts.
+type Query = { name?: string; text: string; values?: unknown[] };
+class UnnamedRateLimiterPostgres extends RateLimiterPostgres {
+  _query(q: Query): Promise<unknown> {
+    const parent = RateLimiterPostgres.prototype as unknown as { _query: (this: unknown, q: Query) => Promise<unknown> };
+    return parent._query.call(this, { text: q.text, values: q.values });
+  }
+}
+
 const limiters = new Map<string, RateLimiterPostgres>();
 
 export function limiterFor(rule: LimitRule): RateLimiterPostgres {
   let limiter = limiters.get(rule.name);
   if (!limiter) {
-    limiter = new RateLimiterPostgres({
+    limiter = new UnnamedRateLimiterPostgres({
       storeClient: db,
       storeType: "knex",
       tableName: LIMITS_TABLE,

@@ -1,5 +1,6 @@
 import "server-only";
 import { db } from "@/lib/db";
+import { publicRead } from "@/lib/db-read";
 import { notFound } from "@/lib/api/errors";
 import { UUID } from "@/lib/api/path";
 import { CURRENT_FILL_LATERAL } from "./fill";
@@ -18,16 +19,20 @@ export interface PublicDriveSummary {
 // Dates leave as plain YYYY-MM-DD strings (knexfile.ts's date parser), never shifted by a time zone.
 const publicDriveColumns = ["slug", "name", "starts_on as startsOn", "ends_on as endsOn"] as const;
 
+// The reads a stranger's pages make go through publicRead (lib/db-read.ts): to the read
+// replica when it has every write this server knows of, else to the primary.
 export async function listPublicDrives(): Promise<PublicDriveSummary[]> {
-  return db("drives")
-    .select(...publicDriveColumns)
-    .where({ is_public: true })
-    .orderBy([{ column: "starts_on", order: "desc" }, { column: "name" }]);
+  return publicRead((db) =>
+    db("drives")
+      .select(...publicDriveColumns)
+      .where({ is_public: true })
+      .orderBy([{ column: "starts_on", order: "desc" }, { column: "name" }]),
+  );
 }
 
 /** The landing page's list: every public drive with its group's name and the group's own calendar day now. */
 export async function listPublicDrivesWithDay(): Promise<(PublicDriveSummary & { groupName: string; today: string })[]> {
-  return db("drives as d")
+  return publicRead((db) => db("drives as d")
     .join("groups as g", "g.id", "d.group_id")
     .select(
       "d.slug",
@@ -38,12 +43,12 @@ export async function listPublicDrivesWithDay(): Promise<(PublicDriveSummary & {
       db.raw(`(now() at time zone g.time_zone)::date as "today"`),
     )
     .where({ "d.is_public": true })
-    .orderBy([{ column: "d.name" }]);
+    .orderBy([{ column: "d.name" }]));
 }
 
 /** The time zone of the group running a public drive (for showing times as the group reads them). */
 export async function publicDriveTimeZone(slug: string): Promise<string> {
-  const row = await db("drives as d").join("groups as g", "g.id", "d.group_id").select("g.time_zone as timeZone").where({ "d.slug": slug, "d.is_public": true }).first();
+  const row = await publicRead((db) => db("drives as d").join("groups as g", "g.id", "d.group_id").select("g.time_zone as timeZone").where({ "d.slug": slug, "d.is_public": true }).first());
   return (row?.timeZone as string | undefined) ?? "UTC";
 }
 
@@ -59,7 +64,7 @@ export interface PublicDriveRow extends PublicDriveSummary {
 }
 
 export async function findPublicDrive(slug: string): Promise<PublicDriveRow | undefined> {
-  const row = await db("drives as d")
+  const row = await publicRead((db) => db("drives as d")
     .join("groups as g", "g.id", "d.group_id")
     .select(
       "d.id",
@@ -77,15 +82,16 @@ export async function findPublicDrive(slug: string): Promise<PublicDriveRow | un
       "d.ends_on as endsOn",
     )
     .where({ "d.slug": slug, "d.is_public": true })
-    .first();
+    .first());
   if (!row) return undefined;
   const { timeZone, locale, units, ...rest } = row;
   return { ...rest, look: { timeZone, locale, units } };
 }
 
 /** Cans each heater unit of the drive needs, oldest unit first. */
-export async function unitCansOf(driveId: string, groupId: string): Promise<number[]> {
-  const rows = await db("heater_units").select("cans").where({ drive_id: driveId, group_id: groupId }).orderBy([{ column: "created_at" }, { column: "name" }]);
+export async function unitCansOf(driveId: string, groupId: string, from: "public" | "primary" = "primary"): Promise<number[]> {
+  const read = from === "public" ? publicRead : <T>(run: (q: typeof db) => PromiseLike<T>) => Promise.resolve(run(db));
+  const rows = await read((db) => db("heater_units").select("cans").where({ drive_id: driveId, group_id: groupId }).orderBy([{ column: "created_at" }, { column: "name" }]));
   return rows.map((r) => r.cans);
 }
 
@@ -95,7 +101,7 @@ export async function unitCansOf(driveId: string, groupId: string): Promise<numb
  * ledger's running tallies. The busiest public read, so kept to one query.
  */
 export async function listPublicDropPointsWithTallies(slug: string): Promise<PublicDropPointWithTallies[]> {
-  const { rows } = await db.raw(
+  const { rows } = await publicRead((db) => db.raw(
     `select p.id, p.name, p.address, p.lat, p.lng, p.hours, p.capacity_bags as "capacityBags",
             f.level as "fillLevel", f.created_at as "fillReportedAt", cf.fill_level, cf.fill_at,
             coalesce((select array_agg(fi.url order by fi.created_at) from files fi
@@ -111,7 +117,7 @@ export async function listPublicDropPointsWithTallies(slug: string): Promise<Pub
       where d.slug = ? and d.is_public
       order by p.name`,
     [slug],
-  );
+  ));
   return rows.map((r: Record<string, unknown>) => ({
     id: r.id as string,
     name: r.name as string,
@@ -127,6 +133,8 @@ export async function listPublicDropPointsWithTallies(slug: string): Promise<Pub
     tallies: { hauls: r.hauls as number, bags: r.bags as number, goodCans: r.goodCans as number, rejectedCans: r.rejectedCans as number },
   }));
 }
+
+// The two lookups below come before a stranger's write (a pledge, a fill report), so they stay on the primary.
 
 /** Undefined for an id that is not a UUID: PostgreSQL would refuse to compare it. */
 export async function findPublicDropPoint(driveId: string, id: string) {

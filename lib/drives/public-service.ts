@@ -14,7 +14,7 @@ const today = (timeZone: string) => localDay(new Date(), timeZone);
 export async function publicDrive(slug: string): Promise<PublicDriveView> {
   const drive = await findPublicDrive(slug);
   if (!drive) throw notFound("That drive");
-  const p = await progressFor(drive, await unitCansOf(drive.id, drive.groupId), today(drive.look.timeZone));
+  const p = await progressFor(drive, await unitCansOf(drive.id, drive.groupId, "public"), today(drive.look.timeZone));
   return {
     drive: {
       slug: drive.slug,

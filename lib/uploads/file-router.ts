@@ -4,7 +4,7 @@ import { UploadThingError } from "uploadthing/server";
 import { z } from "zod";
 import { getActor } from "@/lib/auth/session";
 import { db } from "@/lib/db";
-import { forgetReads } from "@/lib/cache/read-cache";
+import { forgetEverywhere } from "@/lib/cache/broadcast";
 import { verifyUploadedPhoto } from "./verify-upload";
 
 const f = createUploadthing();
@@ -54,7 +54,7 @@ export const fileRouter = {
         })
         .onConflict("key")
         .ignore();
-      forgetReads();
+      await forgetEverywhere();
       return { url: file.ufsUrl };
     }),
   // A photo with a "this bin is full" report: anyone may add one, but only to a
@@ -92,7 +92,7 @@ export const fileRouter = {
         .ignore()
         .returning("id");
       if (row) await db("fill_reports").where({ id: metadata.fillReportId }).whereNull("photo_file_id").update({ photo_file_id: row.id });
-      forgetReads();
+      await forgetEverywhere();
       return { url: file.ufsUrl };
     }),
 } satisfies FileRouter;

@@ -29,7 +29,7 @@ export function ensurePostgresInstalled(log: (line: string) => void = console.lo
   return bin;
 }
 
-function asPostgres(bin: string, tool: string, args: string[]): void {
+export function asPostgres(bin: string, tool: string, args: string[]): void {
   const isRoot = process.getuid?.() === 0;
   const cmd = isRoot ? "runuser" : path.join(bin, tool);
   const fullArgs = isRoot ? ["-u", "postgres", "--", path.join(bin, tool), ...args] : args;
@@ -39,7 +39,7 @@ function asPostgres(bin: string, tool: string, args: string[]): void {
   }
 }
 
-function ownByPostgres(dir: string): void {
+export function ownByPostgres(dir: string): void {
   if (process.getuid?.() !== 0) return;
   const uid = Number(execFileSync("id", ["-u", "postgres"], { encoding: "utf8" }).trim());
   const gid = Number(execFileSync("id", ["-g", "postgres"], { encoding: "utf8" }).trim());

@@ -1,0 +1,113 @@
+import "server-only";
+import { randomUUID } from "node:crypto";
+import pg from "pg";
+import { db } from "@/lib/db";
+import { forgetReads } from "./read-cache";
+import { noteWriteLsn } from "./write-fence";
+
+// Every server process keeps its own short read cache (read-cache.ts). A write
+// through one server must clear the others' too: after the write's transaction
+// has committed, the writing server sends NOTIFY on CHANNEL with what to clear
+// and the primary's WAL position; every server LISTENs on one direct
+// connection of its own (LISTEN holds session state, so never through a
+// transaction-mode pooler: DATABASE_LISTEN_URL, else DATABASE_URL) and clears
+// its cache when the message comes. The TTL stays as a safety net for a
+// message lost while a listener was reconnecting (it clears everything when it
+// comes back, too).
+export const CHANNEL = "cantrove_reads";
+
+type Scope = "all" | "data";
+const shared = globalThis as typeof globalThis & {
+  __cantroveBroadcast?: { origin: string; client: pg.Client | null; started: boolean; connected: boolean; retryMs: number };
+};
+const state = (shared.__cantroveBroadcast ??= { origin: randomUUID(), client: null, started: false, connected: false, retryMs: 250 });
+
+// A sent message's own echo: PostgreSQL hands a NOTIFY to every listener at
+// once, so once this server's listener has it back the others have been sent
+// it too; the write's answer waits for that (at most ECHO_WAIT_MS), so the
+// writer's next request to another server finds that server's cache cleared.
+const ECHO_WAIT_MS = 200;
+const echoes = new Map<string, () => void>();
+
+/** Clears this process's read cache at once, then tells every other server to clear theirs. Await it before answering the write. */
+export async function forgetEverywhere(scope: Scope = "all"): Promise<void> {
+  forgetReads(scope);
+  const nonce = randomUUID();
+  let timer: NodeJS.Timeout | undefined;
+  const echoed = state.connected
+    ? new Promise<void>((resolve) => {
+        echoes.set(nonce, resolve);
+        timer = setTimeout(resolve, ECHO_WAIT_MS);
+      })
+    : Promise.resolve();
+  try {
+    // pg_notify in its own statement: sent when that statement commits, after the write it follows.
+    const { rows } = await db.raw(
+      `select pg_current_wal_lsn()::text as lsn, pg_notify(?, ? || '|' || pg_current_wal_lsn()::text)`,
+      [CHANNEL, `${state.origin}:${nonce}|${scope}`],
+    );
+    noteWriteLsn(rows[0]?.lsn);
+    await echoed;
+  } catch (error) {
+    // The write itself is done; other servers catch up within READ_CACHE_MS.
+    console.warn("[cantrove] could not tell other servers to clear their read cache:", (error as Error).message);
+  } finally {
+    clearTimeout(timer);
+    echoes.delete(nonce);
+  }
+}
+
+export function parseMessage(payload: string | undefined): { origin: string; scope: Scope; lsn: string } | null {
+  const [origin, scope, lsn] = (payload ?? "").split("|");
+  if (!origin || (scope !== "all" && scope !== "data")) return null;
+  return { origin, scope, lsn };
+}
+
+function connect(): void {
+  const url = process.env.DATABASE_LISTEN_URL || process.env.DATABASE_URL;
+  if (!url) return;
+  const client = new pg.Client({ connectionString: url, application_name: "cantrove-listen", keepAlive: true });
+  state.client = client;
+  let retried = false;
+  const retry = (why: string) => {
+    if (retried) return;
+    retried = true;
+    state.connected = false;
+    state.client = null;
+    client.end().catch(() => undefined);
+    console.warn(`[cantrove] read-cache listener lost (${why}); again in ${state.retryMs} ms`);
+    setTimeout(connect, state.retryMs).unref();
+    state.retryMs = Math.min(state.retryMs * 2, 5_000);
+  };
+  client.on("error", (e) => retry(e.message));
+  client.on("end", () => retry("connection ended"));
+  client.on("notification", (message) => {
+    const m = parseMessage(message.payload);
+    if (!m) return;
+    noteWriteLsn(m.lsn);
+    const [origin, nonce] = m.origin.split(":");
+    if (origin !== state.origin) forgetReads(m.scope);
+    else echoes.get(nonce)?.();
+  });
+  client
+    .connect()
+    .then(() => client.query(`LISTEN ${CHANNEL}`))
+    .then(() => {
+      state.connected = true;
+      state.retryMs = 250;
+      // Whatever was written while nobody listened here is not in the cache any more.
+      forgetReads("all");
+    })
+    .catch((e: Error) => retry(e.message));
+}
+
+/** Starts this process's listener once (instrumentation.ts, and the first public read). */
+export function startReadCacheListener(): void {
+  if (state.started) return;
+  state.started = true;
+  connect();
+}
+
+export function readCacheListenerConnected(): boolean {
+  return state.connected;
+}
