@@ -83,9 +83,9 @@ export async function findPublicDrive(slug: string): Promise<PublicDriveRow | un
   return { ...rest, look: { timeZone, locale, units } };
 }
 
-/** Cans each heater unit of the drive needs, oldest unit first. */
+/** Cans each heater unit of the drive needs, oldest unit first; an archived unit counts for nothing. */
 export async function unitCansOf(driveId: string, groupId: string): Promise<number[]> {
-  const rows = await db("heater_units").select("cans").where({ drive_id: driveId, group_id: groupId }).orderBy([{ column: "created_at" }, { column: "name" }]);
+  const rows = await db("heater_units").select("cans").where({ drive_id: driveId, group_id: groupId }).whereNull("archived_at").orderBy([{ column: "created_at" }, { column: "name" }]);
   return rows.map((r) => r.cans);
 }
 
