@@ -50,6 +50,8 @@ describe("an organiser archives a test unit", () => {
 
     expect(await driveTarget()).toEqual(before);
     // Listed under the archived units, not with the drive's.
-    await expect(page.locator("#main").getByTestId("archived-units").getByRole("link", { name: "Throwaway test unit" }).count()).resolves.toBe(1);
+    const shelf = page.locator("#main").getByTestId("archived-units");
+    await shelf.getByText(/Archived units/).click();
+    await expect(shelf.getByRole("link", { name: "Throwaway test unit" }).count()).resolves.toBe(1);
   });
 });
