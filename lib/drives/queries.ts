@@ -90,6 +90,9 @@ export async function listPledges(groupId: string, driveId: string): Promise<Dri
       "pl.bags",
       "pl.bring_on as bringOn",
       "p.name as dropPointName",
+      "pl.drop_point_id as dropPointId",
+      "pl.status",
+      "pl.haul_id as haulId",
       "pl.created_at as createdAt",
     )
     .where({ "pl.group_id": groupId, "pl.drive_id": driveId })
