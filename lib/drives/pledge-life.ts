@@ -1,4 +1,5 @@
 import "server-only";
+import type { Resolver } from "@/lib/api/endpoint";
 import { createHash, randomBytes } from "node:crypto";
 import { conflict, notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
@@ -74,3 +75,10 @@ export async function markPledge(actor: Actor, id: string, status: Exclude<Pledg
     return row as { id: string; status: PledgeStatus; haulId: string | null };
   });
 }
+
+/** The route's resource: the acting group's pledge, else 404 before anything about the body is said. */
+export const ownPledge: Resolver<{ id: string }, { id: string }> = async (actor, { id }) => {
+  const row = await db("pledges").where({ id, group_id: actor.group.id }).first("id");
+  if (!row) throw notFound("That pledge");
+  return row;
+};
