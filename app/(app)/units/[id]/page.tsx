@@ -73,6 +73,7 @@ export default async function UnitPage({ params }: Props) {
         </p>
       ) : null}
 
+      {unit.archivedAt ? null : (
       <Card title="State">
         <StateMover
           id={unit.id}
@@ -84,6 +85,7 @@ export default async function UnitPage({ params }: Props) {
           Units move forward: planned → gathering cans → being built → on the wall. Only an organiser can step one back.
         </p>
       </Card>
+      )}
 
       {drive ? (
         <Card title="The drive">
@@ -92,7 +94,7 @@ export default async function UnitPage({ params }: Props) {
         </Card>
       ) : null}
 
-      {summary && stock && unit.driveId ? (
+      {summary && stock && unit.driveId && !unit.archivedAt ? (
         <Card title="Cans for this unit">
           <Prefetched data={[[ledgerKeys.stock(unit.driveId), stock], [heaterKeys.list(), summaries]]}>
           <ClaimsPanel
