@@ -207,6 +207,10 @@ begin
   if not found then
     raise exception 'ledger_unit: unit moved' using errcode = 'CT409', detail = '{"kind":"unitMoved"}';
   end if;
+  -- An archived unit (migration 20261207010000) takes no new claims until it is restored.
+  if v_action = 'claim' and exists (select 1 from heater_units where id = v_unit and archived_at is not null) then
+    raise exception 'ledger_unit: archived' using errcode = 'CT409', detail = '{"kind":"unitArchived"}';
+  end if;
   if v_action = 'claim' and v_state = 'installed' then
     raise exception 'ledger_unit: installed' using errcode = 'CT409', detail = '{"kind":"unitInstalled"}';
   end if;

@@ -74,3 +74,17 @@ export function useHeaterMovement(run: (quantity: number, key: string) => Promis
     onError: (error, quantity) => after.onError?.(error, quantity),
   });
 }
+
+/** Archives (true) or restores (false) a unit; archiving gives its unbuilt claims back (`released`). */
+export function useArchiveHeater(id: string, after: After<SavedHeater & { released: number }, boolean> = {}) {
+  const refresh = useRefreshUnitsAndStock();
+  return useMutation({
+    mutationFn: (archive: boolean) =>
+      fetchJson<SavedHeater & { released: number }>(`/api/heaters/${id}/${archive ? "archive" : "restore"}`, { method: "POST", json: {} }),
+    onSuccess: async (data, archive) => {
+      await refresh();
+      await after.onSuccess?.(data, archive);
+    },
+    onError: (error, archive) => after.onError?.(error, archive),
+  });
+}

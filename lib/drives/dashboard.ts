@@ -28,7 +28,7 @@ export async function organiserDashboard(groupId: string) {
         listFullBins(groupId, d.id),
         listPledges(groupId, d.id),
       ]);
-      const upcoming = pledges.filter((p) => !p.bringOn || p.bringOn >= today());
+      const upcoming = pledges.filter((p) => p.status === "pledged" && (!p.bringOn || p.bringOn >= today()));
       return { drive: d, progress, fullBins: fills, pledges: upcoming.slice(0, 5) };
     }),
   );

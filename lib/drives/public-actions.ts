@@ -7,6 +7,7 @@ import { LEVEL_LABEL, shouldAlert } from "./fill";
 import { findPublicDrive, findPublicDropPoint } from "./public-queries";
 import type { FillReportInput, PledgeInput } from "./schemas";
 import { groupLook } from "@/lib/format/group-look-queries";
+import { newCancelToken } from "./pledge-life";
 import { binFullAlert, confirmationAddressKey, pledgeConfirmation } from "./public-mail";
 import { lastHauls } from "./tallies";
 
@@ -31,8 +32,10 @@ export async function createPledge(slug: string, input: PledgeInput) {
   if (!drive) throw notFound("That drive");
   const point = await findPublicDropPoint(drive.id, input.dropPointId);
   if (!point) throw new AppError("invalid_input", "Some fields need another look.", { fields: { dropPointId: "Choose one of this drive's open drop points." } });
+  const cancel = newCancelToken();
   const [row] = await db("pledges")
     .insert({
+      cancel_token_hash: cancel.hash,
       group_id: drive.groupId,
       drive_id: drive.id,
       drop_point_id: point.id,
@@ -53,6 +56,7 @@ export async function createPledge(slug: string, input: PledgeInput) {
       bringOn: input.bringOn,
       donorName: input.name,
       driveUrl: `${env().APP_URL}/drives/${drive.slug}`,
+      cancelUrl: `${env().APP_URL}/pledges/cancel/${cancel.token}`,
       look: await groupLook(drive.groupId),
     });
     await sendMail({ groupId: drive.groupId, to: input.email, ...mail, kind: "pledge-confirmation" });

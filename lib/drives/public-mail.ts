@@ -15,6 +15,8 @@ export interface PledgeMailFacts {
   bringOn: string;
   donorName: string;
   driveUrl: string;
+  /** The pledge's own cancel page (an unguessable token; the page asks before cancelling). */
+  cancelUrl?: string;
   /** The drive's group's look, for the day and the count. */
   look?: Look;
 }
@@ -33,6 +35,7 @@ export function pledgeConfirmation(f: PledgeMailFacts): { subject: string; text:
     "Please keep back slim, tall and steel cans.",
     "",
     `The drive's page: ${f.driveUrl}`,
+    f.cancelUrl ? `Plans changed? Cancel this pledge here (the page asks you to confirm): ${f.cancelUrl}` : null,
     "",
     `— ${f.groupName}`,
     "",

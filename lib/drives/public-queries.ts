@@ -88,10 +88,12 @@ export async function findPublicDrive(slug: string): Promise<PublicDriveRow | un
   return { ...rest, look: { timeZone, locale, units } };
 }
 
-/** Cans each heater unit of the drive needs, oldest unit first. */
+/** Cans each heater unit of the drive needs, oldest unit first; an archived unit counts for nothing. */
 export async function unitCansOf(driveId: string, groupId: string, from: "public" | "primary" = "primary"): Promise<number[]> {
   const read = from === "public" ? publicRead : <T>(run: (q: typeof db) => PromiseLike<T>) => Promise.resolve(run(db));
-  const rows = await read((db) => db("heater_units").select("cans").where({ drive_id: driveId, group_id: groupId }).orderBy([{ column: "created_at" }, { column: "name" }]));
+  const rows = await read((db) =>
+    db("heater_units").select("cans").where({ drive_id: driveId, group_id: groupId }).whereNull("archived_at").orderBy([{ column: "created_at" }, { column: "name" }]),
+  );
   return rows.map((r) => r.cans);
 }
 

@@ -15,7 +15,7 @@ export async function listDrives(groupId: string) {
       "d.ends_on as endsOn",
       "d.is_public as isPublic",
       db.raw(`(select count(*)::int from drop_points p where p.drive_id = d.id and p.group_id = d.group_id) as "dropPoints"`),
-      db.raw(`(select count(*)::int from heater_units h where h.drive_id = d.id and h.group_id = d.group_id) as "heaterUnits"`),
+      db.raw(`(select count(*)::int from heater_units h where h.drive_id = d.id and h.group_id = d.group_id and h.archived_at is null) as "heaterUnits"`),
     )
     .where("d.group_id", groupId)
     .orderBy([{ column: "d.starts_on", order: "desc" }, { column: "d.name" }]);
@@ -90,6 +90,9 @@ export async function listPledges(groupId: string, driveId: string): Promise<Dri
       "pl.bags",
       "pl.bring_on as bringOn",
       "p.name as dropPointName",
+      "pl.drop_point_id as dropPointId",
+      "pl.status",
+      "pl.haul_id as haulId",
       "pl.created_at as createdAt",
     )
     .where({ "pl.group_id": groupId, "pl.drive_id": driveId })

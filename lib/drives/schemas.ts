@@ -68,3 +68,24 @@ export type FillClearInput = z.infer<typeof fillClearInput>;
 /** PUT /api/me/drive: the drive the person works on from now on, on every page where cans are entered. */
 export const currentDriveInput = z.object({ driveId: z.uuid({ error: "Choose one of your group's drives." }) });
 export type CurrentDriveInput = z.infer<typeof currentDriveInput>;
+
+/** A pledge's states (issue 16): open, cancelled by the donor, or marked by the organiser. */
+export const PLEDGE_STATUSES = ["pledged", "cancelled", "received", "notBrought"] as const;
+export type PledgeStatus = (typeof PLEDGE_STATUSES)[number];
+export const PLEDGE_STATUS_LABEL: Record<PledgeStatus, string> = {
+  pledged: "Pledged",
+  cancelled: "Cancelled by the donor",
+  received: "Received",
+  notBrought: "Not brought",
+};
+
+/** The donor's cancel link carries a 43-character base64url token. */
+export const pledgeCancelInput = z.object({ token: z.string().regex(/^[A-Za-z0-9_-]{43}$/, "That cancel link is not complete; open it from the e-mail again.") });
+export type PledgeCancelInput = z.infer<typeof pledgeCancelInput>;
+
+/** POST /api/pledges/{id}/status: the organiser's mark; `haulId` only with `received`. */
+export const pledgeMarkInput = z.object({
+  status: z.enum(["pledged", "received", "notBrought"], { error: "Status is pledged, received or notBrought" }),
+  haulId: z.string().uuid("Choose one of the drive's hauls.").optional(),
+});
+export type PledgeMarkInput = z.infer<typeof pledgeMarkInput>;

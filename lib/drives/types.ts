@@ -68,6 +68,10 @@ export interface DrivePledge {
   bags: number;
   bringOn: string;
   dropPointName: string;
+  dropPointId: string;
+  /** Issue 16: pledged, cancelled (by the donor), received or notBrought. */
+  status: "pledged" | "cancelled" | "received" | "notBrought";
+  haulId: string | null;
   createdAt: Date;
 }
 

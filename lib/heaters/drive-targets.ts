@@ -33,6 +33,7 @@ export async function listDriveTargets(groupId: string, driveId?: string): Promi
     .select("drive_id as driveId", "cans")
     .where({ group_id: groupId })
     .whereNotNull("drive_id")
+    .whereNull("archived_at")
     .orderBy([{ column: "created_at" }, { column: "name" }]);
   return Promise.all(
     drives.map(async (d: { id: string; name: string; slug: string; sparePercent: number }) => {

@@ -41,6 +41,8 @@ export interface HeaterUnitRow extends SavedHeater {
   notes: string;
   createdAt: string;
   stateChangedAt: string;
+  /** Set while the unit is archived (issue 16): hidden from lists, counted toward no target. */
+  archivedAt: string | null;
 }
 
 function unitColumns(q: Knex.QueryBuilder) {
@@ -76,14 +78,17 @@ function unitColumns(q: Knex.QueryBuilder) {
       "h.notes",
       "h.created_at as createdAt",
       "h.state_changed_at as stateChangedAt",
+      "h.archived_at as archivedAt",
     );
 }
 
-export async function listHeaterUnits(groupId: string, driveId?: string): Promise<HeaterUnitRow[]> {
+export async function listHeaterUnits(groupId: string, driveId?: string, archived = false): Promise<HeaterUnitRow[]> {
   return unitColumns(db("heater_units as h"))
     .where("h.group_id", groupId)
     .modify((q) => {
       if (driveId) q.andWhere("h.drive_id", driveId);
+      if (archived) q.whereNotNull("h.archived_at");
+      else q.whereNull("h.archived_at");
     })
     .orderBy([{ column: "h.created_at" }, { column: "h.name" }]);
 }
@@ -176,15 +181,18 @@ export async function groupLatitude(groupId: string): Promise<number | null> {
   return row?.workshop_lat ?? null;
 }
 
+const ARCHIVED_FILTER = { active: "h.archived_at is null", archived: "h.archived_at is not null", all: "true" } as const;
+
 /** The contract's `GET /api/heaters`, plus each unit's need (cans + its spare share) and what it still needs. */
-export async function listHeatersWithClaims(groupId: string): Promise<HeaterSummary[]> {
+export async function listHeatersWithClaims(groupId: string, which: "active" | "archived" | "all" = "all"): Promise<HeaterSummary[]> {
   const [units, claims] = await Promise.all([
     db("heater_units as h")
       .leftJoin("drives as d", function () {
         this.on("d.id", "=", "h.drive_id").andOn("d.group_id", "=", "h.group_id");
       })
-      .select("h.id", "h.name", "h.drive_id", "h.builder_id", "h.cans", "h.state", db.raw("coalesce(d.spare_percent, 0) as spare_percent"))
+      .select("h.id", "h.name", "h.drive_id", "h.builder_id", "h.cans", "h.state", "h.archived_at", db.raw("coalesce(d.spare_percent, 0) as spare_percent"))
       .where("h.group_id", groupId)
+      .whereRaw(ARCHIVED_FILTER[which])
       .orderBy("h.created_at"),
     heaterClaims(groupId),
   ]);
@@ -204,6 +212,7 @@ export async function listHeatersWithClaims(groupId: string): Promise<HeaterSumm
       spare: n.spare,
       need: n.need,
       remaining: n.remaining,
+      archived: u.archived_at !== null,
     };
   });
 }

@@ -17,6 +17,8 @@ export interface HeaterSummary {
   spare: number;
   need: number;
   remaining: number;
+  /** An archived unit is left out of GET /api/heaters unless `?archived=1` asks for them. */
+  archived: boolean;
 }
 
 /** The part of a unit every write answers with (POST /api/heaters, …/state adds `released`). */

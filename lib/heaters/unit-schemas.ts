@@ -53,3 +53,9 @@ export const claimMoveInputSchema = z.object(
   { error: "Send the unit that takes the cans and how many" },
 );
 export type ClaimMoveInput = z.infer<typeof claimMoveInputSchema>;
+
+/** Archiving or restoring a unit takes no fields; anything sent is refused so a typo is not taken as a choice. */
+export const heaterArchiveInputSchema = z.object({}).strict();
+
+/** GET /api/heaters: `archived=1` lists the archived units only; without it, the active ones. */
+export const heaterListQuerySchema = z.object({ archived: z.enum(["0", "1"], { error: "archived is 0 or 1" }).optional() });

@@ -127,7 +127,7 @@ export function ledgerPayload(m: MovementSpec, lines: LineSpec[], extra: Record<
 }
 
 /** `fn` is one of db/functions' ledger functions; the payload is ledgerPayload's. */
-export function ledgerCall(fn: "ledger_post" | "ledger_haul" | "ledger_sort" | "ledger_reverse" | "ledger_unit" | "ledger_units" | "heater_unit_move", payload: object): LedgerCall {
+export function ledgerCall(fn: "ledger_post" | "ledger_haul" | "ledger_sort" | "ledger_reverse" | "ledger_unit" | "ledger_units" | "heater_unit_move" | "heater_unit_archive", payload: object): LedgerCall {
   return { sql: `${fn}(?::jsonb)`, bindings: [JSON.stringify(payload)] };
 }
 
@@ -154,6 +154,7 @@ export function ledgerRefusal(error: unknown, own?: OwnRefusals): AppError | nul
   if (e?.code !== "CT409") return null;
   const d = JSON.parse(e.detail ?? "{}") as { kind: string; stage?: Stage; needed?: number; available?: number; remaining?: number; cans?: number; spare?: number };
   if (own && Object.hasOwn(own, d.kind)) return own[d.kind](d as Record<string, unknown>);
+  if (d.kind === "unitArchived") return conflict("That heater unit is archived: restore it before claiming cans for it.");
   if (d.kind === "need") {
     // From the unit-need trigger (migration 20261203030000): the claim would pass cans + spare.
     const n = { remaining: Number(d.remaining), cans: Number(d.cans), spare: Number(d.spare) };

@@ -70,6 +70,6 @@ export async function listMyEntries(groupId: string, userId: string, limit = 15)
 export async function driveChartBasics(groupId: string, driveId: string) {
   const drive = await db("drives").select("id", "name", "starts_on as startsOn", "ends_on as endsOn", "spare_percent").where({ id: driveId, group_id: groupId }).first();
   if (!drive) throw notFound("That drive");
-  const units = await db("heater_units").select("cans").where({ drive_id: driveId, group_id: groupId }).orderBy("created_at");
+  const units = await db("heater_units").select("cans").where({ drive_id: driveId, group_id: groupId }).whereNull("archived_at").orderBy("created_at");
   return { name: drive.name, startsOn: drive.startsOn, endsOn: drive.endsOn, sparePercent: drive.spare_percent, unitCans: units.map((u) => u.cans) };
 }

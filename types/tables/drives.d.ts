@@ -46,6 +46,11 @@ declare module "knex/types/tables" {
     bags: number;
     bring_on: string;
     created_at: Date;
+    /** SHA-256 of the donor's cancel token (migration 20261207020000). */
+    cancel_token_hash: string | null;
+    status: "pledged" | "cancelled" | "received" | "notBrought";
+    status_at: Date | null;
+    haul_id: string | null;
   }
   interface PledgeConfirmationsRow {
     group_id: string;
@@ -88,6 +93,8 @@ declare module "knex/types/tables" {
     frame_allowance_height: number | null;
     notes: string;
     state_changed_at: Date;
+    /** Set while archived (migration 20261207010000). */
+    archived_at: Date | null;
   }
   interface PickupRunsRow {
     id: string;

@@ -1,11 +1,14 @@
 import { endpoint } from "@/lib/api/endpoint";
 import { createHeaterUnit } from "@/lib/heaters/queries";
-import { heaterCreateInputSchema } from "@/lib/heaters/unit-schemas";
+import { heaterCreateInputSchema, heaterListQuerySchema } from "@/lib/heaters/unit-schemas";
 import { listHeatersWithClaims } from "@/lib/heaters/queries";
 
 export const dynamic = "force-dynamic";
 
-export const GET = endpoint({ who: "member" }, async ({ actor }) => listHeatersWithClaims(actor.group.id));
+// Archived units are left out; `?archived=1` lists only them (issue 16).
+export const GET = endpoint({ who: "member", query: heaterListQuerySchema }, async ({ actor, query }) =>
+  listHeatersWithClaims(actor.group.id, query.archived === "1" ? "archived" : "active"),
+);
 
 // Saving a plan as a unit of one of the group's drives (createHeaterUnit checks the drive is the group's).
 export const POST = endpoint({ who: ["builder", "organiser"], body: heaterCreateInputSchema, status: 201 }, async ({ actor, body }) =>

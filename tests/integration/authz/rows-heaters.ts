@@ -51,3 +51,11 @@ rows.push(
   ),
   row("POST", "heaters/[id]/state", `/api/heaters/${organisersUnit}/state`, othersUnit, { body: () => ({ state: "scrapped" }), note: refusedBuilder }),
 );
+
+// Archiving and restoring a unit (issue 16): a stray field is 422 for those allowed, nothing changes.
+rows.push(
+  ...(["archive", "restore"] as const).flatMap((what) => [
+    row("POST", `heaters/[id]/${what}`, (f) => `/api/heaters/${f.demoHeaterId}/${what}`, expects(401, 403, 422, 422, 404), { body: () => ({ sure: "yes" }) }),
+    row("POST", `heaters/[id]/${what}`, `/api/heaters/${organisersUnit}/${what}`, othersUnit, { body: () => ({ sure: "yes" }), note: refusedBuilder }),
+  ]),
+);

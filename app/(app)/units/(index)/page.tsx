@@ -16,10 +16,11 @@ export const metadata: Metadata = { title: "Heater units" };
 
 export default async function UnitsPage() {
   const actor = await requirePageRole("/units", "builder", "organiser");
-  const [units, drives, claims] = await Promise.all([
+  const [units, drives, claims, archived] = await Promise.all([
     listHeaterUnits(actor.group.id),
     listDriveTargets(actor.group.id),
     heaterClaims(actor.group.id),
+    listHeaterUnits(actor.group.id, undefined, true),
   ]);
   return (
     <main className="flex flex-col gap-6">
@@ -58,6 +59,24 @@ export default async function UnitsPage() {
             </ul>
           </Card>
         ))}
+      {archived.length > 0 ? (
+        <details className="rounded-lg border-2 border-paper-edge p-3" data-testid="archived-units">
+          <summary className="tap cursor-pointer font-semibold">Archived units ({archived.length})</summary>
+          <p className="mt-2 text-sm text-ink-soft">Hidden from the lists above and counted toward no target. Open one to restore it.</p>
+          <ul className="divide-y divide-paper-edge">
+            {archived.map((u) => (
+              <li key={u.id} className="flex flex-wrap items-center justify-between gap-2 py-3">
+                <Link href={`/units/${u.id}`} className="tap font-semibold">
+                  {u.name}
+                </Link>
+                <span className="text-ink-soft">
+                  {u.driveName ?? "No drive"} · {countOf(u.cans, "can", formatNumber)}
+                </span>
+              </li>
+            ))}
+          </ul>
+        </details>
+      ) : null}
     </main>
   );
 }

@@ -11,6 +11,7 @@ import { heaterKeys, ledgerKeys } from "@/hooks/queries/keys";
 import { DriveProgressLine } from "@/components/heaters/drive-progress-line";
 import { StateBadge } from "@/components/heaters/state-badge";
 import { StateMover } from "@/components/heaters/state-mover";
+import { ArchiveUnit } from "@/components/heaters/archive-unit";
 import { AppError } from "@/lib/api/errors";
 import { requirePageRole } from "@/lib/auth/session";
 import { computeCanGrid } from "@/lib/heaters/can-grid";
@@ -66,6 +67,13 @@ export default async function UnitPage({ params }: Props) {
         </ButtonLink>
       </div>
 
+      {unit.archivedAt ? (
+        <p role="note" className="rounded-lg border-2 border-ink/40 bg-paper-deep p-3 font-semibold">
+          Archived: this unit is hidden from the lists and counts toward no target. Restore it below to use it again.
+        </p>
+      ) : null}
+
+      {unit.archivedAt ? null : (
       <Card title="State">
         <StateMover
           id={unit.id}
@@ -77,6 +85,7 @@ export default async function UnitPage({ params }: Props) {
           Units move forward: planned → gathering cans → being built → on the wall. Only an organiser can step one back.
         </p>
       </Card>
+      )}
 
       {drive ? (
         <Card title="The drive">
@@ -85,7 +94,7 @@ export default async function UnitPage({ params }: Props) {
         </Card>
       ) : null}
 
-      {summary && stock && unit.driveId ? (
+      {summary && stock && unit.driveId && !unit.archivedAt ? (
         <Card title="Cans for this unit">
           <Prefetched data={[[ledgerKeys.stock(unit.driveId), stock], [heaterKeys.list(), summaries]]}>
           <ClaimsPanel
@@ -103,6 +112,10 @@ export default async function UnitPage({ params }: Props) {
           <p className="mt-3 text-sm text-ink-faint">Cut and punched cans are sharp: handle them with gloves.</p>
         </Card>
       ) : null}
+
+      <Card title={unit.archivedAt ? "Archived" : "Archive"}>
+        <ArchiveUnit id={unit.id} archived={unit.archivedAt !== null} claimed={summary?.claimed ?? 0} builtIn={summary?.builtIn ?? 0} />
+      </Card>
 
       <Card title="Can grid">
         <p className="mb-3 text-ink-soft">

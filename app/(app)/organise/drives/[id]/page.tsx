@@ -7,6 +7,7 @@ import { PledgesAndReports } from "@/components/drives/organise/pledges-and-repo
 import { Card } from "@/components/ui/card";
 import { requirePageRole } from "@/lib/auth/session";
 import { db } from "@/lib/db";
+import { groupToday } from "@/lib/drives/current-drive-queries";
 import { findDrive, listDropPoints, listFillReports, listPledges } from "@/lib/drives/queries";
 import { tileConfig } from "@/lib/map/config";
 import { groupLook } from "@/lib/format/group-look-queries";
@@ -18,12 +19,13 @@ export default async function EditDrivePage({ params }: { params: Promise<{ id: 
   const actor = await requirePageRole(`/organise/drives/${id}`, "organiser");
   const drive = await findDrive(actor.group.id, id);
   if (!drive) notFound();
-  const [points, pledges, reports, group, look] = await Promise.all([
+  const [points, pledges, reports, group, look, today] = await Promise.all([
     listDropPoints(actor.group.id, drive.id),
     listPledges(actor.group.id, drive.id),
     listFillReports(actor.group.id, drive.id),
     db("groups").select("workshop_lat as lat", "workshop_lng as lng").where({ id: actor.group.id }).first(),
     groupLook(actor.group.id),
+    groupToday(actor.group.id),
   ]);
   const centre = points.length
     ? { lat: points.reduce((s, p) => s + p.lat, 0) / points.length, lng: points.reduce((s, p) => s + p.lng, 0) / points.length }
@@ -39,7 +41,7 @@ export default async function EditDrivePage({ params }: { params: Promise<{ id: 
       <Card title="Drop points">
         <DropPointsEditor driveId={drive.id} points={points} centre={centre} tileUrl={tiles.tileUrl} attribution={tiles.attribution} />
       </Card>
-      <PledgesAndReports pledges={pledges} reports={reports} points={points} slug={drive.slug} look={look} />
+      <PledgesAndReports pledges={pledges} reports={reports} points={points} slug={drive.slug} look={look} today={today} />
       <Card title="Drive details">
         <DriveForm driveId={drive.id} initial={{ ...drive }} />
       </Card>

@@ -1,0 +1,49 @@
+"use client";
+
+import { useState } from "react";
+import { useRouter } from "next/navigation";
+import { Button } from "@/components/ui/button";
+import { FormError } from "@/components/ui/field";
+import { fetchJson } from "@/lib/api/client";
+import type { PledgeStatus } from "@/lib/drives/schemas";
+
+/** The organiser's marks for one pledge; POST /api/pledges/{id}/status applies the same rules. */
+export function PledgeMarker({ id, status, label }: { id: string; status: PledgeStatus; label: string }) {
+  const router = useRouter();
+  const [error, setError] = useState<string | undefined>();
+  const [pending, setPending] = useState(false);
+  if (status === "cancelled") return null;
+  const send = async (to: "pledged" | "received" | "notBrought") => {
+    setPending(true);
+    setError(undefined);
+    try {
+      await fetchJson(`/api/pledges/${id}/status`, { method: "POST", json: { status: to } });
+      router.refresh();
+    } catch (e) {
+      setError(e instanceof Error ? e.message : "That did not work; try again.");
+    } finally {
+      setPending(false);
+    }
+  };
+  return (
+    <div className="mt-1 flex flex-col gap-1">
+      <FormError message={error} />
+      <div className="flex flex-wrap gap-2" role="group" aria-label={`Mark the pledge: ${label}`}>
+        {status === "pledged" ? (
+          <>
+            <Button type="button" variant="secondary" disabled={pending} onClick={() => send("received")}>
+              Received
+            </Button>
+            <Button type="button" variant="quiet" disabled={pending} onClick={() => send("notBrought")}>
+              Not brought
+            </Button>
+          </>
+        ) : (
+          <Button type="button" variant="quiet" disabled={pending} onClick={() => send("pledged")}>
+            Undo the mark
+          </Button>
+        )}
+      </div>
+    </div>
+  );
+}
