@@ -40,7 +40,7 @@ async function candidates(groupIds?: readonly string[]): Promise<Candidate[]> {
        join drives d on d.id = h.drive_id and d.group_id = h.group_id
        join memberships m on m.group_id = h.group_id and m.user_id = h.builder_id
        join users u on u.id = h.builder_id
-      where h.state in ('planned', 'claiming')
+      where h.state in ('planned', 'claiming') and h.archived_at is null
         and u.email_verified_at is not null
         and (:all or h.group_id = any((:groups)::uuid[]))
         and not exists (select 1 from notification_optouts o where o.user_id = u.id and o.kind = 'unitReady')
