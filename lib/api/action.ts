@@ -83,15 +83,20 @@ export function action<A extends Access, I, T, P = undefined, R = undefined>(
         const key = limit.by === "client" ? address : limit.by({ params, body: input });
         if (key) await consumeLimit(limit.rule, key.toLowerCase());
       }
-      const data = await work({ actor, input, params, resource, values });
+      let data: Awaited<ReturnType<typeof work>>;
+      try {
+        data = await work({ actor, input, params, resource, values });
+      } finally {
+        // After the work only (a refused input, role or limit changed nothing), and
+        // also when it threw a redirect(), which is how a done action answers.
+        await forgetEverywhere(spec.keepsPeople ? "data" : "all");
+      }
       return { ok: true, message: null, fields: {}, values: {}, data };
     } catch (error) {
       unstable_rethrow(error); // redirect() and notFound() are answers, not failures
       const refused = toAppError(error);
       const kept = Object.fromEntries(Object.entries(values).filter(([k]) => !secret.has(k)));
       return { ok: false, message: refused.message, fields: refused.fields ?? {}, values: kept };
-    } finally {
-      await forgetEverywhere(spec.keepsPeople ? "data" : "all");
     }
   };
 }

@@ -118,18 +118,23 @@ function wrap<A extends Access, P, Q, B, R>(
 ) {
   return async (request: NextRequest, ctx: NextContext): Promise<Response> => {
     const writes = request.method !== "GET" && request.method !== "HEAD";
+    let response: Response;
     try {
       assertSameOrigin(request);
       const actor = (await actorFor(spec.who)) as ActorOf<A>;
       const params = await pathOf(ctx, spec.params);
       const resource = spec.resource ? await spec.resource(actor as Actor, params) : (undefined as R);
       const query = queryOf(request, spec.query);
-      return await run({ request, actor, params, query, resource });
+      response = await run({ request, actor, params, query, resource });
     } catch (error) {
-      return toErrorResponse(error);
-    } finally {
-      if (writes) await forgetEverywhere(spec.keepsPeople ? "data" : "all");
+      response = toErrorResponse(error);
     }
+    // A refused write (4xx: 401, 403, 404, 409, 422, 429) changed nothing, so it
+    // does not tell every server to clear its cache: a stranger's flood of bad posts
+    // must not cost a NOTIFY each and empty every cache. A 5xx may follow a commit.
+    const refused = response.status >= 400 && response.status < 500;
+    if (writes && !refused) await forgetEverywhere(spec.keepsPeople ? "data" : "all");
+    return response;
   };
 }
 

@@ -5,9 +5,9 @@ import { LRUCache } from "lru-cache";
 // opening the same map costs one query, not one each. Two spaces:
 // - "people": who is signed in as what (membership, role, names);
 // - "data": everything else (a drive's public drop points, its stock).
-// Every write this process handles clears both (endpoint() calls forgetReads()
-// after any request that is not a GET or HEAD, the upload callbacks call it
-// too); a handler that declares it never changes people (the ledger's) clears
+// Every write clears both, on every server (endpoint() and action() call
+// forgetEverywhere() in lib/cache/broadcast.ts after any request that is not a
+// GET or HEAD and was not refused with a 4xx; the upload callbacks call it too); a handler that declares it never changes people (the ledger's) clears
 // "data" only. So a person who changes something sees it on their next read.
 // Another server process, or a script writing straight to the database, shows
 // up within READ_CACHE_MS. READ_CACHE_MS=0 turns it off.
