@@ -1,6 +1,7 @@
 // The drive endpoints' answers, as both sides see them: the server's queries
 // declare they return these, and the client's hooks and components read them.
 // Safe in the client (no server imports).
+import type { PledgeStatus } from "./schemas";
 
 /** GET /api/public/drives/:slug: the public page's drive and its progress. */
 export interface PublicDriveView {
@@ -69,8 +70,8 @@ export interface DrivePledge {
   bringOn: string;
   dropPointName: string;
   dropPointId: string;
-  /** Issue 16: pledged, cancelled (by the donor), received or notBrought. */
-  status: "pledged" | "cancelled" | "received" | "notBrought";
+  /** Open, cancelled by the donor, or marked by the organiser (PLEDGE_STATUSES). */
+  status: PledgeStatus;
   haulId: string | null;
   createdAt: Date;
 }

@@ -60,7 +60,8 @@ async function summaryDrives(groupId: string, today: string): Promise<SummaryDri
         db("pledges as pl")
           .join("drop_points as p", "p.id", "pl.drop_point_id")
           .select("p.name as dropPointName", "pl.bags", "pl.bring_on as bringOn")
-          .where({ "pl.group_id": groupId, "pl.drive_id": d.id })
+          // Only pledges still open: a donor's cancel or an organiser's mark ends one.
+          .where({ "pl.group_id": groupId, "pl.drive_id": d.id, "pl.status": "pledged" })
           .andWhere("pl.bring_on", ">=", today)
           .andWhere("pl.bring_on", "<", addDays(today, 7))
           .orderBy([{ column: "pl.bring_on" }, { column: "p.name" }]),

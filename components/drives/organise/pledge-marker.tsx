@@ -13,7 +13,7 @@ export function PledgeMarker({ id, status, label }: { id: string; status: Pledge
   const [error, setError] = useState<string | undefined>();
   const [pending, setPending] = useState(false);
   if (status === "cancelled") return null;
-  const send = async (to: "pledged" | "received" | "notBrought") => {
+  const send = async (to: Exclude<PledgeStatus, "cancelled">) => {
     setPending(true);
     setError(undefined);
     try {

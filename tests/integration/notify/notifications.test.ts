@@ -167,7 +167,8 @@ describe("the weekly summary", () => {
     await haulAndSort(await g.client("volunteer"), g.driveId, g.dropPointIds[0], 40);
     await t("fill_reports").insert({ group_id: g.groupId, drop_point_id: g.dropPointIds[0], level: 100, note: "" });
     const pledge = (bringOn: string, bags: number) => ({ group_id: g.groupId, drive_id: g.driveId, drop_point_id: g.dropPointIds[1], name: "A donor", bags, bring_on: bringOn });
-    await t("pledges").insert([pledge("2027-02-18", 3), pledge("2027-02-10", 5), pledge("2027-03-01", 7)]);
+    // The 11-bag pledge is due in the week but the donor cancelled it: it is not due any more.
+    await t("pledges").insert([pledge("2027-02-18", 3), pledge("2027-02-10", 5), pledge("2027-03-01", 7), { ...pledge("2027-02-19", 11), status: "cancelled" }]);
     const doneRun = await addRun(g, g.ids.volunteer, "2027-02-12");
     await t("pickup_runs").where({ id: doneRun }).update({ state: "done", finished_at: new Date("2027-02-12T02:00:00Z") });
     const oldRun = await addRun(g, g.ids.volunteer2, "2027-01-20");
@@ -188,6 +189,7 @@ describe("the weekly summary", () => {
     expect(mail.text).toContain("18 Feb 2027: 3 bags at South gate");
     expect(mail.text).not.toContain("5 bags");
     expect(mail.text).not.toContain("7 bags");
+    expect(mail.text).not.toContain("11 bags");
     expect(mail.text).toMatch(/12 Feb 2027, Drive [^:]+: 2 stops, Test volunteer\n/);
     expect(mail.text).not.toContain("20 Jan 2027");
     expect(mail.headers["list-unsubscribe"]).toMatch(/\.weeklySummary\./);
