@@ -28,7 +28,7 @@ const opts = {
   connections: num("BENCH_CONNECTIONS", 16),
   keep: env.BENCH_KEEP === "1",
 };
-const ports = { app: num("BENCH_PORT", 4106), pg: num("BENCH_PGPORT", 54506), smtp: num("BENCH_SMTP_PORT", 2706), mailApi: num("BENCH_MAIL_API_PORT", 8206), upload: num("BENCH_UPLOAD_PORT", 8256) };
+const ports = { app: num("BENCH_PORT", 4106), pg: num("BENCH_PGPORT", 25506), smtp: num("BENCH_SMTP_PORT", 2706), mailApi: num("BENCH_MAIL_API_PORT", 8206), upload: num("BENCH_UPLOAD_PORT", 8256) };
 const dir = path.join(root, ".bench");
 const log = (s: string) => console.log(`[bench] ${s}`);
 

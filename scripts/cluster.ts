@@ -11,12 +11,12 @@ import {
 // two app servers and HAProxy on this machine (scripts/lib/cluster.ts); prints
 // the URL and runs until Ctrl+C. With --drill, runs the drills full size, prints
 // what they measured and stops. Ports: CLUSTER_PORT (the balancer, default 3010;
-// the apps take the next two) and CLUSTER_PGPORT (primary, default 55432; the
+// the apps take the next two) and CLUSTER_PGPORT (primary, default 25532; the
 // standby, PgBouncer, the mail and upload fakes take the next five).
 const root = path.resolve(import.meta.dirname, "..");
 const drill = process.argv.includes("--drill");
 const web = Number(process.env.CLUSTER_PORT ?? 3010);
-const pgp = Number(process.env.CLUSTER_PGPORT ?? 55432);
+const pgp = Number(process.env.CLUSTER_PGPORT ?? 25532);
 const ports = { balancer: web, apps: [web + 1, web + 2], primary: pgp, standby: pgp + 1, bouncer: pgp + 2, smtp: pgp + 3, mailApi: pgp + 4, upload: pgp + 5 };
 const runDir = mkdtempSync(path.join(os.tmpdir(), "cantrove-cluster-"));
 chmodSync(runDir, 0o755);

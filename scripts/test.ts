@@ -11,8 +11,9 @@ import { serverCommand, stopServer } from "./lib/serve";
 // app, then vitest (unit, hooks, integration, e2e). Ends with "N passed, N failed".
 const root = path.resolve(import.meta.dirname, "..");
 // CANTROVE_TEST_PORT_BASE moves every port at once, so two checkouts can test side by side.
+// All below 32768, outside the ports Linux hands to outgoing connections.
 const base = Number(process.env.CANTROVE_TEST_PORT_BASE ?? 0);
-const ports = { pg: 54339 + base, smtp: 2535 + base, mailApi: 8035 + base, upload: 8036 + base, app: 3100 + base };
+const ports = { pg: 25439 + base, smtp: 2535 + base, mailApi: 8035 + base, upload: 8036 + base, app: 3100 + base };
 // Under the system temp folder rather than the checkout: PostgreSQL runs as
 // the `postgres` user, which may not be allowed into the checkout's parents.
 const runDir = (() => {

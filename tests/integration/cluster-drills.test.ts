@@ -9,9 +9,11 @@ import {
 
 // The cluster drills, small (README "How it scales"; full size: npm run cluster -- --drill).
 // Its own primary, standby (pg_basebackup, streaming), PgBouncer, two app servers
-// (the build npm test made) and HAProxy, on ports of its own.
+// (the build npm test made) and HAProxy, on ports of its own: fixed and below
+// Linux's ephemeral range (32768–60999), which the kernel hands to outgoing
+// connections; a fixed port inside it was once taken by one (EADDRINUSE in CI).
 const base = Number(process.env.CANTROVE_TEST_PORT_BASE ?? 0);
-const ports = { primary: 56000 + base, standby: 56001 + base, bouncer: 56002 + base, smtp: 56003 + base, mailApi: 56004 + base, upload: 56005 + base, balancer: 4000 + base, apps: [4001 + base, 4002 + base] };
+const ports = { primary: 26000 + base, standby: 26001 + base, bouncer: 26002 + base, smtp: 26003 + base, mailApi: 26004 + base, upload: 26005 + base, balancer: 4000 + base, apps: [4001 + base, 4002 + base] };
 const root = path.resolve(import.meta.dirname, "../..");
 const runDir = mkdtempSync(path.join(os.tmpdir(), "cantrove-drill-"));
 let cluster: AppCluster;
