@@ -34,9 +34,39 @@ const ECHO_WAIT_MS = 200;
 const sharedEchoes = globalThis as typeof globalThis & { __cantroveEchoes?: Map<string, () => void> };
 const echoes = (sharedEchoes.__cantroveEchoes ??= new Map<string, () => void>());
 
-/** Clears this process's read cache at once, then tells every other server to clear theirs. Await it before answering the write. */
-export async function forgetEverywhere(scope: Scope = "all"): Promise<void> {
-  forgetReads(scope);
+// Writes that finish while a NOTIFY is on its way share the next one (as a
+// database shares one fsync among commits that arrive together): under load a
+// server sends one NOTIFY per round trip, not one per write. Each message is
+// sent after every write that joined it has committed, and "all" covers "data".
+// On globalThis too, so writes through different route bundles share batches.
+interface Batch { scope: Scope; done: Promise<void>; release: () => void }
+const sharedBatches = globalThis as typeof globalThis & { __cantroveNotifyBatches?: { sending: boolean; next: Batch | null } };
+const batches = (sharedBatches.__cantroveNotifyBatches ??= { sending: false, next: null });
+
+function joinNextBatch(scope: Scope): Promise<void> {
+  if (batches.next) {
+    if (scope === "all") batches.next.scope = "all";
+    return batches.next.done;
+  }
+  let release = () => undefined as void;
+  const done = new Promise<void>((resolve) => (release = resolve));
+  batches.next = { scope, done, release };
+  if (!batches.sending) void sendBatches();
+  return done;
+}
+
+async function sendBatches(): Promise<void> {
+  batches.sending = true;
+  while (batches.next) {
+    const batch = batches.next;
+    batches.next = null;
+    await sendOne(batch.scope);
+    batch.release();
+  }
+  batches.sending = false;
+}
+
+async function sendOne(scope: Scope): Promise<void> {
   const nonce = randomUUID();
   let timer: NodeJS.Timeout | undefined;
   const echoed = state.connected
@@ -46,7 +76,7 @@ export async function forgetEverywhere(scope: Scope = "all"): Promise<void> {
       })
     : Promise.resolve();
   try {
-    // pg_notify in its own statement: sent when that statement commits, after the write it follows.
+    // pg_notify in its own statement: sent when that statement commits, after the writes it follows.
     const { rows } = await db.raw(
       `select pg_current_wal_lsn()::text as lsn, pg_notify(?, ? || '|' || pg_current_wal_lsn()::text)`,
       [CHANNEL, `${state.origin}:${nonce}|${scope}`],
@@ -54,12 +84,18 @@ export async function forgetEverywhere(scope: Scope = "all"): Promise<void> {
     noteWriteLsn(rows[0]?.lsn);
     await echoed;
   } catch (error) {
-    // The write itself is done; other servers catch up within READ_CACHE_MS.
+    // The writes themselves are done; other servers catch up within READ_CACHE_MS.
     console.warn("[cantrove] could not tell other servers to clear their read cache:", (error as Error).message);
   } finally {
     clearTimeout(timer);
     echoes.delete(nonce);
   }
+}
+
+/** Clears this process's read cache at once, then tells every other server to clear theirs. Await it before answering the write. */
+export async function forgetEverywhere(scope: Scope = "all"): Promise<void> {
+  forgetReads(scope);
+  await joinNextBatch(scope);
 }
 
 export function parseMessage(payload: string | undefined): { origin: string; scope: Scope; lsn: string } | null {
