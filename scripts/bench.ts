@@ -38,8 +38,8 @@ const opts = {
   /** Ledger lines in all when there are many groups: the busy group's `lines`, the rest shared by the others. */
   totalLines: num("BENCH_TOTAL_LINES", 10_000_000),
   servers: num("BENCH_SERVERS", 2),
-  compareRounds: num("BENCH_COMPARE_ROUNDS", 3),
-  compareSeconds: num("BENCH_COMPARE_SECONDS", 5),
+  compareRounds: num("BENCH_COMPARE_ROUNDS", 6),
+  compareSeconds: num("BENCH_COMPARE_SECONDS", 3),
 };
 const ports = { app: num("BENCH_PORT", 4106), pg: num("BENCH_PGPORT", 25506), smtp: num("BENCH_SMTP_PORT", 2706), mailApi: num("BENCH_MAIL_API_PORT", 8206), upload: num("BENCH_UPLOAD_PORT", 8256) };
 const dir = path.join(root, ".bench");
