@@ -67,7 +67,7 @@ export function RecordActions({
               Restore
             </Button>
           ) : (
-            <Button type="button" variant="secondary" disabled={act.isPending} onClick={() => run("archive")} aria-label={`Archive ${name}`}>
+            <Button type="button" variant="secondary" disabled={act.isPending} onClick={() => run("archive")} aria-label={compact ? `Archive ${name}` : undefined}>
               {compact ? "Archive" : `Archive this ${noun}`}
             </Button>
           )}

@@ -75,7 +75,7 @@ export function DropPointsEditor({
           />
         </section>
       ) : (
-        <button type="button" className="self-start underline" onClick={() => setDraft(emptyDropPoint(String(centre.lat), String(centre.lng)))}>
+        <button type="button" className="tap self-start underline" onClick={() => setDraft(emptyDropPoint(String(centre.lat), String(centre.lng)))}>
           Add a drop point by typing its details
         </button>
       )}

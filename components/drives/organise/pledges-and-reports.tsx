@@ -84,7 +84,7 @@ export function PledgesAndReports({ pledges, reports, points, slug, look, today 
         <ul className="flex flex-col gap-1">
           {points.map((p) => (
             <li key={p.id}>
-              <Link href={`/drives/${slug}/sign/${p.id}`}>Sign for {p.name}</Link>
+              <Link href={`/drives/${slug}/sign/${p.id}`} className="tap">Sign for {p.name}</Link>
             </li>
           ))}
         </ul>

@@ -36,8 +36,11 @@ async function pledgeOn(pointId: string) {
   const [row] = await testDb()("pledges").insert({ group_id: g.groupId, drive_id: g.driveId, drop_point_id: pointId, name: "Records test donor", bags: 2, bring_on: "2026-12-20" }).returning("id");
   return row.id as string;
 }
+/** Rows written straight to the database are read through HTTP next: an empty PATCH (a 200 write that changes nothing) clears the servers' short read cache. */
+const forgetReads = async (pointId: string) => expect((await org.json("PATCH", `/api/drop-points/${pointId}`, {})).status).toBe(200);
 async function fillReportOn(pointId: string, level = 100) {
   const [row] = await testDb()("fill_reports").insert({ group_id: g.groupId, drop_point_id: pointId, level, note: "records test" }).returning("id");
+  await forgetReads(pointId);
   return row.id as string;
 }
 async function photoOf(pointId: string) {
@@ -45,6 +48,7 @@ async function photoOf(pointId: string) {
   const [row] = await testDb()("files")
     .insert({ group_id: g.groupId, key, url: `http://127.0.0.1/f/${key}`, name: "bin.png", size: 10, mime: "image/png", purpose: "drop-point-photo", subject_id: pointId })
     .returning("id");
+  await forgetReads(pointId);
   return { id: row.id as string, url: `http://127.0.0.1/f/${key}` };
 }
 

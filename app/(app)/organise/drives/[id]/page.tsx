@@ -43,7 +43,7 @@ export default async function EditDrivePage({ params }: { params: Promise<{ id: 
         {drive.archivedAt ? (
           <ArchivedNote>Archived: this drive is hidden from the lists, the entry forms and the public. Restore it at the foot of this page.</ArchivedNote>
         ) : drive.isPublic ? (
-          <p><Link href={`/drives/${drive.slug}`}>Open the public page</Link></p>
+          <p><Link href={`/drives/${drive.slug}`} className="tap">Open the public page</Link></p>
         ) : (
           <p className="text-ink-faint">Not public</p>
         )}

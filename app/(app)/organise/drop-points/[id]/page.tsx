@@ -24,7 +24,7 @@ export default async function DropPointPage({ params }: { params: Promise<{ id: 
       <div>
         <p><Link href={`/organise/drives/${point.driveId}`} className="tap">← {drive?.name ?? "Drive"}</Link></p>
         <h1 className="text-3xl">{point.name}</h1>
-        {drive ? <p><Link href={`/drives/${drive.slug}/sign/${point.id}`}>Print a sign for this drop point</Link></p> : null}
+        {drive ? <p><Link href={`/drives/${drive.slug}/sign/${point.id}`} className="tap">Print a sign for this drop point</Link></p> : null}
         {point.archivedAt ? (
           <ArchivedNote>Archived: hidden from the drive&apos;s list, the entry forms and the public map. Restore it at the foot of this page.</ArchivedNote>
         ) : null}
