@@ -47,7 +47,7 @@ export function GlazingEditor({ id, plan, cans, held }: { id: string; plan: CanG
       className="flex flex-col gap-3"
       onSubmit={(e) => {
         e.preventDefault();
-        if (!w || !h) return;
+        if (!w || !h || !next || next.cans === 0) return;
         change.mutate({ ...plan, glazingWidth: w, glazingHeight: h, coverage: coverage as CanGridInput["coverage"] });
       }}
     >
@@ -58,14 +58,14 @@ export function GlazingEditor({ id, plan, cans, held }: { id: string; plan: CanG
       </div>
       <RadioGroup id="glazing-coverage" name="coverage" label="The sheet covers" options={COVERAGE} value={coverage} onChange={setCoverage} />
       <p aria-live="polite" className="font-semibold">
-        {next
-          ? `${next.columns} × ${next.rows}: ${countOf(next.cans, "can", formatNumber)} (now ${countOf(cans, "can", formatNumber)}).`
-          : "Enter both lengths to see the new can grid."}
-        {next && held > 0 ? ` ${countOf(held, "can", formatNumber)} are already claimed or built in.` : ""}
+        {next && next.cans === 0 ? "This sheet is too small to hold one column and one row of cans." : null}
+        {next && next.cans > 0 ? `${next.columns} × ${next.rows}: ${countOf(next.cans, "can", formatNumber)} (now ${countOf(cans, "can", formatNumber)}).` : null}
+        {next ? null : "Enter both lengths to see the new can grid."}
+        {next && next.cans > 0 && held > 0 ? ` ${countOf(held, "can", formatNumber)} are already claimed or built in.` : ""}
       </p>
       {change.isSuccess ? <p role="status" className="font-semibold text-moss-deep">Glazing saved: the unit needs {countOf(change.data.cans, "can", formatNumber)} and the drive&apos;s target follows.</p> : null}
       <div>
-        <Button type="submit" disabled={change.isPending || !next}>{change.isPending ? "Saving…" : "Save the new glazing"}</Button>
+        <Button type="submit" disabled={change.isPending || !next || next.cans === 0}>{change.isPending ? "Saving…" : "Save the new glazing"}</Button>
       </div>
     </form>
   );

@@ -1,5 +1,5 @@
 import "server-only";
-import { conflict } from "@/lib/api/errors";
+import { AppError, conflict } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
 import { db } from "@/lib/db";
 import { ledgerCall, runLedgerFunction, type OwnRefusals } from "@/lib/ledger/post";
@@ -33,6 +33,10 @@ const REFUSALS: OwnRefusals = {
  */
 export async function changeGlazing(actor: Actor, unit: HeaterUnitRow, plan: Required<CanGridInput>): Promise<HeaterUnitRow & { was: number }> {
   const grid = computeCanGrid(plan);
+  if (grid.cans < 1) {
+    const why = "This sheet is too small to hold one column and one row of cans.";
+    throw new AppError("invalid_input", `${why} Choose a larger glazing.`, { fields: { "plan.glazingWidth": why, "plan.glazingHeight": why } });
+  }
   const payload = {
     groupId: actor.group.id,
     driveId: unit.driveId,

@@ -65,6 +65,10 @@ describe("changing a unit's glazing", () => {
     const [, b] = g.heaterIds;
     expect((await glaze(org, b, { glazingWidth: -5, glazingHeight: 600, unit: "mm", coverage: "chamber" })).status).toBe(422);
     expect((await org.json("POST", `/api/heaters/${b}/glazing`, { plan: WIDER, cans: 9999 })).status).toBe(422);
+    // 60 mm wide holds no 66 mm can: a grid of no cans is refused on its fields.
+    const empty = await glaze(org, b, { glazingWidth: 60, glazingHeight: 600, unit: "mm", coverage: "chamber" });
+    expect(empty.status).toBe(422);
+    expect(empty.body.error?.message).toContain("too small to hold one column and one row");
     expect((await glaze(bld, b, WIDER)).status).toBe(403);
     expect((await glaze(attacker, b, WIDER)).status).toBe(404);
     expect((await unitRow(b))?.cans).toBe(132);
