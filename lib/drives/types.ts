@@ -51,6 +51,8 @@ export interface DropPointRecord {
   hostEmail: string;
   capacityBags: number;
   active: boolean;
+  /** ISO time it was archived (issue 16), or null. */
+  archivedAt: string | null;
 }
 
 /** A bin reported full on the organiser's dashboard. */

@@ -52,6 +52,10 @@ export async function screensByRole(): Promise<Screen[]> {
     { path: "/runs", role: "volunteer" },
     { path: "/units", role: "builder" },
     { path: `/units/${demo.demoHeaterId}`, role: "builder" },
+    // Issue 16: where organisers archive, restore and edit (drive, drop point, a unit's glazing).
+    { path: `/organise/drives/${demo.demoDriveId}`, role: "organiser" },
+    { path: `/organise/drop-points/${demo.demoDropPointId}`, role: "organiser" },
+    { path: `/units/${demo.demoHeaterId}`, role: "organiser" },
     { path: "/search?q=porch", role: "organiser" },
     { path: "/account", role: "organiser" },
     { path: "/account", role: "volunteer" },
