@@ -1,5 +1,4 @@
 import { redirect } from "next/navigation";
-import { SessionBoundary } from "@/components/auth/session-boundary";
 import { AppHeader } from "@/components/layout/app-header";
 import { DatabaseDown } from "@/components/system/database-down";
 import { getActor } from "@/lib/auth/session";
@@ -24,13 +23,11 @@ export default async function AppLayout({ children }: { children: React.ReactNod
   // How the group shows dates, numbers and measures, for the client components below.
   const look = await groupLook(actor.group.id);
   return (
-    <SessionBoundary>
-      <LookProvider look={look}>
-        <AppHeader groupName={actor.group.name} role={actor.role} userName={actor.user.name} />
-        <div id="main" className="mx-auto max-w-5xl px-4 py-6">
-          {children}
-        </div>
-      </LookProvider>
-    </SessionBoundary>
+    <LookProvider look={look}>
+      <AppHeader groupName={actor.group.name} role={actor.role} userName={actor.user.name} />
+      <div id="main" className="mx-auto max-w-5xl px-4 py-6">
+        {children}
+      </div>
+    </LookProvider>
   );
 }

@@ -1,8 +1,8 @@
 "use client";
 
-import { signOut } from "next-auth/react";
 import Link from "next/link";
 import { useState } from "react";
+import { signOutTo } from "@/components/auth/session-client";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/ui/field";
 import { useLeaveGroup } from "@/hooks/queries/members";
@@ -33,7 +33,7 @@ export function LeaveGroup({ groupName, onlyOrganiser }: { groupName: string; on
           <Button
             variant="danger"
             disabled={leave.isPending}
-            onClick={() => leave.mutate(undefined, { onSuccess: () => void signOut({ callbackUrl: "/signin" }) })}
+            onClick={() => leave.mutate(undefined, { onSuccess: () => void signOutTo("/signin") })}
           >
             {leave.isPending ? "Leaving…" : `Yes, leave ${groupName}`}
           </Button>

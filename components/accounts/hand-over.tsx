@@ -1,9 +1,9 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
-import { signOut } from "next-auth/react";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { signOutTo } from "@/components/auth/session-client";
 import { Button } from "@/components/ui/button";
 import { FormError, RadioGroup, SelectField } from "@/components/ui/field";
 import { ROLE_HOME, ROLE_LABEL } from "@/lib/auth/roles";
@@ -36,7 +36,7 @@ export function HandOver({ currentUserId }: { currentUserId: string }) {
       { userId: to, then },
       {
         onSuccess: () => {
-          if (then === "leave") void signOut({ callbackUrl: "/signin" });
+          if (then === "leave") void signOutTo("/signin");
           else router.push(ROLE_HOME[then]);
         },
         onSettled: () => setAsking(false),
