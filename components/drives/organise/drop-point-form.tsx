@@ -7,6 +7,8 @@ import { NumberField } from "@/components/ui/number-field";
 import { IDLE, type ActionState } from "@/lib/api/action-state";
 import { createDropPointAction, updateDropPointAction } from "@/lib/drives/form-actions";
 import { NUMBER_SPECS } from "@/lib/forms/number-input";
+import type { OpeningSpan } from "@/lib/drives/opening-hours";
+import { OpeningHoursInput } from "./opening-hours-input";
 
 export interface DropPointValues {
   name: string;
@@ -14,6 +16,7 @@ export interface DropPointValues {
   lat: string;
   lng: string;
   hours: string;
+  openingHours: OpeningSpan[];
   hostName: string;
   hostPhone: string;
   hostEmail: string;
@@ -22,7 +25,7 @@ export interface DropPointValues {
 }
 
 export const emptyDropPoint = (lat = "", lng = ""): DropPointValues => ({
-  name: "", address: "", lat, lng, hours: "", hostName: "", hostPhone: "", hostEmail: "", capacityBags: "6", active: true,
+  name: "", address: "", lat, lng, hours: "", openingHours: [], hostName: "", hostPhone: "", hostEmail: "", capacityBags: "6", active: true,
 });
 
 // A plain form posting to a server action: createDropPointAction (hidden
@@ -66,7 +69,12 @@ export function DropPointForm({
         <Field id="dp-lat" label="Latitude" inputMode="decimal" {...field("lat")} />
         <Field id="dp-lng" label="Longitude" inputMode="decimal" {...field("lng")} />
       </div>
-      <Field id="dp-hours" label="Opening hours" placeholder="Mon–Sat 9:00–17:00" {...field("hours")} />
+      <OpeningHoursInput
+        value={values.openingHours}
+        onChange={(openingHours) => onChange({ ...values, openingHours })}
+        error={Object.entries(errors).find(([k]) => k.startsWith("openingHours"))?.[1]}
+      />
+      <Field id="dp-hours" label="Notes on opening hours" hint="Free text, for example: ring the side bell; closed on bank holidays." {...field("hours")} />
       <NumberField
         id="dp-capacity"
         fieldName="capacityBags"
