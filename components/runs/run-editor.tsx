@@ -19,7 +19,7 @@ export function RunEditor({ run, drivers, dropPoints }: { run: RunDetail; driver
   return (
     <section aria-labelledby="run-edit-heading" className="flex flex-col gap-4 rounded-card border-2 border-paper-edge bg-white p-4">
       <h2 id="run-edit-heading" className="text-2xl">Change this run</h2>
-      <DetailsForm key={`${run.plannedOn}-${run.assigneeId}-${run.notes}`} run={run} drivers={drivers} />
+      <DetailsForm run={run} drivers={drivers} />
       <StopsEditor run={run} dropPoints={dropPoints} />
       <CancelRun run={run} />
     </section>

@@ -48,7 +48,7 @@ export async function suggestedStops(groupId: string, driveId: string, now = new
 export interface PickupHistoryEntry {
   runId: string;
   plannedOn: string;
-  status: "pending" | "logged" | "skipped";
+  status: "pending" | "logged" | "skipped" | "released";
   skipReason: string | null;
   haulId: string | null;
   haulBags: number | null;

@@ -223,7 +223,7 @@ describe("cancelling a run", () => {
     expect((await vol.json<Run>("GET", `/api/runs/${run.id}`)).body.state).toBe("cancelled");
 
     // Undoing the logged haul is an ordinary reversal: the ledger grows, the stop is released, the run stays cancelled.
-    const undo = await org.json("POST", `/api/movements/${movementId}/reversal`, {});
+    const undo = await org.json("POST", `/api/movements/${movementId}/reversal`, undefined, { "idempotency-key": randomUUID() });
     expect(undo.status).toBe(201);
     expect(await lineCount()).toBeGreaterThan(lines);
     const after = (await org.json<Run>("GET", `/api/runs/${run.id}`)).body;
