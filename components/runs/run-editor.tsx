@@ -131,10 +131,10 @@ function StopsEditor({ run, dropPoints }: { run: RunDetail; dropPoints: { id: st
             }}
           >
             <SelectField id="run-add-stop" label="Add a drop point" value={adding} onChange={(e) => setAdding(e.target.value)} placeholder="Choose a drop point" options={addable.map((p) => ({ value: p.id, label: p.name }))} />
-            <Button type="submit" variant="secondary" disabled={busy || !adding} className="mb-6">Add the stop</Button>
+            <Button type="submit" variant="secondary" disabled={busy || !adding} className="mb-1">Add the stop</Button>
           </form>
         ) : null}
-        <Button type="button" variant="secondary" disabled={busy} className="mb-6" onClick={() => optimise.mutate()}>Re-optimise the order</Button>
+        <Button type="button" variant="secondary" disabled={busy} className="mb-1" onClick={() => optimise.mutate()}>Re-optimise the order</Button>
       </div>
     </div>
   );

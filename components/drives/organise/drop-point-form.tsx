@@ -1,6 +1,6 @@
 "use client";
 
-import { useActionState, useEffect, useEffectEvent } from "react";
+import { startTransition, useActionState, useEffect, useEffectEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
 import { NumberField } from "@/components/ui/number-field";
@@ -59,7 +59,20 @@ export function DropPointForm({
   const field = (k: keyof DropPointValues) => ({ name: k, value: (values[k] as string | null) ?? "", onChange: text(k), error: errors[k] });
 
   return (
-    <form action={send} noValidate className="flex flex-col gap-2" aria-label={submitLabel}>
+    <form
+      action={send}
+      // With JavaScript the action is sent by hand: React's reset after a form action would clear the
+      // controlled checkboxes (opening days, "open") on screen while the state still holds them.
+      // Without JavaScript the form posts to the same action as before.
+      onSubmit={(e) => {
+        e.preventDefault();
+        const data = new FormData(e.currentTarget);
+        startTransition(() => send(data));
+      }}
+      noValidate
+      className="flex flex-col gap-2"
+      aria-label={submitLabel}
+    >
       {"driveId" in target ? <input type="hidden" name="driveId" value={target.driveId} /> : <input type="hidden" name="id" value={target.id} />}
       <FormError message={state.ok === false ? state.message : null} />
       <Field id="dp-name" label="Name" {...field("name")} />
