@@ -65,8 +65,8 @@ export interface RunWarning {
   message: string;
 }
 
-/** Where a drop point is and what it holds, as the planner shows it (its id comes with the suggestion). */
-export type PlannerPlace = Omit<DropPointPlace, "id">;
+/** Where a drop point is, what it holds and when it is open, as the planner shows it (its id comes with the suggestion). */
+export type PlannerPlace = Omit<DropPointPlace, "id"> & { openingHours: OpeningHours };
 
 /**
  * One drop point as the planner offers it (GET /api/runs/suggestions), as JSON:
