@@ -22,18 +22,6 @@ const shared = globalThis as typeof globalThis & {
 };
 const state = (shared.__cantroveBroadcast ??= { origin: randomUUID(), client: null, started: false, connected: false, retryMs: 250 });
 
-// A sent message's own echo: PostgreSQL hands a NOTIFY to every listener at
-// once, so once this server's listener has it back the others have been sent
-// it too; the write's answer waits for that (at most ECHO_WAIT_MS), so the
-// writer's next request to another server finds that server's cache cleared.
-const ECHO_WAIT_MS = 200;
-// On globalThis, like the state above: the server loads this module once per route
-// bundle, and the listener (started by instrumentation.ts) must find the waiter a
-// route's copy left here. With a map per copy no echo was ever found and every write
-// waited the whole ECHO_WAIT_MS (the bench's processing writes: p50 207 ms).
-const sharedEchoes = globalThis as typeof globalThis & { __cantroveEchoes?: Map<string, () => void> };
-const echoes = (sharedEchoes.__cantroveEchoes ??= new Map<string, () => void>());
-
 // Writes that finish while a NOTIFY is on its way share the next one (as a
 // database shares one fsync among commits that arrive together): under load a
 // server sends one NOTIFY per round trip, not one per write. Each message is
@@ -66,29 +54,21 @@ async function sendBatches(): Promise<void> {
   batches.sending = false;
 }
 
+// PostgreSQL signals every listening backend as the NOTIFY's transaction ends,
+// before it answers the statement (src/backend/commands/async.c, SignalBackends),
+// so once the statement is back every other server has been sent the message
+// and the writer's next request to any of them finds its cache cleared.
 async function sendOne(scope: Scope): Promise<void> {
-  const nonce = randomUUID();
-  let timer: NodeJS.Timeout | undefined;
-  const echoed = state.connected
-    ? new Promise<void>((resolve) => {
-        echoes.set(nonce, resolve);
-        timer = setTimeout(resolve, ECHO_WAIT_MS);
-      })
-    : Promise.resolve();
   try {
     // pg_notify in its own statement: sent when that statement commits, after the writes it follows.
     const { rows } = await db.raw(
       `select pg_current_wal_lsn()::text as lsn, pg_notify(?, ? || '|' || pg_current_wal_lsn()::text)`,
-      [CHANNEL, `${state.origin}:${nonce}|${scope}`],
+      [CHANNEL, `${state.origin}|${scope}`],
     );
     noteWriteLsn(rows[0]?.lsn);
-    await echoed;
   } catch (error) {
     // The writes themselves are done; other servers catch up within READ_CACHE_MS.
     console.warn("[cantrove] could not tell other servers to clear their read cache:", (error as Error).message);
-  } finally {
-    clearTimeout(timer);
-    echoes.delete(nonce);
   }
 }
 
@@ -126,9 +106,7 @@ function connect(): void {
     const m = parseMessage(message.payload);
     if (!m) return;
     noteWriteLsn(m.lsn);
-    const [origin, nonce] = m.origin.split(":");
-    if (origin !== state.origin) forgetReads(m.scope);
-    else echoes.get(nonce)?.();
+    if (m.origin !== state.origin) forgetReads(m.scope);
   });
   client
     .connect()

@@ -11,7 +11,7 @@ type Shared = typeof globalThis & { __cantroveNotifyBatches?: unknown; __cantrov
 describe("telling other servers to clear their caches", () => {
   beforeEach(() => {
     delete (globalThis as Shared).__cantroveNotifyBatches;
-    delete (globalThis as Shared).__cantroveBroadcast; // not connected: no echo to wait for
+    delete (globalThis as Shared).__cantroveBroadcast;
     raw.mockReset();
     vi.resetModules();
   });
