@@ -35,6 +35,15 @@ describe("editing and cancelling a run", () => {
     const runId = created.body.id;
 
     const { page, context } = await signedInPage(browser(), DEMO.organiser, { viewport: { width: 1366, height: 900 } });
+    // The planner marks the hut on a Thursday, and not on a Saturday.
+    await page.goto(`/runs/new?drive=${f.demoDriveId}`);
+    const hutChoice = page.getByRole("group", { name: "Drop points to visit" }).locator("label", { hasText: "Saturday market hut (journey)" });
+    await hutChoice.waitFor();
+    await page.getByLabel("Day of the run").fill("2027-01-07");
+    await hutChoice.getByText("Closed on Thursdays by its opening hours").waitFor();
+    await page.getByLabel("Day of the run").fill("2027-01-09");
+    await expect.poll(() => hutChoice.getByText(/Closed on/).count()).toBe(0);
+
     await page.goto(`/runs/${runId}`);
     await expect.poll(() => page.getByTestId("run-warnings").innerText()).toContain("Saturday market hut (journey) is not open on Thursdays");
     await page.getByRole("listitem", { name: /Saturday market hut \(journey\)$/ }).getByText("Sat, Sun 09:00–13:00").waitFor();
