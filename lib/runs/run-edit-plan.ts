@@ -39,10 +39,14 @@ export function reoptimisedOrder(
   const settled = stops.filter((s) => s.status !== "pending");
   const pending = stops.filter((s) => s.status === "pending");
   if (pending.length === 0) return stops.map((s) => s.dropPointId);
+  if (settled.length === 0) {
+    // Nothing visited yet: the planner's own answer for the whole run (exact up to EXACT_STOP_LIMIT stops).
+    return planRoute({ start, stops: pending.map((s) => ({ id: s.dropPointId, lat: s.lat, lng: s.lng })), returnToStart }).order;
+  }
   const from = settled.length ? settled[settled.length - 1]! : start;
   const plan = planRoute({ start: from, stops: pending.map((s) => ({ id: s.dropPointId, lat: s.lat, lng: s.lng })), returnToStart: false });
-  // A closed tour's way back is from the last stop to the run's start, not to `from`: plan the open path, then
-  // compare it with its reverse when the run returns, keeping the shorter whole run.
+  // After settled stops a closed run ends back at its start, not at `from`: plan the open path, then keep it
+  // or its reverse, whichever makes the shorter whole run (a heuristic, not proven shortest, for that case).
   if (returnToStart) {
     const forward = [...settled.map((s) => s.dropPointId), ...plan.order];
     const reversed = [...settled.map((s) => s.dropPointId), ...[...plan.order].reverse()];

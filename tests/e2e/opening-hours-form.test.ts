@@ -1,19 +1,18 @@
 import { describe, expect, it } from "vitest";
 import { browserForFile, PHONE, signedInPage } from "@/tests/support/browser";
-import { DEMO } from "@/tests/support/env";
 import { testDb } from "@/tests/support/db";
-import { demoFixtureForFile } from "@/tests/support/fixtures";
+import { freshGroupForFile } from "@/tests/support/ledger";
 
 // The drop-point form's structured opening hours (issue 16), on a phone: days and times are
 // saved as ISO 8601 weekday spans, stay ticked after the save, and a span with no day is refused.
 const browser = browserForFile();
-const f = demoFixtureForFile();
+const g = freshGroupForFile("hours-form"); // its own drive: nothing added shows on the demo drive's public map
 
 describe("opening hours on the drop-point form", () => {
   it("saves days and times, keeps them on screen, and refuses a span without a day", async () => {
     const db = testDb();
-    const [point] = await db("drop_points").insert({ group_id: f.demoGroupId, drive_id: f.demoDriveId, name: "Form hours test kiosk", lat: 47.2, lng: -8.01 }).returning("id");
-    const { page, context } = await signedInPage(browser(), DEMO.organiser, PHONE);
+    const point = { id: g.dropPointIds[0]! };
+    const { page, context } = await signedInPage(browser(), g.emails.organiser, PHONE);
     await page.goto(`/organise/drop-points/${point.id}`);
     await page.getByRole("button", { name: "Add opening times" }).click();
     const span = page.getByRole("group", { name: "Opening times 1" });

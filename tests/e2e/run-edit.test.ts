@@ -1,17 +1,17 @@
 import { describe, expect, it } from "vitest";
 import { browserForFile, signedInPage } from "@/tests/support/browser";
-import { DEMO } from "@/tests/support/env";
 import { signedIn } from "@/tests/support/http";
 import { testDb } from "@/tests/support/db";
-import { demoFixtureForFile } from "@/tests/support/fixtures";
+import { freshGroupForFile } from "@/tests/support/ledger";
 import { waitForMail } from "@/tests/support/mail";
 
 // Issue 16: an organiser edits a run in the browser (sees the closed-stop warning,
 // reassigns it, reorders a stop with the move buttons, removes one, re-optimises)
-// and then cancels it; the run stays, cancelled, with its stops released.
+// and then cancels it; the run stays, cancelled, with its stops released. A group of its
+// own, so the drop points it adds never show on the demo drive's public map.
 const SHOTS = process.env.CANTROVE_SCREENSHOTS;
 const browser = browserForFile();
-const f = demoFixtureForFile();
+const g = freshGroupForFile("run-edit-e2e");
 
 describe("editing and cancelling a run", () => {
   it("reassigns, reorders, removes a stop, re-optimises and cancels, with warnings and mails", async () => {
@@ -19,24 +19,24 @@ describe("editing and cancelling a run", () => {
     // A weekend-only drop point of its own, so the Thursday run warns about it (2027-01-07 is a Thursday).
     const [hut] = await db("drop_points")
       .insert({
-        group_id: f.demoGroupId, drive_id: f.demoDriveId, name: "Saturday market hut (journey)", lat: 47.201, lng: -8.012, hours: "Ring the bell",
+        group_id: g.groupId, drive_id: g.driveId, name: "Saturday market hut (journey)", lat: 47.201, lng: -8.012, hours: "Ring the bell",
         opening_hours: JSON.stringify([{ days: [6, 7], opens: "09:00", closes: "13:00" }]),
       })
       .returning("id");
-    const others = await db("drop_points").where({ drive_id: f.demoDriveId, active: true }).whereNot({ id: hut.id }).orderBy("name").limit(2).select("id", "name");
-    const volunteerId = (await db("users").where({ email: DEMO.volunteer }).first()).id;
-    const organiser = await db("users").where({ email: DEMO.organiser }).first();
-    const api = await signedIn(DEMO.organiser);
+    const others = await db("drop_points").where({ drive_id: g.driveId, active: true }).whereNot({ id: hut.id }).orderBy("name").limit(2).select("id", "name");
+    const volunteerId = (await db("users").where({ email: g.emails.volunteer }).first()).id;
+    const organiser = await db("users").where({ email: g.emails.organiser }).first();
+    const api = await signedIn(g.emails.organiser);
     const created = await api.json<{ id: string }>("POST", "/api/runs", {
-      driveId: f.demoDriveId, plannedOn: "2027-01-07", start: { lat: 47.1978, lng: -8.0061 },
+      driveId: g.driveId, plannedOn: "2027-01-07", start: { lat: 47.1978, lng: -8.0061 },
       dropPointIds: [hut.id, ...others.map((o) => o.id)], assigneeId: volunteerId,
     });
     expect(created.status).toBe(201);
     const runId = created.body.id;
 
-    const { page, context } = await signedInPage(browser(), DEMO.organiser, { viewport: { width: 1366, height: 900 } });
+    const { page, context } = await signedInPage(browser(), g.emails.organiser, { viewport: { width: 1366, height: 900 } });
     // The planner marks the hut on a Thursday, and not on a Saturday.
-    await page.goto(`/runs/new?drive=${f.demoDriveId}`);
+    await page.goto(`/runs/new?drive=${g.driveId}`);
     const hutChoice = page.getByRole("group", { name: "Drop points to visit" }).locator("label", { hasText: "Saturday market hut (journey)" });
     await hutChoice.waitFor();
     await page.getByLabel("Day of the run").fill("2027-01-07");
@@ -52,8 +52,8 @@ describe("editing and cancelling a run", () => {
     await page.getByLabel("Volunteer", { exact: true }).selectOption({ label: `${organiser.name} (organiser)` });
     await page.getByRole("button", { name: "Save the changes" }).click();
     await page.getByText("Saved.").waitFor();
-    await waitForMail(DEMO.organiser, (m) => m.text.includes(`/runs/${runId}`) && m.subject.startsWith("Pickup run on"));
-    await waitForMail(DEMO.volunteer, (m) => m.subject.includes("given to someone else") && m.text.includes("7 January 2027"));
+    await waitForMail(g.emails.organiser, (m) => m.text.includes(`/runs/${runId}`) && m.subject.startsWith("Pickup run on"));
+    await waitForMail(g.emails.volunteer, (m) => m.subject.includes("given to someone else") && m.text.includes("7 January 2027"));
     expect((await db("pickup_runs").where({ id: runId }).first()).assignee_id).toBe(organiser.id);
 
     // Reorder by hand: the last stop moves up one place.
