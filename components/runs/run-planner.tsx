@@ -121,7 +121,7 @@ export function RunPlanner(props: PlannerProps) {
             ) : suggestions.data.length === 0 ? (
               <p className="text-ink-soft">This drive has no active drop points. Add drop points to the drive first.</p>
             ) : (
-              <StopPicker suggestions={suggestions.data} selected={selection.ids} onToggle={toggle} error={errors.dropPointIds} />
+              <StopPicker suggestions={suggestions.data} selected={selection.ids} onToggle={toggle} error={errors.dropPointIds} plannedOn={plannedOn} />
             )}
           </div>
         </Card>

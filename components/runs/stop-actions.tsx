@@ -10,6 +10,9 @@ import { useLogStopHaul, useSkipStop } from "@/hooks/queries/runs";
 import { ConfirmUnusual } from "@/components/ledger/confirm-unusual";
 import { NumberField } from "@/components/ui/number-field";
 import { NUMBER_SPECS, parseNumberInputs } from "@/lib/forms/number-input";
+import { Notice } from "@/components/ui/notice";
+import { haulDayMismatch } from "@/lib/drives/opening-hours";
+import { formatter } from "@/lib/format";
 
 function newKey(): string {
   // randomUUID needs a secure context; plain-HTTP previews get a random key of the same strength.
@@ -21,10 +24,13 @@ interface Props {
   runId: string;
   stopId: string;
   dropPointName: string;
+  /** The run's day: logging on another day is allowed, with a warning. */
+  plannedOn?: string;
 }
 
 /** Log a haul at this stop (a ledger movement, then the stop points at it), or skip it with a reason. */
-export function StopActions({ runId, stopId, dropPointName }: Props) {
+export function StopActions({ runId, stopId, dropPointName, plannedOn }: Props) {
+  const look = useFormat().look;
   const [mode, setMode] = useState<"idle" | "log" | "skip">("idle");
   const [bags, setBags] = useState("");
   const [weight, setWeight] = useState("");
@@ -74,6 +80,11 @@ export function StopActions({ runId, stopId, dropPointName }: Props) {
           log.mutate({ bags: numbers.values.bags, weightKg: weighed.toKg(numbers.values.weightKg), confirmUnusual: false, idempotencyKey: haulKey });
         }}
       >
+        {plannedOn && haulDayMismatch(plannedOn, new Date(), look.timeZone) ? (
+          <Notice tone="caution" title="Not the run's day">
+            This run is for {formatter(look).day(plannedOn)}. The haul will be logged for today; that is fine if it really happened today.
+          </Notice>
+        ) : null}
         <div className="grid grid-cols-2 gap-3">
           <NumberField id={`bags-${stopId}`} label="Bags" spec={NUMBER_SPECS.stopBags} value={bags} onChange={edit("bags", setBags)} error={fields.bags} />
           <NumberField id={`weight-${stopId}`} label={`Weight, ${weighed.unit} (optional)`} spec={weighed.spec} value={weight} onChange={edit("weightKg", setWeight)} error={fields.weightKg} />

@@ -66,6 +66,7 @@ const dropPointColumns = [
   db.raw(`coalesce(host_phone, '') as "hostPhone"`),
   db.raw(`coalesce(host_email::text, '') as "hostEmail"`),
   "capacity_bags as capacityBags",
+  "opening_hours as openingHours",
   "active",
   db.raw(`to_json(archived_at) #>> '{}' as "archivedAt"`),
 ];

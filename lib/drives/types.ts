@@ -50,6 +50,7 @@ export interface DropPointRecord {
   hostPhone: string;
   hostEmail: string;
   capacityBags: number;
+  openingHours: import("./opening-hours").OpeningHours;
   active: boolean;
   /** ISO time it was archived (issue 16), or null. */
   archivedAt: string | null;
