@@ -2,6 +2,7 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import pg from "pg";
 import { db } from "@/lib/db";
+import { ackReceived, awaitAcks } from "./acks";
 import { forgetReads } from "./read-cache";
 import { noteWriteLsn } from "./write-fence";
 
@@ -11,28 +12,26 @@ import { noteWriteLsn } from "./write-fence";
 // and the primary's WAL position; every server LISTENs on one direct
 // connection of its own (LISTEN holds session state, so never through a
 // transaction-mode pooler: DATABASE_LISTEN_URL, else DATABASE_URL) and clears
-// its cache when the message comes. The TTL stays as a safety net for a
-// message lost while a listener was reconnecting (it clears everything when it
-// comes back, too).
+// its cache when the message comes, then says so on ACK_CHANNEL; the write's
+// answer waits for every other server's acknowledgement (acks.ts), so the
+// writer's next request, to whichever server, finds the cache cleared. With no
+// other server listening there is nothing to wait for. The TTL stays as a
+// safety net for a message lost while a listener was reconnecting (it clears
+// everything when it comes back, too).
 export const CHANNEL = "cantrove_reads";
+export const ACK_CHANNEL = "cantrove_reads_ack";
+const LISTENER_NAME = "cantrove-listen";
 
 type Scope = "all" | "data";
 const shared = globalThis as typeof globalThis & {
-  __cantroveBroadcast?: { origin: string; client: pg.Client | null; started: boolean; connected: boolean; retryMs: number };
+  __cantroveBroadcast?: { origin: string; client: pg.Client | null; started: boolean; connected: boolean; retryMs: number; peers: number };
 };
-const state = (shared.__cantroveBroadcast ??= { origin: randomUUID(), client: null, started: false, connected: false, retryMs: 250 });
+const state = (shared.__cantroveBroadcast ??= { origin: randomUUID(), client: null, started: false, connected: false, retryMs: 250, peers: 0 });
 
-// A sent message's own echo: PostgreSQL hands a NOTIFY to every listener at
-// once, so once this server's listener has it back the others have been sent
-// it too; the write's answer waits for that (at most ECHO_WAIT_MS), so the
-// writer's next request to another server finds that server's cache cleared.
-const ECHO_WAIT_MS = 200;
-// On globalThis, like the state above: the server loads this module once per route
-// bundle, and the listener (started by instrumentation.ts) must find the waiter a
-// route's copy left here. With a map per copy no echo was ever found and every write
-// waited the whole ECHO_WAIT_MS (the bench's processing writes: p50 207 ms).
-const sharedEchoes = globalThis as typeof globalThis & { __cantroveEchoes?: Map<string, () => void> };
-const echoes = (sharedEchoes.__cantroveEchoes ??= new Map<string, () => void>());
+// The longest a write waits for the other servers' acknowledgements.
+const ACK_WAIT_MS = 200;
+// How often the listener counts the other servers listening (pg_stat_activity).
+const PEER_COUNT_MS = 1_000;
 
 // Writes that finish while a NOTIFY is on its way share the next one (as a
 // database shares one fsync among commits that arrive together): under load a
@@ -67,28 +66,20 @@ async function sendBatches(): Promise<void> {
 }
 
 async function sendOne(scope: Scope): Promise<void> {
-  const nonce = randomUUID();
-  let timer: NodeJS.Timeout | undefined;
-  const echoed = state.connected
-    ? new Promise<void>((resolve) => {
-        echoes.set(nonce, resolve);
-        timer = setTimeout(resolve, ECHO_WAIT_MS);
-      })
-    : Promise.resolve();
+  const id = `${state.origin}:${randomUUID()}`;
+  // Counted before sending: a server that starts listening later cleared its cache as it started.
+  const acked = state.connected ? awaitAcks(id, state.peers, ACK_WAIT_MS) : Promise.resolve();
   try {
     // pg_notify in its own statement: sent when that statement commits, after the writes it follows.
     const { rows } = await db.raw(
       `select pg_current_wal_lsn()::text as lsn, pg_notify(?, ? || '|' || pg_current_wal_lsn()::text)`,
-      [CHANNEL, `${state.origin}:${nonce}|${scope}`],
+      [CHANNEL, `${id}|${scope}`],
     );
     noteWriteLsn(rows[0]?.lsn);
-    await echoed;
+    await acked;
   } catch (error) {
     // The writes themselves are done; other servers catch up within READ_CACHE_MS.
     console.warn("[cantrove] could not tell other servers to clear their read cache:", (error as Error).message);
-  } finally {
-    clearTimeout(timer);
-    echoes.delete(nonce);
   }
 }
 
@@ -107,35 +98,53 @@ export function parseMessage(payload: string | undefined): { origin: string; sco
 function connect(): void {
   const url = process.env.DATABASE_LISTEN_URL || process.env.DATABASE_URL;
   if (!url) return;
-  const client = new pg.Client({ connectionString: url, application_name: "cantrove-listen", keepAlive: true });
+  const client = new pg.Client({ connectionString: url, application_name: LISTENER_NAME, keepAlive: true });
   state.client = client;
   let retried = false;
+  let counting: NodeJS.Timeout | undefined;
   const retry = (why: string) => {
     if (retried) return;
     retried = true;
+    clearInterval(counting);
     state.connected = false;
     state.client = null;
+    state.peers = 0;
     client.end().catch(() => undefined);
     console.warn(`[cantrove] read-cache listener lost (${why}); again in ${state.retryMs} ms`);
     setTimeout(connect, state.retryMs).unref();
     state.retryMs = Math.min(state.retryMs * 2, 5_000);
   };
+  // The other servers' listeners on this database: how many acknowledgements a write waits for.
+  const countPeers = () =>
+    client
+      .query(`select count(*)::int as n from pg_stat_activity where application_name = $1 and datname = current_database() and pid <> pg_backend_pid()`, [LISTENER_NAME])
+      .then((r) => (state.peers = r.rows[0]?.n ?? 0))
+      .catch(() => undefined);
   client.on("error", (e) => retry(e.message));
   client.on("end", () => retry("connection ended"));
   client.on("notification", (message) => {
+    if (message.channel === ACK_CHANNEL) {
+      const [to, id] = (message.payload ?? "").split("|");
+      if (to === state.origin && id) ackReceived(id);
+      return;
+    }
     const m = parseMessage(message.payload);
     if (!m) return;
     noteWriteLsn(m.lsn);
-    const [origin, nonce] = m.origin.split(":");
-    if (origin !== state.origin) forgetReads(m.scope);
-    else echoes.get(nonce)?.();
+    const [origin] = m.origin.split(":");
+    if (origin === state.origin) return; // this process cleared its own cache before sending
+    forgetReads(m.scope);
+    client.query(`select pg_notify($1, $2)`, [ACK_CHANNEL, `${origin}|${m.origin}`]).catch(() => undefined);
   });
   client
     .connect()
-    .then(() => client.query(`LISTEN ${CHANNEL}`))
+    .then(() => client.query(`LISTEN ${CHANNEL}; LISTEN ${ACK_CHANNEL}`))
+    .then(countPeers)
     .then(() => {
       state.connected = true;
       state.retryMs = 250;
+      counting = setInterval(countPeers, PEER_COUNT_MS);
+      counting.unref();
       // Whatever was written while nobody listened here is not in the cache any more.
       forgetReads("all");
     })
@@ -151,4 +160,9 @@ export function startReadCacheListener(): void {
 
 export function readCacheListenerConnected(): boolean {
   return state.connected;
+}
+
+/** How many other servers' listeners this process last counted. */
+export function readCachePeers(): number {
+  return state.peers;
 }
