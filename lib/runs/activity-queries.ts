@@ -44,6 +44,7 @@ export async function latestFillReports(
     .distinctOn("drop_point_id")
     .select("drop_point_id", db.raw("level / 100.0 as fraction"), "created_at as at")
     .where("group_id", groupId)
+    .whereNull("archived_at")
     .whereIn("drop_point_id", dropPointIds)
     .orderBy([{ column: "drop_point_id" }, { column: "created_at", order: "desc" }]);
   for (const r of rows) out.set(r.drop_point_id, { fraction: r.fraction as number, at: r.at as Date });

@@ -17,11 +17,13 @@ import { haulDayWarning } from "./warnings";
 /** Orders the chosen drop points and stores the run; the caller sends the e-mail after commit. */
 export async function createRun(actor: Actor, input: CreateRunInput) {
   return db.transaction(async (trx) => {
-    const drive = await trx("drives").select("id", "name").where({ id: input.driveId, group_id: actor.group.id }).first();
+    // An archived drive or drop point is out of every plan (restore it first).
+    const drive = await trx("drives").select("id", "name").where({ id: input.driveId, group_id: actor.group.id }).whereNull("archived_at").first();
     if (!drive) throw notFound("That drive");
     const points = await trx("drop_points")
       .select("id", "name", "lat", "lng")
       .where({ group_id: actor.group.id, drive_id: drive.id })
+      .whereNull("archived_at")
       .whereIn("id", input.dropPointIds);
     if (points.length !== input.dropPointIds.length) {
       throw new AppError("invalid_input", "Some chosen drop points are not part of this drive.", {

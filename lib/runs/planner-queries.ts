@@ -11,6 +11,7 @@ export async function plannerDrives(groupId: string) {
   return db("drives")
     .select("id", "name", "slug", "starts_on as startsOn", "ends_on as endsOn")
     .where({ group_id: groupId })
+    .whereNull("archived_at")
     .orderBy([{ column: "ends_on", order: "desc" }, { column: "name" }]);
 }
 
@@ -21,11 +22,12 @@ export async function groupWorkshop(groupId: string): Promise<{ lat: number; lng
 
 /** The drive's active drop points, most in need of a visit first. */
 export async function suggestedStops(groupId: string, driveId: string, now = new Date()): Promise<PlannerPoint[]> {
-  const drive = await db("drives").select("id").where({ id: driveId, group_id: groupId }).first();
+  const drive = await db("drives").select("id").where({ id: driveId, group_id: groupId }).whereNull("archived_at").first();
   if (!drive) throw notFound("That drive");
   const points = await db("drop_points")
     .select("id", "name", "address", "lat", "lng", "hours", "capacity_bags as capacityBags", "opening_hours as openingHours")
     .where({ group_id: groupId, drive_id: driveId, active: true })
+    .whereNull("archived_at")
     .orderBy("name");
   const ids = points.map((p) => p.id as string);
   const [hauls, reports] = await Promise.all([recentHauls(groupId, ids), latestFillReports(groupId, ids)]);

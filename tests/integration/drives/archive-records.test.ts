@@ -67,6 +67,16 @@ describe("archiving and restoring a drop point", () => {
     // The public cannot pledge at an archived drop point (refused like any drop point not open).
     expect((await org.json("POST", `/api/public/drives/${g.driveSlug}/pledges`, { dropPointId: a, name: "", bags: 1, bringOn: "2026-12-20" })).status).toBe(422);
 
+    // Nor is it offered to a pickup run, or taken into one.
+    const suggested = await org.json<{ id: string }[]>("GET", `/api/runs/suggestions?driveId=${g.driveId}`);
+    expect(suggested.status).toBe(200);
+    expect(ids(suggested.body)).not.toContain(a);
+    expect(ids(suggested.body)).toContain(b);
+    const volunteerId = (await testDb()("users").where({ email: g.emails.volunteer }).first()).id;
+    const run = { driveId: g.driveId, plannedOn: "2026-12-20", start: { lat: 52, lng: -1.6 }, assigneeId: volunteerId };
+    expect((await org.json("POST", "/api/runs", { ...run, dropPointIds: [a] })).status).toBe(422);
+    expect((await org.json("POST", "/api/runs", { ...run, dropPointIds: [b] })).status).toBe(201);
+
     // State rules: archiving twice or restoring an active one is 409.
     expect((await post(org, `/api/drop-points/${a}/archive`)).status).toBe(409);
     expect((await post(org, `/api/drop-points/${b}/restore`)).status).toBe(409);
