@@ -1,6 +1,7 @@
 "use client";
 
 import { signOut } from "next-auth/react";
+import { forgetThisPhone } from "@/lib/offline/forget";
 import Link from "next/link";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
@@ -33,7 +34,7 @@ export function LeaveGroup({ groupName, onlyOrganiser }: { groupName: string; on
           <Button
             variant="danger"
             disabled={leave.isPending}
-            onClick={() => leave.mutate(undefined, { onSuccess: () => void signOut({ callbackUrl: "/signin" }) })}
+            onClick={() => leave.mutate(undefined, { onSuccess: () => void forgetThisPhone().then(() => signOut({ callbackUrl: "/signin" })) })}
           >
             {leave.isPending ? "Leaving…" : `Yes, leave ${groupName}`}
           </Button>

@@ -2,6 +2,7 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { signOut } from "next-auth/react";
+import { forgetThisPhone } from "@/lib/offline/forget";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
@@ -36,7 +37,7 @@ export function HandOver({ currentUserId }: { currentUserId: string }) {
       { userId: to, then },
       {
         onSuccess: () => {
-          if (then === "leave") void signOut({ callbackUrl: "/signin" });
+          if (then === "leave") void forgetThisPhone().then(() => signOut({ callbackUrl: "/signin" }));
           else router.push(ROLE_HOME[then]);
         },
         onSettled: () => setAsking(false),

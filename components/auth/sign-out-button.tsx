@@ -2,10 +2,11 @@
 
 import { signOut } from "next-auth/react";
 import { Button } from "@/components/ui/button";
+import { signOutClearing } from "@/lib/offline/forget";
 
 export function SignOutButton() {
   return (
-    <Button variant="quiet" className="min-h-9 px-2 py-1" onClick={() => signOut({ callbackUrl: "/signin" })}>
+    <Button variant="quiet" className="min-h-9 px-2 py-1" onClick={() => void signOutClearing(() => signOut({ callbackUrl: "/signin" }))}>
       Sign out
     </Button>
   );
