@@ -106,12 +106,12 @@ function Keeper({ personId, home, renderedAt, tileUrl }: Omit<Props, "children">
   return (
     <>
       {online ? null : (
-        <p role="status" data-testid="offline-notice" className="sticky top-0 z-40 bg-ink px-4 py-2 text-center font-semibold text-paper">
+        <p role="status" data-testid="offline-notice" className="bg-ink px-4 py-2 text-center font-semibold text-paper">
           Offline — last updated {sameDay ? f.time(renderedAt) : f.moment(renderedAt)}. Entries are kept on this phone.
         </p>
       )}
       {updateReady ? (
-        <div role="alert" data-testid="update-prompt" className="sticky top-0 z-50 flex flex-wrap items-center justify-center gap-3 bg-ember px-4 py-2 text-white">
+        <div role="alert" data-testid="update-prompt" className="flex flex-wrap items-center justify-center gap-3 bg-ember px-4 py-2 text-white">
           <span className="font-semibold">New version of Cantrove — reload to use it.</span>
           <Button
             type="button"

@@ -1,9 +1,11 @@
 import { mkdtempSync, rmSync } from "node:fs";
+import http from "node:http";
+import type { AddressInfo } from "node:net";
 import os from "node:os";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
-import { CHROMIUM_FLAGS, PHONE, browserForFile, newPage, signInAs, signedInPage } from "@/tests/support/browser";
+import { CHROMIUM_FLAGS, PHONE, browserForFile, newPage, signInAs } from "@/tests/support/browser";
 import { APP_URL } from "@/tests/support/env";
 import { testDb } from "@/tests/support/db";
 import { freshGroup, type FreshGroup } from "@/tests/support/ledger";
@@ -81,7 +83,7 @@ describe("offline from a cold start", () => {
     // The drive's drop points are there to choose from.
     const options = await page.getByLabel("Drop point").locator("option").allInnerTexts();
     expect(options.join("|")).toContain("North porch");
-    await page.screenshot({ path: `${SHOTS}/offline-log-390.png`, fullPage: true });
+    await page.screenshot({ path: `${SHOTS}/offline-log-phone.png`, fullPage: true });
 
     await page.goto(`/runs/${runId}`);
     const stop = page.getByRole("listitem", { name: /^Stop \d+: North porch$/ });
@@ -133,7 +135,7 @@ describe("entries made with no connection", () => {
     await page.getByLabel("Good cans", { exact: true }).fill("40");
     await page.getByRole("button", { name: "Record sort" }).click();
     await expect.poll(() => page.getByTestId("waiting-entry").count()).toBe(2);
-    await page.screenshot({ path: `${SHOTS}/offline-waiting-390.png`, fullPage: true });
+    await page.screenshot({ path: `${SHOTS}/offline-waiting-phone.png`, fullPage: true });
 
     await page.goto(`/runs/${runId}`);
     const stop = page.getByRole("listitem", { name: /^Stop \d+: South gate$/ });
@@ -142,7 +144,7 @@ describe("entries made with no connection", () => {
     await stop.getByRole("button", { name: "Save the haul" }).click();
     await stop.getByTestId("waiting-entry").waitFor();
     expect(await stop.getByTestId("waiting-entry").innerText()).toMatch(/Waiting to be sent: Haul at South gate: 2 bags/);
-    await page.screenshot({ path: `${SHOTS}/offline-run-waiting-390.png`, fullPage: true });
+    await page.screenshot({ path: `${SHOTS}/offline-run-waiting-phone.png`, fullPage: true });
     const enteredTo = new Date();
     // Closed with three entries waiting.
     await page.close();
@@ -220,47 +222,66 @@ describe("a shared phone", () => {
 
 describe("a new version", () => {
   it("deployed while the app is open, offers \"New version — reload\" and reloads into it", async () => {
+    // A deploy is simulated by a small proxy in front of the app that, once switched, answers
+    // /serwist/sw.js with the served file plus one line, as the server does after any deploy that
+    // changes the app. (The browser's worker-script update fetch cannot be intercepted by
+    // Playwright's route or Chromium's Fetch domain, and Next keeps the built file in memory.)
     const { g } = await setUp();
-    const { context, page } = await signedInPage(browser(), g.emails.volunteer, PHONE);
-    await page.waitForFunction(() => navigator.serviceWorker.controller !== null, undefined, { timeout: 30_000 });
-    const firstScript = await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())!.active!.scriptURL);
-    expect(await page.getByTestId("update-prompt").count()).toBe(0);
-    // A new build is simulated: from now on the server's worker script arrives changed (the
-    // served file plus one line), as it does after any deploy that changes the app. The change is
-    // made in the browser's network layer (Chromium's Fetch domain on the browser target, which
-    // sees the worker script's update fetch; Playwright's route does not).
-    const cdp = await browser().newBrowserCDPSession();
-    let served = 0;
-    cdp.on("Fetch.requestPaused", (e: { requestId: string; responseStatusCode?: number; responseHeaders?: Array<{ name: string; value: string }> }) => {
-      void (async () => {
-        const res = (await cdp.send("Fetch.getResponseBody", { requestId: e.requestId })) as { body: string; base64Encoded: boolean };
-        const text = res.base64Encoded ? Buffer.from(res.body, "base64").toString("utf8") : res.body;
-        served += 1;
-        const body = Buffer.from(`${text}\n// next build ${served}\n`).toString("base64");
-        await cdp.send("Fetch.fulfillRequest", { requestId: e.requestId, responseCode: e.responseStatusCode ?? 200, responseHeaders: e.responseHeaders, body });
-      })();
+    const app = new URL(APP_URL);
+    let deployed = 0;
+    let servedNew = 0;
+    const proxy = http.createServer((req, res) => {
+      const headers = { ...req.headers };
+      if (req.url?.startsWith("/serwist/sw.js")) delete headers["accept-encoding"]; // a plain body, to add a line to
+      const up = http.request({ host: app.hostname, port: app.port, path: req.url, method: req.method, headers }, (answer) => {
+        if (deployed > 0 && req.url?.startsWith("/serwist/sw.js") && answer.statusCode === 200) {
+          const parts: Buffer[] = [];
+          answer.on("data", (c: Buffer) => parts.push(c));
+          answer.on("end", () => {
+            servedNew += 1;
+            const body = Buffer.concat([...parts, Buffer.from(`\n// deploy ${deployed}\n`)]);
+            res.writeHead(200, { ...answer.headers, "content-length": String(body.length) });
+            res.end(body);
+          });
+          return;
+        }
+        res.writeHead(answer.statusCode ?? 502, answer.headers);
+        answer.pipe(res);
+      });
+      up.on("error", () => res.destroy());
+      req.pipe(up);
     });
-    await cdp.send("Fetch.enable", { patterns: [{ urlPattern: "*/serwist/sw.js", requestStage: "Response" }] });
-    // The browser's own update check (made on every visit and every 30 minutes by the app), made now.
-    await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())!.update());
-    const prompt = page.getByTestId("update-prompt");
-    await prompt.waitFor({ timeout: 30_000 });
-    expect(await prompt.innerText()).toMatch(/New version of Cantrove — reload/);
-    await page.screenshot({ path: `${SHOTS}/update-prompt-390.png` });
-    const reloaded = page.waitForEvent("load");
-    await prompt.getByRole("button", { name: "Reload" }).click();
-    await reloaded;
-    await page.getByRole("heading", { name: /Hello/ }).waitFor();
-    expect(await page.getByTestId("update-prompt").count()).toBe(0);
-    const after = await page.evaluate(async () => {
-      const reg = (await navigator.serviceWorker.getRegistration())!;
-      return { waiting: reg.waiting !== null, active: reg.active!.scriptURL };
-    });
-    expect(after).toEqual({ waiting: false, active: firstScript });
-    expect(served).toBeGreaterThan(0);
-    await cdp.send("Fetch.disable");
-    await cdp.detach();
-    await context.close();
+    await new Promise<void>((resolve) => proxy.listen(0, "127.0.0.1", resolve));
+    const origin = `http://127.0.0.1:${(proxy.address() as AddressInfo).port}`;
+    const { context, page } = await newPage(browser(), { ...PHONE, baseURL: origin });
+    try {
+      // Signed in through the API (cookies are per host, not per port), then the app opened through the proxy.
+      const vol = await g.client("volunteer");
+      await context.addCookies(vol.cookie().split("; ").map((pair) => {
+        const eq = pair.indexOf("=");
+        return { name: pair.slice(0, eq), value: pair.slice(eq + 1), domain: "127.0.0.1", path: "/" };
+      }));
+      await page.goto("/log");
+      await page.waitForFunction(() => navigator.serviceWorker.controller !== null, undefined, { timeout: 30_000 });
+      expect(await page.getByTestId("update-prompt").count()).toBe(0);
+      deployed = 1;
+      // The browser's own update check (made on every visit and every 30 minutes by the app), made now.
+      await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())!.update());
+      const prompt = page.getByTestId("update-prompt");
+      await prompt.waitFor({ timeout: 30_000 });
+      expect(servedNew).toBeGreaterThan(0);
+      expect(await prompt.innerText()).toMatch(/New version of Cantrove — reload/);
+      await page.screenshot({ path: `${SHOTS}/update-prompt-phone.png` });
+      const reloaded = page.waitForEvent("load");
+      await prompt.getByRole("button", { name: "Reload" }).click();
+      await reloaded;
+      await page.getByRole("heading", { name: /Hello/ }).waitFor();
+      expect(await page.getByTestId("update-prompt").count()).toBe(0);
+      expect(await page.evaluate(async () => (await navigator.serviceWorker.getRegistration())!.waiting === null)).toBe(true);
+    } finally {
+      await context.close();
+      await new Promise((resolve) => proxy.close(resolve));
+    }
   });
 });
 
@@ -285,13 +306,9 @@ describe("installable", () => {
       await expect
         .poll(async () => ((await cdp.send("Page.getInstallabilityErrors")) as { installabilityErrors: Array<{ errorId: string }> }).installabilityErrors.map((e) => e.errorId), { timeout: 15_000 })
         .toEqual([]);
-      // The start URL opens with no connection (the worker answers it).
-      await context.setOffline(true);
+      // The start URL leads a signed-in person to their own home page (the cold start offline is tested above).
       await page.goto("/home");
       await page.waitForURL(/\/log$/);
-      await page.getByTestId("offline-notice").waitFor();
-      // The public pages never register the worker: their JavaScript stays as it was.
-      await context.setOffline(false);
     } finally {
       await context.close();
       rmSync(dir, { recursive: true, force: true });

@@ -39,11 +39,14 @@ mockApi([
 });
 const wrapper = (person = "u1") => {
   const Query = testQueryClient().wrapper;
-  return ({ children }: { children: ReactNode }) => (
-    <Query>
-      <PersonProvider value={person}>{children}</PersonProvider>
-    </Query>
-  );
+  function SignedIn({ children }: { children: ReactNode }) {
+    return (
+      <Query>
+        <PersonProvider value={person}>{children}</PersonProvider>
+      </Query>
+    );
+  }
+  return SignedIn;
 };
 
 beforeEach(async () => {
