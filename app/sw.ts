@@ -192,6 +192,10 @@ const serwist = new Serwist({
   skipWaiting: false,
   clientsClaim: true,
   navigationPreload: false,
+  // Writes go straight to the network, never through this worker (the Service Worker static
+  // routing API, where the browser has it): nothing here handles them, and the page's own queue
+  // (lib/offline/send.ts) decides what waits.
+  requestRules: [{ condition: { requestMethod: "POST" }, source: "network" }],
   runtimeCaching: [
     { matcher: ({ request, sameOrigin }) => sameOrigin && request.mode === "navigate", handler: navigation },
     {

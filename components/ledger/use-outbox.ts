@@ -28,7 +28,9 @@ const RETRY_MS = 4_000;
 /** Asks the browser to send the queue when the signal returns, even with the page closed (Background Sync, where there is one). */
 async function askForSync(): Promise<void> {
   try {
-    if (!("serviceWorker" in navigator)) return;
+    // Only with no signal: while online the page itself retries every few seconds (a failed try
+    // then is the server's trouble, not the phone's), and the next visit sends what is left.
+    if (!("serviceWorker" in navigator) || navigator.onLine) return;
     const reg = (await Promise.race([navigator.serviceWorker.ready, new Promise((r) => setTimeout(r, 500))])) as ServiceWorkerRegistration | undefined;
     const sync = (reg as (ServiceWorkerRegistration & { sync?: { register(tag: string): Promise<void> } }) | undefined)?.sync;
     await sync?.register(SYNC_TAG);

@@ -71,14 +71,16 @@ function Keeper({ personId, home, renderedAt, tileUrl }: Omit<Props, "children">
     if (!serwist || !("serviceWorker" in navigator)) return;
     const waiting = () => setUpdateReady(true);
     serwist.addEventListener("waiting", waiting);
-    // The first time a worker takes this page, what the page read before it did is read again through it, so it is kept.
+    // The first time a worker takes this page (clientsClaim, moments after it installs), what the
+    // page read before then is read again through it, so those answers are kept too.
     const hadController = navigator.serviceWorker.controller !== null;
-    const taken = () => {
-      if (!hadController) void client.refetchQueries({ type: "active" });
-    };
-    navigator.serviceWorker.addEventListener("controllerchange", taken, { once: true });
-    // The first worker takes the page at once (clientsClaim); tell it who this is.
-    void hello(personId, home, tileUrl).catch(() => undefined);
+    void hello(personId, home, tileUrl)
+      .then(async () => {
+        if (hadController) return;
+        for (let i = 0; i < 50 && !navigator.serviceWorker.controller; i++) await new Promise((r) => setTimeout(r, 100));
+        if (navigator.serviceWorker.controller) await client.refetchQueries({ type: "active" });
+      })
+      .catch(() => undefined);
     const check = () => {
       if (navigator.onLine) void serwist.update().catch(() => undefined);
     };
@@ -90,7 +92,6 @@ function Keeper({ personId, home, renderedAt, tileUrl }: Omit<Props, "children">
     });
     return () => {
       serwist.removeEventListener("waiting", waiting);
-      navigator.serviceWorker.removeEventListener("controllerchange", taken);
       clearInterval(timer);
       window.removeEventListener("online", check);
     };

@@ -80,6 +80,9 @@ describe("offline from a cold start", () => {
     expect(await renderedAt(page)).toBe(keptAt);
     await page.getByTestId("offline-notice").waitFor();
     expect(await page.getByTestId("offline-notice").innerText()).toMatch(/^Offline — last updated \d{1,2}:\d{2}/);
+    // What the page read online (the drive's stock) is there too.
+    await page.locator('[data-stage="hauled"]').waitFor();
+    expect(await page.getByText(/Could not load the stock/).count()).toBe(0);
     // The drive's drop points are there to choose from.
     const options = await page.getByLabel("Drop point").locator("option").allInnerTexts();
     expect(options.join("|")).toContain("North porch");
