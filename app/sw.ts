@@ -11,8 +11,7 @@
 //   cached: they always come from the network, so tallies are live.
 // - GET /api answers: network first, kept in the signed-in person's cache.
 // - Map tiles: cache first, in the person's tile cache, OFFLINE_TILE_BUDGET at most.
-// - A person seen on a page who is not the one remembered (someone else signed
-//   in on this phone) makes every other person's caches go at once.
+// - Someone else seen signed in on this phone: every other person's caches go at once.
 // - Waiting entries (lib/offline/store.ts) are sent on Background Sync.
 
 import { CacheFirst, ExpirationPlugin, NetworkFirst, Serwist, type PrecacheEntry, type RouteHandlerCallbackOptions, type SerwistGlobalConfig } from "serwist";
@@ -209,7 +208,8 @@ const serwist = new Serwist({
 
 self.addEventListener("message", (event) => {
   const data = event.data as { type?: string; person?: Person; tileUrl?: string; force?: boolean } | null;
-  if (data?.type === "CANTROVE_PERSON" && data.person && typeof data.person.id === "string") {
+  // The same shapes the signed-in marker allows (lib/offline/marker.ts): an id for a cache name, a home path on this site.
+  if (data?.type === "CANTROVE_PERSON" && data.person && /^[0-9a-f-]{36}$/.test(String(data.person.id)) && /^\/[a-z]+$/.test(String(data.person.home))) {
     const person = { id: data.person.id, home: data.person.home };
     event.waitUntil(
       becomes(person)
