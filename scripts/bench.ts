@@ -14,9 +14,16 @@ import { checkTargets, printTable } from "./bench/report";
 import { signIn } from "./bench/session";
 import { DEMO_PASSWORD } from "../db/seeds/data/scenario";
 import { serverCommand, stopServer } from "./lib/serve";
+import { generateOtherGroups, type OtherGroups } from "./bench/groups";
+import { compare, printComparison, startAppServer, startBalancer, type Comparison } from "./bench/compare";
+import { ensureClusterTools } from "./lib/cluster";
 
 // `npm run bench`: a throwaway PostgreSQL with a big group, the production
-// build against it, autocannon over loopback, chromium for the page.
+// build against it, autocannon over loopback, chromium for the page; then
+// 1 vs 2 app servers behind HAProxy (BENCH_SERVERS=1 skips it) and, with
+// `npm run bench -- --groups` (or BENCH_GROUPS=1000), 1 vs 1,000 groups: a copy
+// of the database with 999 more groups (10 million ledger lines in all),
+// measured side by side with the one-group database (scripts/bench/compare.ts).
 const root = path.resolve(import.meta.dirname, "..");
 const env = process.env;
 const num = (k: string, d: number) => Number(env[k] ?? d);
@@ -27,6 +34,12 @@ const opts = {
   warmup: num("BENCH_WARMUP_SECONDS", 2),
   connections: num("BENCH_CONNECTIONS", 16),
   keep: env.BENCH_KEEP === "1",
+  groups: process.argv.includes("--groups") ? 1_000 : num("BENCH_GROUPS", 1),
+  /** Ledger lines in all when there are many groups: the busy group's `lines`, the rest shared by the others. */
+  totalLines: num("BENCH_TOTAL_LINES", 10_000_000),
+  servers: num("BENCH_SERVERS", 2),
+  compareRounds: num("BENCH_COMPARE_ROUNDS", 6),
+  compareSeconds: num("BENCH_COMPARE_SECONDS", 3),
 };
 const ports = { app: num("BENCH_PORT", 4106), pg: num("BENCH_PGPORT", 25506), smtp: num("BENCH_SMTP_PORT", 2706), mailApi: num("BENCH_MAIL_API_PORT", 8206), upload: num("BENCH_UPLOAD_PORT", 8256) };
 const dir = path.join(root, ".bench");
@@ -34,6 +47,7 @@ const log = (s: string) => console.log(`[bench] ${s}`);
 
 let stack: Stack | null = null;
 let server: ChildProcess | null = null;
+const extra: ChildProcess[] = [];
 
 async function main() {
   const started = Date.now();
@@ -43,7 +57,7 @@ async function main() {
     root, stateDir: path.join(dir, "state"), pgDataDir: path.join(dir, "pgdata"), pgPort: ports.pg, databaseName: "cantrove_bench",
     smtpPort: ports.smtp, mailApiPort: ports.mailApi, uploadPort: ports.upload, appPort: ports.app, seed: "demo", log,
   });
-  const db = knex(knexConfig(stack.env.DATABASE_URL));
+  let db = knex(knexConfig(stack.env.DATABASE_URL));
   let t = Date.now();
   log(`Generating ${opts.lines.toLocaleString("en")} ledger lines and ${opts.hauls} hauls…`);
   const data = await generateDataset(db, { lines: opts.lines, hauls: opts.hauls, drives: 3, pointsPerDrive: 20 });
@@ -51,6 +65,36 @@ async function main() {
   log(`Dataset ready: ${data.lines.toLocaleString("en")} lines in ${datasetSeconds.toFixed(1)} s.`);
   const before = await balanceErrors(db, data.driveIds);
   if (before.length) throw new Error(`Generated totals disagree with the ledger: ${JSON.stringify(before.slice(0, 3))}`);
+
+  // Many groups: the one-group database copied (CREATE DATABASE … TEMPLATE), then 999 more groups written into the copy.
+  let many: (OtherGroups & { databaseUrl: string; totalLines: number; generatedSeconds: number; databaseBytes: number }) | null = null;
+  if (opts.groups > 1) {
+    await db.destroy(); // a template must have no other session
+    const manyName = "cantrove_bench_many";
+    const admin = knex(knexConfig(stack.cluster!.url("postgres")));
+    const exists = (await admin.raw("select 1 from pg_database where datname = ?", [manyName])).rows.length > 0;
+    if (!exists) await admin.raw(`create database ${manyName} template cantrove_bench`);
+    await admin.destroy();
+    db = knex(knexConfig(stack.env.DATABASE_URL));
+    const databaseUrl = stack.cluster!.url(manyName);
+    const mdb = knex(knexConfig(databaseUrl));
+    // The bench's own throwaway cluster: fewer checkpoints (and full-page images after each) while nine million rows go in.
+    for (const setting of ["max_wal_size = '4GB'", "wal_compression = on"]) await db.raw(`alter system set ${setting}`);
+    await db.raw("select pg_reload_conf()");
+    const others = opts.groups - 1;
+    const linesPerGroup = Math.ceil(Math.max(0, opts.totalLines - data.lines) / others);
+    t = Date.now();
+    log(`Writing ${others} more groups (${linesPerGroup.toLocaleString("en")} ledger lines each) into a copy of the database…`);
+    const g = await generateOtherGroups(mdb, { groups: others, linesPerGroup, hauls: 30, pointsPerDrive: 5, log });
+    const generatedSeconds = (Date.now() - t) / 1000;
+    const total = await mdb.raw("select count(*)::bigint as n, pg_database_size(current_database()) as bytes from ledger_lines");
+    const otherIds = (await mdb("drives").where("slug", "like", "bench-group-%").select("id")).map((r) => r.id);
+    const wrong = await balanceErrors(mdb, [...data.driveIds, ...otherIds]);
+    await mdb.destroy();
+    if (wrong.length) throw new Error(`Generated totals of the many-group database disagree with the ledger: ${JSON.stringify(wrong.slice(0, 3))}`);
+    many = { ...g, databaseUrl, totalLines: Number(total.rows[0].n), databaseBytes: Number(total.rows[0].bytes), generatedSeconds };
+    log(`${opts.groups} groups: ${many.totalLines.toLocaleString("en")} ledger lines in all, database ${(many.databaseBytes / 2 ** 30).toFixed(1)} GiB, written in ${generatedSeconds.toFixed(0)} s.`);
+  }
 
   const serverEnv = { ...process.env, ...stack.env, NODE_ENV: "production" as const, CANTROVE_BENCH: "1" };
   t = Date.now();
@@ -99,11 +143,69 @@ async function main() {
 
   const report = checkTargets(results, page, { balanceErrors: after });
   printTable(results, report);
+
+  // The endpoints compared side by side: what a crowd on a shared drive and its organiser hit.
+  const sideTargets = (cookie: string): LoadTarget[] => [
+    { name: "floor: GET /api/health (select 1)", method: "GET", path: "/api/health" },
+    { name: "GET public drive (progress)", method: "GET", path: `/api/public/drives/${slug}` },
+    { name: "GET public drive page (HTML)", method: "GET", path: `/drives/${slug}` },
+    { name: "GET public drop-points + tallies", method: "GET", path: `/api/public/drives/${slug}/drop-points` },
+    { name: "GET stock (signed in)", method: "GET", path: `/api/drives/${driveId}/stock`, headers: { cookie } },
+    { name: "GET ledger list, first page", method: "GET", path: `/api/ledger?driveId=${driveId}`, headers: { cookie } },
+  ];
+  const cmp = { rounds: opts.compareRounds, seconds: opts.compareSeconds, warmup: 1, connections: opts.connections, log };
+  let servers: Comparison | null = null;
+  if (opts.servers >= 2) {
+    ensureClusterTools(log);
+    log("1 vs 2 app servers: a second server on the same database, HAProxy in front of one and of both…");
+    extra.push(await startAppServer(root, ports.app + 1, serverEnv, log));
+    const lb = { one: ports.app + 2, two: ports.app + 3 };
+    extra.push(startBalancer(dir, { ...lb, apps: [ports.app, ports.app + 1] }, log));
+    await waitForHealthy(`http://127.0.0.1:${lb.one}/api/health`, 15_000);
+    await waitForHealthy(`http://127.0.0.1:${lb.two}/api/health`, 15_000);
+    servers = await compare(
+      { label: "1 server", base: `http://127.0.0.1:${lb.one}`, targets: sideTargets(cookie) },
+      { label: "2 servers", base: `http://127.0.0.1:${lb.two}`, targets: sideTargets(cookie) },
+      cmp,
+    );
+    while (extra.length) await stopServer(extra.pop()!, 5_000, true);
+  }
+  let groups: Comparison | null = null;
+  if (many) {
+    // No read cache on either side (READ_CACHE_MS=0): every request reaches PostgreSQL, so the comparison is of the queries, not of the cache.
+    log(`1 vs ${opts.groups} groups: two servers without read cache, one on each database…`);
+    await stopServer(server);
+    server = null;
+    const noCache = { ...serverEnv, READ_CACHE_MS: "0" };
+    extra.push(await startAppServer(root, ports.app + 1, noCache, log));
+    extra.push(await startAppServer(root, ports.app + 4, { ...noCache, DATABASE_URL: many.databaseUrl }, log));
+    const [oneBase, manyBase] = [`http://127.0.0.1:${ports.app + 1}`, `http://127.0.0.1:${ports.app + 4}`];
+    const [oneCookie, manyCookie] = [await signIn(oneBase, "organiser@cantrove.test", DEMO_PASSWORD), await signIn(manyBase, "organiser@cantrove.test", DEMO_PASSWORD)];
+    groups = await compare(
+      { label: "1 group", base: oneBase, targets: sideTargets(oneCookie) },
+      { label: `${opts.groups} groups`, base: manyBase, targets: sideTargets(manyCookie) },
+      cmp,
+    );
+    while (extra.length) await stopServer(extra.pop()!, 5_000, true);
+  }
+  if (servers) printComparison(servers);
+  if (groups) printComparison(groups);
+  const ratioOf = (c: Comparison, name: string) => c.endpoints.find((e) => e.name === name)!;
+  if (groups) {
+    for (const name of ["GET public drive (progress)", "GET public drive page (HTML)", "GET stock (signed in)"]) {
+      const e = ratioOf(groups, name);
+      report.targets.push({ name: `${name}: ${opts.groups} groups vs 1`, limit: ">= 0.9", measured: `${e.ratio} (÷ floor ${e.ratioVsFloor})`, met: e.ratio >= 0.9 && e.b.non2xx === 0 });
+    }
+  }
+    for (const t of report.targets.slice(-3)) console.log(`${t.met ? "MET    " : "NOT MET"}  ${t.name}: ${t.measured} (target ${t.limit})`);
+    console.log("");
   const out = {
     when: new Date().toISOString(),
     machine: { cpus: os.cpus().length, loadAverage: os.loadavg().map((x) => Math.round(x * 10) / 10), cpuModel: os.cpus()[0]?.model, memoryGb: Math.round(os.totalmem() / 2 ** 30), node: process.version },
     settings: { ...opts, keep: undefined, dbPoolMax: Number(env.DB_POOL_MAX ?? 10) },
     dataset: { ...data, hauls: opts.hauls, drives: 3, dropPoints: 60, generatedSeconds: datasetSeconds },
+    manyGroups: many && { groups: opts.groups, ledgerLines: many.totalLines, otherGroupsLines: many.lines, databaseGiB: Math.round((many.databaseBytes / 2 ** 30) * 10) / 10, generatedSeconds: many.generatedSeconds },
+    comparisons: { servers, groups },
     buildSeconds,
     endpoints: results.map((r) => ({ ...r, ...report.ratios[r.name] })),
     writes: { processingLinesWritten: Number(processed?.n ?? 0), balanceErrors: after },
@@ -119,6 +221,7 @@ async function main() {
 }
 
 async function cleanup() {
+  for (const child of extra) await stopServer(child, 5_000, true);
   await stopServer(server);
   await stack?.stop().catch((e) => console.error("stop failed:", e));
   if (!opts.keep) rmSync(dir, { recursive: true, force: true });

@@ -2,7 +2,7 @@ import { spawn, type ChildProcess } from "node:child_process";
 import path from "node:path";
 import { startStack, type Stack } from "./lib/stack";
 import { buildIfStale } from "./lib/build";
-import { waitForHealthy } from "./lib/wait";
+import { assertPortsFree, waitForHealthy } from "./lib/wait";
 import { DEMO_PASSWORD, DEMO_PEOPLE } from "../db/seeds/data/scenario";
 import { serverCommand, stopServer } from "./lib/serve";
 
@@ -36,6 +36,7 @@ process.on("SIGTERM", () => void shutdown(0));
 
 async function main() {
   const started = Date.now();
+  await assertPortsFree({ app: port, smtp: num("SMTP_PORT", 2525), mailApi: num("MAIL_API_PORT", 8025), upload: num("UPLOAD_PORT", 8026) }, "choose others with PORT, SMTP_PORT, MAIL_API_PORT and UPLOAD_PORT");
   stack = await startStack({
     root,
     // Overridable so the tests can run a second, separate `npm start`.

@@ -4,7 +4,7 @@ import os from "node:os";
 import path from "node:path";
 import { startStack, type Stack } from "./lib/stack";
 import { buildIfStale } from "./lib/build";
-import { waitForHealthy } from "./lib/wait";
+import { assertPortsFree, waitForHealthy } from "./lib/wait";
 import { serverCommand, stopServer } from "./lib/serve";
 
 // `npm test`: a throwaway PostgreSQL and fakes on their own ports, the built
@@ -42,6 +42,7 @@ function summary(): { passed: number; failed: number } {
 
 async function main(): Promise<number> {
   const started = Date.now();
+  await assertPortsFree(ports, "move every port with CANTROVE_TEST_PORT_BASE");
   stack = await startStack({
     root,
     stateDir: path.join(runDir, "state"),

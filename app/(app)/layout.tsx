@@ -1,5 +1,4 @@
 import { redirect } from "next/navigation";
-import { SessionBoundary } from "@/components/auth/session-boundary";
 import { AppHeader } from "@/components/layout/app-header";
 import { DatabaseDown } from "@/components/system/database-down";
 import { getActor } from "@/lib/auth/session";
@@ -29,17 +28,15 @@ export default async function AppLayout({ children }: { children: React.ReactNod
   const look = await groupLook(actor.group.id);
   const renderedAt = new Date().toISOString();
   return (
-    <SessionBoundary>
-      <LookProvider look={look}>
-        {/* Whose page this is and when it was made: the service worker keeps it in this person's own offline cache (app/sw.ts). */}
-        <div hidden {...markerAttributes({ id: actor.user.id, home: ROLE_HOME[actor.role], renderedAt })} />
-        <OfflineKeeper personId={actor.user.id} home={ROLE_HOME[actor.role]} renderedAt={renderedAt} tileUrl={env().TILE_URL}>
-          <AppHeader groupName={actor.group.name} role={actor.role} userName={actor.user.name} />
-          <div id="main" className="mx-auto max-w-5xl px-4 py-6">
-            {children}
-          </div>
-        </OfflineKeeper>
-      </LookProvider>
-    </SessionBoundary>
+    <LookProvider look={look}>
+      {/* Whose page this is and when it was made: the service worker keeps it in this person's own offline cache (app/sw.ts). */}
+      <div hidden {...markerAttributes({ id: actor.user.id, home: ROLE_HOME[actor.role], renderedAt })} />
+      <OfflineKeeper personId={actor.user.id} home={ROLE_HOME[actor.role]} renderedAt={renderedAt} tileUrl={env().TILE_URL}>
+        <AppHeader groupName={actor.group.name} role={actor.role} userName={actor.user.name} />
+        <div id="main" className="mx-auto max-w-5xl px-4 py-6">
+          {children}
+        </div>
+      </OfflineKeeper>
+    </LookProvider>
   );
 }

@@ -18,6 +18,21 @@ type Listed = Awaited<ReturnType<typeof listPublicDrivesWithDay>>[number];
 // Lists live drives: never prerendered at build time.
 export const dynamic = "force-dynamic";
 
+/** How many coming-up and ended drives the page lists before a "more" link (drives collecting now are all listed). */
+const SHOWN = 5;
+
+/** A capped list's link to the rest: the same page with that list in full (a plain link, no script). */
+function MoreLink({ list, hidden, anchor }: { list: "upcoming" | "ended"; hidden: number; anchor: string }) {
+  if (hidden <= 0) return null;
+  return (
+    <p className="mt-2">
+      <Link href={`/?all=${list}#${anchor}`} className="tap">
+        {hidden === 1 ? "1 more drive" : `${hidden} more drives`}
+      </Link>
+    </p>
+  );
+}
+
 /** One drive per row; the whole row is the link, at least 44 px tall (WCAG 2.5.5). */
 function DriveRows({ drives, note, hash = "" }: { drives: Listed[]; note: (d: Listed) => string; hash?: string }) {
   return (
@@ -39,7 +54,8 @@ function DriveRows({ drives, note, hash = "" }: { drives: Listed[]; note: (d: Li
   );
 }
 
-export default async function LandingPage() {
+export default async function LandingPage({ searchParams }: { searchParams: Promise<{ all?: string }> }) {
+  const all = (await searchParams).all;
   let drives: Listed[];
   try {
     drives = await listPublicDrivesWithDay();
@@ -96,14 +112,20 @@ export default async function LandingPage() {
       </section>
 
       {upcoming.length ? (
-        <Card title="Coming up" className="mt-10">
-          <DriveRows drives={upcoming} note={(d) => `starts ${longDay(d.startsOn)}`} />
-        </Card>
+        <div id="coming-up">
+          <Card title="Coming up" className="mt-10">
+            <DriveRows drives={all === "upcoming" ? upcoming : upcoming.slice(0, SHOWN)} note={(d) => `starts ${longDay(d.startsOn)}`} />
+            <MoreLink list="upcoming" anchor="coming-up" hidden={all === "upcoming" ? 0 : upcoming.length - SHOWN} />
+          </Card>
+        </div>
       ) : null}
       {ended.length ? (
-        <Card title="Ended" className="mt-6">
-          <DriveRows drives={ended} note={(d) => spanText(d)} />
-        </Card>
+        <div id="ended">
+          <Card title="Ended" className="mt-6">
+            <DriveRows drives={all === "ended" ? ended : ended.slice(0, SHOWN)} note={(d) => spanText(d)} />
+            <MoreLink list="ended" anchor="ended" hidden={all === "ended" ? 0 : ended.length - SHOWN} />
+          </Card>
+        </div>
       ) : null}
     </main>
   );

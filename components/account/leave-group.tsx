@@ -1,9 +1,9 @@
 "use client";
 
-import { signOut } from "next-auth/react";
 import { forgetThisPhone } from "@/lib/offline/forget";
 import Link from "next/link";
 import { useState } from "react";
+import { signOutTo } from "@/components/auth/session-client";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/ui/field";
 import { useLeaveGroup } from "@/hooks/queries/members";
@@ -34,7 +34,7 @@ export function LeaveGroup({ groupName, onlyOrganiser }: { groupName: string; on
           <Button
             variant="danger"
             disabled={leave.isPending}
-            onClick={() => leave.mutate(undefined, { onSuccess: () => void forgetThisPhone().then(() => signOut({ callbackUrl: "/signin" })) })}
+            onClick={() => leave.mutate(undefined, { onSuccess: () => void forgetThisPhone().then(() => signOutTo("/signin")) })}
           >
             {leave.isPending ? "Leaving…" : `Yes, leave ${groupName}`}
           </Button>

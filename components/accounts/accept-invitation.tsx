@@ -1,7 +1,6 @@
 "use client";
 
-import { useSession } from "next-auth/react";
-import { SessionBoundary } from "@/components/auth/session-boundary";
+import { updateSession } from "@/components/auth/session-client";
 import { useRouter } from "next/navigation";
 import { useActionState, useState } from "react";
 import { Button } from "@/components/ui/button";
@@ -37,17 +36,8 @@ export function AcceptAsNewPerson({ token, email }: { token: string; email: stri
 }
 
 /** Someone already signed in as the invited address: one click adds the group and switches to it. */
-export function AcceptAsMember(props: { token: string; groupName: string }) {
-  return (
-    <SessionBoundary>
-      <AcceptAsMemberForm {...props} />
-    </SessionBoundary>
-  );
-}
-
-function AcceptAsMemberForm({ token, groupName }: { token: string; groupName: string }) {
+export function AcceptAsMember({ token, groupName }: { token: string; groupName: string }) {
   const router = useRouter();
-  const { update } = useSession();
   const form = useFormFields();
   const [pending, setPending] = useState(false);
 
@@ -55,7 +45,7 @@ function AcceptAsMemberForm({ token, groupName }: { token: string; groupName: st
     setPending(true);
     try {
       const result = await fetchJson<Accepted>("/api/invitations/accept", { method: "POST", body: { token } });
-      await update({ groupId: result.group.id });
+      await updateSession({ groupId: result.group.id });
       router.push(ROLE_HOME[result.role]);
       router.refresh();
     } catch (error) {

@@ -2,16 +2,15 @@
 
 import { SelectBox } from "@/components/ui/field";
 import { useQuery } from "@tanstack/react-query";
-import { useSession } from "next-auth/react";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { updateSession } from "@/components/auth/session-client";
 import { ROLE_HOME, ROLE_LABEL } from "@/lib/auth/roles";
 import { memberQueries, useGroupSwitched } from "@/hooks/queries/members";
 
 /** Shown only to people in more than one group; switching lands on that group's home for their role there. */
 export function GroupSwitcher() {
   const { data } = useQuery(memberQueries.myGroups());
-  const { update } = useSession();
   const router = useRouter();
   const refreshAll = useGroupSwitched();
   const [pending, setPending] = useState(false);
@@ -22,7 +21,7 @@ export function GroupSwitcher() {
     const target = data!.find((g) => g.id === groupId);
     if (!target) return;
     setPending(true);
-    await update({ groupId });
+    await updateSession({ groupId });
     await refreshAll();
     router.push(ROLE_HOME[target.role]);
     router.refresh();

@@ -1,10 +1,10 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
-import { signOut } from "next-auth/react";
 import { forgetThisPhone } from "@/lib/offline/forget";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { signOutTo } from "@/components/auth/session-client";
 import { Button } from "@/components/ui/button";
 import { FormError, RadioGroup, SelectField } from "@/components/ui/field";
 import { ROLE_HOME, ROLE_LABEL } from "@/lib/auth/roles";
@@ -37,7 +37,7 @@ export function HandOver({ currentUserId }: { currentUserId: string }) {
       { userId: to, then },
       {
         onSuccess: () => {
-          if (then === "leave") void forgetThisPhone().then(() => signOut({ callbackUrl: "/signin" }));
+          if (then === "leave") void forgetThisPhone().then(() => signOutTo("/signin"));
           else router.push(ROLE_HOME[then]);
         },
         onSettled: () => setAsking(false),

@@ -1,6 +1,6 @@
 import { compareGlazingOptions, type GlazingOption } from "@/lib/heaters/can-grid";
 import { formatLength, formatNumber, formatPercent } from "@/lib/heaters/format";
-import { resolveCanGridInput } from "@/lib/heaters/schemas";
+import { resolveCanGridInput } from "@/lib/heaters/grid-input";
 
 /** Side by side: which sheet gives more cans for the glass bought and less cut away. */
 export function GlazingComparison({ options }: { options: GlazingOption[] }) {

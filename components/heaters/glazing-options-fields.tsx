@@ -2,7 +2,7 @@
 
 import { Button } from "@/components/ui/button";
 import type { FieldErrors } from "@/lib/api/errors";
-import { CAN_GRID_DEFAULTS_MM, type LengthUnit } from "@/lib/heaters/schemas";
+import { CAN_GRID_DEFAULTS_MM, type LengthUnit } from "@/lib/heaters/grid-input";
 import { defaultText, type GlazingDraft } from "./plan-form-state";
 
 const COVERS = [

@@ -1,6 +1,6 @@
 import type { CanGridResult } from "@/lib/heaters/can-grid";
 import { formatLength } from "@/lib/heaters/format";
-import type { ResolvedCanGridInput } from "@/lib/heaters/schemas";
+import type { ResolvedCanGridInput } from "@/lib/heaters/grid-input";
 import { SheetOutline } from "./sheet-outline";
 
 /**

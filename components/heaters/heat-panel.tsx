@@ -5,16 +5,17 @@ import { Field } from "@/components/ui/field";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { formatNumber, formatPercent } from "@/lib/heaters/format";
 import { computeHeatOutput, heatAtPeak, RATING_IRRADIANCE_WM2, type HeatOutput } from "@/lib/heaters/heat";
-import { heatOutputInputSchema } from "@/lib/heaters/schemas";
+import type { HeatOutputInput, heatOutputInputSchema } from "@/lib/heaters/schemas";
 import { clearDayEnergy } from "@/lib/heaters/sun";
 import { Figure } from "./figure";
+import { PendingChecks } from "./pending-checks";
 import { checkSun, SunFields, SunFigures, type SunText } from "./sun-panel";
 
 // 1 CFM in m³/h: 0.3048³ m³ × 60 (exact foot, NIST SP 811).
 const M3H_PER_CFM = 0.3048 ** 3 * 60;
 
-const INITIAL = { irradianceWm2: String(RATING_IRRADIANCE_WM2), eta0: "0.7", a1: "5", inletC: "18", ambientC: "5", airflowM3h: "170" };
-type HeatText = typeof INITIAL;
+export const INITIAL_HEAT = { irradianceWm2: String(RATING_IRRADIANCE_WM2), eta0: "0.7", a1: "5", inletC: "18", ambientC: "5", airflowM3h: "170" };
+type HeatText = typeof INITIAL_HEAT;
 
 const LABELS: Record<keyof HeatText, [string, string]> = {
   irradianceWm2: ["Reference sunlight for the rating figure (W/m²)", "800 is a test-bench style figure, not what your wall gets"],
@@ -25,17 +26,45 @@ const LABELS: Record<keyof HeatText, [string, string]> = {
   airflowM3h: ["Fan airflow (m³/h)", "170 m³/h is about 100 CFM"],
 };
 
+type HeatCheck = { success: true; data: HeatOutputInput } | { success: false; error: ReturnType<typeof heatOutputInputSchema.safeParse>["error"] & {} } | { success: false; pending: true };
+
+/**
+ * The heat figures checked with the schema once it has loaded. Before that,
+ * only the opening figures count (a unit test checks them against the schema),
+ * with the grid's computed area inside the schema's (0, 100] m²; anything
+ * typed waits for the schema.
+ */
+function checkHeat(schema: typeof heatOutputInputSchema | null, text: HeatText, value: Record<string, number | undefined>): HeatCheck {
+  if (schema) return schema.safeParse(value) as HeatCheck;
+  const area = value.apertureAreaM2!;
+  if (text === INITIAL_HEAT && Number.isFinite(area) && area > 0 && area <= 100) return { success: true, data: value as HeatOutputInput };
+  return { success: false, pending: true };
+}
+
 /**
  * Useful heat and air rise for the chosen grid. The headline is at the
  * clear-day peak sunlight on the chosen wall and day; the fixed reference
  * sunlight gives a rating-style figure beside it, labelled as such.
  */
-export function HeatPanel({ apertureAreaM2, latitude, today }: { apertureAreaM2: number; latitude: number; today: string }) {
-  const [text, setText] = useState<HeatText>(INITIAL);
+export function HeatPanel({
+  apertureAreaM2,
+  latitude,
+  today,
+  schema,
+  failed,
+}: {
+  apertureAreaM2: number;
+  latitude: number;
+  today: string;
+  /** null until the planner's checks have loaded */
+  schema: typeof heatOutputInputSchema | null;
+  failed: boolean;
+}) {
+  const [text, setText] = useState<HeatText>(INITIAL_HEAT);
   const [sun, setSun] = useState<SunText>({ lat: String(latitude), bearing: latitude >= 0 ? "180" : "0", date: today });
   const raw = Object.fromEntries(Object.entries(text).map(([k, v]) => [k, v.trim() === "" ? undefined : Number(v.replace(",", "."))]));
-  const parsed = heatOutputInputSchema.safeParse({ ...raw, apertureAreaM2 });
-  const errors = parsed.success ? {} : fieldErrorsOf(parsed.error);
+  const parsed = checkHeat(schema, text, { ...raw, apertureAreaM2 });
+  const errors = parsed.success || !("error" in parsed) ? {} : fieldErrorsOf(parsed.error);
   const rating = parsed.success ? computeHeatOutput(parsed.data) : null;
   const sunErrors = checkSun(sun);
   const day = sunErrors ? null : clearDayEnergy({ latitude: Number(sun.lat), date: new Date(sun.date), facingBearing: Number(sun.bearing) });
@@ -44,6 +73,7 @@ export function HeatPanel({ apertureAreaM2, latitude, today }: { apertureAreaM2:
   return (
     <div className="flex flex-col gap-4">
       <SunFields sun={sun} errors={sunErrors ?? {}} onChange={setSun} />
+      {"pending" in parsed ? <PendingChecks failed={failed} /> : null}
       {errors.apertureAreaM2 ? <p className="text-ink-soft">Fix the grid above first: {errors.apertureAreaM2}</p> : null}
       {peak && day ? (
         <section aria-labelledby="heat-headline" aria-live="polite" className="rounded-card border-2 border-ember p-3">
@@ -65,7 +95,7 @@ export function HeatPanel({ apertureAreaM2, latitude, today }: { apertureAreaM2:
       ) : null}
       {day ? <SunFigures day={day} heatKWh={peak ? day.kWhPerM2 * apertureAreaM2 * peak.efficiency : null} /> : null}
       <div className="grid gap-x-4 sm:grid-cols-2 lg:grid-cols-3">
-        {(Object.keys(INITIAL) as Array<keyof HeatText>).map((key) => (
+        {(Object.keys(INITIAL_HEAT) as Array<keyof HeatText>).map((key) => (
           <Field
             key={key}
             id={`heat-${key}`}

@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { computeMaterials, type MaterialKey, type TradeMeasure } from "@/lib/heaters/materials";
-import type { CanGridInput } from "@/lib/heaters/schemas";
+import type { CanGridInput } from "@/lib/heaters/grid-input";
 import { MaterialsTable, MATERIAL_LABEL, MEASURE_LABEL } from "./materials-table";
 
 /** The materials with optional unit prices typed in; prices stay in the browser. */

@@ -4,7 +4,11 @@
  */
 import { fieldErrorsOf, type FieldErrors } from "@/lib/api/errors";
 import { computeCanGrid, type CanGridResult } from "@/lib/heaters/can-grid";
-import { canGridInputSchema, fromMm, MM_PER_INCH, type CanGridInput, type LengthUnit } from "@/lib/heaters/schemas";
+import { fromMm, MM_PER_INCH, type CanGridInput, type LengthUnit } from "@/lib/heaters/grid-input";
+import type { canGridInputSchema } from "@/lib/heaters/schemas";
+
+/** The schema the typed sizes are checked with; it arrives after the page is drawn (hooks/use-lazy-schemas). */
+export type CanGridSchema = typeof canGridInputSchema;
 
 /** One glazing sheet to compare, with what it covers and its own manifold height. */
 export interface GlazingDraft {
@@ -76,11 +80,21 @@ export function toCanGridInput(settings: PlanSettings, option: SheetFields): Can
 
 export type Evaluated =
   | { ok: true; input: CanGridInput; grid: CanGridResult }
-  | { ok: false; input: CanGridInput; errors: FieldErrors };
+  | { ok: false; input: CanGridInput; errors: FieldErrors; pending?: true };
 
-export function evaluate(settings: PlanSettings, option: SheetFields): Evaluated {
+/**
+ * The sheets the page opens with, as can-grid input. A unit test checks each
+ * against the schema, so the first screen can show their grids before the
+ * schema has loaded; anything typed waits for the schema.
+ */
+const OPENING_INPUTS = new Set(INITIAL_OPTIONS.map((o) => JSON.stringify(toCanGridInput(INITIAL_SETTINGS, o))));
+
+export function evaluate(settings: PlanSettings, option: SheetFields, schema: CanGridSchema | null): Evaluated {
   const input = toCanGridInput(settings, option);
-  const parsed = canGridInputSchema.safeParse(input);
+  if (!schema) {
+    return OPENING_INPUTS.has(JSON.stringify(input)) ? { ok: true, input, grid: computeCanGrid(input) } : { ok: false, input, errors: {}, pending: true };
+  }
+  const parsed = schema.safeParse(input);
   if (!parsed.success) return { ok: false, input, errors: fieldErrorsOf(parsed.error) };
   return { ok: true, input, grid: computeCanGrid(input) };
 }

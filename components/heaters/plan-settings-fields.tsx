@@ -2,7 +2,7 @@
 
 import { Field } from "@/components/ui/field";
 import type { FieldErrors } from "@/lib/api/errors";
-import { CAN_GRID_DEFAULTS_MM, DEFAULT_HOLES_PER_CAN } from "@/lib/heaters/schemas";
+import { CAN_GRID_DEFAULTS_MM, DEFAULT_HOLES_PER_CAN } from "@/lib/heaters/grid-input";
 import { defaultText, SETTING_FIELDS, type PlanSettings } from "./plan-form-state";
 
 const LABEL: Record<(typeof SETTING_FIELDS)[number], [string, string]> = {

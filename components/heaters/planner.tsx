@@ -7,7 +7,8 @@ import { Notice } from "@/components/ui/notice";
 import type { FieldErrors } from "@/lib/api/errors";
 import { fitProblems } from "@/lib/heaters/can-grid";
 import { areaToM2 } from "@/lib/heaters/format";
-import { resolveCanGridInput, type LengthUnit } from "@/lib/heaters/schemas";
+import { resolveCanGridInput, type LengthUnit } from "@/lib/heaters/grid-input";
+import { planSchemas, useLoadedSchemas } from "@/hooks/use-lazy-schemas";
 import { GlazingComparison } from "./glazing-comparison";
 import { GlazingOptionsFields } from "./glazing-options-fields";
 import { GridFigures } from "./grid-figures";
@@ -15,6 +16,7 @@ import { GridPreview } from "./grid-preview";
 import { HeatPanel } from "./heat-panel";
 import { MaterialsPanel } from "./materials-panel";
 import { convertText, evaluate, INITIAL_OPTIONS, INITIAL_SETTINGS, SETTING_FIELDS, type PlanSettings } from "./plan-form-state";
+import { PendingChecks } from "./pending-checks";
 import { PlanSettingsFields } from "./plan-settings-fields";
 import type { DriveChoice } from "./save-plan";
 
@@ -29,8 +31,10 @@ export function Planner({ drives, canSave, latitude, today }: { drives: DriveCho
   const [settings, setSettings] = useState<PlanSettings>(INITIAL_SETTINGS);
   const [options, setOptions] = useState(INITIAL_OPTIONS);
   const [selected, setSelected] = useState(0);
+  // The checks (zod) arrive after the first screen is drawn; until then only the opening sheets show results.
+  const { schemas, failed } = useLoadedSchemas(planSchemas);
   const chosen = Math.min(selected, options.length - 1);
-  const results = options.map((o) => evaluate(settings, o));
+  const results = options.map((o) => evaluate(settings, o, schemas?.canGridInputSchema ?? null));
   const current = results[chosen];
   const settingErrors: FieldErrors = {};
   // Per-sheet fields (size, manifolds) show their errors beside the sheet; the rest under the shared settings.
@@ -87,6 +91,8 @@ export function Planner({ drives, canSave, latitude, today }: { drives: DriveCho
             </div>
             <GridPreview plan={resolveCanGridInput(current.input)} grid={current.grid} title={`${label}: ${current.grid.columns} by ${current.grid.rows} cans`} />
           </div>
+        ) : "pending" in current ? (
+          <PendingChecks failed={failed} />
         ) : (
           <p className="text-ink-soft">Fix the highlighted fields above to see the grid; nothing you typed is lost.</p>
         )}
@@ -101,7 +107,13 @@ export function Planner({ drives, canSave, latitude, today }: { drives: DriveCho
       {current.ok ? (
         <>
           <Card title="5. Heat estimate">
-            <HeatPanel apertureAreaM2={areaToM2(current.grid.apertureArea, current.grid.unit)} latitude={latitude} today={today} />
+            <HeatPanel
+              apertureAreaM2={areaToM2(current.grid.apertureArea, current.grid.unit)}
+              latitude={latitude}
+              today={today}
+              schema={schemas?.heatOutputInputSchema ?? null}
+              failed={failed}
+            />
           </Card>
           <Card title="6. Materials and cost">
             <MaterialsPanel input={current.input} />

@@ -1,15 +1,14 @@
 "use client";
 
-import { SessionBoundary } from "@/components/auth/session-boundary";
 import { AppHeader } from "@/components/layout/app-header";
 import type { Role } from "@/lib/auth/roles";
 
 /** A signed-in person's frame on a page anyone may open: the group's navigation and the session. */
 export function SignedInShell({ groupName, role, userName, children }: { groupName: string; role: Role; userName: string; children: React.ReactNode }) {
   return (
-    <SessionBoundary>
+    <>
       <AppHeader groupName={groupName} role={role} userName={userName} />
       {children}
-    </SessionBoundary>
+    </>
   );
 }

@@ -31,7 +31,7 @@ export interface EntryStatus {
 }
 
 /** `clear()` at the start of every try: an earlier "recorded" must not stand above this try's errors. */
-export function useEntrySubmit(): { send: (attempt: () => Promise<SubmitResult>, saved: Saved) => Promise<void>; clear: () => void; status: EntryStatus } {
+export function useEntrySubmit(): { send: (attempt: () => Promise<SubmitResult>, saved: Saved) => Promise<void>; clear: () => void; refuse: (text: string) => void; status: EntryStatus } {
   const [message, setMessage] = useState<EntryStatus["message"]>(null);
   const [pending, setPending] = useState(false);
   const [ask, setAsk] = useState<Ask | null>(null);
@@ -49,7 +49,7 @@ export function useEntrySubmit(): { send: (attempt: () => Promise<SubmitResult>,
   const answerYes = () => {
     if (ask) void send(ask.confirm, ask.saved);
   };
-  return { send, clear: () => setMessage(null), status: { message, pending, ask, answerYes, answerNo: () => setAsk(null) } };
+  return { send, clear: () => setMessage(null), refuse: (text: string) => setMessage({ tone: "error", text }), status: { message, pending, ask, answerYes, answerNo: () => setAsk(null) } };
 }
 
 /** The question, the answer and the form's button, in that order. */

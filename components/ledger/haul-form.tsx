@@ -4,7 +4,7 @@ import { useState } from "react";
 import { SelectField } from "@/components/ui/field";
 import { NumberField } from "@/components/ui/number-field";
 import { fieldErrorsOf } from "@/lib/api/errors";
-import { ledgerSchemas, useLazySchemas } from "@/hooks/use-lazy-schemas";
+import { ledgerSchemas, schemasOr, useLazySchemas } from "@/hooks/use-lazy-schemas";
 import { HaulCaution } from "./cautions";
 import { EntryActions, useEntrySubmit, type Submit } from "./entry-submit";
 import { NUMBER_SPECS, parseNumberInputs } from "@/lib/forms/number-input";
@@ -17,7 +17,7 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
   const [bags, setBags] = useState("1");
   const [weight, setWeight] = useState("");
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const { send, clear: clearStatus, status } = useEntrySubmit();
+  const { send, clear: clearStatus, refuse, status } = useEntrySubmit();
   const schemas = useLazySchemas(ledgerSchemas);
   const weighed = weightEntry(useFormat().look.units); // typed in the group's units, sent in kg
 
@@ -32,7 +32,9 @@ export function HaulForm({ driveId, dropPoints, initialDropPointId, submit }: { 
     clearStatus(); // an earlier "recorded" must not stand above this try's errors
     // Anything typed that is not a number stops here; nothing else is ever sent in its place.
     const numbers = parseNumberInputs({ bags: [bags, NUMBER_SPECS.haulBags], weightKg: [weight, weighed.spec] });
-    const parsed = (await schemas()).haulInputSchema.safeParse({ dropPointId, bags: numbers.values.bags, weightKg: weighed.toKg(numbers.values.weightKg) });
+    const checks = await schemasOr(schemas, refuse);
+    if (!checks) return;
+    const parsed = checks.haulInputSchema.safeParse({ dropPointId, bags: numbers.values.bags, weightKg: weighed.toKg(numbers.values.weightKg) });
     const found = { ...(parsed.success ? {} : fieldErrorsOf(parsed.error)), ...numbers.errors };
     if (!parsed.success || Object.keys(numbers.errors).length > 0) {
       setErrors(found as Record<string, string>);

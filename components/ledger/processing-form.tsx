@@ -4,7 +4,7 @@ import { useState } from "react";
 import { useQuery } from "@tanstack/react-query";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { LOSS_REASON_LABEL, type LossReason } from "@/lib/ledger/codes";
-import { ledgerSchemas, useLazySchemas } from "@/hooks/use-lazy-schemas";
+import { ledgerSchemas, schemasOr, useLazySchemas } from "@/hooks/use-lazy-schemas";
 import { stageLabel } from "@/lib/ledger/labels";
 import { ledgerQueries } from "@/hooks/queries/ledger";
 import { ProcessingCaution } from "./cautions";
@@ -27,7 +27,7 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
   const [lostText, setLost] = useState("0");
   const [chosenReason, setLossReason] = useState<LossReason | null>(null);
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const { send, clear: clearStatus, status } = useEntrySubmit();
+  const { send, clear: clearStatus, refuse, status } = useEntrySubmit();
   const schemas = useLazySchemas(ledgerSchemas);
   const step = STEPS[stepIndex];
   const available = stock.data ? stock.data.stages[step.from] : null;
@@ -44,7 +44,9 @@ export function ProcessingForm({ driveId, submit }: { driveId: string; submit: S
     const numbers = parseNumberInputs({ quantity: [quantityText, NUMBER_SPECS.batchCans], "lost.quantity": [lostText, NUMBER_SPECS.lostCans] });
     const quantity = numbers.values.quantity;
     const lost = numbers.values["lost.quantity"] ?? 0;
-    const parsed = (await schemas()).processingInputSchema.safeParse({ from: step.from, to: step.to, quantity, ...(lost > 0 ? { lost: { reason: lossReason, quantity: lost } } : {}) });
+    const checks = await schemasOr(schemas, refuse);
+    if (!checks) return;
+    const parsed = checks.processingInputSchema.safeParse({ from: step.from, to: step.to, quantity, ...(lost > 0 ? { lost: { reason: lossReason, quantity: lost } } : {}) });
     if (!parsed.success || Object.keys(numbers.errors).length > 0) {
       return setErrors({ ...(parsed.success ? {} : fieldErrorsOf(parsed.error)), ...(numbers.errors as Record<string, string>) });
     }

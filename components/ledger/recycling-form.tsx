@@ -11,7 +11,7 @@ import { NUMBER_SPECS, parseNumberInputs, type NumberSpec } from "@/lib/forms/nu
 import { countOf, noun } from "@/lib/plural";
 import { Notice } from "@/components/ui/notice";
 import { fieldErrorsOf } from "@/lib/api/errors";
-import { ledgerSchemas, useLazySchemas } from "@/hooks/use-lazy-schemas";
+import { ledgerSchemas, schemasOr, useLazySchemas } from "@/hooks/use-lazy-schemas";
 import { ledgerQueries, useRecordRecycling } from "@/hooks/queries/ledger";
 
 // Money is not a count or a weight; a decimal with "." or "," like 12.50, with no sign or letters.
@@ -31,6 +31,7 @@ export function RecyclingForm({ driveId }: { driveId: string }) {
   const [form, setForm] = useState({ quantity: "", weightKg: "", moneyReceived: "" });
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [done, setDone] = useState<string | null>(null);
+  const [missing, setMissing] = useState<string | null>(null);
   const schemas = useLazySchemas(ledgerSchemas);
   const save = useRecordRecycling(driveId, {
     onSuccess: (_res, body) => {
@@ -42,12 +43,15 @@ export function RecyclingForm({ driveId }: { driveId: string }) {
   async function onSubmit(e: React.FormEvent) {
     e.preventDefault();
     setDone(null);
+    setMissing(null);
     const numbers = parseNumberInputs({
       quantity: [form.quantity, NUMBER_SPECS.recycledCans],
       weightKg: [form.weightKg, weighed.spec],
       moneyReceived: [form.moneyReceived, MONEY],
     });
-    const parsed = (await schemas()).recyclingInputSchema.safeParse({ ...numbers.values, weightKg: weighed.toKg(numbers.values.weightKg) });
+    const checks = await schemasOr(schemas, setMissing);
+    if (!checks) return;
+    const parsed = checks.recyclingInputSchema.safeParse({ ...numbers.values, weightKg: weighed.toKg(numbers.values.weightKg) });
     if (!parsed.success || Object.keys(numbers.errors).length > 0) {
       return setErrors({ ...(parsed.success ? {} : fieldErrorsOf(parsed.error)), ...(numbers.errors as Record<string, string>) });
     }
@@ -67,7 +71,7 @@ export function RecyclingForm({ driveId }: { driveId: string }) {
         <NumberField id="recycle-weight" label={`Weight in ${weighed.unit} (optional)`} spec={weighed.spec} value={form.weightKg} onChange={set("weightKg")} error={errors.weightKg} />
         <NumberField id="recycle-money" label="Money received (optional)" spec={MONEY} value={form.moneyReceived} onChange={set("moneyReceived")} error={errors.moneyReceived} />
       </div>
-      <FormError message={save.error?.message} />
+      <FormError message={missing ?? save.error?.message} />
       {done ? <Notice tone="good" title={done} /> : null}
       <div>
         <Button type="submit" disabled={save.isPending}>{save.isPending ? "Saving…" : "Record recycling"}</Button>

@@ -6,7 +6,7 @@ import { EmptyState, Skeleton } from "@/components/ui/card";
 import { FormError } from "@/components/ui/field";
 import { fieldErrorsOf } from "@/lib/api/errors";
 import { REJECT_REASON_LABEL, REJECT_REASONS, type RejectReason } from "@/lib/ledger/codes";
-import { ledgerSchemas, useLazySchemas } from "@/hooks/use-lazy-schemas";
+import { ledgerSchemas, schemasOr, useLazySchemas } from "@/hooks/use-lazy-schemas";
 import { ledgerQueries } from "@/hooks/queries/ledger";
 import { SortCaution } from "./cautions";
 import { EntryActions, useEntrySubmit, type Submit } from "./entry-submit";
@@ -29,7 +29,7 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
   const [goodText, setGood] = useState("0");
   const [rejected, setRejected] = useState(zeroRejects);
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const { send, clear: clearStatus, status } = useEntrySubmit();
+  const { send, clear: clearStatus, refuse, status } = useEntrySubmit();
   const schemas = useLazySchemas(ledgerSchemas);
   const good = valueOf(goodText);
   const rejectTotal = Object.values(rejected).reduce((s, raw) => s + valueOf(raw), 0);
@@ -45,7 +45,9 @@ export function SortForm({ driveId, submit }: { driveId: string; submit: Submit 
       ...Object.fromEntries(REJECT_REASONS.map((r) => [`rejected.${r}`, [rejected[r], NUMBER_SPECS.rejectedCans]])),
     } as Record<string, [string, typeof NUMBER_SPECS.goodCans]>);
     const nonZero = Object.fromEntries(REJECT_REASONS.map((r) => [r, numbers.values[`rejected.${r}`] ?? 0]).filter(([, n]) => (n as number) > 0));
-    const parsed = (await schemas()).sortInputSchema.safeParse({ haulIds: chosen, good: numbers.values.good, rejected: nonZero });
+    const checks = await schemasOr(schemas, refuse);
+    if (!checks) return;
+    const parsed = checks.sortInputSchema.safeParse({ haulIds: chosen, good: numbers.values.good, rejected: nonZero });
     if (!parsed.success || Object.keys(numbers.errors).length > 0) {
       return setErrors({ ...(parsed.success ? {} : fieldErrorsOf(parsed.error)), ...(numbers.errors as Record<string, string>) });
     }

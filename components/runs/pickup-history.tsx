@@ -6,10 +6,10 @@ export interface HistoryPoint {
   id: string;
   name: string;
   driveName: string;
-  history: { runId: string; plannedOn: string; status: "pending" | "logged" | "skipped"; skipReason: string | null; haulBags: number | null; assigneeName: string | null }[];
+  history: { runId: string; plannedOn: string; status: "pending" | "logged" | "skipped" | "released"; skipReason: string | null; haulBags: number | null; assigneeName: string | null }[];
 }
 
-const STATUS_TEXT = { pending: "planned", logged: "haul logged", skipped: "skipped" } as const;
+const STATUS_TEXT = { pending: "planned", logged: "haul logged", skipped: "skipped", released: "released (run cancelled)" } as const;
 
 export function PickupHistory({ points, look }: { points: HistoryPoint[]; look: Look }) {
   const f = formatter(look);

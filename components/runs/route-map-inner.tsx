@@ -7,7 +7,7 @@ import { CircleMarker, MapContainer, Marker, Polyline, TileLayer, Tooltip, useMa
 import type { RouteMapProps } from "./route-map";
 import { ROUTE_MAP_BOX } from "./route-map-box";
 
-const MARKER_COLOUR = { pending: "#a8431a", logged: "#2f6a4a", skipped: "#6b6156" } as const;
+const MARKER_COLOUR = { pending: "#a8431a", logged: "#2f6a4a", skipped: "#6b6156", released: "#8a8178" } as const;
 
 function numberIcon(n: number, status: keyof typeof MARKER_COLOUR) {
   return L.divIcon({

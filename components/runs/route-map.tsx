@@ -7,7 +7,7 @@ import { ROUTE_MAP_BOX } from "./route-map-box";
 export interface RouteMapProps {
   start: { lat: number; lng: number };
   /** In visiting order; the marker shows the position. */
-  stops: { id: string; name: string; lat: number; lng: number; status?: "pending" | "logged" | "skipped" }[];
+  stops: { id: string; name: string; lat: number; lng: number; status?: "pending" | "logged" | "skipped" | "released" }[];
   returnToStart?: boolean;
   tileUrl: string;
   attribution: string;

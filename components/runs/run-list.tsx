@@ -8,6 +8,7 @@ const BADGE: Record<RunState, string> = {
   planned: "bg-paper-deep text-ink-soft",
   under_way: "bg-sun-soft text-sun",
   done: "bg-moss-soft text-moss-deep",
+  cancelled: "bg-paper-deep text-ink-soft",
 };
 
 export function RunStateBadge({ state }: { state: RunState }) {

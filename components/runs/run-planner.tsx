@@ -10,7 +10,7 @@ import { useFormat } from "@/hooks/use-look";
 import { Field, FormError, SelectField } from "@/components/ui/field";
 import { fieldErrors } from "@/lib/api/client";
 import { fieldErrorsOf } from "@/lib/api/errors";
-import { runSchemas, useLazySchemas } from "@/hooks/use-lazy-schemas";
+import { runSchemas, schemasOr, useLazySchemas } from "@/hooks/use-lazy-schemas";
 import { runQueries, useCreateRun } from "@/hooks/queries/runs";
 import type { SuggestionRow } from "@/lib/runs/types";
 import { useRememberDrive } from "@/hooks/queries/current-drive";
@@ -55,6 +55,7 @@ export function RunPlanner(props: PlannerProps) {
   const [assigneeId, setAssigneeId] = useState("");
   const [notes, setNotes] = useState("");
   const [errors, setErrors] = useState<Record<string, string>>({});
+  const [missing, setMissing] = useState<string | null>(null);
 
   const start = useMemo(() => {
     const a = Number(lat);
@@ -76,7 +77,10 @@ export function RunPlanner(props: PlannerProps) {
       assigneeId,
       notes,
     };
-    const parsed = (await schemas()).createRunInputSchema.safeParse(body);
+    setMissing(null);
+    const checks = await schemasOr(schemas, setMissing);
+    if (!checks) return;
+    const parsed = checks.createRunInputSchema.safeParse(body);
     if (!parsed.success) return setErrors(fieldErrorsOf(parsed.error));
     setErrors({});
     create.mutate(parsed.data);
@@ -117,7 +121,7 @@ export function RunPlanner(props: PlannerProps) {
             ) : suggestions.data.length === 0 ? (
               <p className="text-ink-soft">This drive has no active drop points. Add drop points to the drive first.</p>
             ) : (
-              <StopPicker suggestions={suggestions.data} selected={selection.ids} onToggle={toggle} error={errors.dropPointIds} />
+              <StopPicker suggestions={suggestions.data} selected={selection.ids} onToggle={toggle} error={errors.dropPointIds} plannedOn={plannedOn} />
             )}
           </div>
         </Card>
@@ -148,7 +152,7 @@ export function RunPlanner(props: PlannerProps) {
         <Card title="3. Route">
           <RoutePreview start={start} stops={chosen} returnToStart={returnToStart} tileUrl={props.tileUrl} attribution={props.attribution} />
         </Card>
-        <FormError message={create.isError ? create.error.message : Object.keys(errors).length ? "Some fields need another look." : null} />
+        <FormError message={missing ?? (create.isError ? create.error.message : Object.keys(errors).length ? "Some fields need another look." : null)} />
         <Button type="submit" disabled={create.isPending}>
           {create.isPending ? "Saving the run…" : "Plan this run and tell the volunteer"}
         </Button>

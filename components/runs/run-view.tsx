@@ -12,6 +12,9 @@ import { useFormat } from "@/hooks/use-look";
 import { useOutbox, type Refusal } from "@/components/ledger/use-outbox";
 import { Button } from "@/components/ui/button";
 import type { QueuedEntry } from "@/lib/offline/store";
+import { describeOpeningHours } from "@/lib/drives/opening-hours";
+import { CLOSED_RUN_STATES } from "@/lib/runs/schemas";
+import { RunEditor, type DriverChoice } from "./run-editor";
 
 type Outbox = ReturnType<typeof useOutbox>;
 
@@ -70,7 +73,14 @@ function StopCard({ run, stop, canAct, isNext, outbox }: { run: RunDetail; stop:
         <dt className="font-semibold">Where</dt>
         <dd>{p.address || "—"}</dd>
         <dt className="font-semibold">Hours</dt>
-        <dd>{p.hours || "—"}</dd>
+        <dd>
+          {describeOpeningHours(p.openingHours) || (p.hours ? null : "—")}
+          {p.openingHours.length && p.hours ? <br /> : null}
+          {p.hours ? <span className="text-ink-soft">{p.hours}</span> : null}
+          {stop.openOnRunDay === false && stop.status === "pending" ? (
+            <span className="mt-1 block font-semibold text-alarm">Closed on the run&apos;s day by these hours</span>
+          ) : null}
+        </dd>
         <dt className="font-semibold">Access</dt>
         <dd>{p.accessNotes || "No access notes."}</dd>
         <dt className="font-semibold">Host</dt>
@@ -95,13 +105,15 @@ function StopCard({ run, stop, canAct, isNext, outbox }: { run: RunDetail; stop:
             </p>
             {canAct && stop.haul ? <UndoStopHaul movementId={stop.haul.movementId} dropPointName={p.name} /> : null}
           </>
+        ) : stop.status === "released" ? (
+          <p className="font-semibold text-ink-soft">Released — the run was cancelled before this stop.</p>
         ) : stop.status === "skipped" ? (
           <>
             <p className="font-semibold text-ink-soft">Skipped — “{stop.skipReason}”</p>
             {canAct ? <UnskipStop runId={run.id} stopId={stop.id} dropPointName={p.name} /> : null}
           </>
         ) : canAct && waiting.length > 0 ? null : canAct ? (
-          <StopActions runId={run.id} stopId={stop.id} dropPointName={p.name} queue={outbox.submit} />
+          <StopActions runId={run.id} stopId={stop.id} dropPointName={p.name} plannedOn={run.plannedOn} queue={outbox.submit} />
         ) : (
           <p className="text-ink-soft">Waiting for the volunteer.</p>
         )}
@@ -111,7 +123,24 @@ function StopCard({ run, stop, canAct, isNext, outbox }: { run: RunDetail; stop:
   );
 }
 
-export function RunView({ runId, canAct, tileUrl, attribution }: { runId: string; canAct: boolean; tileUrl: string; attribution: string }) {
+export function RunView({
+  runId,
+  canAct,
+  canEdit = false,
+  drivers = [],
+  dropPoints = [],
+  tileUrl,
+  attribution,
+}: {
+  runId: string;
+  canAct: boolean;
+  /** An organiser of the run's group: may change and cancel it while it is open. */
+  canEdit?: boolean;
+  drivers?: DriverChoice[];
+  dropPoints?: { id: string; name: string }[];
+  tileUrl: string;
+  attribution: string;
+}) {
   // Starts from what the page prefetched (<Prefetched>); the stop actions' hooks put each answer in this read's cache, and read it again after an undo.
   const { data: run } = useQuery(runQueries.detail(runId));
   const f = useFormat();
@@ -128,13 +157,28 @@ export function RunView({ runId, canAct, tileUrl, attribution }: { runId: string
         {run.driveName} · {run.assigneeName ?? "nobody assigned"} · {f.number(run.logged)} logged, {f.number(run.skipped)} skipped of {f.count(run.stops, "stop")} ·{" "}
         {f.distance(run.distanceKm)}
       </p>
-      {run.state === "done" ? (
+      {run.state === "cancelled" ? (
+        <Notice title="Run cancelled">
+          {run.cancelledByName ? `${run.cancelledByName} cancelled this run` : "This run was cancelled"}
+          {run.cancelledAt ? ` on ${f.dayOf(run.cancelledAt)}` : ""}: “{run.cancelReason}”. Hauls already logged stay in the records.
+        </Notice>
+      ) : run.state === "done" ? (
         <Notice tone="good" title="Run done">Every stop is logged or skipped. Thank you!</Notice>
       ) : (
         <Notice tone="caution" title="Before you lift a bag">
           Wear gloves: cans can have sharp edges. Sugary bins draw wasps; open bags slowly and away from your face.
         </Notice>
       )}
+      {run.warnings.length ? (
+        <Notice tone="caution" title="Check before you go">
+          <ul className="list-disc pl-5" data-testid="run-warnings">
+            {run.warnings.map((w, i) => (
+              <li key={i}>{w.message}</li>
+            ))}
+          </ul>
+          <p className="mt-1">This is a warning only: the run can go ahead.</p>
+        </Notice>
+      ) : null}
       {run.notes ? <Notice title="Notes from the organiser">{run.notes}</Notice> : null}
       <RouteMap
         start={run.start}
@@ -146,9 +190,10 @@ export function RunView({ runId, canAct, tileUrl, attribution }: { runId: string
       />
       <ol className="flex flex-col gap-3">
         {run.stopList.map((s) => (
-          <StopCard key={s.id} run={run} stop={s} canAct={canAct} isNext={s.id === next?.id} outbox={outbox} />
+          <StopCard key={s.id} run={run} stop={s} canAct={canAct && run.state !== "cancelled"} isNext={s.id === next?.id} outbox={outbox} />
         ))}
       </ol>
+      {canEdit && !CLOSED_RUN_STATES.includes(run.state) ? <RunEditor run={run} drivers={drivers} dropPoints={dropPoints} /> : null}
     </div>
   );
 }

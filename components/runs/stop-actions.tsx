@@ -10,6 +10,9 @@ import { useLogStopHaul, useSkipStop } from "@/hooks/queries/runs";
 import { ConfirmUnusual } from "@/components/ledger/confirm-unusual";
 import { NumberField } from "@/components/ui/number-field";
 import { NUMBER_SPECS, parseNumberInputs } from "@/lib/forms/number-input";
+import { Notice } from "@/components/ui/notice";
+import { haulDayMismatch } from "@/lib/drives/opening-hours";
+import { formatter } from "@/lib/format";
 
 function newKey(): string {
   // randomUUID needs a secure context; plain-HTTP previews get a random key of the same strength.
@@ -25,12 +28,15 @@ interface Props {
   stopId: string;
   dropPointName: string;
   queue?: QueueEntry;
+  /** The run's day: logging on another day is allowed, with a warning. */
+  plannedOn?: string;
 }
 
 const noSignal = (e: unknown) => !(e instanceof ApiError) || e.status === 0;
 
 /** Log a haul at this stop (a ledger movement, then the stop points at it), or skip it with a reason. */
-export function StopActions({ runId, stopId, dropPointName, queue }: Props) {
+export function StopActions({ runId, stopId, dropPointName, queue, plannedOn }: Props) {
+  const look = useFormat().look;
   const [mode, setMode] = useState<"idle" | "log" | "skip">("idle");
   const [bags, setBags] = useState("");
   const [weight, setWeight] = useState("");
@@ -102,6 +108,11 @@ export function StopActions({ runId, stopId, dropPointName, queue }: Props) {
           log.mutate(vars);
         }}
       >
+        {plannedOn && haulDayMismatch(plannedOn, new Date(), look.timeZone) ? (
+          <Notice tone="caution" title="Not the run's day">
+            This run is for {formatter(look).day(plannedOn)}. The haul will be logged for today; that is fine if it really happened today.
+          </Notice>
+        ) : null}
         <div className="grid grid-cols-2 gap-3">
           <NumberField id={`bags-${stopId}`} label="Bags" spec={NUMBER_SPECS.stopBags} value={bags} onChange={edit("bags", setBags)} error={fields.bags} />
           <NumberField id={`weight-${stopId}`} label={`Weight, ${weighed.unit} (optional)`} spec={weighed.spec} value={weight} onChange={edit("weightKg", setWeight)} error={fields.weightKg} />

@@ -2,6 +2,16 @@
 
 import type { SuggestionRow } from "@/lib/runs/types";
 import { countOf } from "@/lib/plural";
+import { describeOpeningHours, ISO_WEEKDAY_LABELS, isOpenOnDate, isoWeekday } from "@/lib/drives/opening-hours";
+
+/** The weekday of a chosen day, or null while the box holds no real date. */
+function weekdayOf(day: string | undefined): number | null {
+  try {
+    return day ? isoWeekday(day) : null;
+  } catch {
+    return null;
+  }
+}
 
 function fillLabel(s: SuggestionRow): string {
   const parts: string[] = [];
@@ -18,12 +28,16 @@ export function StopPicker({
   selected,
   onToggle,
   error,
+  plannedOn,
 }: {
+  /** The run's day as chosen so far: a drop point closed that day by its hours is marked (a warning, never a block). */
+  plannedOn?: string;
   suggestions: SuggestionRow[];
   selected: Set<string>;
   onToggle: (id: string) => void;
   error?: string;
 }) {
+  const weekday = weekdayOf(plannedOn);
   return (
     <fieldset className="flex flex-col gap-2" aria-describedby="stops-error">
       <legend className="mb-1 font-semibold">Drop points to visit</legend>
@@ -50,8 +64,11 @@ export function StopPicker({
                 </span>
                 <span className="text-sm text-ink-soft">{fillLabel(s)}</span>
                 <span className="text-sm text-ink-faint">
-                  {s.address} · {s.hours} · bin holds {countOf(s.capacityBags, "bag")}
+                  {[s.address, describeOpeningHours(s.openingHours), s.hours].filter(Boolean).join(" · ")} · bin holds {countOf(s.capacityBags, "bag")}
                 </span>
+                {weekday !== null && isOpenOnDate(s.openingHours, plannedOn!) === false ? (
+                  <span className="text-sm font-semibold text-alarm">Closed on {ISO_WEEKDAY_LABELS[weekday]}s by its opening hours</span>
+                ) : null}
               </span>
             </label>
           </li>

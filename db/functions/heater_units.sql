@@ -16,32 +16,41 @@
 -- unit on no drive —, actorId, kind 'release', occurredAt, day, details,
 -- lines: []) plus unit = { id, action: 'release' }, move = { from, to } and
 -- note (the release line's note). Answers { released, movementId }.
-create or replace function heater_unit_move(p jsonb) returns jsonb language plpgsql as $$
+-- Shared by every writer of one heater unit (heater_unit_move, heater_unit_archive,
+-- heater_unit_glazing): lock the drive (when the unit is on one), then the unit;
+-- refuse CT404 when the unit is not the group's and CT409 unitMoved when it is no
+-- longer on the drive the caller read. Answers the locked row.
+create or replace function heater_unit_lock(p jsonb, who text) returns heater_units language plpgsql as $$
 declare
   v_group uuid := (p->>'groupId')::uuid;
   v_drive uuid := (p->>'driveId')::uuid;
-  v_unit uuid := (p#>>'{unit,id}')::uuid;
-  v_to text := p#>>'{move,to}';
-  v_state text;
-  v_on_drive uuid;
-  v_claimed bigint := 0;
-  v_release jsonb;
+  v_row heater_units;
 begin
   if v_drive is not null then
     perform ledger_lock_drive(v_group, v_drive);
   end if;
-  select state, drive_id into v_state, v_on_drive from heater_units where id = v_unit and group_id = v_group for no key update;
+  select * into v_row from heater_units where id = (p#>>'{unit,id}')::uuid and group_id = v_group for no key update;
   if not found then
-    raise exception 'heater_unit_move: no such unit' using errcode = 'CT404', detail = '{"what":"unit"}';
+    raise exception '%: no such unit', who using errcode = 'CT404', detail = '{"what":"unit"}';
   end if;
-  if v_on_drive is distinct from v_drive then
-    raise exception 'heater_unit_move: unit moved' using errcode = 'CT409', detail = '{"kind":"unitMoved"}';
+  if v_row.drive_id is distinct from v_drive then
+    raise exception '%: unit moved', who using errcode = 'CT409', detail = '{"kind":"unitMoved"}';
   end if;
-  if v_state <> p#>>'{move,from}' then
-    raise exception 'heater_unit_move: state changed' using errcode = 'CT409',
-      detail = jsonb_build_object('kind', 'stateChanged', 'state', v_state)::text;
-  end if;
-  if v_to = 'installed' and v_drive is not null then
+  return v_row;
+end
+$$;
+
+-- Gives a locked unit's unbuilt claim on its drive back as one 'release' movement
+-- (ledger_unit; p is that release's payload, p.note the line's note). Answers
+-- { released, movementId } (0 and null when nothing was claimed or the unit is on no drive).
+create or replace function heater_unit_release_claims(p jsonb) returns jsonb language plpgsql as $$
+declare
+  v_drive uuid := (p->>'driveId')::uuid;
+  v_unit uuid := (p#>>'{unit,id}')::uuid;
+  v_claimed bigint := 0;
+  v_release jsonb;
+begin
+  if v_drive is not null then
     select coalesce(sum(quantity), 0) into v_claimed from stage_balances
     where heater_unit_id = v_unit and drive_id = v_drive and stage = 'claimed';
     if v_claimed > 0 then
@@ -49,7 +58,24 @@ begin
         'from', 'claimed', 'to', null, 'quantity', v_claimed, 'heaterUnitId', v_unit, 'note', coalesce(p->>'note', '')))));
     end if;
   end if;
-  update heater_units set state = v_to, state_changed_at = now() where id = v_unit;
   return jsonb_build_object('released', v_claimed, 'movementId', v_release->'movementId');
+end
+$$;
+
+create or replace function heater_unit_move(p jsonb) returns jsonb language plpgsql as $$
+declare
+  v_unit heater_units := heater_unit_lock(p, 'heater_unit_move');
+  v_to text := p#>>'{move,to}';
+  v_released jsonb := jsonb_build_object('released', 0, 'movementId', null);
+begin
+  if v_unit.state <> p#>>'{move,from}' then
+    raise exception 'heater_unit_move: state changed' using errcode = 'CT409',
+      detail = jsonb_build_object('kind', 'stateChanged', 'state', v_unit.state)::text;
+  end if;
+  if v_to = 'installed' then
+    v_released := heater_unit_release_claims(p);
+  end if;
+  update heater_units set state = v_to, state_changed_at = now() where id = v_unit.id;
+  return v_released;
 end
 $$;

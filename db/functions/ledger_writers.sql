@@ -76,11 +76,22 @@ $$;
 -- is pending, under way when some is not, else planned; finished_at only while it is done.
 -- v_starts: a stop was just settled, so the run has started (started_at kept once set).
 -- The caller holds the run's row (or the drive's lock, for an undo). Answers { state, stops, logged, skipped }.
+-- A cancelled run (pickup_run_cancel, db/functions/pickup_runs.sql) stays cancelled: a stop an undo
+-- reopens on it is released at once, never pending again.
 create or replace function pickup_run_follow_stops(v_run uuid, v_starts boolean) returns jsonb language plpgsql as $$
 declare
   c record;
   v_state text;
+  v_cancelled timestamptz;
 begin
+  select cancelled_at into v_cancelled from pickup_runs where id = v_run;
+  if v_cancelled is not null then
+    update pickup_run_stops set status = 'released', resolved_at = coalesce(resolved_at, now()) where run_id = v_run and status = 'pending';
+    select count(*)::int as stops, count(*) filter (where status = 'logged')::int as logged,
+           count(*) filter (where status = 'skipped')::int as skipped
+    into c from pickup_run_stops where run_id = v_run;
+    return jsonb_build_object('state', 'cancelled', 'stops', c.stops, 'logged', c.logged, 'skipped', c.skipped);
+  end if;
   select count(*)::int as stops, count(*) filter (where status = 'pending')::int as pending,
          count(*) filter (where status = 'logged')::int as logged, count(*) filter (where status = 'skipped')::int as skipped
   into c from pickup_run_stops where run_id = v_run;

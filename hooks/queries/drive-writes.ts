@@ -3,6 +3,7 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { fetchJson } from "@/lib/api/client";
 import type { FullBin } from "@/lib/drives/types";
+import { recordUrl, type RecordKind } from "@/lib/records/kinds";
 import { driveKeys } from "./drives";
 import type { After } from "./ledger";
 
@@ -34,5 +35,25 @@ export function useClearFullBin(after: After<unknown, FullBin> = {}) {
       await after.onSuccess?.(data, b);
     },
     onError: (error, b) => after.onError?.(error, b),
+  });
+}
+
+export interface RecordActionVars {
+  kind: RecordKind;
+  id: string;
+  action: "archive" | "restore" | "delete";
+}
+
+/** Archive, restore or delete one record (issue 16): POST /api/<kind>/{id}/archive | restore | delete, with a fresh Idempotency-Key. */
+export function useRecordAction(after: After<unknown, RecordActionVars> = {}) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (v: RecordActionVars) =>
+      fetchJson(recordUrl(v.kind, v.id, v.action), { method: "POST", body: v.action === "delete" ? { confirm: true } : {}, headers: { "Idempotency-Key": crypto.randomUUID() } }),
+    onSuccess: async (data, v) => {
+      await client.invalidateQueries({ queryKey: driveKeys.all });
+      await after.onSuccess?.(data, v);
+    },
+    onError: (error, v) => after.onError?.(error, v),
   });
 }

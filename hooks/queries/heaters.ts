@@ -4,6 +4,7 @@ import { queryOptions, useMutation, useQueryClient } from "@tanstack/react-query
 import { heaterKeys } from "./keys";
 import { fetchJson } from "@/lib/api/client";
 import type { HeaterCreateInput, HeaterState } from "@/lib/heaters/unit-schemas";
+import type { CanGridInput } from "@/lib/heaters/schemas";
 import type { ClaimAction, ClaimResult, HeaterSummary, SavedHeater } from "@/lib/heaters/types";
 import { ledgerKeys, type After } from "./ledger";
 
@@ -86,5 +87,19 @@ export function useArchiveHeater(id: string, after: After<SavedHeater & { releas
       await after.onSuccess?.(data, archive);
     },
     onError: (error, archive) => after.onError?.(error, archive),
+  });
+}
+
+/** A unit's new glazing (POST /api/heaters/{id}/glazing); the units and the drive's figures are read again. */
+export function useChangeGlazing(id: string, after: After<SavedHeater & { was: number }, CanGridInput> = {}) {
+  const refresh = useRefreshUnitsAndStock();
+  return useMutation({
+    mutationFn: (plan: CanGridInput) =>
+      fetchJson<SavedHeater & { was: number }>(`/api/heaters/${id}/glazing`, { method: "POST", json: { plan }, headers: { "Idempotency-Key": crypto.randomUUID() } }),
+    onSuccess: async (data, plan) => {
+      await refresh();
+      await after.onSuccess?.(data, plan);
+    },
+    onError: (error, plan) => after.onError?.(error, plan),
   });
 }

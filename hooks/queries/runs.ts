@@ -106,3 +106,29 @@ export function useUndoStopHaul(movementId: string, idempotencyKey: string) {
     onSuccess: () => void refreshRuns(client),
   });
 }
+
+function newKey(): string {
+  // randomUUID needs a secure context; plain-HTTP previews get a random key of the same strength.
+  if (typeof crypto.randomUUID === "function") return crypto.randomUUID();
+  return Array.from(crypto.getRandomValues(new Uint8Array(16)), (b) => b.toString(16).padStart(2, "0")).join("");
+}
+
+/** Changes a run's day, volunteer or notes (PATCH: the same values again change nothing). */
+export function useEditRun(runId: string, after: After<unknown, { plannedOn: string; assigneeId: string; notes: string }> = {}) {
+  return useStopWrite(runId, (body: { plannedOn: string; assigneeId: string; notes: string }) => fetchJson(`/api/runs/${runId}`, { method: "PATCH", json: body }), after);
+}
+
+/** Stores the run's drop points in this visiting order (adds, removes, reorders). */
+export function useSetStops(runId: string, after: After<unknown, string[]> = {}) {
+  return useStopWrite(runId, (dropPointIds: string[]) => fetchJson(`/api/runs/${runId}/stops`, { method: "PUT", json: { dropPointIds } }), after);
+}
+
+/** The stops still to visit in the shortest order; each press is its own request (own Idempotency-Key). */
+export function useOptimiseRun(runId: string, after: After<unknown, void> = {}) {
+  return useStopWrite<void>(runId, () => fetchJson(`/api/runs/${runId}/optimise`, { method: "POST", json: {}, headers: { "Idempotency-Key": newKey() } }), after);
+}
+
+/** Cancels the run (a second cancel is 409: the run is already cancelled). */
+export function useCancelRun(runId: string, after: After<unknown, string> = {}) {
+  return useStopWrite<string>(runId, (reason) => fetchJson(`/api/runs/${runId}/cancel`, { method: "POST", json: { reason }, headers: { "Idempotency-Key": newKey() } }), after);
+}

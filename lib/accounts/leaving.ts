@@ -30,7 +30,7 @@ export async function leaveGroup(groupId: string, userId: string): Promise<{ lef
     if (member.role === "organiser" && organisers.length <= 1) throw conflict(LAST_ORGANISER_LEAVING, { rule: "last_organiser" });
     await trx("memberships").where({ group_id: groupId, user_id: userId }).delete();
     // Pickup runs given to them that are not done go back to the organisers to give again.
-    await trx("pickup_runs").where({ group_id: groupId, assignee_id: userId }).whereNot("state", "done").update({ assignee_id: null });
+    await trx("pickup_runs").where({ group_id: groupId, assignee_id: userId }).whereNotIn("state", ["done", "cancelled"]).update({ assignee_id: null });
     await endSessions(userId, trx);
     const [{ count }] = await trx("memberships").where({ user_id: userId }).count<{ count: number }[]>({ count: "*" });
     return { left: true as const, groupsLeft: Number(count) };
@@ -54,7 +54,7 @@ export async function handOver(groupId: string, fromUserId: string, toUserId: st
     await trx("memberships").where({ group_id: groupId, user_id: toUserId }).update({ role: "organiser" });
     if (input.then === "leave") {
       await trx("memberships").where({ group_id: groupId, user_id: fromUserId }).delete();
-      await trx("pickup_runs").where({ group_id: groupId, assignee_id: fromUserId }).whereNot("state", "done").update({ assignee_id: null });
+      await trx("pickup_runs").where({ group_id: groupId, assignee_id: fromUserId }).whereNotIn("state", ["done", "cancelled"]).update({ assignee_id: null });
       await endSessions(fromUserId, trx);
     } else {
       await trx("memberships").where({ group_id: groupId, user_id: fromUserId }).update({ role: input.then });

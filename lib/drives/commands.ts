@@ -53,11 +53,16 @@ export async function updateDrive(groupId: string, id: string, input: DriveInput
 }
 
 function pointRow(input: Partial<DropPointInput>) {
-  const map: Record<string, string> = { hostName: "host_name", hostPhone: "host_phone", hostEmail: "host_email", capacityBags: "capacity_bags" };
+  const map: Record<string, string> = { hostName: "host_name", hostPhone: "host_phone", hostEmail: "host_email", capacityBags: "capacity_bags", openingHours: "opening_hours" };
   const row: Record<string, unknown> = {};
   for (const [key, value] of Object.entries(input)) {
     if (value === undefined) continue;
     const column = map[key] ?? key;
+    // jsonb: an array must go as JSON text (node-postgres would send a Postgres array).
+    if (key === "openingHours") {
+      row[column] = JSON.stringify(value);
+      continue;
+    }
     row[column] = (key === "hostName" || key === "hostPhone" || key === "hostEmail") && value === "" ? null : value;
   }
   return row;

@@ -11,7 +11,7 @@ export async function listFullBins(groupId: string, driveId: string): Promise<Fu
   const { rows } = await db.raw(
     `select p.id, p.name, cf.fill_level, cf.fill_at
        from drop_points p ${CURRENT_FILL_LATERAL}
-      where p.group_id = ? and p.drive_id = ? and p.active and cf.fill_level >= ?
+      where p.group_id = ? and p.drive_id = ? and p.active and p.archived_at is null and cf.fill_level >= ?
       order by cf.fill_at, p.name`,
     [groupId, driveId, ALERT_LEVEL],
   );

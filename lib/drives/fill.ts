@@ -51,7 +51,7 @@ export function currentFill(
  */
 export const CURRENT_FILL_LATERAL = `left join lateral (
     select fr.level as fill_level, fr.created_at as fill_at from fill_reports fr
-     where fr.drop_point_id = p.id
+     where fr.drop_point_id = p.id and fr.archived_at is null
        and fr.created_at > coalesce(greatest(p.fill_cleared_at,
              (select max(h.hauled_at) from hauls h where h.drop_point_id = p.id and h.reversed_at is null)), '-infinity')
      order by fr.created_at desc limit 1) cf on true`;

@@ -56,3 +56,36 @@ export function calendarDateIn(instant: Date, timeZone: string): string {
 export function haulDayMismatch(runDate: string, loggedAt: Date, timeZone: string): boolean {
   return calendarDateIn(loggedAt, timeZone) !== runDate;
 }
+
+export const ISO_WEEKDAY_SHORT: Record<number, string> = { 1: "Mon", 2: "Tue", 3: "Wed", 4: "Thu", 5: "Fri", 6: "Sat", 7: "Sun" };
+
+/** "Mon–Fri, Sun" for ISO weekdays: runs of three or more consecutive days are joined with a dash. */
+export function describeDays(days: readonly number[]): string {
+  const sorted = [...new Set(days)].sort((a, b) => a - b);
+  const parts: string[] = [];
+  for (let i = 0; i < sorted.length; ) {
+    let j = i;
+    while (j + 1 < sorted.length && sorted[j + 1] === sorted[j]! + 1) j++;
+    const [from, to] = [ISO_WEEKDAY_SHORT[sorted[i]!], ISO_WEEKDAY_SHORT[sorted[j]!]];
+    if (j - i >= 2) parts.push(`${from}–${to}`);
+    else for (let k = i; k <= j; k++) parts.push(ISO_WEEKDAY_SHORT[sorted[k]!]!);
+    i = j + 1;
+  }
+  return parts.join(", ");
+}
+
+/** "Mon–Fri 09:00–17:00; Sat 10:00–12:00", or "" when no hours are recorded. */
+export function describeOpeningHours(hours: OpeningHours | null | undefined): string {
+  return (hours ?? []).map((s) => `${describeDays(s.days)} ${s.opens}–${s.closes}`).join("; ");
+}
+
+/** The spans as the drop-point form sends them (a hidden field holding JSON); empty or unreadable text is "none recorded". */
+export const openingHoursField = z.preprocess((raw) => {
+  if (typeof raw !== "string") return raw;
+  if (raw.trim() === "") return [];
+  try {
+    return JSON.parse(raw);
+  } catch {
+    return raw; // not JSON: the array schema refuses it with its own message
+  }
+}, openingHoursSchema);

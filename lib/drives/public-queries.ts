@@ -26,6 +26,7 @@ export async function listPublicDrives(): Promise<PublicDriveSummary[]> {
     db("drives")
       .select(...publicDriveColumns)
       .where({ is_public: true })
+      .whereNull("archived_at")
       .orderBy([{ column: "starts_on", order: "desc" }, { column: "name" }]),
   );
 }
@@ -43,12 +44,13 @@ export async function listPublicDrivesWithDay(): Promise<(PublicDriveSummary & {
       db.raw(`(now() at time zone g.time_zone)::date as "today"`),
     )
     .where({ "d.is_public": true })
+    .whereNull("d.archived_at")
     .orderBy([{ column: "d.name" }]));
 }
 
 /** The time zone of the group running a public drive (for showing times as the group reads them). */
 export async function publicDriveTimeZone(slug: string): Promise<string> {
-  const row = await publicRead((db) => db("drives as d").join("groups as g", "g.id", "d.group_id").select("g.time_zone as timeZone").where({ "d.slug": slug, "d.is_public": true }).first());
+  const row = await publicRead((db) => db("drives as d").join("groups as g", "g.id", "d.group_id").select("g.time_zone as timeZone").where({ "d.slug": slug, "d.is_public": true }).whereNull("d.archived_at").first());
   return (row?.timeZone as string | undefined) ?? "UTC";
 }
 
@@ -82,6 +84,7 @@ export async function findPublicDrive(slug: string): Promise<PublicDriveRow | un
       "d.ends_on as endsOn",
     )
     .where({ "d.slug": slug, "d.is_public": true })
+    .whereNull("d.archived_at")
     .first());
   if (!row) return undefined;
   const { timeZone, locale, units, ...rest } = row;
@@ -107,16 +110,16 @@ export async function listPublicDropPointsWithTallies(slug: string): Promise<Pub
     `select p.id, p.name, p.address, p.lat, p.lng, p.hours, p.capacity_bags as "capacityBags",
             f.level as "fillLevel", f.created_at as "fillReportedAt", cf.fill_level, cf.fill_at,
             coalesce((select array_agg(fi.url order by fi.created_at) from files fi
-                       where fi.purpose = 'drop-point-photo' and fi.subject_id = p.id and fi.group_id = p.group_id), '{}') as photos,
+                       where fi.purpose = 'drop-point-photo' and fi.subject_id = p.id and fi.group_id = p.group_id and fi.archived_at is null), '{}') as photos,
             coalesce(t.hauls, 0)::int as hauls, coalesce(t.bags, 0)::int as bags,
             coalesce(t.good_cans, 0)::bigint as "goodCans", coalesce(t.rejected_cans, 0)::bigint as "rejectedCans"
        from drives d
-       join drop_points p on p.drive_id = d.id and p.active
+       join drop_points p on p.drive_id = d.id and p.active and p.archived_at is null
        left join drop_point_tallies t on t.drop_point_id = p.id
-       left join lateral (select level, created_at from fill_reports fr where fr.drop_point_id = p.id
+       left join lateral (select level, created_at from fill_reports fr where fr.drop_point_id = p.id and fr.archived_at is null
                            order by fr.created_at desc limit 1) f on true
        ${CURRENT_FILL_LATERAL}
-      where d.slug = ? and d.is_public
+      where d.slug = ? and d.is_public and d.archived_at is null
       order by p.name`,
     [slug],
   ));
@@ -141,12 +144,12 @@ export async function listPublicDropPointsWithTallies(slug: string): Promise<Pub
 /** Undefined for an id that is not a UUID: PostgreSQL would refuse to compare it. */
 export async function findPublicDropPoint(driveId: string, id: string) {
   if (!UUID.test(id)) return undefined;
-  return db("drop_points").select("id", "group_id as groupId", "name", "hours", "fill_cleared_at as fillClearedAt").where({ id, drive_id: driveId, active: true }).first();
+  return db("drop_points").select("id", "group_id as groupId", "name", "hours", "fill_cleared_at as fillClearedAt").where({ id, drive_id: driveId, active: true }).whereNull("archived_at").first();
 }
 
 /** A public drive's id by its slug; 404 when there is none. */
 export async function publicDriveId(slug: string): Promise<string> {
-  const drive = await db("drives").select("id").where({ slug, is_public: true }).first();
+  const drive = await db("drives").select("id").where({ slug, is_public: true }).whereNull("archived_at").first();
   if (!drive) throw notFound("That drive");
   return drive.id;
 }

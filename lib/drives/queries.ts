@@ -1,11 +1,12 @@
 import "server-only";
 import { db } from "@/lib/db";
 import { UUID } from "@/lib/api/path";
+import { onShelf, type Shelf } from "@/lib/records/shelf";
 import type { DriveFillReport, DrivePledge, DropPointRecord, LogDrive } from "./types";
 
 export type { DropPointRecord };
 
-export async function listDrives(groupId: string) {
+export async function listDrives(groupId: string, shelf: Shelf = "active") {
   return db("drives as d")
     .select(
       "d.id",
@@ -14,10 +15,11 @@ export async function listDrives(groupId: string) {
       "d.starts_on as startsOn",
       "d.ends_on as endsOn",
       "d.is_public as isPublic",
-      db.raw(`(select count(*)::int from drop_points p where p.drive_id = d.id and p.group_id = d.group_id) as "dropPoints"`),
+      db.raw(`(select count(*)::int from drop_points p where p.drive_id = d.id and p.group_id = d.group_id and p.archived_at is null) as "dropPoints"`),
       db.raw(`(select count(*)::int from heater_units h where h.drive_id = d.id and h.group_id = d.group_id and h.archived_at is null) as "heaterUnits"`),
     )
     .where("d.group_id", groupId)
+    .where(onShelf(shelf, "d.archived_at"))
     .orderBy([{ column: "d.starts_on", order: "desc" }, { column: "d.name" }]);
 }
 
@@ -30,6 +32,8 @@ export interface DriveRecord {
   isPublic: boolean;
   description: string;
   wanted: string;
+  /** ISO time it was archived (issue 16), or null. */
+  archivedAt: string | null;
 }
 
 export async function findDrive(groupId: string, id: string): Promise<DriveRecord | undefined> {
@@ -44,6 +48,7 @@ export async function findDrive(groupId: string, id: string): Promise<DriveRecor
       "is_public as isPublic",
       "starts_on as startsOn",
       "ends_on as endsOn",
+      db.raw(`to_json(archived_at) #>> '{}' as "archivedAt"`),
     )
     .where({ id, group_id: groupId })
     .first();
@@ -61,11 +66,13 @@ const dropPointColumns = [
   db.raw(`coalesce(host_phone, '') as "hostPhone"`),
   db.raw(`coalesce(host_email::text, '') as "hostEmail"`),
   "capacity_bags as capacityBags",
+  "opening_hours as openingHours",
   "active",
+  db.raw(`to_json(archived_at) #>> '{}' as "archivedAt"`),
 ];
 
-export async function listDropPoints(groupId: string, driveId: string): Promise<DropPointRecord[]> {
-  return db("drop_points").select<DropPointRecord[]>(dropPointColumns).where({ group_id: groupId, drive_id: driveId }).orderBy("name");
+export async function listDropPoints(groupId: string, driveId: string, shelf: Shelf = "active"): Promise<DropPointRecord[]> {
+  return db("drop_points").select<DropPointRecord[]>(dropPointColumns).where({ group_id: groupId, drive_id: driveId }).where(onShelf(shelf)).orderBy("name");
 }
 
 export async function findDropPoint(groupId: string, id: string): Promise<DropPointRecord | undefined> {
@@ -73,14 +80,15 @@ export async function findDropPoint(groupId: string, id: string): Promise<DropPo
   return db("drop_points").select<DropPointRecord[]>(dropPointColumns).where({ group_id: groupId, id }).first();
 }
 
-export async function listDropPointPhotos(groupId: string, dropPointId: string) {
+export async function listDropPointPhotos(groupId: string, dropPointId: string, shelf: Shelf = "active") {
   return db("files")
     .select("id", "url", "name", "size")
     .where({ group_id: groupId, purpose: "drop-point-photo", subject_id: dropPointId })
+    .where(onShelf(shelf))
     .orderBy("created_at");
 }
 
-export async function listPledges(groupId: string, driveId: string): Promise<DrivePledge[]> {
+export async function listPledges(groupId: string, driveId: string, shelf: Shelf = "active"): Promise<DrivePledge[]> {
   return db("pledges as pl")
     .join("drop_points as p", "p.id", "pl.drop_point_id")
     .select(
@@ -96,10 +104,11 @@ export async function listPledges(groupId: string, driveId: string): Promise<Dri
       "pl.created_at as createdAt",
     )
     .where({ "pl.group_id": groupId, "pl.drive_id": driveId })
+    .where(onShelf(shelf, "pl.archived_at"))
     .orderBy([{ column: "pl.bring_on" }, { column: "pl.created_at" }]);
 }
 
-export async function listFillReports(groupId: string, driveId: string, limit = 30): Promise<DriveFillReport[]> {
+export async function listFillReports(groupId: string, driveId: string, limit = 30, shelf: Shelf = "active"): Promise<DriveFillReport[]> {
   return db("fill_reports as f")
     .join("drop_points as p", "p.id", "f.drop_point_id")
     .leftJoin("files as fi", function () {
@@ -107,6 +116,7 @@ export async function listFillReports(groupId: string, driveId: string, limit = 
     })
     .select("f.id", "f.level", "f.note", "f.alerted", "f.created_at as createdAt", "p.name as dropPointName", "fi.url as photoUrl")
     .where({ "f.group_id": groupId, "p.drive_id": driveId })
+    .where(onShelf(shelf, "f.archived_at"))
     .orderBy("f.created_at", "desc")
     .limit(limit);
 }
@@ -116,8 +126,9 @@ export async function listLogDrives(groupId: string): Promise<LogDrive[]> {
   const drives = await db("drives")
     .select("id", "name", "starts_on as startsOn", "ends_on as endsOn")
     .where({ group_id: groupId })
+    .whereNull("archived_at")
     .orderBy([{ column: "ends_on", order: "desc" }, { column: "name" }]);
-  const points = await db("drop_points").select("id", "name", "drive_id").where({ group_id: groupId, active: true }).orderBy("name");
+  const points = await db("drop_points").select("id", "name", "drive_id").where({ group_id: groupId, active: true }).whereNull("archived_at").orderBy("name");
   return drives.map((d) => ({
     id: d.id as string,
     name: d.name as string,

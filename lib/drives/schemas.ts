@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { day } from "@/lib/dates";
 import { FILL_LEVELS } from "./fill";
+import { openingHoursField } from "./opening-hours";
 
 export { FILL_LEVELS };
 
@@ -35,6 +36,8 @@ export const dropPointInput = z.object({
   lat: z.number({ message: "Place the drop point on the map." }).min(-90, "Latitude must be between −90 and 90.").max(90, "Latitude must be between −90 and 90."),
   lng: z.number({ message: "Place the drop point on the map." }).min(-180, "Longitude must be between −180 and 180.").max(180, "Longitude must be between −180 and 180."),
   hours: z.string().trim().max(240, "Keep the hours under 240 characters.").optional(),
+  /** Structured days and times (lib/drives/opening-hours.ts); the free-text `hours` stays for notes. */
+  openingHours: openingHoursField.optional(),
   hostName: z.string().trim().max(120).optional(),
   hostPhone: z.string().trim().max(40, "Keep the phone number under 40 characters.").optional(),
   hostEmail: z.union([z.literal(""), z.string().trim().email("That e-mail address does not look right.")]).optional(),

@@ -50,7 +50,10 @@ export interface DropPointRecord {
   hostPhone: string;
   hostEmail: string;
   capacityBags: number;
+  openingHours: import("./opening-hours").OpeningHours;
   active: boolean;
+  /** ISO time it was archived (issue 16), or null. */
+  archivedAt: string | null;
 }
 
 /** A bin reported full on the organiser's dashboard. */

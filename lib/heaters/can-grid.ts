@@ -2,7 +2,7 @@
  * The can grid behind one glazing sheet (PRODUCT.md computation 1). Pure: no
  * I/O, lengths in the request's unit, areas in that unit squared.
  */
-import { resolveCanGridInput, toMm, type CanGridInput, type LengthUnit } from "./schemas";
+import { resolveCanGridInput, toMm, type CanGridInput, type LengthUnit } from "./grid-input";
 import { formatLength } from "./format";
 
 export interface CanGridResult {

@@ -5,7 +5,7 @@
  * eighth, millimetres whole), and a no-break space between number and unit.
  */
 import { DEFAULT_LOOK, formatInches, formatMillimetres, formatNumber as formatIn, MM_PER_INCH, NBSP, type Look } from "@/lib/format";
-import type { LengthUnit } from "./schemas";
+import type { LengthUnit } from "./grid-input";
 
 type Locale = Pick<Look, "locale">;
 

@@ -5,7 +5,7 @@
  * read the way shops quote them.
  */
 import { computeCanGrid, type CanGridResult } from "./can-grid";
-import { fromMm, MM_PER_INCH, resolveCanGridInput, type CanGridInput, type LengthUnit } from "./schemas";
+import { fromMm, MM_PER_INCH, resolveCanGridInput, type CanGridInput, type LengthUnit } from "./grid-input";
 
 /** US fluid ounce in millilitres, exact by definition (NIST Handbook 44). */
 export const US_FL_OZ_ML = 29.5735295625;

@@ -134,6 +134,7 @@ export async function listGroupDrives(groupId: string) {
       "ends_on as endsOn",
     )
     .where({ group_id: groupId })
+    .whereNull("archived_at")
     .orderBy([{ column: "starts_on", order: "desc" }, { column: "name" }]);
 }
 

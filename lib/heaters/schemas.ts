@@ -4,33 +4,21 @@
  * the handler would return. Safe to import in the client.
  */
 import { z } from "zod";
-import { MM_PER_INCH } from "@/lib/format/measures";
+import {
+  CAN_GRID_DEFAULTS_MM,
+  DEFAULT_HOLES_PER_CAN,
+  fromMm,
+  MM_PER_INCH,
+  resolveCanGridInput,
+  toMm,
+  type CanGridInput,
+  type LengthUnit,
+  type ResolvedCanGridInput,
+} from "./grid-input";
 
-/** Exact by definition of the international inch (NIST SP 811); one constant, in lib/format. */
-export { MM_PER_INCH };
-
-export type LengthUnit = "mm" | "in";
-
-/** A length given in millimetres, expressed in `unit`. */
-export function fromMm(mm: number, unit: LengthUnit): number {
-  return unit === "mm" ? mm : mm / MM_PER_INCH;
-}
-
-/** A length given in `unit`, expressed in millimetres. */
-export function toMm(value: number, unit: LengthUnit): number {
-  return unit === "mm" ? value : value * MM_PER_INCH;
-}
-
-/** Defaults in millimetres; converted to the request's unit when it is inches. */
-export const CAN_GRID_DEFAULTS_MM = {
-  canDiameter: 66,
-  canLength: 122,
-  manifoldHeight: 127,
-  edgeClearance: 0,
-  frameAllowanceWidth: 0,
-  frameAllowanceHeight: 0,
-} as const;
-export const DEFAULT_HOLES_PER_CAN = 4;
+// The plain parts live in ./grid-input (no zod, for the planner's first screen); kept importable from here.
+export { CAN_GRID_DEFAULTS_MM, DEFAULT_HOLES_PER_CAN, fromMm, MM_PER_INCH, resolveCanGridInput, toMm };
+export type { CanGridInput, LengthUnit, ResolvedCanGridInput };
 
 type LengthField = keyof typeof CAN_GRID_DEFAULTS_MM | "glazingWidth" | "glazingHeight";
 
@@ -92,29 +80,9 @@ const canGridObject = z.object(
   { error: "Send the glazing size, its unit and what it covers" },
 );
 
-/** What a client may send (every optional length in the request's unit). */
-export type CanGridInput = z.input<typeof canGridObject>;
-
-/** The input with every default filled in, in the request's unit. */
-export type ResolvedCanGridInput = Required<CanGridInput>;
-
-/** Fills the defaults in the request's unit, so inches get 66 / 25.4 etc. exactly. */
-export function resolveCanGridInput(input: CanGridInput): ResolvedCanGridInput {
-  const d = (field: keyof typeof CAN_GRID_DEFAULTS_MM) => input[field] ?? fromMm(CAN_GRID_DEFAULTS_MM[field], input.unit);
-  return {
-    glazingWidth: input.glazingWidth,
-    glazingHeight: input.glazingHeight,
-    unit: input.unit,
-    coverage: input.coverage,
-    manifoldHeight: d("manifoldHeight"),
-    canDiameter: d("canDiameter"),
-    canLength: d("canLength"),
-    edgeClearance: d("edgeClearance"),
-    holesPerCan: input.holesPerCan ?? DEFAULT_HOLES_PER_CAN,
-    frameAllowanceWidth: d("frameAllowanceWidth"),
-    frameAllowanceHeight: d("frameAllowanceHeight"),
-  };
-}
+// The hand-written CanGridInput is what this schema takes: a compile error here when they part.
+type Same<A, B> = [A] extends [B] ? ([B] extends [A] ? true : false) : false;
+export const CAN_GRID_INPUT_TYPE_MATCHES: Same<z.input<typeof canGridObject>, CanGridInput> = true;
 
 export const canGridInputSchema = canGridObject
   .superRefine((input, ctx) => {

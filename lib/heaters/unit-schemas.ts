@@ -59,3 +59,7 @@ export const heaterArchiveInputSchema = z.object({}).strict();
 
 /** GET /api/heaters: `archived=1` lists the archived units only; without it, the active ones. */
 export const heaterListQuerySchema = z.object({ archived: z.enum(["0", "1"], { error: "archived is 0 or 1" }).optional() });
+
+/** POST /api/heaters/{id}/glazing: the unit's new plan (issue 16); its cans are recomputed from it on the server. */
+export const heaterGlazingInputSchema = z.object({ plan: canGridInputSchema }, { error: "Send the unit's new plan" }).strict();
+export type HeaterGlazingInput = z.input<typeof heaterGlazingInputSchema>;

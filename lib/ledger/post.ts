@@ -127,7 +127,7 @@ export function ledgerPayload(m: MovementSpec, lines: LineSpec[], extra: Record<
 }
 
 /** `fn` is one of db/functions' ledger functions; the payload is ledgerPayload's. */
-export function ledgerCall(fn: "ledger_post" | "ledger_haul" | "ledger_sort" | "ledger_reverse" | "ledger_unit" | "ledger_units" | "heater_unit_move" | "heater_unit_archive", payload: object): LedgerCall {
+export function ledgerCall(fn: "ledger_post" | "ledger_haul" | "ledger_sort" | "ledger_reverse" | "ledger_unit" | "ledger_units" | "heater_unit_move" | "heater_unit_archive" | "heater_unit_glazing" | "record_archive" | "record_delete", payload: object): LedgerCall {
   return { sql: `${fn}(?::jsonb)`, bindings: [JSON.stringify(payload)] };
 }
 

@@ -49,6 +49,7 @@ async function summaryDrives(groupId: string, today: string): Promise<SummaryDri
   const drives = await db("drives")
     .select("id", "name", "starts_on", "ends_on", "spare_percent")
     .where({ group_id: groupId })
+    .whereNull("archived_at")
     .andWhere("starts_on", "<=", today)
     .andWhere("ends_on", ">=", today)
     .orderBy("starts_on");
@@ -62,6 +63,7 @@ async function summaryDrives(groupId: string, today: string): Promise<SummaryDri
           .select("p.name as dropPointName", "pl.bags", "pl.bring_on as bringOn")
           // Only pledges still open: a donor's cancel or an organiser's mark ends one.
           .where({ "pl.group_id": groupId, "pl.drive_id": d.id, "pl.status": "pledged" })
+          .whereNull("pl.archived_at")
           .andWhere("pl.bring_on", ">=", today)
           .andWhere("pl.bring_on", "<", addDays(today, 7))
           .orderBy([{ column: "pl.bring_on" }, { column: "p.name" }]),

@@ -8,7 +8,9 @@ import { haulInputSchema } from "@/lib/ledger/schemas";
 import { planRoute } from "@/lib/runs/route-order";
 import type { CreateRunInput } from "./schemas";
 import { followStops } from "./stop-follow";
+import { groupTimeZone } from "@/lib/format/group-look-queries";
 import type { RunDetail, RunStop } from "./types";
+import { haulDayWarning } from "./warnings";
 
 // The pickup runs' writes: a new run, and settling its stops. Reads are in queries.ts.
 
@@ -106,6 +108,7 @@ export async function logHaulAtStop(actor: Actor, before: RunDetail, stopId: str
   const parsed = haulInputSchema.safeParse({ ...body, dropPointId: stop.dropPoint.id });
   if (!parsed.success) throw invalidInput(parsed.error);
   if (stop.status !== "pending") throw conflict(`This stop is already ${stop.status}.`);
+  const timeZone = await groupTimeZone(actor.group.id);
   const { haul, settled } = await recordHaulAtStop(actor, before.driveId, parsed.data, { runId: before.id, stopId }, trx);
   const logged: RunStop = {
     ...stop,
@@ -116,7 +119,8 @@ export async function logHaulAtStop(actor: Actor, before: RunDetail, stopId: str
     haul: { bags: haul.bags, weightKg: haul.weightKg, estimatedCans: haul.estimatedCans, movementId: haul.movementId },
   };
   const run: RunDetail = { ...before, ...settled.run, stopList: before.stopList.map((s) => (s.id === stopId ? logged : s)) };
-  return { haul, run };
+  // A warning, never a block: the haul is logged whatever the day (issue 16).
+  return { haul, run, warnings: haulDayWarning(before.plannedOn, new Date(haul.hauledAt), timeZone, stopId) };
 }
 
 /**

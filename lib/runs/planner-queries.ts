@@ -24,7 +24,7 @@ export async function suggestedStops(groupId: string, driveId: string, now = new
   const drive = await db("drives").select("id").where({ id: driveId, group_id: groupId }).first();
   if (!drive) throw notFound("That drive");
   const points = await db("drop_points")
-    .select("id", "name", "address", "lat", "lng", "hours", "capacity_bags as capacityBags")
+    .select("id", "name", "address", "lat", "lng", "hours", "capacity_bags as capacityBags", "opening_hours as openingHours")
     .where({ group_id: groupId, drive_id: driveId, active: true })
     .orderBy("name");
   const ids = points.map((p) => p.id as string);
@@ -41,14 +41,14 @@ export async function suggestedStops(groupId: string, driveId: string, now = new
   const byId = new Map(points.map((p) => [p.id as string, p]));
   return ranked.map((s) => {
     const p = byId.get(s.id)!;
-    return { ...s, name: p.name, address: p.address, lat: p.lat, lng: p.lng, hours: p.hours, capacityBags: p.capacityBags };
+    return { ...s, name: p.name, address: p.address, lat: p.lat, lng: p.lng, hours: p.hours, capacityBags: p.capacityBags, openingHours: p.openingHours ?? [] };
   });
 }
 
 export interface PickupHistoryEntry {
   runId: string;
   plannedOn: string;
-  status: "pending" | "logged" | "skipped";
+  status: "pending" | "logged" | "skipped" | "released";
   skipReason: string | null;
   haulId: string | null;
   haulBags: number | null;

@@ -3,7 +3,9 @@ import type { Knex } from "knex";
 import { db } from "@/lib/db";
 import { notFound } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
+import { isOpenOnDate, type OpeningHours } from "@/lib/drives/opening-hours";
 import type { RunDetail, RunStop, RunSummary } from "./types";
+import { closedStopWarnings } from "./warnings";
 
 export type { RunDetail, RunStop, RunSummary };
 
@@ -40,8 +42,19 @@ export async function getRun(actor: Actor, runId: string, trx: Knex = db): Promi
     .join("drives as d", "d.id", "r.drive_id")
     .leftJoin("users as u", "u.id", "r.assignee_id")
     .leftJoin("users as c", "c.id", "r.created_by")
+    .leftJoin("users as x", "x.id", "r.cancelled_by")
     .select(summaryColumns(trx))
-    .select("d.slug as driveSlug", "r.start_lat", "r.start_lng", "r.return_to_start as returnToStart", "r.notes", "c.name as createdByName")
+    .select(
+      "d.slug as driveSlug",
+      "r.start_lat",
+      "r.start_lng",
+      "r.return_to_start as returnToStart",
+      "r.notes",
+      "c.name as createdByName",
+      "r.cancelled_at",
+      "r.cancel_reason as cancelReason",
+      "x.name as cancelledByName",
+    )
     .where({ "r.id": runId, "r.group_id": actor.group.id })
     .modify((q) => {
       if (actor.role !== "organiser") q.andWhere("r.assignee_id", actor.user.id);
@@ -74,12 +87,14 @@ export async function getRun(actor: Actor, runId: string, trx: Knex = db): Promi
       "p.host_phone as hostPhone",
       "p.host_email as hostEmail",
       "p.capacity_bags as capacityBags",
+      "p.opening_hours as openingHours",
     )
     .where({ "s.run_id": runId, "s.group_id": actor.group.id })
     .orderBy("s.position");
-  const { start_lat, start_lng, ...rest } = run;
-  return {
+  const { start_lat, start_lng, cancelled_at, ...rest } = run;
+  const detail: Omit<RunDetail, "warnings"> = {
     ...rest,
+    cancelledAt: cancelled_at ? new Date(cancelled_at).toISOString() : null,
     start: { lat: start_lat, lng: start_lng },
     stopList: stops.map((s) => ({
       id: s.id,
@@ -104,9 +119,12 @@ export async function getRun(actor: Actor, runId: string, trx: Knex = db): Promi
         hostPhone: s.hostPhone,
         hostEmail: s.hostEmail,
         capacityBags: s.capacityBags,
+        openingHours: (s.openingHours ?? []) as OpeningHours,
       },
+      openOnRunDay: isOpenOnDate(s.openingHours as OpeningHours, run.plannedOn as string),
     })),
   };
+  return { ...detail, warnings: closedStopWarnings(detail) };
 }
 
 /** Members who can drive a run: volunteers and organisers of the group. */

@@ -5,12 +5,16 @@ import { z } from "zod";
 import { day } from "@/lib/dates";
 import { MAX_ROUTE_STOPS } from "@/lib/runs/route-schemas";
 
-export const RUN_STATES = ["planned", "under_way", "done"] as const;
+export const RUN_STATES = ["planned", "under_way", "done", "cancelled"] as const;
 export type RunState = (typeof RUN_STATES)[number];
-export const RUN_STATE_LABEL: Record<RunState, string> = { planned: "Planned", under_way: "Under way", done: "Done" };
+export const RUN_STATE_LABEL: Record<RunState, string> = { planned: "Planned", under_way: "Under way", done: "Done", cancelled: "Cancelled" };
+/** A run in one of these states takes no more edits (409). */
+export const CLOSED_RUN_STATES: readonly RunState[] = ["done", "cancelled"];
 
-export const STOP_STATUSES = ["pending", "logged", "skipped"] as const;
+/** `released`: the stop was still pending when its run was cancelled (kept for the record). */
+export const STOP_STATUSES = ["pending", "logged", "skipped", "released"] as const;
 export type StopStatus = (typeof STOP_STATUSES)[number];
+export const STOP_STATUS_LABEL: Record<StopStatus, string> = { pending: "To visit", logged: "Haul logged", skipped: "Skipped", released: "Released (run cancelled)" };
 
 const uuid = (what: string) => z.uuid({ error: `Choose ${what}` });
 
@@ -62,3 +66,51 @@ export const logStopInputSchema = z.object(
   { error: "Send the haul id" },
 );
 export type LogStopInput = z.infer<typeof logStopInputSchema>;
+
+const notesSchema = z.string({ error: "Notes must be text" }).trim().max(1000, { error: "Keep notes under 1000 characters" });
+
+/** PATCH /api/runs/{id}: the fields sent are changed, the others kept. Setting the same values again changes nothing and mails nobody. */
+export const editRunInputSchema = z
+  .object(
+    {
+      plannedOn: day("Pick the day of the run").optional(),
+      assigneeId: uuid("the volunteer who drives this run").optional(),
+      notes: notesSchema.optional(),
+    },
+    { error: "Send the changes as a JSON object" },
+  )
+  .strict()
+  .refine((v) => v.plannedOn !== undefined || v.assigneeId !== undefined || v.notes !== undefined, {
+    error: "Change the date, the volunteer or the notes",
+    path: ["plannedOn"],
+  });
+export type EditRunInput = z.infer<typeof editRunInputSchema>;
+
+/** PUT /api/runs/{id}/stops: the run's drop points in visiting order (adds, removes and reorders in one). */
+export const setStopsInputSchema = z.object(
+  {
+    dropPointIds: z
+      .array(z.uuid({ error: "Unknown drop point" }), { error: "List the drop points in visiting order" })
+      .min(1, { error: "A run needs at least one stop (cancel the run instead)" })
+      .max(MAX_ROUTE_STOPS, { error: `A run can have at most ${MAX_ROUTE_STOPS} stops` })
+      .refine((ids) => new Set(ids).size === ids.length, { error: "A drop point is listed twice" }),
+  },
+  { error: "Send the stops as a JSON object" },
+);
+export type SetStopsInput = z.infer<typeof setStopsInputSchema>;
+
+/** POST /api/runs/{id}/optimise: no fields; the stops still to visit are put in the shortest order. */
+export const optimiseRunInputSchema = z.object({}, { error: "Send an empty JSON object" }).strict();
+
+/** POST /api/runs/{id}/cancel */
+export const cancelRunInputSchema = z.object(
+  {
+    reason: z
+      .string({ error: "Say why the run is cancelled" })
+      .trim()
+      .min(3, { error: "Say why the run is cancelled (a few words)" })
+      .max(300, { error: "Keep the reason under 300 characters" }),
+  },
+  { error: "Send a reason" },
+);
+export type CancelRunInput = z.infer<typeof cancelRunInputSchema>;

@@ -20,8 +20,9 @@ export async function followStops(trx: Knex.Transaction, runId: string, starts: 
 
 /** Puts a skipped stop back on the run. The run's volunteer or an organiser only; a stop not skipped is 409. */
 export async function unskipStop(actor: Actor, runId: string, stopId: string, trx: Knex.Transaction) {
-  const run = await trx("pickup_runs").select("id", "assignee_id").where({ id: runId, group_id: actor.group.id }).forUpdate().first();
+  const run = await trx("pickup_runs").select("id", "assignee_id", "state").where({ id: runId, group_id: actor.group.id }).forUpdate().first();
   if (!run || (actor.role !== "organiser" && run.assignee_id !== actor.user.id)) throw notFound("That pickup run");
+  if (run.state === "cancelled") throw conflict("This run is cancelled: its stops stay as they were.");
   const stop = await trx("pickup_run_stops").select("id", "status").where({ id: stopId, run_id: runId, group_id: actor.group.id }).first();
   if (!stop) throw notFound("That stop");
   if (stop.status !== "skipped") throw conflict(`This stop is ${stop.status}, not skipped.`);

@@ -1,6 +1,7 @@
 import type { RunState, StopStatus } from "./schemas";
 import type { Suggestion } from "./suggest";
 import type { DropPointPlace } from "@/lib/drives/types";
+import type { OpeningHours } from "@/lib/drives/opening-hours";
 
 // The pickup-run endpoints' answers, as both sides see them: the server's
 // queries declare they return these, and the client's hooks read them. Safe
@@ -31,7 +32,16 @@ export interface RunStop {
   /** `movementId` is the ledger entry to undo (POST /api/movements/{id}/reversal), which reopens the stop. */
   haul: { bags: number; weightKg: number | null; estimatedCans: number; movementId: string } | null;
   /** The place, with what the driver needs and the public never sees. */
-  dropPoint: DropPointPlace & { accessNotes: string; hostName: string | null; hostPhone: string | null; hostEmail: string | null };
+  dropPoint: DropPointPlace & {
+    accessNotes: string;
+    hostName: string | null;
+    hostPhone: string | null;
+    hostEmail: string | null;
+    /** Structured spans (ISO 8601 weekdays); empty when none are recorded. */
+    openingHours: OpeningHours;
+  };
+  /** Open at some time on the run's day by its opening hours; null when no hours are recorded. A warning, never a block. */
+  openOnRunDay: boolean | null;
 }
 
 export interface RunDetail extends RunSummary {
@@ -40,11 +50,23 @@ export interface RunDetail extends RunSummary {
   returnToStart: boolean;
   notes: string;
   createdByName: string | null;
+  cancelledAt: string | null;
+  cancelReason: string | null;
+  cancelledByName: string | null;
   stopList: RunStop[];
+  /** Pending stops closed on the run's day by their opening hours (lib/runs/warnings.ts). */
+  warnings: RunWarning[];
 }
 
-/** Where a drop point is and what it holds, as the planner shows it (its id comes with the suggestion). */
-export type PlannerPlace = Omit<DropPointPlace, "id">;
+/** A warning that never blocks: shown beside the run or a haul, and sent with write answers. */
+export interface RunWarning {
+  kind: "closedOnRunDay" | "haulOffRunDay";
+  stopId?: string;
+  message: string;
+}
+
+/** Where a drop point is, what it holds and when it is open, as the planner shows it (its id comes with the suggestion). */
+export type PlannerPlace = Omit<DropPointPlace, "id"> & { openingHours: OpeningHours };
 
 /**
  * One drop point as the planner offers it (GET /api/runs/suggestions), as JSON:

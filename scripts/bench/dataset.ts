@@ -118,8 +118,8 @@ export async function generateDataset(db: Knex, o: DatasetOptions): Promise<Data
   return { groupId: group.id, driveIds: drives.map((d) => d.id), slugs: drives.map((d) => d.slug), lines: Number(n?.n) };
 }
 
-/** The running totals of the bench drives, computed from their ledger lines. */
-async function recomputeTotals(trx: Knex.Transaction): Promise<void> {
+/** The running totals of the drives in the temp table bd (their drop points in bp), computed from their ledger lines. */
+export async function recomputeTotals(trx: Knex.Transaction): Promise<void> {
   await exec(trx, `
     insert into stage_balances (group_id, drive_id, drop_point_id, heater_unit_id, stage, quantity)
       select group_id, drive_id, null, null, stage, sum(q) from (
@@ -156,7 +156,7 @@ async function recomputeTotals(trx: Knex.Transaction): Promise<void> {
 }
 
 /** pg refuses several statements in one parameterised query, so run them one by one. */
-async function exec(trx: Knex.Transaction, sql: string, bindings: Record<string, unknown>): Promise<void> {
+export async function exec(trx: Knex.Transaction, sql: string, bindings: Record<string, unknown>): Promise<void> {
   for (const statement of sql.split(/;\s*\n/).map((x) => x.trim().replace(/;$/, "")).filter(Boolean)) {
     const used = Object.fromEntries(Object.entries(bindings).filter(([k]) => new RegExp(`:${k}\\b`).test(statement)));
     await trx.raw(statement, used as Knex.ValueDict);

@@ -125,6 +125,8 @@ declare module "knex/types/tables" {
     purpose: string;
     subject_id: string | null;
     created_at: Date;
+    /** Set while archived (migration 20261212010000). */
+    archived_at: Date | null;
   }
   interface Tables {
     users: UsersRow;

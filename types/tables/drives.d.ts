@@ -17,6 +17,8 @@ declare module "knex/types/tables" {
     spare_percent: number;
     created_at: Date;
     updated_at: Date;
+    /** Set while archived (migration 20261212010000). */
+    archived_at: Date | null;
   }
   interface DropPointsRow {
     id: string;
@@ -35,6 +37,8 @@ declare module "knex/types/tables" {
     active: boolean;
     created_at: Date;
     fill_cleared_at: Date | null;
+    /** Set while archived (migration 20261212010000). */
+    archived_at: Date | null;
   }
   interface PledgesRow {
     id: string;
@@ -51,6 +55,8 @@ declare module "knex/types/tables" {
     status: "pledged" | "cancelled" | "received" | "notBrought";
     status_at: Date | null;
     haul_id: string | null;
+    /** Set while archived (migration 20261212010000). */
+    archived_at: Date | null;
   }
   interface PledgeConfirmationsRow {
     group_id: string;
@@ -68,6 +74,8 @@ declare module "knex/types/tables" {
     photo_file_id: string | null;
     alerted: boolean;
     created_at: Date;
+    /** Set while archived (migration 20261212010000). */
+    archived_at: Date | null;
   }
   interface HeaterUnitsRow {
     id: string;

@@ -1,12 +1,14 @@
 "use client";
 
-import { useActionState, useEffect, useEffectEvent } from "react";
+import { startTransition, useActionState, useEffect, useEffectEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, FormError } from "@/components/ui/field";
 import { NumberField } from "@/components/ui/number-field";
 import { IDLE, type ActionState } from "@/lib/api/action-state";
 import { createDropPointAction, updateDropPointAction } from "@/lib/drives/form-actions";
 import { NUMBER_SPECS } from "@/lib/forms/number-input";
+import type { OpeningSpan } from "@/lib/drives/opening-hours";
+import { OpeningHoursInput } from "./opening-hours-input";
 
 export interface DropPointValues {
   name: string;
@@ -14,6 +16,7 @@ export interface DropPointValues {
   lat: string;
   lng: string;
   hours: string;
+  openingHours: OpeningSpan[];
   hostName: string;
   hostPhone: string;
   hostEmail: string;
@@ -22,7 +25,7 @@ export interface DropPointValues {
 }
 
 export const emptyDropPoint = (lat = "", lng = ""): DropPointValues => ({
-  name: "", address: "", lat, lng, hours: "", hostName: "", hostPhone: "", hostEmail: "", capacityBags: "6", active: true,
+  name: "", address: "", lat, lng, hours: "", openingHours: [], hostName: "", hostPhone: "", hostEmail: "", capacityBags: "6", active: true,
 });
 
 // A plain form posting to a server action: createDropPointAction (hidden
@@ -56,7 +59,20 @@ export function DropPointForm({
   const field = (k: keyof DropPointValues) => ({ name: k, value: (values[k] as string | null) ?? "", onChange: text(k), error: errors[k] });
 
   return (
-    <form action={send} noValidate className="flex flex-col gap-2" aria-label={submitLabel}>
+    <form
+      action={send}
+      // With JavaScript the action is sent by hand: React's reset after a form action would clear the
+      // controlled checkboxes (opening days, "open") on screen while the state still holds them.
+      // Without JavaScript the form posts to the same action as before.
+      onSubmit={(e) => {
+        e.preventDefault();
+        const data = new FormData(e.currentTarget);
+        startTransition(() => send(data));
+      }}
+      noValidate
+      className="flex flex-col gap-2"
+      aria-label={submitLabel}
+    >
       {"driveId" in target ? <input type="hidden" name="driveId" value={target.driveId} /> : <input type="hidden" name="id" value={target.id} />}
       <FormError message={state.ok === false ? state.message : null} />
       <Field id="dp-name" label="Name" {...field("name")} />
@@ -66,7 +82,12 @@ export function DropPointForm({
         <Field id="dp-lat" label="Latitude" inputMode="decimal" {...field("lat")} />
         <Field id="dp-lng" label="Longitude" inputMode="decimal" {...field("lng")} />
       </div>
-      <Field id="dp-hours" label="Opening hours" placeholder="Mon–Sat 9:00–17:00" {...field("hours")} />
+      <OpeningHoursInput
+        value={values.openingHours}
+        onChange={(openingHours) => onChange({ ...values, openingHours })}
+        error={Object.entries(errors).find(([k]) => k.startsWith("openingHours"))?.[1]}
+      />
+      <Field id="dp-hours" label="Notes on opening hours" hint="Free text, for example: ring the side bell; closed on bank holidays." {...field("hours")} />
       <NumberField
         id="dp-capacity"
         fieldName="capacityBags"

@@ -75,7 +75,7 @@ export function DropPointsEditor({
           />
         </section>
       ) : (
-        <button type="button" className="self-start underline" onClick={() => setDraft(emptyDropPoint(String(centre.lat), String(centre.lng)))}>
+        <button type="button" className="tap self-start underline" onClick={() => setDraft(emptyDropPoint(String(centre.lat), String(centre.lng)))}>
           Add a drop point by typing its details
         </button>
       )}
@@ -83,7 +83,7 @@ export function DropPointsEditor({
         {points.map((p) => (
           <li key={p.id} className="flex flex-wrap items-baseline justify-between gap-2 py-2">
             <span>
-              <Link href={`/organise/drop-points/${p.id}`} className="font-semibold">{p.name}</Link>
+              <Link href={`/organise/drop-points/${p.id}`} className="tap font-semibold">{p.name}</Link>
               {p.active ? "" : <span className="text-ink-faint"> · paused</span>}
               <span className="block text-sm text-ink-soft">{p.address} · {p.hours} · {countOf(p.capacityBags, "bag")}</span>
             </span>

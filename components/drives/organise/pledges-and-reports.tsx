@@ -4,6 +4,7 @@ import { LEVEL_LABEL } from "@/lib/drives/fill";
 import { formatter, NBSP, type Look } from "@/lib/format";
 import type { DriveFillReport, DrivePledge } from "@/lib/drives/types";
 import { PLEDGE_STATUS_LABEL } from "@/lib/drives/schemas";
+import { RecordActions } from "@/components/records/record-actions";
 import { PledgeMarker } from "./pledge-marker";
 
 /** Bags pledged (still open or received) and bags received, per drop point. */
@@ -55,6 +56,7 @@ export function PledgesAndReports({ pledges, reports, points, slug, look, today 
                     <span className="text-sm font-semibold">· {past ? "Past its day, not marked" : PLEDGE_STATUS_LABEL[p.status]}</span>
                     <span className="block text-sm text-ink-soft">{p.name || "Anonymous"}{p.email ? ` · ${p.email}` : ""}</span>
                     <PledgeMarker id={p.id} status={p.status} label={what} />
+                    <RecordActions kind="pledge" id={p.id} name={`the pledge of ${what}`} archived={false} compact />
                   </li>
                 );
               })}
@@ -71,7 +73,8 @@ export function PledgesAndReports({ pledges, reports, points, slug, look, today 
               <li key={r.id} className="py-2">
                 <strong>{r.dropPointName}</strong>: {LEVEL_LABEL[r.level] ?? `${r.level}${NBSP}%`} {r.alerted ? <span className="font-semibold text-alarm">· alert sent</span> : null}
                 <span className="block text-sm text-ink-soft">{f.moment(r.createdAt)}{r.note ? ` · “${r.note}”` : ""}</span>
-                {r.photoUrl ? <a href={r.photoUrl}>See the photo</a> : null}
+                {r.photoUrl ? <a href={r.photoUrl} className="tap">See the photo</a> : null}
+                <RecordActions kind="fillReport" id={r.id} name={`the fill report of ${r.dropPointName}, ${f.moment(r.createdAt)}`} archived={false} compact />
               </li>
             ))}
           </ul>
@@ -81,7 +84,7 @@ export function PledgesAndReports({ pledges, reports, points, slug, look, today 
         <ul className="flex flex-col gap-1">
           {points.map((p) => (
             <li key={p.id}>
-              <Link href={`/drives/${slug}/sign/${p.id}`}>Sign for {p.name}</Link>
+              <Link href={`/drives/${slug}/sign/${p.id}`} className="tap">Sign for {p.name}</Link>
             </li>
           ))}
         </ul>

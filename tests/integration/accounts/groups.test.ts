@@ -19,4 +19,16 @@ describe("the demo person in two groups", () => {
     const drives = await client.json<{ slug: string }[]>("GET", "/api/drives");
     expect(drives.body.map((d) => d.slug)).not.toContain("larkhollow-winter-2026");
   });
+
+  it("a switch to a group the person is not in changes nothing (the same POST the page's switcher sends)", async () => {
+    const client = await signedIn("volunteer@cantrove.test");
+    const before = await client.json<{ group: { id: string; slug: string }; role: string }>("GET", "/api/me");
+    const other = await signedIn("organiser@elsewhere.test");
+    const theirs = (await other.json<{ group: { id: string } }>("GET", "/api/me")).body.group.id;
+    expect(theirs).not.toBe(before.body.group.id);
+    const csrf = await client.json<{ csrfToken: string }>("GET", "/api/auth/csrf");
+    await client.request("POST", "/api/auth/session", { csrfToken: csrf.body.csrfToken, data: { groupId: theirs } });
+    const after = await client.json<{ group: { slug: string }; role: string }>("GET", "/api/me");
+    expect(after.body).toMatchObject({ group: { slug: before.body.group.slug }, role: before.body.role });
+  });
 });

@@ -59,3 +59,11 @@ rows.push(
     row("POST", `heaters/[id]/${what}`, `/api/heaters/${organisersUnit}/${what}`, othersUnit, { body: () => ({ sure: "yes" }), note: refusedBuilder }),
   ]),
 );
+
+// A unit's new glazing (issue 16): organisers only, even for a builder's own unit; the invalid plan changes nothing.
+rows.push(
+  row("POST", "heaters/[id]/glazing", (f) => `/api/heaters/${f.demoHeaterId}/glazing`, expects(401, 403, 403, 422, 404), {
+    body: () => ({ plan: { glazingWidth: -1 } }),
+    note: "only organisers change a unit's glazing; another group's unit is 404",
+  }),
+);

@@ -21,6 +21,12 @@ export const rows: AuthzRow[] = [
   row("POST", "runs", "/api/runs", expects(401, 403, 403, 422, 422), { body: () => ({ dropPointIds: [] }) }),
   row("GET", "runs/suggestions", (f) => `/api/runs/suggestions?driveId=${f.demoDriveId}`, expects(401, 403, 403, 200, 404)),
   row("GET", "runs/[id]", runPath, expects(401, 200, 403, 200, 404)),
+  // Editing and cancelling are the organisers' (issue 16); the run's volunteer may settle stops only.
+  // Each body is refused on purpose, so those let in get 422 and nothing changes.
+  row("PATCH", "runs/[id]", runPath, expects(401, 403, 403, 422, 404), { body: () => ({ plannedOn: "not-a-day" }) }),
+  row("PUT", "runs/[id]/stops", `${runPath}/stops`, expects(401, 403, 403, 422, 404), { body: () => ({ dropPointIds: [] }) }),
+  row("POST", "runs/[id]/optimise", `${runPath}/optimise`, expects(401, 403, 403, 422, 404), { body: () => ({ unexpected: true }) }),
+  row("POST", "runs/[id]/cancel", `${runPath}/cancel`, expects(401, 403, 403, 422, 404), { body: () => ({ reason: "" }) }),
   row("POST", "runs/[id]/stops/[stopId]/skip", `${stopPath}/skip`, expects(401, 422, 403, 422, 404), { body: () => ({ reason: "" }) }),
   row("POST", "runs/[id]/stops/[stopId]/unskip", `${stopPath}/unskip`, expects(401, 409, 403, 409, 404), {
     note: "the demo stop is pending, so those who may touch it get 409 (not skipped)",

@@ -66,3 +66,30 @@ describe("calendarDateIn / haulDayMismatch", () => {
     expect(haulDayMismatch("2026-12-04", late, "Pacific/Auckland")).toBe(false);
   });
 });
+
+describe("day names and the drop-point form's field", () => {
+  // Reference: schema.org OpeningHoursSpecification's dayOfWeek takes the DayOfWeek
+  // members https://schema.org/Monday … https://schema.org/Sunday; ISO 8601 numbers
+  // them 1 (Monday) to 7 (Sunday). Our labels must be those names in that order.
+  it("labels ISO weekdays 1–7 with schema.org's DayOfWeek names", async () => {
+    const { ISO_WEEKDAY_LABELS } = await import("@/lib/drives/opening-hours");
+    expect([1, 2, 3, 4, 5, 6, 7].map((d) => ISO_WEEKDAY_LABELS[d])).toEqual(["Monday", "Tuesday", "Wednesday", "Thursday", "Friday", "Saturday", "Sunday"]);
+  });
+  it("words days and spans compactly", async () => {
+    const { describeDays, describeOpeningHours } = await import("@/lib/drives/opening-hours");
+    expect(describeDays([1, 2, 3, 4, 5])).toBe("Mon–Fri");
+    expect(describeDays([7, 6])).toBe("Sat, Sun");
+    expect(describeDays([1, 3, 4, 5, 7])).toBe("Mon, Wed–Fri, Sun");
+    expect(describeOpeningHours([{ days: [1, 2, 3, 4, 5], opens: "09:00", closes: "17:00" }, { days: [6], opens: "10:00", closes: "12:00" }])).toBe(
+      "Mon–Fri 09:00–17:00; Sat 10:00–12:00",
+    );
+    expect(describeOpeningHours([])).toBe("");
+  });
+  it("reads the form's hidden JSON field: empty is none, bad JSON or bad spans are refused", async () => {
+    const { openingHoursField } = await import("@/lib/drives/opening-hours");
+    expect(openingHoursField.parse("")).toEqual([]);
+    expect(openingHoursField.parse('[{"days":[6,7],"opens":"09:00","closes":"13:00"}]')).toEqual([{ days: [6, 7], opens: "09:00", closes: "13:00" }]);
+    expect(openingHoursField.safeParse("{not json").success).toBe(false);
+    expect(openingHoursField.safeParse('[{"days":[],"opens":"09:00","closes":"13:00"}]').success).toBe(false);
+  });
+});

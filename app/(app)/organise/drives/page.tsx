@@ -13,7 +13,7 @@ export const metadata: Metadata = { title: "Drives" };
 
 export default async function OrganiseDrivesPage() {
   const actor = await requirePageRole("/organise/drives", "organiser");
-  const [drives, look] = await Promise.all([listDrives(actor.group.id), groupLook(actor.group.id)]);
+  const [drives, archived, look] = await Promise.all([listDrives(actor.group.id), listDrives(actor.group.id, "archived"), groupLook(actor.group.id)]);
   return (
     <main className="flex flex-col gap-6">
       <PageHeading title="Drives">
@@ -35,6 +35,19 @@ export default async function OrganiseDrivesPage() {
           </ul>
         )}
       </Card>
+      {archived.length ? (
+        <Card title={`Archived drives (${archived.length})`}>
+          <p className="mb-2 text-ink-soft">Hidden from the lists, the entry forms and the public. Open one to restore it.</p>
+          <ul className="divide-y divide-paper-edge" aria-label="Archived drives">
+            {archived.map((d) => (
+              <li key={d.id} className="flex flex-wrap items-baseline justify-between gap-2 py-3">
+                <Link href={`/organise/drives/${d.id}`} className="tap font-semibold">{d.name}</Link>
+                <span className="text-ink-faint">{spanText(d, look)}</span>
+              </li>
+            ))}
+          </ul>
+        </Card>
+      ) : null}
     </main>
   );
 }

@@ -40,6 +40,9 @@ export default async function RunsPage() {
       <Card title="Done">
         <RunList look={look} runs={by("done")} empty="No finished runs yet." />
       </Card>
+      <Card title="Cancelled">
+        <RunList look={look} runs={by("cancelled")} empty="No cancelled runs." />
+      </Card>
       <Card title="Pickup history by drop point">
         <PickupHistory points={history} look={look} />
       </Card>

@@ -12,6 +12,7 @@ import { DriveProgressLine } from "@/components/heaters/drive-progress-line";
 import { StateBadge } from "@/components/heaters/state-badge";
 import { StateMover } from "@/components/heaters/state-mover";
 import { ArchiveUnit } from "@/components/heaters/archive-unit";
+import { GlazingEditor } from "@/components/heaters/glazing-editor";
 import { AppError } from "@/lib/api/errors";
 import { requirePageRole } from "@/lib/auth/session";
 import { computeCanGrid } from "@/lib/heaters/can-grid";
@@ -127,6 +128,16 @@ export default async function UnitPage({ params }: Props) {
           <GridPreview plan={resolveCanGridInput(plan)} grid={grid} title={`${unit.name}: ${grid.columns} by ${grid.rows} cans`} />
         </div>
       </Card>
+
+      {actor.role === "organiser" && !unit.archivedAt && unit.state !== "installed" ? (
+        <Card title="Change the glazing">
+          <p className="mb-3 text-ink-soft">
+            A different sheet changes the can grid, the cans this unit needs and its drive&apos;s target. It cannot go below the cans already claimed
+            or built in.
+          </p>
+          <GlazingEditor id={unit.id} plan={plan} cans={unit.cans} held={(summary?.claimed ?? 0) + (summary?.builtIn ?? 0)} />
+        </Card>
+      ) : null}
     </main>
   );
 }

@@ -15,7 +15,8 @@ export const metadata: Metadata = { title: "Printable sign" };
 
 // One sheet in portrait with 12 mm margins: the sign fills what is left of
 // A4 (210 × 297 mm) or US Letter (215.9 × 279.4 mm), a little under, so
-// rounding never spills it onto a second page.
+// rounding never spills it onto a second page. Its box clips, so it keeps
+// 2 mm inside each side: a large letter's overhang is never cut off.
 const PAPER = {
   a4: { css: "A4", width: "186mm", height: "270mm" },
   letter: { css: "letter", width: "190mm", height: "252mm" },
@@ -38,7 +39,7 @@ export default async function SignPage({ params, searchParams }: { params: Promi
         @media print {
           header, footer, .no-print { display: none !important; }
           html, body { background: #fff !important; }
-          .sign { border: none !important; box-shadow: none !important; padding: 0 !important; width: ${size.width}; height: ${size.height};
+          .sign { border: none !important; box-shadow: none !important; padding: 0 2mm !important; width: ${size.width}; height: ${size.height};
                   overflow: hidden; break-inside: avoid; font-size: 17pt; gap: 6mm !important; }
           .sign h1 { font-size: 36pt; }
           .sign .sign-point { font-size: ${point.name.length > 50 ? 18 : 24}pt; }

@@ -1,0 +1,6 @@
+import { endpoint } from "@/lib/api/endpoint";
+import { archiveSpec, archiveWork } from "@/lib/records/routes";
+
+export const dynamic = "force-dynamic";
+
+export const POST = endpoint(archiveSpec("pledge"), archiveWork("pledge", false));

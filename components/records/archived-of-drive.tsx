@@ -1,0 +1,70 @@
+import { Card, EmptyState } from "@/components/ui/card";
+import { LEVEL_LABEL } from "@/lib/drives/fill";
+import { formatter, NBSP, type Look } from "@/lib/format";
+import type { RecordKind } from "@/lib/records/kinds";
+import type { ArchivedOfDrive } from "@/lib/records/types";
+import { RecordActions } from "./record-actions";
+
+interface Shelved {
+  id: string;
+  /** What the row says. */
+  text: string;
+  /** What its buttons name for a screen reader. */
+  name: string;
+  photo?: { url: string; alt: string };
+}
+
+/** The archived records of one drive as rows, one section per kind, in the order the page lists them. */
+function shelves(archived: ArchivedOfDrive, look: Look): { kind: RecordKind; title: string; items: Shelved[] }[] {
+  const f = formatter(look);
+  const pledge = (p: ArchivedOfDrive["pledges"][number]) => `${f.count(p.bags, "bag")} to ${p.dropPointName} on ${f.day(p.bringOn)}`;
+  const report = (r: ArchivedOfDrive["fillReports"][number]) => `${r.dropPointName}: ${LEVEL_LABEL[r.level] ?? `${r.level}${NBSP}%`}, ${f.moment(r.createdAt)}`;
+  return [
+    { kind: "dropPoint" as const, title: "Drop points", items: archived.dropPoints.map((p) => ({ id: p.id, text: p.address ? `${p.name} · ${p.address}` : p.name, name: `the drop point ${p.name}` })) },
+    { kind: "pledge" as const, title: "Pledges", items: archived.pledges.map((p) => ({ id: p.id, text: `${pledge(p)} · ${p.name || "Anonymous"}`, name: `the pledge of ${pledge(p)}` })) },
+    { kind: "fillReport" as const, title: "Fill reports", items: archived.fillReports.map((r) => ({ id: r.id, text: report(r), name: `the fill report ${report(r)}` })) },
+    {
+      kind: "photo" as const,
+      title: "Photos",
+      items: archived.photos.map((p, i) => ({ id: p.id, text: p.dropPointName, name: `archived photo ${i + 1} of ${p.dropPointName}`, photo: { url: p.url, alt: `Archived photo of the bin at ${p.dropPointName}` } })),
+    },
+  ].filter((s) => s.items.length > 0);
+}
+
+/**
+ * The drive's "archived" view (issue 16): what was archived, hidden from the lists
+ * and the public, each with Restore and (once asked) Delete.
+ */
+export function ArchivedOfDriveCard({ archived, look }: { archived: ArchivedOfDrive; look: Look }) {
+  const sections = shelves(archived, look);
+  const total = sections.reduce((n, s) => n + s.items.length, 0);
+  return (
+    <Card title={`Archived (${total})`}>
+      {total === 0 ? (
+        <EmptyState title="Nothing archived">Archived drop points, pledges, fill reports and photos wait here, hidden from the lists and the public, until you restore them.</EmptyState>
+      ) : (
+        <div className="flex flex-col gap-4" data-testid="archived-of-drive">
+          <p className="text-ink-soft">Hidden from the lists and the public page. Restore one to bring it back; only what the ledger never refers to can be deleted.</p>
+          {sections.map((s) => (
+            <section key={s.kind} aria-labelledby={`archived-${s.kind}`}>
+              <h3 id={`archived-${s.kind}`} className="text-lg">{s.title}</h3>
+              <ul className="divide-y divide-paper-edge" aria-label={`Archived ${s.title.toLowerCase()}`}>
+                {s.items.map((item) => (
+                  <li key={item.id} className="py-2">
+                    {item.photo ? (
+                      // eslint-disable-next-line @next/next/no-img-element -- photos come from the upload host at their own size; next/image would proxy them through the app
+                      <img src={item.photo.url} alt={item.photo.alt} className="h-24 w-auto rounded-lg border border-paper-edge" />
+                    ) : (
+                      <span>{item.text}</span>
+                    )}
+                    <RecordActions kind={s.kind} id={item.id} name={item.name} archived compact />
+                  </li>
+                ))}
+              </ul>
+            </section>
+          ))}
+        </div>
+      )}
+    </Card>
+  );
+}
