@@ -1,3 +1,5 @@
+import { withSerwist } from "@serwist/turbopack";
+
 // Pages get their Content-Security-Policy from proxy.ts, with a fresh nonce per
 // request (lib/csp.ts). What proxy.ts does not run on — JSON, Next's static
 // files, the map tiles — gets a policy under which nothing loads or frames it.
@@ -22,7 +24,10 @@ const PAGE_EXTENSIONS = ["tsx", "ts", "jsx", "js"];
 /** @type {import('next').NextConfig} */
 const nextConfig = {
   pageExtensions: process.env.CANTROVE_BENCH === "1" ? [...PAGE_EXTENSIONS, "bench.ts"] : PAGE_EXTENSIONS,
-  serverExternalPackages: ["knex", "pg", "nodemailer", "bcryptjs"],
+  // Serwist's build side (which bundles the service worker when the app is built) is loaded from
+  // node_modules, not bundled: its hundreds of modules would lengthen every module id in every
+  // chunk (Turbopack sizes ids by the module count), which the public drive page pays for.
+  serverExternalPackages: ["knex", "pg", "nodemailer", "bcryptjs", "@serwist/turbopack", "@serwist/build", "@serwist/utils"],
   poweredByHeader: false,
   reactStrictMode: true,
   // Browsers that ask for /favicon.ico without reading the page get the mark (app/icon.svg).
@@ -37,4 +42,5 @@ const nextConfig = {
   },
 };
 
-export default nextConfig;
+// withSerwist keeps esbuild (which bundles the service worker, app/serwist/[path]/route.ts) out of the server bundle.
+export default withSerwist(nextConfig);

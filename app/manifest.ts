@@ -4,7 +4,8 @@ import type { MetadataRoute } from "next";
 // organiser add Cantrove to a phone's home screen. It opens at /home, which
 // sends each signed-in person to their own role's landing page (and anyone
 // else to sign-in). Icons are drawn from app/icon.svg by scripts/make-icons.ts.
-// No service worker yet: the app does not work offline from a cold start (issue 17, open).
+// The service worker (app/sw.ts, registered by signed-in pages) keeps /log, the person's runs and their
+// map tiles on the phone, so the start URL opens with no signal after one online visit.
 export default function manifest(): MetadataRoute.Manifest {
   return {
     id: "/home",

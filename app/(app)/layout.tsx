@@ -5,6 +5,10 @@ import { getActor } from "@/lib/auth/session";
 import { isDatabaseUnreachable } from "@/lib/db";
 import { groupLook } from "@/lib/format/group-look-queries";
 import { LookProvider } from "@/hooks/use-look";
+import { OfflineKeeper } from "@/components/offline/offline-keeper";
+import { ROLE_HOME } from "@/lib/auth/roles";
+import { env } from "@/lib/env";
+import { markerAttributes } from "@/lib/offline/marker";
 
 export const dynamic = "force-dynamic";
 
@@ -22,12 +26,17 @@ export default async function AppLayout({ children }: { children: React.ReactNod
   if (!actor) redirect("/signin");
   // How the group shows dates, numbers and measures, for the client components below.
   const look = await groupLook(actor.group.id);
+  const renderedAt = new Date().toISOString();
   return (
     <LookProvider look={look}>
-      <AppHeader groupName={actor.group.name} role={actor.role} userName={actor.user.name} />
-      <div id="main" className="mx-auto max-w-5xl px-4 py-6">
-        {children}
-      </div>
+      {/* Whose page this is and when it was made: the service worker keeps it in this person's own offline cache (app/sw.ts). */}
+      <div hidden {...markerAttributes({ id: actor.user.id, home: ROLE_HOME[actor.role], renderedAt })} />
+      <OfflineKeeper personId={actor.user.id} home={ROLE_HOME[actor.role]} renderedAt={renderedAt} tileUrl={env().TILE_URL}>
+        <AppHeader groupName={actor.group.name} role={actor.role} userName={actor.user.name} />
+        <div id="main" className="mx-auto max-w-5xl px-4 py-6">
+          {children}
+        </div>
+      </OfflineKeeper>
     </LookProvider>
   );
 }

@@ -1,5 +1,6 @@
 "use client";
 
+import { forgetThisPhone } from "@/lib/offline/forget";
 import Link from "next/link";
 import { useState } from "react";
 import { signOutTo } from "@/components/auth/session-client";
@@ -33,7 +34,7 @@ export function LeaveGroup({ groupName, onlyOrganiser }: { groupName: string; on
           <Button
             variant="danger"
             disabled={leave.isPending}
-            onClick={() => leave.mutate(undefined, { onSuccess: () => void signOutTo("/signin") })}
+            onClick={() => leave.mutate(undefined, { onSuccess: () => void forgetThisPhone().then(() => signOutTo("/signin")) })}
           >
             {leave.isPending ? "Leaving…" : `Yes, leave ${groupName}`}
           </Button>

@@ -1,6 +1,7 @@
 "use client";
 
 import { useQuery } from "@tanstack/react-query";
+import { forgetThisPhone } from "@/lib/offline/forget";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { signOutTo } from "@/components/auth/session-client";
@@ -36,7 +37,7 @@ export function HandOver({ currentUserId }: { currentUserId: string }) {
       { userId: to, then },
       {
         onSuccess: () => {
-          if (then === "leave") void signOutTo("/signin");
+          if (then === "leave") void forgetThisPhone().then(() => signOutTo("/signin"));
           else router.push(ROLE_HOME[then]);
         },
         onSettled: () => setAsking(false),

@@ -5,6 +5,7 @@ import { Notice } from "@/components/ui/notice";
 import { attemptsText, type OutboxItem } from "@/lib/ledger/browser-queue";
 import type { Refusal } from "./use-outbox";
 import { countOf, noun } from "@/lib/plural";
+import { useFormat } from "@/hooks/use-look";
 
 export function OutboxList({
   items,
@@ -20,16 +21,17 @@ export function OutboxList({
   /** "Yes, that is right" to an entry the server asked about while it waited in the queue. */
   onConfirm: (key: string) => void;
 }) {
+  const f = useFormat();
   if (items.length === 0 && refusals.length === 0) return null;
   return (
     <section aria-label="Waiting to send" className="flex flex-col gap-2" data-testid="outbox">
       {items.length ? (
         <Notice tone="info" title={`${countOf(items.length, noun("entry is", "entries are"))} waiting to be sent`}>
-          <p>Kept on this phone and retried every few seconds; nothing is lost if you close the page.</p>
+          <p>Kept on this phone and sent in order once there is a signal, even if you close the page; each is recorded with the time you entered it.</p>
           <ul className="mt-2 list-disc pl-5">
             {items.map((i) => (
-              <li key={i.key}>
-                {i.label}
+              <li key={i.key} data-testid="waiting-entry">
+                {i.label} <span className="text-sm font-semibold text-ink-soft">· waiting, entered {f.time(i.createdAt)}</span>
                 {i.attempts ? <span className="block text-sm text-ink-faint">{attemptsText(i.attempts, i.lastError)}</span> : null}
               </li>
             ))}
@@ -56,9 +58,10 @@ export function OutboxList({
         ) : (
           <div key={r.key} role="alert" className="rounded-lg border-2 border-alarm bg-alarm-soft px-3 py-2">
             <p className="font-semibold text-alarm">Not recorded: {r.label}</p>
-            <p>{r.message}</p>
+            <p>The server said: {r.message}</p>
+            <p className="text-sm text-ink-soft">Entered {f.moment(r.item.createdAt)}. Enter it again with the right details, then drop this one.</p>
             <Button type="button" variant="quiet" onClick={() => onDismiss(r.key)}>
-              Dismiss
+              Drop it
             </Button>
           </div>
         ),

@@ -1,9 +1,12 @@
 "use client";
 
+import { useQueryClient } from "@tanstack/react-query";
 import { useCallback, useEffect, useRef, useState } from "react";
-import { addToOutbox, classify, confirmedCopy, markAttempt, newOutboxItem, readOutbox, removeFromOutbox, type OutboxItem } from "@/lib/ledger/browser-queue";
+import { confirmedCopy, newOutboxItem, OUTBOX_STORAGE_KEY, readOutbox, type OutboxItem, type SendOutcome } from "@/lib/ledger/browser-queue";
 import { useLedgerChanged } from "@/hooks/queries/ledger";
-import { ApiError, fetchJsonWithHeaders } from "@/lib/api/client";
+import { usePersonId } from "@/components/offline/person-context";
+import { deleteEntry, entriesOf, putEntry, type QueuedEntry } from "@/lib/offline/store";
+import { flushOwner, sendEntry, settle, SYNC_TAG } from "@/lib/offline/send";
 
 export type SubmitResult =
   | { kind: "done"; body: unknown }
@@ -11,6 +14,7 @@ export type SubmitResult =
   | { kind: "refused"; message: string; fields?: Record<string, string>; question?: string; confirm?: () => Promise<SubmitResult> }
   | { kind: "queued"; message: string };
 
+/** An entry the server refused after it waited on the phone: kept (in IndexedDB) until fixed or dropped. */
 export interface Refusal {
   key: string;
   label: string;
@@ -21,119 +25,165 @@ export interface Refusal {
 
 const RETRY_MS = 4_000;
 
-/** One try through the app's one fetch wrapper, with the entry's own Idempotency-Key every time. */
-async function send(item: OutboxItem) {
+/** Asks the browser to send the queue when the signal returns, even with the page closed (Background Sync, where there is one). */
+async function askForSync(): Promise<void> {
   try {
-    const res = await fetchJsonWithHeaders(item.url, { method: "POST", body: item.body, headers: { "idempotency-key": item.key } });
-    return classify(res.status, res.body);
-  } catch (error) {
-    if (error instanceof ApiError && error.status > 0) {
-      return classify(error.status, { error: { ...error.details, code: error.code, message: error.message, fields: error.fields } });
-    }
-    return classify(null, null, (error as Error).message || "No connection");
+    // Only with no signal: while online the page itself retries every few seconds (a failed try
+    // then is the server's trouble, not the phone's), and the next visit sends what is left.
+    if (!("serviceWorker" in navigator) || navigator.onLine) return;
+    const reg = (await Promise.race([navigator.serviceWorker.ready, new Promise((r) => setTimeout(r, 500))])) as ServiceWorkerRegistration | undefined;
+    const sync = (reg as (ServiceWorkerRegistration & { sync?: { register(tag: string): Promise<void> } }) | undefined)?.sync;
+    await sync?.register(SYNC_TAG);
+  } catch {
+    // no Background Sync here: the queue goes on the next visit (and every few seconds while open)
   }
 }
 
-/** Entries go to localStorage first, then to the server; unacknowledged ones are retried with the same key. */
+/**
+ * Entries go to IndexedDB first (lib/offline/store.ts), under the signed-in
+ * person, then to the server in order; unacknowledged ones are retried with the
+ * same Idempotency-Key. `stopId` marks an entry made at a run's stop.
+ */
 export function useOutbox() {
+  const owner = usePersonId();
   const ledgerChanged = useLedgerChanged();
-  const [items, setItems] = useState<OutboxItem[]>([]);
-  const [refusals, setRefusals] = useState<Refusal[]>([]);
+  const client = useQueryClient();
+  const [entries, setEntries] = useState<QueuedEntry[]>([]);
+  /** The queue was read from IndexedDB and a first send was tried. */
+  const [ready, setReady] = useState(false);
+  const waiting = useRef(0);
   const busy = useRef(false);
 
-  const settle = useCallback(
-    (item: OutboxItem, outcome: Awaited<ReturnType<typeof send>>) => {
-      if (outcome.kind === "retry") {
-        setItems(markAttempt(localStorage, item.key, outcome.message));
-        return;
-      }
-      setItems(removeFromOutbox(localStorage, item.key));
-      if (outcome.kind === "refused") setRefusals((r) => [...r, { key: item.key, label: item.label, message: outcome.message, question: outcome.question, item }]);
-      void ledgerChanged();
-    },
-    [ledgerChanged],
-  );
+  const reload = useCallback(async () => {
+    if (!owner) return;
+    const now = await entriesOf(owner);
+    waiting.current = now.filter((e) => e.state === "waiting").length;
+    setEntries(now);
+  }, [owner]);
+
+  const changed = useCallback(() => {
+    void ledgerChanged();
+    void client.invalidateQueries({ queryKey: ["runs"] });
+  }, [ledgerChanged, client]);
 
   const flush = useCallback(async () => {
-    if (busy.current) return;
+    if (!owner || busy.current) return;
     busy.current = true;
     try {
-      // One after another, oldest first: a sort may depend on a haul queued before it.
-      for (const item of readOutbox(localStorage)) {
-        const outcome = await send(item);
-        settle(item, outcome);
-        if (outcome.kind === "retry") break;
-      }
+      const result = await flushOwner(owner);
+      if (result && result.settled > 0) changed();
     } finally {
       busy.current = false;
+      await reload();
     }
-  }, [settle]);
+  }, [owner, reload, changed]);
 
   useEffect(() => {
-    // eslint-disable-next-line react-hooks/set-state-in-effect -- the queue lives in localStorage, which the server render cannot read: loaded once mounted
-    setItems(readOutbox(localStorage));
-    void flush();
+    if (!owner) return;
+    void (async () => {
+      // Entries queued by the older, localStorage queue move into IndexedDB under the person signed in now.
+      try {
+        const old = readOutbox(localStorage);
+        for (const item of old) await putEntry({ ...item, owner, state: "waiting" });
+        if (old.length) localStorage.removeItem(OUTBOX_STORAGE_KEY);
+      } catch {
+        // storage blocked
+      }
+      await reload();
+      await flush();
+      setReady(true);
+    })();
     const timer = setInterval(() => {
-      if (readOutbox(localStorage).length) void flush();
+      if (waiting.current > 0) void flush();
     }, RETRY_MS);
     const online = () => void flush();
+    const fromWorker = (e: MessageEvent) => {
+      if ((e.data as { type?: string } | null)?.type === "CANTROVE_OUTBOX_CHANGED") {
+        changed();
+        void reload();
+      }
+    };
     window.addEventListener("online", online);
+    navigator.serviceWorker?.addEventListener("message", fromWorker);
     return () => {
       clearInterval(timer);
       window.removeEventListener("online", online);
+      navigator.serviceWorker?.removeEventListener("message", fromWorker);
     };
-  }, [flush]);
+  }, [owner, flush, reload, changed]);
 
   const sendNow = useCallback(
-    (first: OutboxItem): Promise<SubmitResult> => {
-    // A confirmed resend ("yes, record it") goes through the same steps.
-    const attempt = async (item: OutboxItem): Promise<SubmitResult> => {
-      setItems(addToOutbox(localStorage, item));
-      if (busy.current || readOutbox(localStorage).length > 1) {
-        void flush();
-        return { kind: "queued", message: "Saved on this phone; it will be sent in order." };
-      }
-      busy.current = true;
-      let outcome;
-      try {
-        outcome = await send(item);
-      } finally {
-        busy.current = false;
-      }
-      if (outcome.kind === "retry") {
-        setItems(markAttempt(localStorage, item.key, outcome.message));
-        return { kind: "queued", message: "No connection: saved on this phone and will be sent when you are back online." };
-      }
-      setItems(removeFromOutbox(localStorage, item.key));
-      void ledgerChanged();
-      if (outcome.kind === "refused") {
-        const { message, fields, question } = outcome;
-        return { kind: "refused", message, fields, question, ...(question ? { confirm: () => attempt(confirmedCopy(item, crypto.randomUUID())) } : {}) };
-      }
-      return { kind: "done", body: outcome.body };
-    };
-    return attempt(first);
+    (first: OutboxItem, stopId?: string): Promise<SubmitResult> => {
+      // A confirmed resend ("yes, record it") goes through the same steps.
+      const attempt = async (item: OutboxItem): Promise<SubmitResult> => {
+        if (!owner) return { kind: "refused", message: "Sign in again to send this entry." };
+        const saved = await putEntry({ ...item, owner, state: "waiting", ...(stopId ? { stopId } : {}) });
+        const earlier = (await entriesOf(owner)).filter((e) => e.state === "waiting" && e.seq < saved.seq);
+        if (busy.current || earlier.length > 0) {
+          await reload();
+          void flush();
+          void askForSync();
+          return { kind: "queued", message: "Saved on this phone; it will be sent in order." };
+        }
+        busy.current = true;
+        let outcome: SendOutcome;
+        try {
+          outcome = await sendEntry(saved);
+          if (outcome.kind === "retry") await settle(saved, outcome);
+          else await deleteEntry(saved.key);
+        } finally {
+          busy.current = false;
+        }
+        await reload();
+        if (outcome.kind === "retry") {
+          void askForSync();
+          return { kind: "queued", message: "No connection: saved on this phone and will be sent when you are back online." };
+        }
+        changed();
+        if (outcome.kind === "refused") {
+          const { message, fields, question } = outcome;
+          return { kind: "refused", message, fields, question, ...(question ? { confirm: () => attempt(confirmedCopy(item, crypto.randomUUID())) } : {}) };
+        }
+        return { kind: "done", body: outcome.body };
+      };
+      return attempt(first);
     },
-    [flush, ledgerChanged],
+    [owner, flush, reload, changed],
   );
 
   const submit = useCallback(
-    (url: string, body: unknown, label: string) => sendNow(newOutboxItem(url, body, label, new Date(), crypto.randomUUID())),
+    (url: string, body: unknown, label: string, stopId?: string, key: string = crypto.randomUUID()) => sendNow(newOutboxItem(url, body, label, new Date(), key), stopId),
     [sendNow],
   );
 
-  /** "Yes, that is right" to a queued entry the server asked about: it goes again, confirmed, under a new key. */
+  /** "Yes, that is right" to a queued entry the server asked about: it goes again, confirmed, under a new key, in its old place. */
   const confirmRefusal = useCallback(
-    (key: string) => {
-      const refusal = refusals.find((r) => r.key === key);
-      setRefusals((r) => r.filter((x) => x.key !== key));
-      if (refusal) {
-        setItems(addToOutbox(localStorage, confirmedCopy(refusal.item, crypto.randomUUID())));
-        void flush();
-      }
+    async (key: string) => {
+      const entry = entries.find((e) => e.key === key);
+      if (!entry) return;
+      await deleteEntry(key);
+      const copy = confirmedCopy(entry, crypto.randomUUID());
+      await putEntry({ ...entry, ...copy, state: "waiting", refusal: undefined, seq: entry.seq });
+      await reload();
+      void flush();
     },
-    [refusals, flush],
+    [entries, reload, flush],
   );
 
-  return { items, refusals, dismissRefusal: (key: string) => setRefusals((r) => r.filter((x) => x.key !== key)), confirmRefusal, submit, retryNow: flush };
+  /** A refused entry the person drops: gone from this phone. */
+  const dismissRefusal = useCallback(
+    async (key: string) => {
+      await deleteEntry(key);
+      await reload();
+    },
+    [reload],
+  );
+
+  const items: QueuedEntry[] = entries.filter((e) => e.state === "waiting");
+  const refusals: Refusal[] = entries
+    .filter((e) => e.state === "refused")
+    .map((e) => ({ key: e.key, label: e.label, message: e.refusal?.message ?? "Refused", question: e.refusal?.question, item: e }));
+
+  return { ready, items, refusals, dismissRefusal: (key: string) => void dismissRefusal(key), confirmRefusal: (key: string) => void confirmRefusal(key), submit, retryNow: flush };
 }
+

@@ -9,11 +9,51 @@ import { RouteMap } from "./route-map";
 import { StopActions } from "./stop-actions";
 import { UndoStopHaul, UnskipStop } from "./stop-undo";
 import { useFormat } from "@/hooks/use-look";
+import { useOutbox, type Refusal } from "@/components/ledger/use-outbox";
+import { Button } from "@/components/ui/button";
+import type { QueuedEntry } from "@/lib/offline/store";
 import { describeOpeningHours } from "@/lib/drives/opening-hours";
 import { CLOSED_RUN_STATES } from "@/lib/runs/schemas";
 import { RunEditor, type DriverChoice } from "./run-editor";
 
-function StopCard({ run, stop, canAct, isNext }: { run: RunDetail; stop: RunStop; canAct: boolean; isNext: boolean }) {
+type Outbox = ReturnType<typeof useOutbox>;
+
+/** What waits on this phone for one stop: "waiting" until the server confirms, or the server's refusal with a way to drop it. */
+function StopQueue({ waiting, refused, outbox }: { waiting: QueuedEntry[]; refused: Refusal[]; outbox: Outbox }) {
+  const f = useFormat();
+  if (!waiting.length && !refused.length) return null;
+  return (
+    <div className="mt-3 flex flex-col gap-2" data-testid="stop-queue">
+      {waiting.map((e) => (
+        <p key={e.key} data-testid="waiting-entry" className="rounded-lg border-2 border-dashed border-ink/40 bg-paper-deep px-3 py-2">
+          <span className="font-semibold">Waiting to be sent:</span> {e.label} <span className="text-sm text-ink-soft">(entered {f.time(e.createdAt)})</span>
+        </p>
+      ))}
+      {refused.map((r) =>
+        r.question ? (
+          <div key={r.key} role="alertdialog" aria-label="Check this number" className="rounded-lg border-2 border-sun bg-sun-soft px-3 py-2">
+            <p className="font-semibold">Not recorded yet: {r.label}</p>
+            <p>Really? {r.question}</p>
+            <div className="mt-1 flex flex-wrap gap-2">
+              <Button type="button" onClick={() => outbox.confirmRefusal(r.key)}>Yes, record it</Button>
+              <Button type="button" variant="quiet" onClick={() => outbox.dismissRefusal(r.key)}>No, drop it</Button>
+            </div>
+          </div>
+        ) : (
+          <div key={r.key} role="alert" className="rounded-lg border-2 border-alarm bg-alarm-soft px-3 py-2">
+            <p className="font-semibold text-alarm">Not recorded: {r.label}</p>
+            <p>The server said: {r.message}</p>
+            <Button type="button" variant="quiet" onClick={() => outbox.dismissRefusal(r.key)}>Drop it</Button>
+          </div>
+        ),
+      )}
+    </div>
+  );
+}
+
+function StopCard({ run, stop, canAct, isNext, outbox }: { run: RunDetail; stop: RunStop; canAct: boolean; isNext: boolean; outbox: Outbox }) {
+  const waiting = outbox.items.filter((e) => e.stopId === stop.id);
+  const refused = outbox.refusals.filter((r) => (r.item as QueuedEntry).stopId === stop.id);
   const p = stop.dropPoint;
   const f = useFormat();
   return (
@@ -72,11 +112,12 @@ function StopCard({ run, stop, canAct, isNext }: { run: RunDetail; stop: RunStop
             <p className="font-semibold text-ink-soft">Skipped — “{stop.skipReason}”</p>
             {canAct ? <UnskipStop runId={run.id} stopId={stop.id} dropPointName={p.name} /> : null}
           </>
-        ) : canAct ? (
-          <StopActions runId={run.id} stopId={stop.id} dropPointName={p.name} plannedOn={run.plannedOn} />
+        ) : canAct && waiting.length > 0 ? null : canAct ? (
+          <StopActions runId={run.id} stopId={stop.id} dropPointName={p.name} plannedOn={run.plannedOn} queue={outbox.submit} />
         ) : (
           <p className="text-ink-soft">Waiting for the volunteer.</p>
         )}
+        <StopQueue waiting={waiting} refused={refused} outbox={outbox} />
       </div>
     </li>
   );
@@ -103,6 +144,7 @@ export function RunView({
   // Starts from what the page prefetched (<Prefetched>); the stop actions' hooks put each answer in this read's cache, and read it again after an undo.
   const { data: run } = useQuery(runQueries.detail(runId));
   const f = useFormat();
+  const outbox = useOutbox();
   if (!run) return null; // only before the page's prefetched run reaches the cache
   const next = run.stopList.find((s) => s.status === "pending");
   return (
@@ -148,7 +190,7 @@ export function RunView({
       />
       <ol className="flex flex-col gap-3">
         {run.stopList.map((s) => (
-          <StopCard key={s.id} run={run} stop={s} canAct={canAct && run.state !== "cancelled"} isNext={s.id === next?.id} />
+          <StopCard key={s.id} run={run} stop={s} canAct={canAct && run.state !== "cancelled"} isNext={s.id === next?.id} outbox={outbox} />
         ))}
       </ol>
       {canEdit && !CLOSED_RUN_STATES.includes(run.state) ? <RunEditor run={run} drivers={drivers} dropPoints={dropPoints} /> : null}

@@ -20,16 +20,22 @@ function newKey(): string {
   return Array.from(crypto.getRandomValues(new Uint8Array(16)), (b) => b.toString(16).padStart(2, "0")).join("");
 }
 
+/** The run's offline queue (components/ledger/use-outbox.ts): with no signal, a stop's haul or skip waits there. */
+export type QueueEntry = (url: string, body: unknown, label: string, stopId?: string, key?: string) => Promise<unknown>;
+
 interface Props {
   runId: string;
   stopId: string;
   dropPointName: string;
+  queue?: QueueEntry;
   /** The run's day: logging on another day is allowed, with a warning. */
   plannedOn?: string;
 }
 
+const noSignal = (e: unknown) => !(e instanceof ApiError) || e.status === 0;
+
 /** Log a haul at this stop (a ledger movement, then the stop points at it), or skip it with a reason. */
-export function StopActions({ runId, stopId, dropPointName, plannedOn }: Props) {
+export function StopActions({ runId, stopId, dropPointName, queue, plannedOn }: Props) {
   const look = useFormat().look;
   const [mode, setMode] = useState<"idle" | "log" | "skip">("idle");
   const [bags, setBags] = useState("");
@@ -48,14 +54,34 @@ export function StopActions({ runId, stopId, dropPointName, plannedOn }: Props) 
   const [question, setQuestion] = useState<string | null>(null);
 
   // One request logs the haul in the ledger and settles the stop together; the hook puts the run's new state in the cache.
+  const haulUrl = `/api/runs/${runId}/stops/${stopId}/haul`;
+  const skipUrl = `/api/runs/${runId}/stops/${stopId}/skip`;
+  const queueHaul = (vars: { bags: number; weightKg: number | null; confirmUnusual: boolean; idempotencyKey: string }) => {
+    const body: Record<string, unknown> = { bags: vars.bags };
+    if (vars.weightKg !== null) body.weightKg = vars.weightKg;
+    if (vars.confirmUnusual) body.confirmUnusual = true;
+    // The same key as the try that lost its answer: the server records it once either way.
+    void queue?.(haulUrl, body, `Haul at ${dropPointName}: ${vars.bags} ${vars.bags === 1 ? "bag" : "bags"}`, stopId, vars.idempotencyKey);
+    setMode("idle");
+  };
   const log = useLogStopHaul(runId, stopId, {
-    onError: (e) => {
+    onError: (e, vars) => {
+      if (queue && noSignal(e) && vars) return queueHaul(vars);
       setFields(fieldErrors(e));
       setQuestion(unusualQuestion(e));
       if (e instanceof ApiError && e.status !== 0) setHaulKey(newKey());
     },
   });
-  const skip = useSkipStop(runId, stopId, { onError: (e) => setFields(fieldErrors(e)) });
+  const queueSkip = (why: string) => {
+    void queue?.(skipUrl, { reason: why }, `Skip ${dropPointName}: “${why}”`, stopId);
+    setMode("idle");
+  };
+  const skip = useSkipStop(runId, stopId, {
+    onError: (e, why) => {
+      if (queue && noSignal(e) && why !== undefined) return queueSkip(why);
+      setFields(fieldErrors(e));
+    },
+  });
 
   if (mode === "idle") {
     return (
@@ -77,7 +103,9 @@ export function StopActions({ runId, stopId, dropPointName, plannedOn }: Props) 
           const numbers = parseNumberInputs({ bags: [bags, NUMBER_SPECS.stopBags], weightKg: [weight, weighed.spec] });
           setFields(numbers.errors as Record<string, string>);
           if (numbers.values.bags === null || Object.keys(numbers.errors).length > 0) return;
-          log.mutate({ bags: numbers.values.bags, weightKg: weighed.toKg(numbers.values.weightKg), confirmUnusual: false, idempotencyKey: haulKey });
+          const vars = { bags: numbers.values.bags, weightKg: weighed.toKg(numbers.values.weightKg), confirmUnusual: false, idempotencyKey: haulKey };
+          if (queue && !navigator.onLine) return queueHaul(vars);
+          log.mutate(vars);
         }}
       >
         {plannedOn && haulDayMismatch(plannedOn, new Date(), look.timeZone) ? (
@@ -121,6 +149,10 @@ export function StopActions({ runId, stopId, dropPointName, plannedOn }: Props) 
       onSubmit={(e) => {
         e.preventDefault();
         setFields({});
+        if (queue && !navigator.onLine) {
+          if (reason.trim().length < 3) return setFields({ reason: "Say why this stop was skipped (a few words)" });
+          return queueSkip(reason.trim());
+        }
         skip.mutate(reason);
       }}
     >

@@ -2,7 +2,7 @@ import "server-only";
 import { NextResponse, type NextRequest } from "next/server";
 import type { Knex } from "knex";
 import type { ZodType } from "zod";
-import { AppError, invalidInput, notFound } from "./errors";
+import { AppError, conflict, invalidInput, notFound } from "./errors";
 import { toErrorResponse } from "./handler";
 import { withIdempotency, withIdempotentStatement, withKeyedAnswer, type PreparedStatement } from "./idempotency";
 import { assertJsonContent, assertNoNul, assertSameOrigin } from "./request-guards";
@@ -112,6 +112,20 @@ async function applyLimits<P, B>(request: Request, limits: readonly Limit<P, B>[
 }
 
 /** What every declared handler shares: the checks before the body, and the error and cache handling around it. */
+/**
+ * An entry that waited on a phone names the person who typed it (X-Cantrove-Entered-By, the
+ * user id, set by the offline queue). Sent while someone else is signed in, it is refused
+ * (409) before anything runs: it must never be filed under the new person's name.
+ */
+export const ENTERED_BY_HEADER = "x-cantrove-entered-by";
+function assertEnteredBy(request: Request, actor: Actor | null): void {
+  const by = request.headers.get(ENTERED_BY_HEADER);
+  if (by === null || request.method === "GET") return;
+  if (!actor || actor.user.id !== by) {
+    throw conflict("This entry was made on this phone by someone else who was signed in then; it was not recorded under your name.");
+  }
+}
+
 function wrap<A extends Access, P, Q, B, R>(
   spec: EndpointSpec<A, P, Q, B, R>,
   run: (pre: Omit<EndpointContext<A, P, Q, B, R>, "body" | "raw">) => Promise<Response>,
@@ -122,6 +136,7 @@ function wrap<A extends Access, P, Q, B, R>(
     try {
       assertSameOrigin(request);
       const actor = (await actorFor(spec.who)) as ActorOf<A>;
+      assertEnteredBy(request, actor as Actor | null);
       const params = await pathOf(ctx, spec.params);
       const resource = spec.resource ? await spec.resource(actor as Actor, params) : (undefined as R);
       const query = queryOf(request, spec.query);

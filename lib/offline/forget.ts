@@ -1,0 +1,43 @@
+// Sign-out on this phone: every cache and queued entry that holds the person's
+// data goes before the session does (sign-out button, leaving a group, handing over).
+import { currentPerson, entriesOf, forgetPersonEntries, isPersonalCache, setPerson } from "./store";
+
+/** How many of the signed-in person's entries have not reached the server (asked about before signing out). */
+export async function unsentCount(): Promise<number> {
+  try {
+    const person = await currentPerson();
+    return person ? (await entriesOf(person.id)).length : 0;
+  } catch {
+    return 0;
+  }
+}
+
+export async function forgetThisPhone(): Promise<void> {
+  try {
+    const person = await currentPerson();
+    if (person) await forgetPersonEntries(person.id);
+    await setPerson(null);
+  } catch {
+    // no IndexedDB (private mode in some browsers): nothing was kept there
+  }
+  if (typeof caches !== "undefined") {
+    for (const name of await caches.keys()) if (isPersonalCache(name)) await caches.delete(name);
+  }
+  // The worker drops what it holds in memory too, and forgets the person.
+  const reg = "serviceWorker" in navigator ? await navigator.serviceWorker.getRegistration() : undefined;
+  reg?.active?.postMessage({ type: "CANTROVE_SIGNED_OUT" });
+  // The old localStorage queue (before IndexedDB) is personal too.
+  try {
+    localStorage.removeItem("cantrove.outbox.v1");
+  } catch {
+    // storage blocked
+  }
+}
+
+/** Signs out after clearing this phone; with entries not yet sent, asks first. */
+export async function signOutClearing(signOut: () => Promise<unknown>): Promise<void> {
+  const unsent = await unsentCount();
+  if (unsent > 0 && !window.confirm(`${unsent === 1 ? "1 entry has" : `${unsent} entries have`} not been sent yet and will be deleted from this phone. Sign out anyway?`)) return;
+  await forgetThisPhone();
+  await signOut();
+}
