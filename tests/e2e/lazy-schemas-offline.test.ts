@@ -56,7 +56,9 @@ describe("forms whose checks could not load", () => {
 
   it("a volunteer's haul sent before the checks arrived is not sent and says why; after a reload online it is recorded", async () => {
     const g = await freshGroup("e2e-lazy");
-    const { context, page } = await signedInPage(browser(), g.emails.volunteer, PHONE);
+    // Without the offline worker (a first visit, before it has taken over): once it has, it has
+    // precached every chunk and the checks load with no signal at all (tests/e2e/offline.test.ts).
+    const { context, page } = await signedInPage(browser(), g.emails.volunteer, { ...PHONE, serviceWorkers: "block" });
     try {
       const path = `/log?dropPoint=${g.dropPointIds[0]}`;
       const restore = await dropOnDemandScripts(page, path);

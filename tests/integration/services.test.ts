@@ -31,7 +31,8 @@ describe("e-mail through the outbox and the SMTP capture", () => {
 
 describe("uploads through the uploadthing SDK and the local upload service", () => {
   it("serves the demo drop point photo uploaded by the seed", async () => {
-    const file = await testDb()("files").where({ purpose: "drop-point-photo" }).first();
+    // The seed's photo: the first one made, and never archived (other tests add photos of their own).
+    const file = await testDb()("files").where({ purpose: "drop-point-photo" }).whereNull("archived_at").orderBy("created_at").first();
     expect(file).toBeTruthy();
     const res = await fetch(file.url);
     expect(res.status).toBe(200);
