@@ -71,12 +71,17 @@ begin
     raise exception 'record_delete: referenced' using errcode = 'CT409',
       detail = jsonb_build_object('kind', 'referenced', 'ledger', v_movements, 'runStops', v_stops)::text;
   end if;
-  -- Photos hang on their drop point by subject_id (no foreign key): they go with it, and their keys are answered.
+  -- Photos hang on their drop point or fill report by subject_id (no foreign key): they go with it, and
+  -- their keys are answered. A drop point's fill reports go with the drop point, and so their photos.
   with gone as (
     delete from files where group_id = v_group and (
       (v_kind = 'photo' and id = v_id)
+      or (v_kind = 'fillReport' and purpose = 'fill-report-photo' and subject_id = v_id)
       or (v_kind = 'dropPoint' and purpose = 'drop-point-photo' and subject_id = v_id)
-      or (v_kind = 'drive' and purpose = 'drop-point-photo' and subject_id in (select id from drop_points where drive_id = v_id)))
+      or (v_kind = 'dropPoint' and purpose = 'fill-report-photo' and subject_id in (select id from fill_reports where drop_point_id = v_id))
+      or (v_kind = 'drive' and purpose = 'drop-point-photo' and subject_id in (select id from drop_points where drive_id = v_id))
+      or (v_kind = 'drive' and purpose = 'fill-report-photo' and subject_id in (
+            select f.id from fill_reports f join drop_points d on d.id = f.drop_point_id where d.drive_id = v_id)))
     returning key)
   select coalesce(jsonb_agg(key), '[]'::jsonb) into v_keys from gone;
   if v_kind <> 'photo' then

@@ -2,7 +2,7 @@ import "server-only";
 import { db } from "@/lib/db";
 import { UUID } from "@/lib/api/path";
 import { onShelf, type Shelf } from "@/lib/records/shelf";
-import type { DriveFillReport, DrivePledge, DropPointRecord, LogDrive } from "./types";
+import type { DriveFillReport, DrivePledge, DropPointRecord, LogDrive, PledgeHaulChoice } from "./types";
 
 export type { DropPointRecord };
 
@@ -106,6 +106,16 @@ export async function listPledges(groupId: string, driveId: string, shelf: Shelf
     .where({ "pl.group_id": groupId, "pl.drive_id": driveId })
     .where(onShelf(shelf, "pl.archived_at"))
     .orderBy([{ column: "pl.bring_on" }, { column: "pl.created_at" }]);
+}
+
+/** The drive's hauls still standing (not undone), newest first: what an organiser may name as having brought a pledge. */
+export async function listPledgeHauls(groupId: string, driveId: string, limit = 300): Promise<PledgeHaulChoice[]> {
+  return db("hauls")
+    .select("id", "drop_point_id as dropPointId", "hauled_at as hauledAt", "bags")
+    .where({ group_id: groupId, drive_id: driveId })
+    .whereNull("reversed_at")
+    .orderBy([{ column: "hauled_at", order: "desc" }, { column: "id" }])
+    .limit(limit);
 }
 
 export async function listFillReports(groupId: string, driveId: string, limit = 30, shelf: Shelf = "active"): Promise<DriveFillReport[]> {

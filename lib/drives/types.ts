@@ -79,6 +79,14 @@ export interface DrivePledge {
   createdAt: Date;
 }
 
+/** A haul a received pledge may name (the organiser's drive page). */
+export interface PledgeHaulChoice {
+  id: string;
+  dropPointId: string;
+  hauledAt: Date;
+  bags: number;
+}
+
 /** A "bin is full" report on the organiser's drive page. */
 export interface DriveFillReport {
   id: string;

@@ -1,6 +1,7 @@
 // The texts of the notification e-mails, in the group's look. Pure, so tests
 // read them directly; the sweep (lib/notify/sweep.ts) fills them in.
 import { formatter, type Look } from "@/lib/format";
+import { describeOpeningHours, type OpeningHours } from "@/lib/drives/opening-hours";
 import type { NotificationKind } from "./kinds";
 import { NOTIFICATION_TEXT } from "./kinds";
 
@@ -25,6 +26,8 @@ export interface ReminderStop {
   name: string;
   address: string;
   hours: string;
+  /** The structured days and times (lib/drives/opening-hours.ts); `hours` stays as the notes on them. */
+  openingHours: OpeningHours | null;
   accessNotes: string;
   hostName: string | null;
   hostPhone: string | null;
@@ -48,7 +51,7 @@ export function runReminderMail(args: {
     return [
       `${i + 1}. ${s.name}`,
       `   Address: ${s.address || "no address given"}`,
-      `   Hours: ${s.hours || "not given"}`,
+      `   Hours: ${[describeOpeningHours(s.openingHours), s.hours].filter(Boolean).join(" · ") || "not given"}`,
       ...(s.accessNotes ? [`   Access: ${s.accessNotes}`] : []),
       `   Host: ${host || "no contact given"}`,
     ];

@@ -50,7 +50,7 @@ async function dueRuns(now: Date, groupIds?: readonly string[]): Promise<DueRun[
 async function stopsOf(runId: string, groupId: string): Promise<ReminderStop[]> {
   return db("pickup_run_stops as s")
     .join("drop_points as p", "p.id", "s.drop_point_id")
-    .select("p.name", "p.address", "p.hours", "p.access_notes as accessNotes", "p.host_name as hostName", "p.host_phone as hostPhone", db.raw(`p.host_email::text as "hostEmail"`))
+    .select("p.name", "p.address", "p.hours", "p.opening_hours as openingHours", "p.access_notes as accessNotes", "p.host_name as hostName", "p.host_phone as hostPhone", db.raw(`p.host_email::text as "hostEmail"`))
     .where({ "s.run_id": runId, "s.group_id": groupId })
     .orderBy("s.position");
 }

@@ -2,7 +2,7 @@ import Link from "next/link";
 import { Card, EmptyState } from "@/components/ui/card";
 import { LEVEL_LABEL } from "@/lib/drives/fill";
 import { formatter, NBSP, type Look } from "@/lib/format";
-import type { DriveFillReport, DrivePledge } from "@/lib/drives/types";
+import type { DriveFillReport, DrivePledge, PledgeHaulChoice } from "@/lib/drives/types";
 import { PLEDGE_STATUS_LABEL } from "@/lib/drives/schemas";
 import { RecordActions } from "@/components/records/record-actions";
 import { PledgeMarker } from "./pledge-marker";
@@ -17,9 +17,12 @@ function bagsByPoint(pledges: DrivePledge[], points: { id: string; name: string 
 }
 
 
-export function PledgesAndReports({ pledges, reports, points, slug, look, today }: { pledges: DrivePledge[]; reports: DriveFillReport[]; points: { id: string; name: string }[]; slug: string; look: Look; today: string }) {
+export function PledgesAndReports({ pledges, hauls, reports, points, slug, look, today }: { pledges: DrivePledge[]; hauls: PledgeHaulChoice[]; reports: DriveFillReport[]; points: { id: string; name: string }[]; slug: string; look: Look; today: string }) {
   const f = formatter(look);
   const counts = bagsByPoint(pledges, points);
+  const haulLabel = (h: PledgeHaulChoice) => `${f.moment(h.hauledAt)} · ${f.count(h.bags, "bag")}`;
+  const haulsAt = (pointId: string) => hauls.filter((h) => h.dropPointId === pointId).map((h) => ({ value: h.id, label: haulLabel(h) }));
+  const haulById = new Map(hauls.map((h) => [h.id, h]));
   return (
     <>
       <Card title={`Pledges (${pledges.length})`}>
@@ -54,8 +57,11 @@ export function PledgesAndReports({ pledges, reports, points, slug, look, today 
                   <li key={p.id} className={`py-2 ${p.status === "cancelled" ? "text-ink-soft" : ""}`}>
                     <strong>{f.count(p.bags, "bag")}</strong> to {p.dropPointName} on {f.day(p.bringOn)}{" "}
                     <span className="text-sm font-semibold">· {past ? "Past its day, not marked" : PLEDGE_STATUS_LABEL[p.status]}</span>
+                    {p.status === "received" && p.haulId && haulById.has(p.haulId) ? (
+                      <span className="block text-sm text-ink-soft">Brought in by the haul of {haulLabel(haulById.get(p.haulId)!)}</span>
+                    ) : null}
                     <span className="block text-sm text-ink-soft">{p.name || "Anonymous"}{p.email ? ` · ${p.email}` : ""}</span>
-                    <PledgeMarker id={p.id} status={p.status} label={what} />
+                    <PledgeMarker id={p.id} status={p.status} label={what} hauls={haulsAt(p.dropPointId)} />
                     <RecordActions kind="pledge" id={p.id} name={`the pledge of ${what}`} archived={false} compact />
                   </li>
                 );

@@ -176,8 +176,15 @@ describe("pledges, fill reports and photos", () => {
     expect(ids((await archived()).fillReports)).toEqual([report]);
     expect((await post(org, `/api/fill-reports/${report}/restore`)).status).toBe(200);
     expect(await fillOf()).toBe(100);
+    // The report's photo goes with it (a file row pointing at nothing would stay otherwise).
+    const key = `records-fill-${randomUUID()}`;
+    const [file] = await testDb()("files")
+      .insert({ group_id: g.groupId, key, url: `http://127.0.0.1/f/${key}`, name: "bin.png", size: 10, mime: "image/png", purpose: "fill-report-photo", subject_id: report })
+      .returning("id");
+    await testDb()("fill_reports").where({ id: report }).update({ photo_file_id: file.id });
     expect((await post(org, `/api/fill-reports/${report}/delete`, { confirm: true })).status).toBe(200);
     expect(await fillOf()).toBeNull();
+    expect(await testDb()("files").where({ id: file.id }).first("id")).toBeUndefined();
   });
 
   it("an archived photo leaves the public map, and comes back when restored", async () => {

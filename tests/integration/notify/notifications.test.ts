@@ -63,7 +63,12 @@ describe("the run reminder", () => {
       host_phone: "+44 7700 900123",
       host_email: "ines@wickmere.test",
     });
-    await t("drop_points").where({ id: g.dropPointIds[1] }).update({ address: "Old tannery yard", hours: "Daily 7–21" });
+    // Structured hours (ISO 8601 weekday numbers: 6 = Saturday, 7 = Sunday) with the free text kept as notes on them.
+    await t("drop_points").where({ id: g.dropPointIds[1] }).update({
+      address: "Old tannery yard",
+      hours: "Ring at the side door",
+      opening_hours: JSON.stringify([{ days: [6, 7], opens: "09:00", closes: "12:00" }]),
+    });
     const runId = await addRun(g, g.ids.volunteer);
 
     expect((await runNotificationSweep(TWO_DAYS_BEFORE, [g.groupId])).runReminders).toBe(0);
@@ -77,7 +82,7 @@ describe("the run reminder", () => {
     const stop2 = mail.text.indexOf("2. South gate");
     expect(stop1).toBeGreaterThan(-1);
     expect(stop2).toBeGreaterThan(stop1);
-    for (const part of ["Address: 4 Wickmere Lane", "Hours: Mon–Sat 8–18", "Access: Side gate code 4417", "Host: Ines Fairweather, +44 7700 900123, ines@wickmere.test", "Address: Old tannery yard", "Hours: Daily 7–21", "Van keys at the hall"]) {
+    for (const part of ["Address: 4 Wickmere Lane", "Hours: Mon–Sat 8–18", "Access: Side gate code 4417", "Host: Ines Fairweather, +44 7700 900123, ines@wickmere.test", "Address: Old tannery yard", "Hours: Sat, Sun 09:00–12:00 · Ring at the side door", "Van keys at the hall"]) {
       expect(mail.text).toContain(part);
     }
     expect(mail.text).toContain(`${APP_URL}/runs/${runId}`);

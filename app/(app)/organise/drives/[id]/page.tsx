@@ -10,7 +10,7 @@ import { Card } from "@/components/ui/card";
 import { requirePageRole } from "@/lib/auth/session";
 import { db } from "@/lib/db";
 import { groupToday } from "@/lib/drives/current-drive-queries";
-import { findDrive, listDropPoints, listFillReports, listPledges } from "@/lib/drives/queries";
+import { findDrive, listDropPoints, listFillReports, listPledgeHauls, listPledges } from "@/lib/drives/queries";
 import { tileConfig } from "@/lib/map/config";
 import { groupLook } from "@/lib/format/group-look-queries";
 import { listArchivedOfDrive } from "@/lib/records/queries";
@@ -22,9 +22,10 @@ export default async function EditDrivePage({ params }: { params: Promise<{ id: 
   const actor = await requirePageRole(`/organise/drives/${id}`, "organiser");
   const drive = await findDrive(actor.group.id, id);
   if (!drive) notFound();
-  const [points, pledges, reports, group, look, today, archived] = await Promise.all([
+  const [points, pledges, hauls, reports, group, look, today, archived] = await Promise.all([
     listDropPoints(actor.group.id, drive.id),
     listPledges(actor.group.id, drive.id),
+    listPledgeHauls(actor.group.id, drive.id),
     listFillReports(actor.group.id, drive.id),
     db("groups").select("workshop_lat as lat", "workshop_lng as lng").where({ id: actor.group.id }).first(),
     groupLook(actor.group.id),
@@ -51,7 +52,7 @@ export default async function EditDrivePage({ params }: { params: Promise<{ id: 
       <Card title="Drop points">
         <DropPointsEditor driveId={drive.id} points={points} centre={centre} tileUrl={tiles.tileUrl} attribution={tiles.attribution} />
       </Card>
-      <PledgesAndReports pledges={pledges} reports={reports} points={points} slug={drive.slug} look={look} today={today} />
+      <PledgesAndReports pledges={pledges} hauls={hauls} reports={reports} points={points} slug={drive.slug} look={look} today={today} />
       <ArchivedOfDriveCard archived={archived} look={look} />
       <Card title="Drive details">
         <DriveForm driveId={drive.id} initial={{ ...drive }} />
