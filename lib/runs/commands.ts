@@ -14,6 +14,20 @@ import { haulDayWarning } from "./warnings";
 
 // The pickup runs' writes: a new run, and settling its stops. Reads are in queries.ts.
 
+/** The group's volunteer or organiser who may take a run (422 for anyone else, another group's people included). */
+export async function runDriver(q: Knex | Knex.Transaction, groupId: string, userId: string): Promise<{ id: string; name: string; email: string }> {
+  const person = await q("memberships as m")
+    .join("users as u", "u.id", "m.user_id")
+    .select("u.id", "u.name", "u.email")
+    .where({ "m.group_id": groupId, "m.user_id": userId })
+    .whereIn("m.role", ["volunteer", "organiser"])
+    .first();
+  if (!person) {
+    throw new AppError("invalid_input", "That person cannot take this run.", { fields: { assigneeId: "Choose a volunteer or organiser of your group" } });
+  }
+  return person as { id: string; name: string; email: string };
+}
+
 /** Orders the chosen drop points and stores the run; the caller sends the e-mail after commit. */
 export async function createRun(actor: Actor, input: CreateRunInput) {
   return db.transaction(async (trx) => {
@@ -30,17 +44,7 @@ export async function createRun(actor: Actor, input: CreateRunInput) {
         fields: { dropPointIds: "Choose drop points of this drive only" },
       });
     }
-    const assignee = await trx("memberships as m")
-      .join("users as u", "u.id", "m.user_id")
-      .select("u.id", "u.name", "u.email")
-      .where({ "m.group_id": actor.group.id, "m.user_id": input.assigneeId })
-      .whereIn("m.role", ["volunteer", "organiser"])
-      .first();
-    if (!assignee) {
-      throw new AppError("invalid_input", "That person cannot take this run.", {
-        fields: { assigneeId: "Choose a volunteer or organiser of your group" },
-      });
-    }
+    const assignee = await runDriver(trx, actor.group.id, input.assigneeId);
     const plan = planRoute({ start: input.start, stops: points, returnToStart: input.returnToStart });
     const [run] = await trx("pickup_runs")
       .insert({

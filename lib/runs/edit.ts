@@ -3,6 +3,7 @@ import { AppError, conflict } from "@/lib/api/errors";
 import type { Actor } from "@/lib/auth/queries";
 import { db } from "@/lib/db";
 import { runLedgerFunction, type OwnRefusals } from "@/lib/ledger/post";
+import { runDriver } from "./commands";
 import { legsInOrder, reoptimisedOrder } from "./run-edit-plan";
 import { CLOSED_RUN_STATES, RUN_STATE_LABEL, type CancelRunInput, type EditRunInput } from "./schemas";
 import type { RunDetail } from "./types";
@@ -36,19 +37,6 @@ async function callEdit(actor: Actor, run: RunDetail, change: Record<string, unk
   );
 }
 
-async function driverOf(actor: Actor, userId: string) {
-  const person = await db("memberships as m")
-    .join("users as u", "u.id", "m.user_id")
-    .select("u.id", "u.name", "u.email")
-    .where({ "m.group_id": actor.group.id, "m.user_id": userId })
-    .whereIn("m.role", ["volunteer", "organiser"])
-    .first();
-  if (!person) {
-    throw new AppError("invalid_input", "That person cannot take this run.", { fields: { assigneeId: "Choose a volunteer or organiser of your group" } });
-  }
-  return person as { id: string; name: string; email: string };
-}
-
 /**
  * Changes the date, the volunteer or the notes. Answers what changed, so the
  * route can mail the people concerned after commit: the new volunteer gets the
@@ -61,7 +49,7 @@ export async function editRun(actor: Actor, run: RunDetail, input: EditRunInput)
   if (input.notes !== undefined && input.notes !== run.notes) change.notes = input.notes;
   let newDriver: { id: string; name: string; email: string } | null = null;
   if (input.assigneeId !== undefined && input.assigneeId !== run.assigneeId) {
-    newDriver = await driverOf(actor, input.assigneeId);
+    newDriver = await runDriver(db, actor.group.id, input.assigneeId);
     change.assigneeId = newDriver.id;
   }
   if (Object.keys(change).length === 0) return { changed: false as const };
