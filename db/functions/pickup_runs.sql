@@ -6,6 +6,23 @@
 -- {kind:"stopSettled"} when a logged or skipped stop would be removed, {kind:"stopsChanged"} when the
 -- stops named are no longer the run's.
 
+-- Takes the drive's lock, then the run's row, and refuses a run that is not the group's and drive's
+-- (CT404) or is done or cancelled (CT409 runClosed). Shared by the edit and the cancel below.
+create or replace function pickup_run_lock_open(v_group uuid, v_drive uuid, v_run uuid) returns void language plpgsql as $$
+declare
+  v_state text;
+begin
+  perform ledger_lock_drive(v_group, v_drive);
+  select state into v_state from pickup_runs where id = v_run and group_id = v_group and drive_id = v_drive for update;
+  if not found then
+    raise exception 'pickup_run: no such run' using errcode = 'CT404', detail = '{"what":"run"}';
+  end if;
+  if v_state in ('done', 'cancelled') then
+    raise exception 'pickup_run: run closed' using errcode = 'CT409', detail = jsonb_build_object('kind', 'runClosed', 'state', v_state)::text;
+  end if;
+end
+$$;
+
 -- p = { groupId, driveId, runId, plannedOn?, assigneeId?, notes?,
 --       stops?: [{ id: uuid|null (null = a new stop), dropPointId, legKm }], distanceKm? }
 -- Only the keys present are changed. Answers { state, stops, logged, skipped }.
@@ -14,19 +31,11 @@ declare
   v_group uuid := (p->>'groupId')::uuid;
   v_drive uuid := (p->>'driveId')::uuid;
   v_run uuid := (p->>'runId')::uuid;
-  v_state text;
   v_named int;
   v_found int;
   s record;
 begin
-  perform ledger_lock_drive(v_group, v_drive);
-  select state into v_state from pickup_runs where id = v_run and group_id = v_group and drive_id = v_drive for update;
-  if not found then
-    raise exception 'pickup_run_edit: no such run' using errcode = 'CT404', detail = '{"what":"run"}';
-  end if;
-  if v_state in ('done', 'cancelled') then
-    raise exception 'pickup_run_edit: run closed' using errcode = 'CT409', detail = jsonb_build_object('kind', 'runClosed', 'state', v_state)::text;
-  end if;
+  perform pickup_run_lock_open(v_group, v_drive, v_run);
   update pickup_runs set
     planned_on = case when p ? 'plannedOn' then (p->>'plannedOn')::date else planned_on end,
     assignee_id = case when p ? 'assigneeId' then (p->>'assigneeId')::uuid else assignee_id end,
@@ -80,17 +89,9 @@ declare
   v_group uuid := (p->>'groupId')::uuid;
   v_drive uuid := (p->>'driveId')::uuid;
   v_run uuid := (p->>'runId')::uuid;
-  v_state text;
   v_released int;
 begin
-  perform ledger_lock_drive(v_group, v_drive);
-  select state into v_state from pickup_runs where id = v_run and group_id = v_group and drive_id = v_drive for update;
-  if not found then
-    raise exception 'pickup_run_cancel: no such run' using errcode = 'CT404', detail = '{"what":"run"}';
-  end if;
-  if v_state in ('done', 'cancelled') then
-    raise exception 'pickup_run_cancel: run closed' using errcode = 'CT409', detail = jsonb_build_object('kind', 'runClosed', 'state', v_state)::text;
-  end if;
+  perform pickup_run_lock_open(v_group, v_drive, v_run);
   update pickup_runs set state = 'cancelled', cancelled_at = now(), cancelled_by = (p->>'actorId')::uuid,
     cancel_reason = p->>'reason', updated_at = now()
   where id = v_run;
