@@ -111,7 +111,6 @@ async function applyLimits<P, B>(request: Request, limits: readonly Limit<P, B>[
   }
 }
 
-/** What every declared handler shares: the checks before the body, and the error and cache handling around it. */
 /**
  * An entry that waited on a phone names the person who typed it (X-Cantrove-Entered-By, the
  * user id, set by the offline queue). Sent while someone else is signed in, it is refused
@@ -126,6 +125,7 @@ function assertEnteredBy(request: Request, actor: Actor | null): void {
   }
 }
 
+/** What every declared handler shares: the checks before the body, and the error and cache handling around it. */
 function wrap<A extends Access, P, Q, B, R>(
   spec: EndpointSpec<A, P, Q, B, R>,
   run: (pre: Omit<EndpointContext<A, P, Q, B, R>, "body" | "raw">) => Promise<Response>,
