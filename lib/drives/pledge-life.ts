@@ -64,12 +64,12 @@ export async function markPledge(actor: Actor, id: string, status: Exclude<Pledg
     if (pledge.status === "cancelled") throw conflict("The donor cancelled this pledge; it cannot be marked.", { status: pledge.status });
     if (haulId) {
       if (status !== "received") throw conflict("Only a received pledge names the haul that brought it.");
-      const haul = await trx("hauls").where({ id: haulId, group_id: groupId }).first("drop_point_id", "drive_id");
+      const haul = await trx("hauls").where({ id: haulId, group_id: groupId }).whereNull("reversed_at").first("drop_point_id", "drive_id");
       if (!haul) throw notFound("That haul");
       if (haul.drop_point_id !== pledge.drop_point_id) throw conflict("That haul was from another drop point than the pledge.");
     }
     const [row] = await trx("pledges")
-      .where({ id })
+      .where({ id, group_id: groupId })
       .update({ status, status_at: status === "pledged" ? null : trx.fn.now(), haul_id: status === "received" ? (haulId ?? null) : null })
       .returning(["id", "status", "haul_id as haulId"]);
     return row as { id: string; status: PledgeStatus; haulId: string | null };

@@ -64,6 +64,10 @@ describe("the organiser marks a pledge", () => {
     const elsewhere = (await vol.json<{ id: string }>("POST", `/api/drives/${g.driveId}/hauls`, { dropPointId: g.dropPointIds[1], bags: 1 })).body.id;
 
     expect((await mark(org, a, { status: "received", haulId: elsewhere })).status).toBe(409);
+    // An undone haul brought nothing: it cannot be named (the screen offers only hauls still standing).
+    const undone = (await vol.json<{ id: string }>("POST", `/api/drives/${g.driveId}/hauls`, { dropPointId: g.dropPointIds[0], bags: 2 })).body.id;
+    await testDb()("hauls").where({ id: undone }).update({ reversed_at: new Date() });
+    expect((await mark(org, a, { status: "received", haulId: undone })).status).toBe(404);
     const got = await mark(org, a, { status: "received", haulId: haul });
     expect(got.status).toBe(200);
     expect(got.body).toMatchObject({ id: a, status: "received", haulId: haul });
