@@ -57,10 +57,11 @@ begin
     if found then
       raise exception 'pickup_run_edit: settled stop removed' using errcode = 'CT409', detail = '{"kind":"stopSettled"}';
     end if;
-    -- New stops: drop points of this drive and group only.
+    -- New stops: drop points of this drive and group only, and not archived (out of every plan).
     perform 1 from jsonb_array_elements(p->'stops') x
     where x->>'id' is null and not exists (
-      select 1 from drop_points d where d.id = (x->>'dropPointId')::uuid and d.drive_id = v_drive and d.group_id = v_group);
+      select 1 from drop_points d where d.id = (x->>'dropPointId')::uuid and d.drive_id = v_drive and d.group_id = v_group
+        and d.archived_at is null);
     if found then
       raise exception 'pickup_run_edit: no such drop point' using errcode = 'CT404', detail = '{"what":"dropPoint"}';
     end if;

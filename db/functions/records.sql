@@ -52,6 +52,7 @@ declare
   v_movements bigint := 0;
   v_stops bigint := 0;
   v_keys jsonb := '[]'::jsonb;
+  v_gone int := 0;
 begin
   if v_kind = 'drive' then
     perform ledger_lock_drive(v_group, v_id);
@@ -75,7 +76,7 @@ begin
   -- their keys are answered. A drop point's fill reports go with the drop point, and so their photos.
   with gone as (
     delete from files where group_id = v_group and (
-      (v_kind = 'photo' and id = v_id)
+      (v_kind = 'photo' and id = v_id and purpose in ('drop-point-photo', 'fill-report-photo'))
       or (v_kind = 'fillReport' and purpose = 'fill-report-photo' and subject_id = v_id)
       or (v_kind = 'dropPoint' and purpose = 'drop-point-photo' and subject_id = v_id)
       or (v_kind = 'dropPoint' and purpose = 'fill-report-photo' and subject_id in (select id from fill_reports where drop_point_id = v_id))
@@ -86,6 +87,13 @@ begin
   select coalesce(jsonb_agg(key), '[]'::jsonb) into v_keys from gone;
   if v_kind <> 'photo' then
     execute format('delete from %I where id = $1 and group_id = $2', record_table(v_kind)) using v_id, v_group;
+    get diagnostics v_gone = row_count;
+  else
+    v_gone := jsonb_array_length(v_keys);
+  end if;
+  -- Gone already (a second delete, another group's id): nothing was deleted, and the answer says so.
+  if v_gone = 0 then
+    raise exception 'record_delete: no such row' using errcode = 'CT404', detail = jsonb_build_object('what', v_kind)::text;
   end if;
   return jsonb_build_object('deleted', true, 'fileKeys', v_keys);
 end

@@ -178,6 +178,14 @@ describe("editing a run's stops", () => {
     const foreign = await testDb()("drop_points").whereNot({ group_id: g.groupId }).first("id");
     expect((await org.json("PUT", `/api/runs/${run.id}/stops`, { dropPointIds: [points[0]!.id, foreign.id] })).status).toBe(422);
     expect((await org.json("PUT", `/api/runs/${run.id}/stops`, { dropPointIds: [points[0]!.id, points[0]!.id] })).status).toBe(422);
+    // An archived drop point is out of every plan: it cannot be added as a new stop either.
+    const archived = points[1]!.id;
+    expect((await org.json("POST", `/api/drop-points/${archived}/archive`, {})).status).toBe(200);
+    try {
+      expect((await org.json("PUT", `/api/runs/${run.id}/stops`, { dropPointIds: [points[0]!.id, archived] })).status).toBe(404);
+    } finally {
+      expect((await org.json("POST", `/api/drop-points/${archived}/restore`, {})).status).toBe(200);
+    }
   });
 });
 
