@@ -42,7 +42,12 @@ function DetailsForm({ run, drivers }: { run: RunDetail; drivers: DriverChoice[]
         e.preventDefault();
         setFields({});
         setSaved(false);
-        edit.mutate({ plannedOn, assigneeId, notes });
+        // Only what changed: a run with no volunteer yet keeps none until one is chosen.
+        edit.mutate({
+          ...(plannedOn !== run.plannedOn ? { plannedOn } : {}),
+          ...(assigneeId && assigneeId !== run.assigneeId ? { assigneeId } : {}),
+          ...(notes !== run.notes ? { notes } : {}),
+        });
       }}
     >
       <div className="grid gap-2 sm:grid-cols-2">

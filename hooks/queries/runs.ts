@@ -4,6 +4,7 @@ import { queryOptions, useMutation, useQueryClient, type QueryClient } from "@ta
 import { runKeys } from "./keys";
 import { fetchJson } from "@/lib/api/client";
 import type { RouteInputRaw } from "@/lib/runs/route-schemas";
+import type { EditRunInput } from "@/lib/runs/schemas";
 import type { RouteAnswer, RunDetail, SuggestionRow } from "@/lib/runs/types";
 import type { After } from "./ledger";
 
@@ -114,8 +115,9 @@ function newKey(): string {
 }
 
 /** Changes a run's day, volunteer or notes (PATCH: the same values again change nothing). */
-export function useEditRun(runId: string, after: After<unknown, { plannedOn: string; assigneeId: string; notes: string }> = {}) {
-  return useStopWrite(runId, (body: { plannedOn: string; assigneeId: string; notes: string }) => fetchJson(`/api/runs/${runId}`, { method: "PATCH", json: body }), after);
+/** Changes what is named (the PATCH route's own input type): the day, the volunteer, the notes. */
+export function useEditRun(runId: string, after: After<unknown, EditRunInput> = {}) {
+  return useStopWrite(runId, (body: EditRunInput) => fetchJson(`/api/runs/${runId}`, { method: "PATCH", json: body }), after);
 }
 
 /** Stores the run's drop points in this visiting order (adds, removes, reorders). */
