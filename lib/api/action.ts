@@ -86,11 +86,20 @@ export function action<A extends Access, I, T, P = undefined, R = undefined>(
       let data: Awaited<ReturnType<typeof work>>;
       try {
         data = await work({ actor, input, params, resource, values });
-      } finally {
-        // After the work only (a refused input, role or limit changed nothing), and
-        // also when it threw a redirect(), which is how a done action answers.
-        await forgetEverywhere(spec.keepsPeople ? "data" : "all");
+      } catch (error) {
+        // A redirect() is how a done action answers, and a 5xx may follow a commit; a 4xx
+        // refusal changed nothing and, as in endpoint(), tells no server to clear its cache.
+        let nextAnswer = false; // redirect() and notFound() are Next's own throws: unstable_rethrow rethrows only those
+        try {
+          unstable_rethrow(error);
+        } catch {
+          nextAnswer = true;
+        }
+        const status = nextAnswer ? 0 : toAppError(error).status;
+        if (status < 400 || status >= 500) await forgetEverywhere(spec.keepsPeople ? "data" : "all");
+        throw error;
       }
+      await forgetEverywhere(spec.keepsPeople ? "data" : "all");
       return { ok: true, message: null, fields: {}, values: {}, data };
     } catch (error) {
       unstable_rethrow(error); // redirect() and notFound() are answers, not failures
