@@ -12,14 +12,18 @@ import { noteWriteLsn } from "./write-fence";
 // and the primary's WAL position; every server LISTENs on one direct
 // connection of its own (LISTEN holds session state, so never through a
 // transaction-mode pooler: DATABASE_LISTEN_URL, else DATABASE_URL) and clears
-// its cache when the message comes, then says so on ACK_CHANNEL; the write's
+// its cache when the message comes, then says so on the writer's ackChannel; the write's
 // answer waits for every other server's acknowledgement (acks.ts), so the
 // writer's next request, to whichever server, finds the cache cleared. With no
 // other server listening there is nothing to wait for. The TTL stays as a
 // safety net for a message lost while a listener was reconnecting (it clears
 // everything when it comes back, too).
 export const CHANNEL = "cantrove_reads";
-export const ACK_CHANNEL = "cantrove_reads_ack";
+// Each server hears acknowledgements on a channel of its own, so a write's answers go to
+// its writer only (one shared channel would hand every server every other's).
+export const ackChannel = (origin: string) => `cantrove_reads_ack_${origin.replace(/-/g, "")}`;
+// application_name: the prefix names the listeners, the origin tells this process's own
+// connections (an old one may linger after a reconnect) from the other servers'.
 const LISTENER_NAME = "cantrove-listen";
 
 type Scope = "all" | "data";
@@ -98,7 +102,7 @@ export function parseMessage(payload: string | undefined): { origin: string; sco
 function connect(): void {
   const url = process.env.DATABASE_LISTEN_URL || process.env.DATABASE_URL;
   if (!url) return;
-  const client = new pg.Client({ connectionString: url, application_name: LISTENER_NAME, keepAlive: true });
+  const client = new pg.Client({ connectionString: url, application_name: `${LISTENER_NAME}:${state.origin}`, keepAlive: true });
   state.client = client;
   let retried = false;
   let counting: NodeJS.Timeout | undefined;
@@ -117,15 +121,14 @@ function connect(): void {
   // The other servers' listeners on this database: how many acknowledgements a write waits for.
   const countPeers = () =>
     client
-      .query(`select count(*)::int as n from pg_stat_activity where application_name = $1 and datname = current_database() and pid <> pg_backend_pid()`, [LISTENER_NAME])
+      .query(`select count(*)::int as n from pg_stat_activity where application_name like $1 and application_name <> $2 and datname = current_database()`, [`${LISTENER_NAME}:%`, `${LISTENER_NAME}:${state.origin}`])
       .then((r) => (state.peers = r.rows[0]?.n ?? 0))
       .catch(() => undefined);
   client.on("error", (e) => retry(e.message));
   client.on("end", () => retry("connection ended"));
   client.on("notification", (message) => {
-    if (message.channel === ACK_CHANNEL) {
-      const [to, id] = (message.payload ?? "").split("|");
-      if (to === state.origin && id) ackReceived(id);
+    if (message.channel === ackChannel(state.origin)) {
+      if (message.payload) ackReceived(message.payload);
       return;
     }
     const m = parseMessage(message.payload);
@@ -134,11 +137,11 @@ function connect(): void {
     const [origin] = m.origin.split(":");
     if (origin === state.origin) return; // this process cleared its own cache before sending
     forgetReads(m.scope);
-    client.query(`select pg_notify($1, $2)`, [ACK_CHANNEL, `${origin}|${m.origin}`]).catch(() => undefined);
+    client.query(`select pg_notify($1, $2)`, [ackChannel(origin), m.origin]).catch(() => undefined);
   });
   client
     .connect()
-    .then(() => client.query(`LISTEN ${CHANNEL}; LISTEN ${ACK_CHANNEL}`))
+    .then(() => client.query(`LISTEN ${CHANNEL}; LISTEN ${ackChannel(state.origin)}`))
     .then(countPeers)
     .then(() => {
       state.connected = true;
