@@ -81,10 +81,12 @@ export function useOutbox() {
   useEffect(() => {
     if (!owner) return;
     void (async () => {
-      // Entries queued by the older, localStorage queue move into IndexedDB under the person signed in now.
+      // Entries queued by the older, localStorage queue carry no owner: whoever typed them may not be
+      // the person signed in now, so they move into IndexedDB held back, not sent under this name.
       try {
         const old = readOutbox(localStorage);
-        for (const item of old) await putEntry({ ...item, owner, state: "waiting" });
+        const held = { status: 409, message: "Entered on this phone before an update, perhaps by someone else: nothing was sent. If it is yours, enter it again; then drop this copy." };
+        for (const item of old) await putEntry({ ...item, owner, state: "refused", refusal: held });
         if (old.length) localStorage.removeItem(OUTBOX_STORAGE_KEY);
       } catch {
         // storage blocked

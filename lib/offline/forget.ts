@@ -36,6 +36,12 @@ export async function forgetThisPhone(): Promise<void> {
 
 /** Signs out after clearing this phone; with entries not yet sent, asks first. */
 export async function signOutClearing(signOut: () => Promise<unknown>): Promise<void> {
+  // Offline the sign-out request cannot reach the server: the session would stay on this phone
+  // (the next person signed in as this one) while its entries were deleted.
+  if (!navigator.onLine) {
+    window.alert("You are offline. Connect to sign out, so that nobody else is signed in as you on this phone.");
+    return;
+  }
   const unsent = await unsentCount();
   if (unsent > 0 && !window.confirm(`${unsent === 1 ? "1 entry has" : `${unsent} entries have`} not been sent yet and will be deleted from this phone. Sign out anyway?`)) return;
   await forgetThisPhone();
