@@ -9,18 +9,24 @@ import { fieldErrors } from "@/lib/api/client";
 import { computeCanGrid } from "@/lib/heaters/can-grid";
 import { formatNumber } from "@/lib/heaters/format";
 import type { CanGridInput } from "@/lib/heaters/schemas";
-import { countOf } from "@/lib/plural";
+import { parseNumberInput } from "@/lib/forms/number-input";
+import { countOf, noun } from "@/lib/plural";
 
 const COVERAGE = [
   { value: "chamber", label: "The can chamber only (manifolds sealed apart)" },
   { value: "full", label: "The chamber and both manifolds" },
 ] as const;
 
-/** A length typed in the plan's unit: a positive number, or null while it is not one. */
-const lengthOf = (raw: string) => {
-  const n = Number(raw.trim().replace(",", "."));
-  return raw.trim() !== "" && Number.isFinite(n) && n > 0 ? n : null;
-};
+/**
+ * A length typed in the plan's unit, read by the project's one number parser (lib/forms/number-input.ts):
+ * "1,234" is asked about, never taken as 1.234; the value, or the message to show.
+ */
+function lengthOf(raw: string, unit: "in" | "mm"): { value: number | null; error?: string } {
+  const message = `Enter a length in ${unit}, like ${unit === "in" ? "34" : "860"}.`;
+  const parsed = parseNumberInput(raw, { noun: noun(unit, unit), decimal: true, required: true, message });
+  if (!parsed.ok) return { value: null, error: parsed.error };
+  return parsed.value !== null && parsed.value > 0 ? { value: parsed.value } : { value: null, error: message };
+}
 
 /**
  * A unit's new glazing (issue 16), for organisers. The new can count is shown as
@@ -34,12 +40,12 @@ export function GlazingEditor({ id, plan, cans, held }: { id: string; plan: CanG
   const [height, setHeight] = useState(String(plan.glazingHeight));
   const [coverage, setCoverage] = useState<string>(plan.coverage);
   const change = useChangeGlazing(id, { onSuccess: () => router.refresh() });
-  const w = lengthOf(width);
-  const h = lengthOf(height);
+  const unit = plan.unit === "in" ? "in" : "mm";
+  const typedWidth = lengthOf(width, unit);
+  const typedHeight = lengthOf(height, unit);
+  const [w, h] = [typedWidth.value, typedHeight.value];
   const next = w && h ? computeCanGrid({ ...plan, glazingWidth: w, glazingHeight: h, coverage: coverage as CanGridInput["coverage"] }) : null;
   const server = fieldErrors(change.error);
-  const unit = plan.unit === "in" ? "in" : "mm";
-  const wrong = `Enter a length in ${unit}, like ${unit === "in" ? "34" : "860"}.`;
   return (
     <form
       noValidate
@@ -53,8 +59,8 @@ export function GlazingEditor({ id, plan, cans, held }: { id: string; plan: CanG
     >
       <FormError message={change.error?.message} />
       <div className="grid gap-3 sm:grid-cols-2">
-        <Field id="glazing-width" label={`Glazing width (${unit})`} inputMode="decimal" value={width} onChange={(e) => setWidth(e.target.value)} error={w ? server["plan.glazingWidth"] : wrong} />
-        <Field id="glazing-height" label={`Glazing height (${unit})`} inputMode="decimal" value={height} onChange={(e) => setHeight(e.target.value)} error={h ? server["plan.glazingHeight"] : wrong} />
+        <Field id="glazing-width" label={`Glazing width (${unit})`} inputMode="decimal" value={width} onChange={(e) => setWidth(e.target.value)} error={typedWidth.error ?? server["plan.glazingWidth"]} />
+        <Field id="glazing-height" label={`Glazing height (${unit})`} inputMode="decimal" value={height} onChange={(e) => setHeight(e.target.value)} error={typedHeight.error ?? server["plan.glazingHeight"]} />
       </div>
       <RadioGroup id="glazing-coverage" name="coverage" label="The sheet covers" options={COVERAGE} value={coverage} onChange={setCoverage} />
       <p aria-live="polite" className="font-semibold">
