@@ -45,7 +45,7 @@ export function OpeningHoursInput({ value, onChange, error }: { value: OpeningSp
           </div>
         </div>
       ))}
-      <Button type="button" variant="secondary" className="self-start" onClick={() => onChange([...value, { days: [], opens: "09:00", closes: "17:00" }])}>
+      <Button type="button" variant="secondary" className="self-start" onClick={() => onChange([...value, { days: [], opens: "", closes: "" }])}>
         Add opening times
       </Button>
       <FieldError id="dp-opening" error={error} />
