@@ -54,7 +54,7 @@ export function LogHome({ drives, initialDriveId, initialDropPointId, today }: {
             aria-selected={tab === t.id}
             aria-controls={`panel-${t.id}`}
             onClick={() => setTab(t.id)}
-            className={`min-h-12 rounded-lg border-2 font-semibold focus-visible:outline-3 focus-visible:outline-ember ${tab === t.id ? "border-ember bg-ember text-white" : "border-ink/30 bg-white"}`}
+            className={`min-h-12 rounded-lg border-2 px-2 py-1 font-semibold leading-tight focus-visible:outline-3 focus-visible:outline-ember ${tab === t.id ? "border-ember bg-ember text-white" : "border-ink/30 bg-white"}`}
           >
             {t.label}
           </button>

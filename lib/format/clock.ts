@@ -13,7 +13,13 @@ export type Clock = Pick<Look, "locale" | "timeZone">;
  */
 export const steady = (text: string) => text.replace(/\bSept\b/g, "Sep").replace(/\u202f/g, "\u00a0").replace(/\u2009/g, " ");
 
+// Building an Intl formatter is the costly part (≈50 ms on a slow phone the first time); one per clock.
+const formatters = new Map<string, Intl.DateTimeFormat>();
+
 /** "2 Dec 2026, 13:55": a moment on the group's clock. */
 export function formatMoment(at: string | Date, look: Clock): string {
-  return steady(new Date(at).toLocaleString(look.locale, { dateStyle: "medium", timeStyle: "short", timeZone: look.timeZone }));
+  const key = `${look.locale}|${look.timeZone}`;
+  let f = formatters.get(key);
+  if (!f) formatters.set(key, (f = new Intl.DateTimeFormat(look.locale, { dateStyle: "medium", timeStyle: "short", timeZone: look.timeZone })));
+  return steady(f.format(new Date(at)));
 }

@@ -6,7 +6,7 @@ import { memo } from "./memo";
 // "2 Dec 2026, 13:55" for a moment, "1 Nov 2026 – 31 Jan 2027" for a span
 // (en-GB; other locales get their own order from Intl/CLDR). Machine columns
 // (the CSV's ISO UTC, <time dateTime>) keep ISO; everything shown goes through here.
-export { steady } from "./clock";
+export { formatMoment, steady } from "./clock";
 
 type Locale = Pick<Look, "locale">;
 
@@ -19,17 +19,9 @@ function dtf(locale: string, options: Intl.DateTimeFormatOptions) {
   return { format: (d: Date) => steady(f.format(d)), formatRange: (a: Date, b: Date) => steady(f.formatRange(a, b)), formatToParts: (d: Date) => f.formatToParts(d) };
 }
 
-// formatMoment as in clock.ts, with the formatter built once: the CSV export writes two moments a
-// line for up to 100,000 lines. clock.ts keeps an unmemoised one for the drive page.
-
 /** "2 Dec 2026": a calendar day. */
 export function formatDay(day: string, look: Locale): string {
   return dtf(look.locale, { dateStyle: "medium", timeZone: "UTC" }).format(dayInstant(day));
-}
-
-/** "2 Dec 2026, 13:55": a moment on the group's clock. */
-export function formatMoment(at: string | Date, look: Clock): string {
-  return dtf(look.locale, { dateStyle: "medium", timeStyle: "short", timeZone: look.timeZone }).format(new Date(at));
 }
 
 /** "2 December 2026": a day spelled out, for sentences, warnings and mail. */

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { newPage, PHONE, signInAs, browserForFile } from "@/tests/support/browser";
+import { newPage, revealMaps, PHONE, signInAs, browserForFile } from "@/tests/support/browser";
 import { ApiClient } from "@/tests/support/http";
 import { freshGroup } from "@/tests/support/ledger";
 
@@ -17,6 +17,7 @@ describe("full bins on the dashboard and the public map", () => {
 
     const { context, page } = await newPage(browser(), PHONE);
     await page.goto(`/drives/${g.driveSlug}`);
+    await revealMaps(page);
     const fullPins = page.locator('.leaflet-marker-icon svg[data-fill="full"]');
     await expect.poll(() => fullPins.count(), { timeout: 15_000 }).toBe(2);
     expect(await page.locator('[data-testid="fill"][data-fill="full"]').count()).toBe(2);
@@ -36,6 +37,7 @@ describe("full bins on the dashboard and the public map", () => {
     await expect.poll(() => bins.count()).toBe(1);
     expect(await bins.first().innerText()).toContain("South gate");
     await page.reload();
+    await revealMaps(page);
     await expect.poll(() => fullPins.count(), { timeout: 15_000 }).toBe(1);
     expect(await page.locator(".leaflet-marker-icon").count()).toBe(2);
     await page.screenshot({ path: ".test-results/bin-fill-map.png", fullPage: true });
@@ -47,6 +49,7 @@ describe("full bins on the dashboard and the public map", () => {
     await org.getByRole("heading", { level: 1 }).waitFor();
     expect(await bins.count()).toBe(0);
     await page.reload();
+    await revealMaps(page);
     await expect.poll(() => page.locator(".leaflet-marker-icon").count(), { timeout: 15_000 }).toBe(2);
     expect(await fullPins.count()).toBe(0);
     await context.close();

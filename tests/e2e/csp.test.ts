@@ -2,7 +2,7 @@ import path from "node:path";
 import type { Page } from "playwright-core";
 import { PNG } from "pngjs";
 import { describe, expect, it } from "vitest";
-import { newPage, PHONE, signInAs, browserForFile } from "@/tests/support/browser";
+import { newPage, revealMaps, PHONE, signInAs, browserForFile } from "@/tests/support/browser";
 import { testDb } from "@/tests/support/db";
 import { DEMO } from "@/tests/support/env";
 import { createOwnGroup } from "@/tests/support/own-group";
@@ -68,6 +68,7 @@ describe("Content-Security-Policy in the browser", () => {
     await page.screenshot({ path: path.join(shots, "csp-landing.png"), fullPage: true });
 
     await open(page, "/drives/larkhollow-winter-2026");
+    await revealMaps(page);
     await page.waitForSelector("img.leaflet-tile-loaded");
     await expect.poll(() => page.locator(".leaflet-marker-icon").count(), { timeout: 15_000 }).toBeGreaterThan(0);
     // The list is filled by react-query from the public JSON endpoints.

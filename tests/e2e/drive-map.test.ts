@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { newPage, PHONE, browserForFile } from "@/tests/support/browser";
+import { newPage, revealMaps, PHONE, browserForFile } from "@/tests/support/browser";
 import { DEMO_DROP_POINTS } from "@/db/seeds/data/scenario";
 
 const browser = browserForFile();
@@ -12,6 +12,7 @@ describe("public drive map", () => {
       if (r.url().includes("/tiles/")) tileResponses.push(r.status());
     });
     await page.goto("/drives/larkhollow-winter-2026");
+    await revealMaps(page);
     await page.waitForSelector("img.leaflet-tile-loaded");
     await page.waitForFunction(() => document.querySelectorAll("img.leaflet-tile:not(.leaflet-tile-loaded)").length === 0);
     const tiles = await page.$$eval("img.leaflet-tile-loaded", (imgs) =>

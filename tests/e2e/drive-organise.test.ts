@@ -1,6 +1,6 @@
 import type { Page } from "playwright-core";
 import { describe, expect, it } from "vitest";
-import { newPage, PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
+import { newPage, revealMaps, PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
 import { DEMO } from "@/tests/support/env";
 import { mailTo, waitForMail } from "@/tests/support/mail";
 import { PNG } from "pngjs";
@@ -37,6 +37,7 @@ describe("organiser sets up a drive; the public uses it", () => {
     await org.page.getByLabel("Ends on").fill("2027-01-31");
     await org.page.getByRole("button", { name: "Create drive" }).click();
     await org.page.waitForURL(/\/organise\/drives\/[0-9a-f-]{36}$/);
+    await revealMaps(org.page);
     await org.page.waitForSelector("img.leaflet-tile-loaded");
 
     for (const [name, dx, dy] of [["Lantern Street bakery", -60, -30], ["Harbour chandlery", 70, 40]] as const) {
@@ -70,6 +71,7 @@ describe("organiser sets up a drive; the public uses it", () => {
 
     const { context, page } = await newPage(browser(), PHONE);
     await page.goto(`/drives/${slug}`);
+    await revealMaps(page);
     await page.waitForSelector("img.leaflet-tile-loaded");
     await expect.poll(() => page.locator(".leaflet-marker-icon").count(), { timeout: 15_000 }).toBe(2);
     await expect.poll(() => page.getByTestId("drop-point").count(), { timeout: 15_000 }).toBe(2);

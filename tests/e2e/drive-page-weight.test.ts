@@ -1,6 +1,6 @@
 import type { Route } from "playwright-core";
 import { describe, expect, it } from "vitest";
-import { newPage, PHONE, browserForFile } from "@/tests/support/browser";
+import { newPage, revealMaps, PHONE, browserForFile } from "@/tests/support/browser";
 import { waitForMail } from "@/tests/support/mail";
 
 // The public drive page is what a passer-by opens from a sign on a bin, often
@@ -18,7 +18,8 @@ describe("public drive page weight", () => {
     const { context, page } = await newPage(browser(), PHONE);
     try {
       await page.goto(PAGE);
-      // The map's code is part of the first load: wait for the pins it draws.
+      // The map's code counts too (it loads once the map is scrolled near): wait for the pins it draws.
+      await revealMaps(page);
       await page.locator(".leaflet-marker-icon").first().waitFor();
       await page.waitForLoadState("networkidle");
       const js = await page.evaluate(() =>

@@ -83,6 +83,7 @@ async function audit(url: string, role: Role): Promise<Scores> {
     output: "json",
     logLevel: "error",
     onlyCategories: ["performance", "accessibility", "best-practices"],
+    ...(process.env.LIGHTHOUSE_METHOD ? { throttlingMethod: process.env.LIGHTHOUSE_METHOD as "devtools" } : {}),
     ...(cookie ? { extraHeaders: { Cookie: cookie } } : {}),
   };
   const result = await lighthouse(url, flags);

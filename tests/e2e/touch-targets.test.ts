@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { newPage, PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
+import { newPage, revealMaps, PHONE, browserForFile, signedInPage } from "@/tests/support/browser";
 import { DEMO } from "@/tests/support/env";
 import { screensByRole } from "./pages/screens";
 import { RoleSessions } from "./pages/visit";
@@ -30,6 +30,7 @@ describe("the signed-in header on a phone", () => {
   it("gives the public map's zoom buttons targets of at least 44 × 44 px", async () => {
     const { context, page } = await newPage(browser(), PHONE);
     await page.goto("/drives/larkhollow-winter-2026");
+    await revealMaps(page);
     const zoomIn = page.getByRole("button", { name: "Zoom in" });
     await zoomIn.waitFor();
     for (const name of ["Zoom in", "Zoom out"]) {
@@ -52,6 +53,11 @@ describe("every screen's targets on a 390 px phone", () => {
     try {
       for (const screen of await screensByRole()) {
         const page = await sessions.open(screen);
+        // Maps load when scrolled near; their pins and controls are measured too.
+        if (await page.locator("[data-map-slot]").count()) {
+          await revealMaps(page);
+          await page.evaluate(() => window.scrollTo(0, 0));
+        }
         const { measured, small } = await smallTargets(page);
         expect(measured, `${screen.path}: targets were found and measured`).toBeGreaterThan(3);
         console.log(`[touch] ${screen.path} (${screen.role}): ${measured} targets, ${small.length} too small`);

@@ -65,3 +65,19 @@ export async function signedInPage(browser: Browser, email: string, options: Con
   await signInAs(opened.page, email, password);
   return opened;
 }
+
+/**
+ * Scrolls each map on the page into view, so it loads (maps load when a person scrolls
+ * near them: components/map/drive-map.tsx), and waits until every one is drawn.
+ */
+export async function revealMaps(page: Page): Promise<void> {
+  await page.waitForFunction(
+    () => {
+      const slot = document.querySelector("[data-map-slot]");
+      slot?.scrollIntoView({ block: "center" });
+      return !slot && document.querySelector(".leaflet-container") !== null;
+    },
+    undefined,
+    { timeout: 15_000, polling: 200 },
+  );
+}
