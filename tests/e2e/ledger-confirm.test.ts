@@ -54,6 +54,9 @@ describe("an entry kept offline", () => {
     const g = await freshGroup("e2e-entry-time");
     const { context, page } = await signedInPage(browser(), g.emails.volunteer, PHONE);
     await page.goto(`/log?dropPoint=${g.dropPointIds[0]}`);
+    // One online visit: the offline worker is in control, with every chunk (the form's checks
+    // included, which load at first use: hooks/use-lazy-schemas.ts) precached.
+    await page.waitForFunction(() => navigator.serviceWorker.controller !== null, undefined, { timeout: 30_000 });
     // The phone's clock says T, 90 s before the server receives the entry.
     const T = new Date(Date.now() - 90_000);
     T.setMilliseconds(0);
