@@ -11,9 +11,15 @@ import { freePort } from "@/tests/support/ports";
 import { emailOf, SCREENS, type Role } from "./pages/screens";
 
 // Lighthouse (npm `lighthouse`, its default mobile profile: a Moto G Power-sized
-// screen, simulated slow 4G and a 4× slower CPU) over the screens people use,
-// each as its role. The thresholds are the issue's: performance ≥ 95,
-// accessibility and best practices 100, and Google's "good" Core Web Vitals
+// screen, slow 4G and a 4× slower CPU) over the screens people use, each as its
+// role. The slow 4G and the 4× CPU are applied in the browser while the page loads
+// (Lighthouse's `throttlingMethod: "devtools"`), not simulated afterwards from a
+// fast load: on loopback the simulation ("simulate", Lighthouse's default) puts
+// into its LCP estimate every script that happened to finish before the observed
+// paint, and on this machine gave the same build anything from 1.85 to 2.9 s
+// (4 Dec 2026, quiet machine, 9 pages), while the applied throttling gave
+// 1.5–1.9 s run after run. LIGHTHOUSE_METHOD=simulate measures the other way.
+// The thresholds are the issue's: performance ≥ 95, accessibility and best practices 100, and Google's "good" Core Web Vitals
 // thresholds for CLS (≤ 0.1, held here at 0.05) and LCP (≤ 2.5 s)
 // (web.dev/articles/vitals). The machine is shared and noisy, so a page gets
 // the best of up to three runs, within an overall time budget.
@@ -26,6 +32,7 @@ const MAX_CLS = 0.05;
 const MAX_LCP_MS = 2500;
 const RUNS = 3;
 const BUDGET_MS = 230_000;
+const METHOD = process.env.LIGHTHOUSE_METHOD === "simulate" ? "simulate" : "devtools";
 const ONLY = process.env.LIGHTHOUSE_PAGES?.split(",").map((p) => p.trim()).filter(Boolean);
 const AUDITED = ONLY?.length ? SCREENS.filter((s) => ONLY.includes(s.path)) : SCREENS;
 
@@ -83,7 +90,7 @@ async function audit(url: string, role: Role): Promise<Scores> {
     output: "json",
     logLevel: "error",
     onlyCategories: ["performance", "accessibility", "best-practices"],
-    ...(process.env.LIGHTHOUSE_METHOD ? { throttlingMethod: process.env.LIGHTHOUSE_METHOD as "devtools" } : {}),
+    throttlingMethod: METHOD,
     ...(cookie ? { extraHeaders: { Cookie: cookie } } : {}),
   };
   const result = await lighthouse(url, flags);
@@ -139,7 +146,7 @@ function blame(lhr: Result): string[] {
 }
 
 const format = (s: Scores) =>
-  `perf ${Math.round(s.performance * 100)}, a11y ${Math.round(s.accessibility * 100)}, best practices ${Math.round(s["best-practices"] * 100)}, CLS ${s.cls.toFixed(3)}, LCP ${(s.lcp / 1000).toFixed(2)} s, TBT ${Math.round(s.lhr.audits["total-blocking-time"].numericValue ?? 0)} ms (host CPU benchmark index ${Math.round(s.lhr.environment.benchmarkIndex)}; Lighthouse warns below 1000)`;
+  `${METHOD}: perf ${Math.round(s.performance * 100)}, a11y ${Math.round(s.accessibility * 100)}, best practices ${Math.round(s["best-practices"] * 100)}, CLS ${s.cls.toFixed(3)}, LCP ${(s.lcp / 1000).toFixed(2)} s, TBT ${Math.round(s.lhr.audits["total-blocking-time"].numericValue ?? 0)} ms (host CPU benchmark index ${Math.round(s.lhr.environment.benchmarkIndex)}; Lighthouse warns below 1000)`;
 
 describe("Lighthouse on a mid-range phone", () => {
   for (const screen of AUDITED) {
