@@ -30,6 +30,33 @@ async function dropOnDemandScripts(page: Page, path: string): Promise<() => Prom
   };
 }
 
+describe("forms' checks load at first use", () => {
+  it("the Log page does not fetch its checks while it loads, and fetches them at the first focus", async () => {
+    const g = await freshGroup("e2e-first-use");
+    const { context, page } = await signedInPage(browser(), g.emails.volunteer, { ...PHONE, serviceWorkers: "block" });
+    try {
+      // The haul schema's own message marks the chunk of the ledger's checks (lib/ledger/schemas.ts).
+      const fetched: string[] = [];
+      page.on("response", async (r) => {
+        if (!new URL(r.url()).pathname.startsWith("/_next/static/chunks/")) return;
+        if ((await r.text().catch(() => "")).includes("Enter the bags, the weight, or both.")) fetched.push(r.url());
+      });
+      await page.goto(`/log?dropPoint=${g.dropPointIds[0]}`, { waitUntil: "networkidle" });
+      await page.getByRole("button", { name: "Record haul" }).waitFor();
+      await page.waitForTimeout(1_500);
+      expect(fetched, "checks fetched while the page loaded").toEqual([]);
+      await page.getByLabel("Bags", { exact: true }).focus();
+      await expect.poll(() => fetched.length, { timeout: 15_000 }).toBe(1);
+      // And they check: a bag count of 0 with no weight is refused with the schema's message.
+      await page.getByLabel("Bags", { exact: true }).fill("0");
+      await page.getByRole("button", { name: "Record haul" }).click();
+      await page.getByText("Enter the bags, the weight, or both.").first().waitFor({ timeout: 15_000 });
+    } finally {
+      await context.close();
+    }
+  });
+});
+
 describe("forms whose checks could not load", () => {
   it("the planner draws its opening sheets without its schemas, says so when an edit cannot be checked, and checks edits after a reload online", async () => {
     const { context, page } = await newPage(browser(), PHONE);
