@@ -7,6 +7,7 @@ import { useLedgerChanged } from "@/hooks/queries/ledger";
 import { usePersonId } from "@/components/offline/person-context";
 import { deleteEntry, entriesOf, putEntry, type QueuedEntry } from "@/lib/offline/store";
 import { flushOwner, sendEntry, settle, SYNC_TAG } from "@/lib/offline/send";
+import { correctedCopy } from "@/lib/offline/fix";
 
 export type SubmitResult =
   | { kind: "done"; body: unknown }
@@ -20,6 +21,8 @@ export interface Refusal {
   label: string;
   message: string;
   question?: string;
+  /** The server's word on each field it refused, where it named them. */
+  fields?: Record<string, string>;
   item: OutboxItem;
 }
 
@@ -172,6 +175,20 @@ export function useOutbox() {
     [entries, reload, flush],
   );
 
+  /** A refused entry corrected where it is listed: it goes again with the new numbers, at its time of entry, under a new key, in its old place. */
+  const fixRefusal = useCallback(
+    async (key: string, values: Record<string, number | null>) => {
+      const entry = entries.find((e) => e.key === key && e.state === "refused");
+      if (!entry) return;
+      const copy = correctedCopy(entry, values, crypto.randomUUID());
+      await putEntry({ ...entry, ...copy, state: "waiting", refusal: undefined, seq: entry.seq });
+      await deleteEntry(key);
+      await reload();
+      void flush();
+    },
+    [entries, reload, flush],
+  );
+
   /** A refused entry the person drops: gone from this phone. */
   const dismissRefusal = useCallback(
     async (key: string) => {
@@ -184,8 +201,8 @@ export function useOutbox() {
   const items: QueuedEntry[] = entries.filter((e) => e.state === "waiting");
   const refusals: Refusal[] = entries
     .filter((e) => e.state === "refused")
-    .map((e) => ({ key: e.key, label: e.label, message: e.refusal?.message ?? "Refused", question: e.refusal?.question, item: e }));
+    .map((e) => ({ key: e.key, label: e.label, message: e.refusal?.message ?? "Refused", question: e.refusal?.question, fields: e.refusal?.fields, item: e }));
 
-  return { ready, items, refusals, dismissRefusal: (key: string) => void dismissRefusal(key), confirmRefusal: (key: string) => void confirmRefusal(key), submit, retryNow: flush };
+  return { ready, items, refusals, dismissRefusal: (key: string) => void dismissRefusal(key), confirmRefusal: (key: string) => void confirmRefusal(key), fixRefusal: (key: string, values: Record<string, number | null>) => fixRefusal(key, values), submit, retryNow: flush };
 }
 

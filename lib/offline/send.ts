@@ -35,7 +35,12 @@ export async function sendEntry(entry: QueuedEntry): Promise<SendOutcome> {
 export async function settle(entry: QueuedEntry, outcome: SendOutcome): Promise<void> {
   if (outcome.kind === "done") await deleteEntry(entry.key);
   else if (outcome.kind === "retry") await putEntry({ ...entry, attempts: entry.attempts + 1, lastError: outcome.message });
-  else await putEntry({ ...entry, state: "refused", refusal: { status: outcome.status, message: outcome.message, ...(outcome.question ? { question: outcome.question } : {}) } });
+  else
+    await putEntry({
+      ...entry,
+      state: "refused",
+      refusal: { status: outcome.status, message: outcome.message, ...(outcome.question ? { question: outcome.question } : {}), ...(outcome.fields ? { fields: outcome.fields } : {}) },
+    });
 }
 
 async function withLock<T>(work: () => Promise<T>): Promise<T | null> {
