@@ -154,7 +154,7 @@ self.addEventListener("sync", (event) => {
     (async () => {
       const person = await currentPerson();
       if (!person) return;
-      const result = await flushOwner(person.id);
+      const result = await flushOwner(person.id, person.group);
       await tell({ type: "CANTROVE_OUTBOX_CHANGED" });
       // Still waiting: the browser tries the sync again later.
       if (result && result.left > 0) throw new Error("entries still waiting");

@@ -4,7 +4,7 @@ import { useQueryClient } from "@tanstack/react-query";
 import { useCallback, useEffect, useRef, useState } from "react";
 import { confirmedCopy, newOutboxItem, OUTBOX_STORAGE_KEY, readOutbox, type OutboxItem, type SendOutcome } from "@/lib/ledger/browser-queue";
 import { useLedgerChanged } from "@/hooks/queries/ledger";
-import { usePersonId } from "@/components/offline/person-context";
+import { usePersonGroup, usePersonId } from "@/components/offline/person-context";
 import { deleteEntry, entriesOf, putEntry, type QueuedEntry } from "@/lib/offline/store";
 import { flushOwner, sendEntry, settle, SYNC_TAG } from "@/lib/offline/send";
 import { correctedCopy } from "@/lib/offline/fix";
@@ -49,6 +49,7 @@ async function askForSync(): Promise<void> {
  */
 export function useOutbox() {
   const owner = usePersonId();
+  const group = usePersonGroup() ?? undefined;
   const ledgerChanged = useLedgerChanged();
   const client = useQueryClient();
   const [entries, setEntries] = useState<QueuedEntry[]>([]);
@@ -59,10 +60,10 @@ export function useOutbox() {
 
   const reload = useCallback(async () => {
     if (!owner) return;
-    const now = await entriesOf(owner);
+    const now = await entriesOf(owner, group);
     waiting.current = now.filter((e) => e.state === "waiting").length;
     setEntries(now);
-  }, [owner]);
+  }, [owner, group]);
 
   const changed = useCallback(() => {
     void ledgerChanged();
@@ -73,13 +74,13 @@ export function useOutbox() {
     if (!owner || busy.current) return;
     busy.current = true;
     try {
-      const result = await flushOwner(owner);
+      const result = await flushOwner(owner, group);
       if (result && result.settled > 0) changed();
     } finally {
       busy.current = false;
       await reload();
     }
-  }, [owner, reload, changed]);
+  }, [owner, group, reload, changed]);
 
   useEffect(() => {
     if (!owner) return;
@@ -89,7 +90,7 @@ export function useOutbox() {
       try {
         const old = readOutbox(localStorage);
         const held = { status: 409, message: "Entered on this phone before an update, perhaps by someone else: nothing was sent. If it is yours, enter it again; then drop this copy." };
-        for (const item of old) await putEntry({ ...item, owner, state: "refused", refusal: held });
+        for (const item of old) await putEntry({ ...item, owner, group, state: "refused", refusal: held });
         if (old.length) localStorage.removeItem(OUTBOX_STORAGE_KEY);
       } catch {
         // storage blocked
@@ -115,15 +116,15 @@ export function useOutbox() {
       window.removeEventListener("online", online);
       navigator.serviceWorker?.removeEventListener("message", fromWorker);
     };
-  }, [owner, flush, reload, changed]);
+  }, [owner, group, flush, reload, changed]);
 
   const sendNow = useCallback(
     (first: OutboxItem, stopId?: string): Promise<SubmitResult> => {
       // A confirmed resend ("yes, record it") goes through the same steps.
       const attempt = async (item: OutboxItem): Promise<SubmitResult> => {
         if (!owner) return { kind: "refused", message: "Sign in again to send this entry." };
-        const saved = await putEntry({ ...item, owner, state: "waiting", ...(stopId ? { stopId } : {}) });
-        const earlier = (await entriesOf(owner)).filter((e) => e.state === "waiting" && e.seq < saved.seq);
+        const saved = await putEntry({ ...item, owner, group, state: "waiting", ...(stopId ? { stopId } : {}) });
+        const earlier = (await entriesOf(owner, group)).filter((e) => e.state === "waiting" && e.seq < saved.seq);
         if (busy.current || earlier.length > 0) {
           await reload();
           void flush();
@@ -153,7 +154,7 @@ export function useOutbox() {
       };
       return attempt(first);
     },
-    [owner, flush, reload, changed],
+    [owner, group, flush, reload, changed],
   );
 
   const submit = useCallback(

@@ -3,7 +3,7 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { Serwist } from "@serwist/window";
 import { usePathname } from "next/navigation";
-import { useEffect, useState, useSyncExternalStore } from "react";
+import { useEffect, useMemo, useState, useSyncExternalStore } from "react";
 import { Button } from "@/components/ui/button";
 import { useFormat } from "@/hooks/use-look";
 import { PersonProvider } from "./person-context";
@@ -133,8 +133,9 @@ function Keeper({ personId, groupId, home, renderedAt, tileUrl }: Omit<Props, "c
 }
 
 export function OfflineKeeper({ children, ...props }: Props) {
+  const person = useMemo(() => ({ id: props.personId, group: props.groupId }), [props.personId, props.groupId]);
   return (
-    <PersonProvider value={props.personId}>
+    <PersonProvider value={person}>
       <Keeper {...props} />
       {children}
     </PersonProvider>

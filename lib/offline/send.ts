@@ -55,10 +55,10 @@ async function withLock<T>(work: () => Promise<T>): Promise<T | null> {
  * wait (no connection, server busy): a later entry may depend on it. Returns
  * how many were settled (done or refused), or null when another sender had the lock.
  */
-export async function flushOwner(owner: string): Promise<{ settled: number; left: number } | null> {
+export async function flushOwner(owner: string, group?: string): Promise<{ settled: number; left: number } | null> {
   return withLock(async () => {
     let settled = 0;
-    const waiting = (await entriesOf(owner)).filter((e) => e.state === "waiting");
+    const waiting = (await entriesOf(owner, group)).filter((e) => e.state === "waiting");
     for (const entry of waiting) {
       const outcome = await sendEntry(entry);
       await settle(entry, outcome);

@@ -19,6 +19,8 @@ export interface Person {
 /** A queued entry: waiting to be sent, or refused by the server (kept until fixed or dropped). */
 export interface QueuedEntry extends OutboxItem {
   owner: string;
+  /** The group it was entered in (absent on entries from before groups were kept): it is shown and sent only while the person acts in that group. */
+  group?: string;
   /** Order of entry: entries are sent oldest first. */
   seq: number;
   state: "waiting" | "refused";
@@ -74,10 +76,13 @@ export async function setPerson(person: Person | null): Promise<void> {
   else await d.delete("meta", "person");
 }
 
-/** All of one person's entries (waiting and refused), oldest first. */
-export async function entriesOf(owner: string): Promise<QueuedEntry[]> {
+/**
+ * All of one person's entries (waiting and refused), oldest first; with `group`, only those made in
+ * that group: after a switch, the other group's entries wait (unseen) until the person is back in it.
+ */
+export async function entriesOf(owner: string, group?: string): Promise<QueuedEntry[]> {
   const all = await (await db()).getAllFromIndex("outbox", "seq");
-  return all.filter((e) => e.owner === owner);
+  return all.filter((e) => e.owner === owner && (group === undefined || e.group === undefined || e.group === group));
 }
 
 export async function putEntry(entry: Omit<QueuedEntry, "seq"> & { seq?: number }): Promise<QueuedEntry> {
