@@ -4,21 +4,28 @@
 //
 // - Next's static files are precached (Serwist's precache manifest).
 // - Signed-in pages: network first. Each answer that carries the signed-in
-//   marker (app/(app)/layout.tsx, data-cantrove-person) is kept in that
-//   person's own cache, and only there; with no signal the page comes from
-//   the cache of the person signed in on this phone, never anyone else's.
+//   marker (app/(app)/layout.tsx, data-cantrove-person and -group) is kept in
+//   that person's own cache for that group, and only there; with no signal the
+//   page comes from the cache of the person signed in on this phone, never
+//   anyone else's.
 // - Pages without the marker (the public drive pages, sign-in) are never
 //   cached: they always come from the network, so tallies are live.
-// - GET /api answers: network first, kept in the signed-in person's cache.
-// - Map tiles: cache first, in the person's tile cache, OFFLINE_TILE_BUDGET at most.
-// - Someone else seen signed in on this phone: every other person's caches go at once.
+// - GET /api answers: network first, kept only when the server marked the
+//   answer as the current person's in their current group (x-cantrove-for,
+//   x-cantrove-group, lib/api/endpoint.ts).
+// - Map tiles: cache first, in the person's tile cache, OFFLINE_TILE_BUDGET at
+//   most counting the warm-up's and the map's together.
+// - Someone else (or the same person in another group) seen signed in on this
+//   phone: every other cache goes at once. A sign-out or switch bumps
+//   `generation`, so whatever was still on its way (a warm-up) is not kept.
 // - Waiting entries (lib/offline/store.ts) are sent on Background Sync.
 
-import { CacheFirst, ExpirationPlugin, NetworkFirst, Serwist, type PrecacheEntry, type RouteHandlerCallbackOptions, type SerwistGlobalConfig } from "serwist";
-import { currentPerson, isPersonalCache, lastWarmed, personCache, setLastWarmed, setPerson, tileCache, type Person } from "@/lib/offline/store";
+import { CacheFirst, ExpirationPlugin, Serwist, type PrecacheEntry, type RouteHandlerCallbackOptions, type SerwistGlobalConfig } from "serwist";
+import { currentPerson, personCache, setPerson, type Person } from "@/lib/offline/store";
 import { flushOwner, SYNC_TAG } from "@/lib/offline/send";
-import { OFFLINE_TILE_BUDGET, offlineTiles, tileUrl } from "@/lib/offline/tiles";
-import { offlinePageHtml, personMarker } from "@/lib/offline/marker";
+import { isPersonShape, offlinePageHtml } from "@/lib/offline/marker";
+import { apiStrategy, becomes, currentGeneration, dropOtherPeople, KEPT_AT_HEADER, keepPage, signedOut, tileStrategy } from "@/lib/offline/worker-keep";
+import { warm } from "@/lib/offline/worker-warm";
 
 declare global {
   interface WorkerGlobalScope extends SerwistGlobalConfig {
@@ -28,71 +35,19 @@ declare global {
 
 declare const self: ServiceWorkerGlobalScope;
 
-/** Answers from /api kept per person (the oldest go first past this). */
-const API_ENTRIES = 150;
-/** Pages kept per person. */
-const PAGE_ENTRIES = 60;
-/** The offline copies are refreshed at most this often by the signed-in pages' hello. */
-const WARM_EVERY_MS = 5 * 60_000;
-const MAX_RUNS = 10;
-
-const apiStrategies = new Map<string, NetworkFirst>();
-const tileStrategies = new Map<string, CacheFirst>();
-
-function apiStrategy(id: string): NetworkFirst {
-  let s = apiStrategies.get(id);
-  if (!s) {
-    s = new NetworkFirst({ cacheName: personCache(id), networkTimeoutSeconds: 8, plugins: [new ExpirationPlugin({ maxEntries: API_ENTRIES + PAGE_ENTRIES })] });
-    apiStrategies.set(id, s);
-  }
-  return s;
-}
-
-function tileStrategy(id: string): CacheFirst {
-  let s = tileStrategies.get(id);
-  if (!s) {
-    s = new CacheFirst({ cacheName: tileCache(id), plugins: [new ExpirationPlugin({ maxEntries: OFFLINE_TILE_BUDGET })] });
-    tileStrategies.set(id, s);
-  }
-  return s;
-}
-
-/** Everyone else's caches go; only `keep` (if any) stays. */
-async function dropOtherPeople(keep: string | null): Promise<void> {
-  for (const name of await caches.keys()) {
-    if (isPersonalCache(name) && (keep === null || !name.endsWith(keep))) await caches.delete(name);
-  }
-  for (const id of [...apiStrategies.keys()]) if (id !== keep) apiStrategies.delete(id);
-  for (const id of [...tileStrategies.keys()]) if (id !== keep) tileStrategies.delete(id);
-}
-
-/** The person on this page is now the one this phone remembers; anyone else's copies are dropped. */
-async function becomes(person: Person): Promise<void> {
-  const before = await currentPerson();
-  if (before?.id !== person.id) {
-    await dropOtherPeople(person.id);
-    await setLastWarmed(0);
-  }
-  if (before?.id !== person.id || before.home !== person.home) await setPerson(person);
-}
-
-/** Keeps a signed-in page in its own person's cache (read from the page's marker). */
-async function keepPage(url: string, response: Response): Promise<void> {
-  if (!response.ok || response.type !== "basic" || !(response.headers.get("content-type") ?? "").includes("text/html")) return;
-  const html = await response.text();
-  const marker = personMarker(html);
-  if (!marker) return; // not a signed-in page: never cached
-  await becomes({ id: marker.id, home: marker.home });
-  const cache = await caches.open(personCache(marker.id));
-  await cache.put(url, new Response(html, { status: response.status, statusText: response.statusText, headers: response.headers }));
-}
+/**
+ * A page opened inside the app (no full load) is fetched again for the offline copy only when the
+ * copy is older than this: moving between tabs does not cost a second request per page. The copy
+ * is the person's own (their cache), and is only shown with no signal.
+ */
+const KEEP_FRESH_MS = 2 * 60_000;
 
 async function offlinePage(request: Request): Promise<Response> {
   const person = await currentPerson();
   const url = new URL(request.url);
   if (person && (url.pathname === "/home" || url.pathname === "/")) return Response.redirect(new URL(person.home, url.origin).href, 302);
   if (person) {
-    const cache = await caches.open(personCache(person.id));
+    const cache = await caches.open(personCache(person));
     const hit = (await cache.match(url.href)) ?? (await cache.match(url.origin + url.pathname, { ignoreSearch: true }));
     if (hit) return hit;
   }
@@ -100,10 +55,11 @@ async function offlinePage(request: Request): Promise<Response> {
 }
 
 async function navigation({ request, event }: RouteHandlerCallbackOptions): Promise<Response> {
+  const gen = currentGeneration();
   try {
     const response = await fetch(request);
     const url = new URL(request.url);
-    (event as ExtendableEvent).waitUntil(keepPage(url.origin + url.pathname + url.search, response.clone()).catch(() => undefined));
+    (event as ExtendableEvent).waitUntil(keepPage(url.origin + url.pathname + url.search, response.clone(), gen).catch(() => undefined));
     return response;
   } catch {
     return offlinePage(request);
@@ -116,7 +72,7 @@ async function api(options: RouteHandlerCallbackOptions): Promise<Response> {
   const person = await currentPerson();
   if (!person) return fetch(options.request);
   try {
-    return await apiStrategy(person.id).handle(options);
+    return await apiStrategy(person).handle(options);
   } catch {
     return NO_SIGNAL();
   }
@@ -125,60 +81,7 @@ async function api(options: RouteHandlerCallbackOptions): Promise<Response> {
 async function tile(options: RouteHandlerCallbackOptions): Promise<Response> {
   const person = await currentPerson();
   if (!person) return fetch(options.request);
-  return tileStrategy(person.id).handle(options);
-}
-
-interface RunJson {
-  id: string;
-  assigneeId: string | null;
-  state: string;
-  plannedOn: string;
-}
-interface RunDetailJson {
-  start: { lat: number; lng: number };
-  stopList: Array<{ dropPoint: { lat: number; lng: number } }>;
-}
-
-/**
- * After a signed-in page says hello: the person's home, /log and their runs,
- * each upcoming run of theirs (page and answer) and the map tiles around its
- * stops are fetched and kept, so a cold start with no signal has them.
- */
-async function warm(person: Person, template: string, force: boolean): Promise<void> {
-  if (!force && Date.now() - (await lastWarmed()) < WARM_EVERY_MS) return;
-  await setLastWarmed(Date.now());
-  const origin = self.location.origin;
-  const page = async (path: string) => {
-    const res = await fetch(new URL(path, origin), { credentials: "same-origin", redirect: "follow" });
-    if (res.redirected) return; // /home, or a page this person may not open
-    await keepPage(origin + path, res);
-  };
-  const json = async <T,>(path: string): Promise<T | null> => {
-    const res = await fetch(new URL(path, origin), { credentials: "same-origin", headers: { accept: "application/json" } });
-    if (!res.ok) return null;
-    const cache = await caches.open(personCache(person.id));
-    await cache.put(origin + path, res.clone());
-    return (await res.json()) as T;
-  };
-  for (const path of new Set([person.home, "/log", "/runs"])) await page(path).catch(() => undefined);
-  const runs = (await json<RunJson[]>("/api/runs").catch(() => null)) ?? [];
-  const yesterday = new Date(Date.now() - 86_400_000).toISOString().slice(0, 10);
-  const upcoming = runs.filter((r) => r.assigneeId === person.id && r.state !== "done" && r.plannedOn >= yesterday).slice(0, MAX_RUNS);
-  const places: Array<Array<{ lat: number; lng: number }>> = [];
-  for (const run of upcoming) {
-    await page(`/runs/${run.id}`).catch(() => undefined);
-    const detail = await json<RunDetailJson>(`/api/runs/${run.id}`).catch(() => null);
-    if (detail) places.push([detail.start, ...detail.stopList.map((s) => s.dropPoint)]);
-  }
-  // Only tiles from this site: another tile server's answers are opaque and of unknown size.
-  if (!template.startsWith("/")) return;
-  const cache = await caches.open(tileCache(person.id));
-  for (const t of offlineTiles(places)) {
-    const url = origin + tileUrl(template, t);
-    if (await cache.match(url)) continue;
-    const res = await fetch(url).catch(() => null);
-    if (res?.ok) await cache.put(url, res);
-  }
+  return tileStrategy(person).handle(options);
 }
 
 async function tell(message: unknown): Promise<void> {
@@ -206,11 +109,27 @@ const serwist = new Serwist({
   ],
 });
 
+/** A page opened inside the app: kept for the offline copy unless this person's copy of it is fresh. */
+async function keepVisited(path: string): Promise<void> {
+  const person = await currentPerson();
+  const gen = currentGeneration();
+  const url = self.location.origin + path;
+  if (person) {
+    const copy = await (await caches.open(personCache(person))).match(url);
+    const keptAt = Number(copy?.headers.get(KEPT_AT_HEADER) ?? 0);
+    if (Date.now() - keptAt < KEEP_FRESH_MS) return;
+  }
+  const res = await fetch(url, { credentials: "same-origin" });
+  if (res.redirected) return;
+  // With a person on this phone, only their page (the marker) is kept; with none, the marker decides.
+  await keepPage(url, res, gen, person ?? undefined);
+}
+
 self.addEventListener("message", (event) => {
-  const data = event.data as { type?: string; person?: Person; tileUrl?: string; force?: boolean } | null;
-  // The same shapes the signed-in marker allows (lib/offline/marker.ts): an id for a cache name, a home path on this site.
-  if (data?.type === "CANTROVE_PERSON" && data.person && /^[0-9a-f-]{36}$/.test(String(data.person.id)) && /^\/[a-z]+$/.test(String(data.person.home))) {
-    const person = { id: data.person.id, home: data.person.home };
+  const data = event.data as { type?: string; person?: Partial<Person>; tileUrl?: string; force?: boolean } | null;
+  // The same shapes the signed-in marker allows (lib/offline/marker.ts): ids for a cache name, a home path on this site.
+  if (data?.type === "CANTROVE_PERSON" && isPersonShape(data.person)) {
+    const person: Person = { id: data.person.id, group: data.person.group, home: data.person.home };
     event.waitUntil(
       becomes(person)
         .then(() => warm(person, data.tileUrl ?? "", data.force === true))
@@ -220,14 +139,10 @@ self.addEventListener("message", (event) => {
   } else if (data?.type === "CANTROVE_KEEP" && typeof (data as { path?: unknown }).path === "string") {
     const path = (data as { path: string }).path;
     // Only a path on this site (a page the person just opened inside the app); the marker decides whose cache.
-    if (path.startsWith("/") && !path.startsWith("//")) {
-      event.waitUntil(
-        fetch(new URL(path, self.location.origin), { credentials: "same-origin" })
-          .then((res) => (res.redirected ? undefined : keepPage(self.location.origin + path, res)))
-          .catch(() => undefined),
-      );
-    }
+    if (path.startsWith("/") && !path.startsWith("//")) event.waitUntil(keepVisited(path).catch(() => undefined));
   } else if (data?.type === "CANTROVE_SIGNED_OUT") {
+    // First: whatever is still on its way for the person (a warm-up, an answer) is no longer kept.
+    signedOut();
     event.waitUntil(dropOtherPeople(null).then(() => setPerson(null)));
   }
 });
@@ -239,7 +154,7 @@ self.addEventListener("sync", (event) => {
     (async () => {
       const person = await currentPerson();
       if (!person) return;
-      const result = await flushOwner(person.id);
+      const result = await flushOwner(person.id, person.group);
       await tell({ type: "CANTROVE_OUTBOX_CHANGED" });
       // Still waiting: the browser tries the sync again later.
       if (result && result.left > 0) throw new Error("entries still waiting");

@@ -30,8 +30,8 @@ export default async function AppLayout({ children }: { children: React.ReactNod
   return (
     <LookProvider look={look}>
       {/* Whose page this is and when it was made: the service worker keeps it in this person's own offline cache (app/sw.ts). */}
-      <div hidden {...markerAttributes({ id: actor.user.id, home: ROLE_HOME[actor.role], renderedAt })} />
-      <OfflineKeeper personId={actor.user.id} home={ROLE_HOME[actor.role]} renderedAt={renderedAt} tileUrl={env().TILE_URL}>
+      <div hidden {...markerAttributes({ id: actor.user.id, group: actor.group.id, home: ROLE_HOME[actor.role], renderedAt })} />
+      <OfflineKeeper personId={actor.user.id} groupId={actor.group.id} home={ROLE_HOME[actor.role]} renderedAt={renderedAt} tileUrl={env().TILE_URL}>
         <AppHeader groupName={actor.group.name} role={actor.role} userName={actor.user.name} />
         <div id="main" className="mx-auto max-w-5xl px-4 py-6">
           {children}

@@ -1,11 +1,13 @@
 "use client";
 
-import { forgetThisPhone } from "@/lib/offline/forget";
+import { forgetThisPhone, unsentCount } from "@/lib/offline/forget";
 import Link from "next/link";
 import { useState } from "react";
 import { signOutTo } from "@/components/auth/session-client";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/ui/field";
+import { Notice } from "@/components/ui/notice";
+import { countOf, noun } from "@/lib/plural";
 import { useLeaveGroup } from "@/hooks/queries/members";
 
 /**
@@ -15,6 +17,8 @@ import { useLeaveGroup } from "@/hooks/queries/members";
 export function LeaveGroup({ groupName, onlyOrganiser }: { groupName: string; onlyOrganiser: boolean }) {
   const leave = useLeaveGroup();
   const [asking, setAsking] = useState(false);
+  /** Entries on this phone not yet on the server: leaving deletes them with everything else kept here. */
+  const [unsent, setUnsent] = useState(0);
   if (onlyOrganiser) {
     return (
       <p className="text-ink-soft">
@@ -29,6 +33,17 @@ export function LeaveGroup({ groupName, onlyOrganiser }: { groupName: string; on
         runs given to you that are not done go back to the organisers.
       </p>
       <FormError message={leave.error?.message ?? null} />
+      {asking && unsent > 0 ? (
+        <Notice tone="caution" title={`${countOf(unsent, noun("entry has", "entries have"))} not been sent yet`}>
+          <p data-testid="leave-unsent">
+            Leaving deletes {unsent === 1 ? "it" : "them"} from this phone with everything else kept here for you. Go to Log while you have a signal and let{" "}
+            {unsent === 1 ? "it" : "them"} send first (or drop what was refused), unless you mean to lose {unsent === 1 ? "it" : "them"}.
+          </p>
+          <p className="mt-1">
+            <Link href="/log">See what is waiting</Link>
+          </p>
+        </Notice>
+      ) : null}
       {asking ? (
         <div className="flex flex-wrap gap-2">
           <Button
@@ -36,7 +51,7 @@ export function LeaveGroup({ groupName, onlyOrganiser }: { groupName: string; on
             disabled={leave.isPending}
             onClick={() => leave.mutate(undefined, { onSuccess: () => void forgetThisPhone().then(() => signOutTo("/signin")) })}
           >
-            {leave.isPending ? "Leaving…" : `Yes, leave ${groupName}`}
+            {leave.isPending ? "Leaving…" : unsent > 0 ? `Yes, leave ${groupName} and delete ${unsent === 1 ? "it" : "them"}` : `Yes, leave ${groupName}`}
           </Button>
           <Button variant="secondary" onClick={() => setAsking(false)}>
             Stay
@@ -44,7 +59,16 @@ export function LeaveGroup({ groupName, onlyOrganiser }: { groupName: string; on
         </div>
       ) : (
         <div>
-          <Button variant="secondary" onClick={() => setAsking(true)}>
+          <Button
+            variant="secondary"
+            onClick={() => {
+              // Asked before the second question, so the warning is there before "Yes, leave".
+              void unsentCount().then((n) => {
+                setUnsent(n);
+                setAsking(true);
+              });
+            }}
+          >
             Leave this group
           </Button>
         </div>

@@ -43,7 +43,7 @@ export function LogHome({ drives, initialDriveId, initialDropPointId, today }: {
         />
       ) : null}
       <DriveBanner drive={drive} today={today} rememberError={remembered.error} look={look} />
-      <OutboxList items={outbox.items} refusals={outbox.refusals} onRetry={() => void outbox.retryNow()} onDismiss={outbox.dismissRefusal} onConfirm={outbox.confirmRefusal} />
+      <OutboxList items={outbox.items} refusals={outbox.refusals} onRetry={() => void outbox.retryNow()} onDismiss={outbox.dismissRefusal} onConfirm={outbox.confirmRefusal} onFix={outbox.fixRefusal} />
       <div role="tablist" aria-label="What to log" className="grid grid-cols-3 gap-2">
         {TABS.map((t) => (
           <button

@@ -4,6 +4,7 @@ import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { attemptsText, type OutboxItem } from "@/lib/ledger/browser-queue";
 import type { Refusal } from "./use-outbox";
+import { RefusalFix } from "./refusal-fix";
 import { countOf, noun } from "@/lib/plural";
 import { useFormat } from "@/hooks/use-look";
 
@@ -13,6 +14,7 @@ export function OutboxList({
   onRetry,
   onDismiss,
   onConfirm,
+  onFix,
 }: {
   items: OutboxItem[];
   refusals: Refusal[];
@@ -20,6 +22,8 @@ export function OutboxList({
   onDismiss: (key: string) => void;
   /** "Yes, that is right" to an entry the server asked about while it waited in the queue. */
   onConfirm: (key: string) => void;
+  /** The corrected numbers of a refused entry: it goes again, at its time of entry. */
+  onFix: (key: string, values: Record<string, number | null>) => Promise<void>;
 }) {
   const f = useFormat();
   if (items.length === 0 && refusals.length === 0) return null;
@@ -59,10 +63,13 @@ export function OutboxList({
           <div key={r.key} role="alert" className="rounded-lg border-2 border-alarm bg-alarm-soft px-3 py-2">
             <p className="font-semibold text-alarm">Not recorded: {r.label}</p>
             <p>The server said: {r.message}</p>
-            <p className="text-sm text-ink-soft">Entered {f.moment(r.item.createdAt)}. Enter it again with the right details, then drop this one.</p>
-            <Button type="button" variant="quiet" onClick={() => onDismiss(r.key)}>
-              Drop it
-            </Button>
+            <p className="text-sm text-ink-soft">Entered {f.moment(r.item.createdAt)}. Fix it here and it goes again with that time, or drop it.</p>
+            <div className="mt-1 flex flex-wrap gap-2">
+              <RefusalFix refusal={r} onFix={onFix} />
+              <Button type="button" variant="quiet" onClick={() => onDismiss(r.key)}>
+                Drop it
+              </Button>
+            </div>
           </div>
         ),
       )}

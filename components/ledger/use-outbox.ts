@@ -4,9 +4,10 @@ import { useQueryClient } from "@tanstack/react-query";
 import { useCallback, useEffect, useRef, useState } from "react";
 import { confirmedCopy, newOutboxItem, OUTBOX_STORAGE_KEY, readOutbox, type OutboxItem, type SendOutcome } from "@/lib/ledger/browser-queue";
 import { useLedgerChanged } from "@/hooks/queries/ledger";
-import { usePersonId } from "@/components/offline/person-context";
+import { usePersonGroup, usePersonId } from "@/components/offline/person-context";
 import { deleteEntry, entriesOf, putEntry, type QueuedEntry } from "@/lib/offline/store";
 import { flushOwner, sendEntry, settle, SYNC_TAG } from "@/lib/offline/send";
+import { correctedCopy } from "@/lib/offline/fix";
 
 export type SubmitResult =
   | { kind: "done"; body: unknown }
@@ -20,6 +21,8 @@ export interface Refusal {
   label: string;
   message: string;
   question?: string;
+  /** The server's word on each field it refused, where it named them. */
+  fields?: Record<string, string>;
   item: OutboxItem;
 }
 
@@ -46,6 +49,7 @@ async function askForSync(): Promise<void> {
  */
 export function useOutbox() {
   const owner = usePersonId();
+  const group = usePersonGroup() ?? undefined;
   const ledgerChanged = useLedgerChanged();
   const client = useQueryClient();
   const [entries, setEntries] = useState<QueuedEntry[]>([]);
@@ -56,10 +60,10 @@ export function useOutbox() {
 
   const reload = useCallback(async () => {
     if (!owner) return;
-    const now = await entriesOf(owner);
+    const now = await entriesOf(owner, group);
     waiting.current = now.filter((e) => e.state === "waiting").length;
     setEntries(now);
-  }, [owner]);
+  }, [owner, group]);
 
   const changed = useCallback(() => {
     void ledgerChanged();
@@ -70,13 +74,13 @@ export function useOutbox() {
     if (!owner || busy.current) return;
     busy.current = true;
     try {
-      const result = await flushOwner(owner);
+      const result = await flushOwner(owner, group);
       if (result && result.settled > 0) changed();
     } finally {
       busy.current = false;
       await reload();
     }
-  }, [owner, reload, changed]);
+  }, [owner, group, reload, changed]);
 
   useEffect(() => {
     if (!owner) return;
@@ -86,7 +90,7 @@ export function useOutbox() {
       try {
         const old = readOutbox(localStorage);
         const held = { status: 409, message: "Entered on this phone before an update, perhaps by someone else: nothing was sent. If it is yours, enter it again; then drop this copy." };
-        for (const item of old) await putEntry({ ...item, owner, state: "refused", refusal: held });
+        for (const item of old) await putEntry({ ...item, owner, group, state: "refused", refusal: held });
         if (old.length) localStorage.removeItem(OUTBOX_STORAGE_KEY);
       } catch {
         // storage blocked
@@ -112,15 +116,15 @@ export function useOutbox() {
       window.removeEventListener("online", online);
       navigator.serviceWorker?.removeEventListener("message", fromWorker);
     };
-  }, [owner, flush, reload, changed]);
+  }, [owner, group, flush, reload, changed]);
 
   const sendNow = useCallback(
     (first: OutboxItem, stopId?: string): Promise<SubmitResult> => {
       // A confirmed resend ("yes, record it") goes through the same steps.
       const attempt = async (item: OutboxItem): Promise<SubmitResult> => {
         if (!owner) return { kind: "refused", message: "Sign in again to send this entry." };
-        const saved = await putEntry({ ...item, owner, state: "waiting", ...(stopId ? { stopId } : {}) });
-        const earlier = (await entriesOf(owner)).filter((e) => e.state === "waiting" && e.seq < saved.seq);
+        const saved = await putEntry({ ...item, owner, group, state: "waiting", ...(stopId ? { stopId } : {}) });
+        const earlier = (await entriesOf(owner, group)).filter((e) => e.state === "waiting" && e.seq < saved.seq);
         if (busy.current || earlier.length > 0) {
           await reload();
           void flush();
@@ -150,7 +154,7 @@ export function useOutbox() {
       };
       return attempt(first);
     },
-    [owner, flush, reload, changed],
+    [owner, group, flush, reload, changed],
   );
 
   const submit = useCallback(
@@ -172,6 +176,20 @@ export function useOutbox() {
     [entries, reload, flush],
   );
 
+  /** A refused entry corrected where it is listed: it goes again with the new numbers, at its time of entry, under a new key, in its old place. */
+  const fixRefusal = useCallback(
+    async (key: string, values: Record<string, number | null>) => {
+      const entry = entries.find((e) => e.key === key && e.state === "refused");
+      if (!entry) return;
+      const copy = correctedCopy(entry, values, crypto.randomUUID());
+      await putEntry({ ...entry, ...copy, state: "waiting", refusal: undefined, seq: entry.seq });
+      await deleteEntry(key);
+      await reload();
+      void flush();
+    },
+    [entries, reload, flush],
+  );
+
   /** A refused entry the person drops: gone from this phone. */
   const dismissRefusal = useCallback(
     async (key: string) => {
@@ -184,8 +202,8 @@ export function useOutbox() {
   const items: QueuedEntry[] = entries.filter((e) => e.state === "waiting");
   const refusals: Refusal[] = entries
     .filter((e) => e.state === "refused")
-    .map((e) => ({ key: e.key, label: e.label, message: e.refusal?.message ?? "Refused", question: e.refusal?.question, item: e }));
+    .map((e) => ({ key: e.key, label: e.label, message: e.refusal?.message ?? "Refused", question: e.refusal?.question, fields: e.refusal?.fields, item: e }));
 
-  return { ready, items, refusals, dismissRefusal: (key: string) => void dismissRefusal(key), confirmRefusal: (key: string) => void confirmRefusal(key), submit, retryNow: flush };
+  return { ready, items, refusals, dismissRefusal: (key: string) => void dismissRefusal(key), confirmRefusal: (key: string) => void confirmRefusal(key), fixRefusal: (key: string, values: Record<string, number | null>) => fixRefusal(key, values), submit, retryNow: flush };
 }
 

@@ -3,7 +3,7 @@
 import { useQueryClient } from "@tanstack/react-query";
 import { Serwist } from "@serwist/window";
 import { usePathname } from "next/navigation";
-import { useEffect, useState, useSyncExternalStore } from "react";
+import { useEffect, useMemo, useState, useSyncExternalStore } from "react";
 import { Button } from "@/components/ui/button";
 import { useFormat } from "@/hooks/use-look";
 import { PersonProvider } from "./person-context";
@@ -20,6 +20,7 @@ const UPDATE_CHECK_MS = 30 * 60_000;
 
 interface Props {
   personId: string;
+  groupId: string;
   home: string;
   renderedAt: string;
   tileUrl: string;
@@ -40,9 +41,9 @@ export function useOnline(): boolean {
   return useSyncExternalStore(subscribeOnline, () => navigator.onLine, () => true);
 }
 
-async function hello(personId: string, home: string, tileUrl: string) {
+async function hello(personId: string, groupId: string, home: string, tileUrl: string) {
   const reg = await navigator.serviceWorker.ready;
-  reg.active?.postMessage({ type: "CANTROVE_PERSON", person: { id: personId, home }, tileUrl });
+  reg.active?.postMessage({ type: "CANTROVE_PERSON", person: { id: personId, group: groupId, home }, tileUrl });
 }
 
 /** The page's side of the worker (Serwist's window module), registered once per page load. */
@@ -59,7 +60,7 @@ function useSerwist(): Serwist | null {
   return serwist;
 }
 
-function Keeper({ personId, home, renderedAt, tileUrl }: Omit<Props, "children">) {
+function Keeper({ personId, groupId, home, renderedAt, tileUrl }: Omit<Props, "children">) {
   const serwist = useSerwist();
   const client = useQueryClient();
   const online = useOnline();
@@ -74,7 +75,7 @@ function Keeper({ personId, home, renderedAt, tileUrl }: Omit<Props, "children">
     // The first time a worker takes this page (clientsClaim, moments after it installs), what the
     // page read before then is read again through it, so those answers are kept too.
     const hadController = navigator.serviceWorker.controller !== null;
-    void hello(personId, home, tileUrl)
+    void hello(personId, groupId, home, tileUrl)
       .then(async () => {
         if (hadController) return;
         for (let i = 0; i < 50 && !navigator.serviceWorker.controller; i++) await new Promise((r) => setTimeout(r, 100));
@@ -95,7 +96,7 @@ function Keeper({ personId, home, renderedAt, tileUrl }: Omit<Props, "children">
       clearInterval(timer);
       window.removeEventListener("online", check);
     };
-  }, [serwist, client, personId, home, tileUrl]);
+  }, [serwist, client, personId, groupId, home, tileUrl]);
 
   // A page reached inside the app (no full load) is kept too, when online.
   useEffect(() => {
@@ -132,8 +133,9 @@ function Keeper({ personId, home, renderedAt, tileUrl }: Omit<Props, "children">
 }
 
 export function OfflineKeeper({ children, ...props }: Props) {
+  const person = useMemo(() => ({ id: props.personId, group: props.groupId }), [props.personId, props.groupId]);
   return (
-    <PersonProvider value={props.personId}>
+    <PersonProvider value={person}>
       <Keeper {...props} />
       {children}
     </PersonProvider>

@@ -10,6 +10,7 @@ import { StopActions } from "./stop-actions";
 import { UndoStopHaul, UnskipStop } from "./stop-undo";
 import { useFormat } from "@/hooks/use-look";
 import { useOutbox, type Refusal } from "@/components/ledger/use-outbox";
+import { RefusalFix } from "@/components/ledger/refusal-fix";
 import { Button } from "@/components/ui/button";
 import type { QueuedEntry } from "@/lib/offline/store";
 import { describeOpeningHours } from "@/lib/drives/opening-hours";
@@ -43,7 +44,10 @@ function StopQueue({ waiting, refused, outbox }: { waiting: QueuedEntry[]; refus
           <div key={r.key} role="alert" className="rounded-lg border-2 border-alarm bg-alarm-soft px-3 py-2">
             <p className="font-semibold text-alarm">Not recorded: {r.label}</p>
             <p>The server said: {r.message}</p>
-            <Button type="button" variant="quiet" onClick={() => outbox.dismissRefusal(r.key)}>Drop it</Button>
+            <div className="mt-1 flex flex-wrap gap-2">
+              <RefusalFix refusal={r} onFix={outbox.fixRefusal} />
+              <Button type="button" variant="quiet" onClick={() => outbox.dismissRefusal(r.key)}>Drop it</Button>
+            </div>
           </div>
         ),
       )}

@@ -125,6 +125,28 @@ function assertEnteredBy(request: Request, actor: Actor | null): void {
   }
 }
 
+/**
+ * Whose answer this is: every read made for a signed-in person names them and their group.
+ * The service worker (app/sw.ts) keeps an answer offline only in the cache of the person and
+ * group it names, and only while they are still the ones signed in on the phone, so an answer
+ * still on its way when someone signs out or switches cannot land in another person's copies.
+ */
+export const ANSWER_FOR_HEADER = "x-cantrove-for";
+export const ANSWER_GROUP_HEADER = "x-cantrove-group";
+function markedFor(response: Response, actor: Actor): Response {
+  try {
+    response.headers.set(ANSWER_FOR_HEADER, actor.user.id);
+    response.headers.set(ANSWER_GROUP_HEADER, actor.group.id);
+    return response;
+  } catch {
+    // headers that cannot be changed (a fetched answer passed through): a copy that can
+    const copy = new Response(response.body, response);
+    copy.headers.set(ANSWER_FOR_HEADER, actor.user.id);
+    copy.headers.set(ANSWER_GROUP_HEADER, actor.group.id);
+    return copy;
+  }
+}
+
 /** What every declared handler shares: the checks before the body, and the error and cache handling around it. */
 function wrap<A extends Access, P, Q, B, R>(
   spec: EndpointSpec<A, P, Q, B, R>,
@@ -133,17 +155,19 @@ function wrap<A extends Access, P, Q, B, R>(
   return async (request: NextRequest, ctx: NextContext): Promise<Response> => {
     const writes = request.method !== "GET" && request.method !== "HEAD";
     let response: Response;
+    let actor: ActorOf<A> | null = null;
     try {
       assertSameOrigin(request);
-      const actor = (await actorFor(spec.who)) as ActorOf<A>;
+      actor = (await actorFor(spec.who)) as ActorOf<A>;
       assertEnteredBy(request, actor as Actor | null);
       const params = await pathOf(ctx, spec.params);
       const resource = spec.resource ? await spec.resource(actor as Actor, params) : (undefined as R);
       const query = queryOf(request, spec.query);
-      response = await run({ request, actor, params, query, resource });
+      response = await run({ request, actor: actor as ActorOf<A>, params, query, resource });
     } catch (error) {
       response = toErrorResponse(error);
     }
+    if (!writes && actor) response = markedFor(response, actor as Actor);
     // A refused write (4xx: 401, 403, 404, 409, 422, 429) changed nothing, so it
     // does not tell every server to clear its cache: a stranger's flood of bad posts
     // must not cost a NOTIFY each and empty every cache. A 5xx may follow a commit.

@@ -1,12 +1,12 @@
 // Sign-out on this phone: every cache and queued entry that holds the person's
 // data goes before the session does (sign-out button, leaving a group, handing over).
-import { currentPerson, entriesOf, forgetPersonEntries, isPersonalCache, setPerson } from "./store";
+import { entriesOf, forgetPersonEntries, isPersonalCache, setPerson, storedPersonId } from "./store";
 
 /** How many of the signed-in person's entries have not reached the server (asked about before signing out). */
 export async function unsentCount(): Promise<number> {
   try {
-    const person = await currentPerson();
-    return person ? (await entriesOf(person.id)).length : 0;
+    const id = await storedPersonId();
+    return id ? (await entriesOf(id)).length : 0;
   } catch {
     return 0;
   }
@@ -14,8 +14,8 @@ export async function unsentCount(): Promise<number> {
 
 export async function forgetThisPhone(): Promise<void> {
   try {
-    const person = await currentPerson();
-    if (person) await forgetPersonEntries(person.id);
+    const id = await storedPersonId();
+    if (id) await forgetPersonEntries(id);
     await setPerson(null);
   } catch {
     // no IndexedDB (private mode in some browsers): nothing was kept there

@@ -4,23 +4,30 @@
 
 const ID = /^[0-9a-f-]{36}$/;
 const HOME = /^\/[a-z]+$/;
-const MARKER = /data-cantrove-person="([0-9a-f-]{36})" data-cantrove-home="(\/[a-z]+)" data-rendered-at="([0-9T:.Z-]+)"/;
+const MARKER = /data-cantrove-person="([0-9a-f-]{36})" data-cantrove-group="([0-9a-f-]{36})" data-cantrove-home="(\/[a-z]+)" data-rendered-at="([0-9T:.Z-]+)"/;
 
 export interface Marker {
   id: string;
+  /** The person's active group: what is kept offline is filed under the person and this group. */
+  group: string;
   home: string;
   renderedAt: string;
 }
 
 export function markerAttributes(m: Marker): Record<string, string> {
-  if (!ID.test(m.id) || !HOME.test(m.home)) throw new Error("bad marker");
-  return { "data-cantrove-person": m.id, "data-cantrove-home": m.home, "data-rendered-at": m.renderedAt };
+  if (!ID.test(m.id) || !ID.test(m.group) || !HOME.test(m.home)) throw new Error("bad marker");
+  return { "data-cantrove-person": m.id, "data-cantrove-group": m.group, "data-cantrove-home": m.home, "data-rendered-at": m.renderedAt };
+}
+
+/** The shapes a person on this phone may have (a cache name is made from the ids). */
+export function isPersonShape(p: { id?: unknown; group?: unknown; home?: unknown } | null | undefined): p is { id: string; group: string; home: string } {
+  return !!p && ID.test(String(p.id)) && ID.test(String(p.group)) && HOME.test(String(p.home));
 }
 
 /** The marker in a page's HTML, or null for a page that has none (public pages). */
 export function personMarker(html: string): Marker | null {
   const m = MARKER.exec(html);
-  return m ? { id: m[1], home: m[2], renderedAt: m[3] } : null;
+  return m ? { id: m[1], group: m[2], home: m[3], renderedAt: m[4] } : null;
 }
 
 /** What a page not saved on this phone shows with no signal: plain HTML, no script. */

@@ -35,7 +35,12 @@ export async function sendEntry(entry: QueuedEntry): Promise<SendOutcome> {
 export async function settle(entry: QueuedEntry, outcome: SendOutcome): Promise<void> {
   if (outcome.kind === "done") await deleteEntry(entry.key);
   else if (outcome.kind === "retry") await putEntry({ ...entry, attempts: entry.attempts + 1, lastError: outcome.message });
-  else await putEntry({ ...entry, state: "refused", refusal: { status: outcome.status, message: outcome.message, ...(outcome.question ? { question: outcome.question } : {}) } });
+  else
+    await putEntry({
+      ...entry,
+      state: "refused",
+      refusal: { status: outcome.status, message: outcome.message, ...(outcome.question ? { question: outcome.question } : {}), ...(outcome.fields ? { fields: outcome.fields } : {}) },
+    });
 }
 
 async function withLock<T>(work: () => Promise<T>): Promise<T | null> {
@@ -50,10 +55,10 @@ async function withLock<T>(work: () => Promise<T>): Promise<T | null> {
  * wait (no connection, server busy): a later entry may depend on it. Returns
  * how many were settled (done or refused), or null when another sender had the lock.
  */
-export async function flushOwner(owner: string): Promise<{ settled: number; left: number } | null> {
+export async function flushOwner(owner: string, group?: string): Promise<{ settled: number; left: number } | null> {
   return withLock(async () => {
     let settled = 0;
-    const waiting = (await entriesOf(owner)).filter((e) => e.state === "waiting");
+    const waiting = (await entriesOf(owner, group)).filter((e) => e.state === "waiting");
     for (const entry of waiting) {
       const outcome = await sendEntry(entry);
       await settle(entry, outcome);

@@ -60,3 +60,16 @@ export function offlineTiles(runs: Array<Array<{ lat: number; lng: number }>>, b
 export function tileUrl(template: string, t: TileRef): string {
   return template.replace("{z}", String(t.z)).replace("{x}", String(t.x)).replace("{y}", String(t.y)).replace("{s}", "a");
 }
+
+/**
+ * Which kept tiles go so that at most `budget` stay: the tiles the last warm-up chose for the
+ * person's runs stay first, then the most recently kept of the others (the map the person looked
+ * at). `kept` is in the order the tiles were kept, oldest first (the Cache API's order).
+ */
+export function tilesOverBudget(kept: string[], wanted: ReadonlySet<string>, budget = OFFLINE_TILE_BUDGET): string[] {
+  if (kept.length <= budget) return [];
+  const stay = new Set<string>();
+  for (const url of kept) if (wanted.has(url) && stay.size < budget) stay.add(url);
+  for (let i = kept.length - 1; i >= 0 && stay.size < budget; i--) stay.add(kept[i]);
+  return kept.filter((url) => !stay.has(url));
+}

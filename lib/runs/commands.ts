@@ -137,7 +137,7 @@ export async function resolveStop(
   actor: Actor,
   runId: string,
   stopId: string,
-  change: { status: "skipped"; reason: string } | { status: "logged"; haulId: string },
+  change: { status: "skipped"; reason: string; at?: Date } | { status: "logged"; haulId: string },
   trx: Knex.Transaction,
 ) {
   if (change.status === "logged") {
@@ -159,7 +159,8 @@ export async function resolveStop(
       skip_reason: change.status === "skipped" ? change.reason : null,
       haul_id: change.status === "logged" ? change.haulId : null,
       resolved_by: actor.user.id,
-      resolved_at: trx.fn.now(),
+      // A skip entered with no signal carries the time it was entered (checked by the route).
+      resolved_at: change.status === "skipped" && change.at ? change.at : trx.fn.now(),
     })
     .catch((error: unknown) => {
       // The unique index is the last word if anything slips past the lock.

@@ -2,7 +2,7 @@
  * Inputs of the pickup-run endpoints and forms; safe to import in the client.
  */
 import { z } from "zod";
-import { day } from "@/lib/dates";
+import { day, moment } from "@/lib/dates";
 import { MAX_ROUTE_STOPS } from "@/lib/runs/route-schemas";
 
 export const RUN_STATES = ["planned", "under_way", "done", "cancelled"] as const;
@@ -56,6 +56,8 @@ export const skipStopInputSchema = z.object(
       .trim()
       .min(3, { error: "Say why this stop was skipped (a few words)" })
       .max(300, { error: "Keep the reason under 300 characters" }),
+    /** When the stop was skipped, as the phone says (a skip entered with no signal is sent later); checked against the drive and the clock. */
+    happenedAt: moment("Use a date and time like 2026-12-02T09:30:00Z.").optional(),
   },
   { error: "Send a reason" },
 );
@@ -110,6 +112,8 @@ export const cancelRunInputSchema = z.object(
       .trim()
       .min(3, { error: "Say why the run is cancelled (a few words)" })
       .max(300, { error: "Keep the reason under 300 characters" }),
+    /** When the stop was skipped, as the phone says (a skip entered with no signal is sent later); checked against the drive and the clock. */
+    happenedAt: moment("Use a date and time like 2026-12-02T09:30:00Z.").optional(),
   },
   { error: "Send a reason" },
 );

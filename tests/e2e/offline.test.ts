@@ -21,7 +21,7 @@ const SHOTS = ".test-results";
 const ACCESS = "Bin behind the blue gate; code 4471, ask at the counter after 16:00.";
 const HOST_PHONE = "+99 555 0142";
 
-async function setUp(): Promise<{ g: FreshGroup; runId: string; volId: string }> {
+async function setUp(): Promise<{ g: FreshGroup; runId: string; volId: string; volKey: string }> {
   const g = await freshGroup("offline");
   const db = testDb();
   await db("drop_points").where({ id: g.dropPointIds[0] }).update({ address: "4 Quay Lane, Larkhollow", hours: "Mon–Sat 8:00–18:00", access_notes: ACCESS, host_name: "Ida Fenwick", host_phone: HOST_PHONE });
@@ -32,7 +32,8 @@ async function setUp(): Promise<{ g: FreshGroup; runId: string; volId: string }>
   const plannedOn = new Date(Date.now() + 2 * 86_400_000).toISOString().slice(0, 10);
   const run = await org.json<{ id: string }>("POST", "/api/runs", { driveId: g.driveId, plannedOn, start: { lat: 47.199, lng: -8.001 }, dropPointIds: g.dropPointIds, assigneeId: volId });
   if (run.status !== 201) throw new Error(`run not created: ${run.status} ${JSON.stringify(run.body)}`);
-  return { g, runId: run.body.id, volId };
+  // What the phone keeps is filed under the person in their group (lib/offline/store.ts).
+  return { g, runId: run.body.id, volId, volKey: `${volId}.${g.groupId}` };
 }
 
 /** What the phone keeps, read in the page: its cache names and the paths in one person's cache. */
@@ -45,14 +46,14 @@ async function kept(page: Page, cacheName: string) {
 }
 
 /** The online visit: signed in, the worker installed and in control, and the person's run and tiles kept. */
-async function visitOnline(context: BrowserContext, email: string, personId: string, runId: string): Promise<Page> {
+async function visitOnline(context: BrowserContext, email: string, personKey: string, runId: string): Promise<Page> {
   const page = await context.newPage();
   await signInAs(page, email);
   await page.waitForFunction(() => navigator.serviceWorker.controller !== null, undefined, { timeout: 30_000 });
   await expect
-    .poll(async () => (await kept(page, `cantrove-person-${personId}`)).paths, { timeout: 30_000 })
+    .poll(async () => (await kept(page, `cantrove-person-${personKey}`)).paths, { timeout: 30_000 })
     .toEqual(expect.arrayContaining(["/log", "/runs", `/runs/${runId}`, `/api/runs/${runId}`]));
-  await expect.poll(async () => (await kept(page, `cantrove-tiles-${personId}`)).paths.length, { timeout: 30_000 }).toBeGreaterThan(20);
+  await expect.poll(async () => (await kept(page, `cantrove-tiles-${personKey}`)).paths.length, { timeout: 30_000 }).toBeGreaterThan(20);
   return page;
 }
 
@@ -60,14 +61,14 @@ const renderedAt = (page: Page) => page.locator("[data-cantrove-person]").getAtt
 
 describe("offline from a cold start", () => {
   it("opens /log and the volunteer's run with every stop's details and map tiles, with no connection", async () => {
-    const { g, runId, volId } = await setUp();
+    const { g, runId, volKey } = await setUp();
     const { context } = await newPage(browser(), PHONE);
-    const online = await visitOnline(context, g.emails.volunteer, volId, runId);
-    const tiles = (await kept(online, `cantrove-tiles-${volId}`)).paths;
+    const online = await visitOnline(context, g.emails.volunteer, volKey, runId);
+    const tiles = (await kept(online, `cantrove-tiles-${volKey}`)).paths;
     const keptAt = await online.evaluate(async (key) => {
       const res = await (await caches.open(key)).match(new URL("/log", location.origin).href);
       return /data-rendered-at="([^"]+)"/.exec((await res?.text()) ?? "")?.[1] ?? null;
-    }, `cantrove-person-${volId}`);
+    }, `cantrove-person-${volKey}`);
     expect(keptAt).not.toBeNull();
     // Every page closed: the next open is a cold start.
     for (const p of context.pages()) await p.close();
@@ -109,18 +110,16 @@ describe("offline from a cold start", () => {
 });
 
 describe("entries made with no connection", () => {
-  it("records a haul, a sort and a stop's haul exactly once, at the time they were entered, after the page was closed and the signal came back", async () => {
-    const { g, runId, volId } = await setUp();
+  it("records a haul, a sort, a stop's haul and a stop's skip exactly once, at the time they were entered, after the page was closed and the signal came back", async () => {
+    const { g, runId, volKey } = await setUp();
     // Stock to sort: one haul already in, made online.
     const vol = await g.client("volunteer");
     const first = await vol.json<{ id: string }>("POST", `/api/drives/${g.driveId}/hauls`, { dropPointId: g.dropPointIds[1], bags: 1 });
     expect(first.status).toBe(201);
     const { context } = await newPage(browser(), PHONE);
-    const online = await visitOnline(context, g.emails.volunteer, volId, runId);
-    // The Log page's lists (the hauls to sort) are read once online, with the worker in control.
-    await online.goto("/log");
-    await online.getByRole("tab", { name: "Log a sort" }).click();
-    await online.getByRole("checkbox").first().waitFor();
+    const online = await visitOnline(context, g.emails.volunteer, volKey, runId);
+    // The sort tab was never opened online: the worker's warm-up kept what it reads (the hauls to sort).
+    await expect.poll(async () => (await kept(online, `cantrove-person-${volKey}`)).paths, { timeout: 30_000 }).toContain(`/api/drives/${g.driveId}/hauls`);
     for (const p of context.pages()) await p.close();
 
     await context.setOffline(true);
@@ -147,6 +146,12 @@ describe("entries made with no connection", () => {
     await stop.getByRole("button", { name: "Save the haul" }).click();
     await stop.getByTestId("waiting-entry").waitFor();
     expect(await stop.getByTestId("waiting-entry").innerText()).toMatch(/Waiting to be sent: Haul at South gate: 2 bags/);
+    // The other stop is skipped, offline too: it keeps the time it was entered, like the hauls.
+    const north = page.getByRole("listitem", { name: /^Stop \d+: North porch$/ });
+    await north.getByRole("button", { name: "Skip with a reason" }).click();
+    await north.getByLabel("Why skip this stop?").fill("Gate locked, nobody there");
+    await north.getByRole("button", { name: "Skip this stop" }).click();
+    await north.getByTestId("waiting-entry").waitFor();
     await page.screenshot({ path: `${SHOTS}/offline-run-waiting-phone.png`, fullPage: true });
     const enteredTo = new Date();
     // Closed with three entries waiting.
@@ -173,17 +178,78 @@ describe("entries made with no connection", () => {
     }
     const stopRow = await db("pickup_run_stops").where({ run_id: runId, drop_point_id: g.dropPointIds[1] }).first();
     expect(stopRow.status).toBe("logged");
+    const skipped = await db("pickup_run_stops").where({ run_id: runId, drop_point_id: g.dropPointIds[0] }).first();
+    expect(skipped.status).toBe("skipped");
+    expect(skipped.skip_reason).toBe("Gate locked, nobody there");
+    // Stamped when entered (offline), not when it reached the server after the signal came back.
+    expect(new Date(skipped.resolved_at).getTime()).toBeGreaterThanOrEqual(enteredFrom.getTime() - 1000);
+    expect(new Date(skipped.resolved_at).getTime()).toBeLessThanOrEqual(enteredTo.getTime());
     const bags = await db("hauls").where({ drive_id: g.driveId }).orderBy("bags").pluck("bags");
     expect(bags).toEqual([1, 2, 4]);
     await context.close();
   });
 });
 
+describe("Background Sync with no page of the app open", () => {
+  it("sends an entry queued offline once the signal is back, without the app being opened again", async () => {
+    // Chromium decides by itself when to fire a waiting sync, and watches the machine's real
+    // network, not context.setOffline's emulation, so a test cannot make it fire on "signal back".
+    // The nearest honest thing: DevTools' own "fire this sync" (ServiceWorker.dispatchSyncEvent),
+    // sent through a blank tab, while no page of the app is open; the worker alone sends the entry.
+    const { g, runId, volKey } = await setUp();
+    const { context } = await newPage(browser(), PHONE);
+    await visitOnline(context, g.emails.volunteer, volKey, runId);
+    for (const p of context.pages()) await p.close();
+
+    await context.setOffline(true);
+    const page = await context.newPage();
+    await page.goto("/log");
+    await page.getByTestId("offline-notice").waitFor();
+    const enteredFrom = new Date();
+    await page.getByLabel("Drop point").selectOption(g.dropPointIds[0]);
+    await page.getByLabel("Bags", { exact: true }).fill("3");
+    await page.getByRole("button", { name: "Record haul" }).click();
+    await page.getByText(/saved on this phone/i).first().waitFor();
+    const enteredTo = new Date();
+    // The page asked the browser for the sync.
+    await expect
+      .poll(() => page.evaluate(async () => ((await navigator.serviceWorker.ready) as ServiceWorkerRegistration & { sync: { getTags(): Promise<string[]> } }).sync.getTags()))
+      .toContain("cantrove-outbox");
+    await page.close();
+    const db = testDb();
+    const hauls = async () => Number((await db("hauls").where({ drive_id: g.driveId }).count<{ n: string }[]>({ n: "*" }))[0]!.n);
+    expect(await hauls()).toBe(0);
+
+    await context.setOffline(false);
+    const blank = await context.newPage();
+    expect(blank.url()).toBe("about:blank");
+    const cdp = await context.newCDPSession(blank);
+    const origin = new URL(APP_URL).origin;
+    const registration = new Promise<string>((resolve) => {
+      cdp.on("ServiceWorker.workerRegistrationUpdated", (e: { registrations: Array<{ registrationId: string; scopeURL: string; isDeleted: boolean }> }) => {
+        const r = e.registrations.find((x) => x.scopeURL === `${origin}/` && !x.isDeleted);
+        if (r) resolve(r.registrationId);
+      });
+    });
+    await cdp.send("ServiceWorker.enable");
+    const registrationId = await registration;
+    await cdp.send("ServiceWorker.dispatchSyncEvent", { origin, registrationId, tag: "cantrove-outbox", lastChance: false });
+    await expect.poll(hauls, { timeout: 20_000 }).toBe(1);
+    // No page of the app was opened for it.
+    expect(context.pages().map((p) => p.url())).toEqual(["about:blank"]);
+    const move = await db("movements").where({ drive_id: g.driveId, kind: "haul" }).first();
+    expect(new Date(move.occurred_at).getTime()).toBeGreaterThanOrEqual(enteredFrom.getTime() - 1000);
+    expect(new Date(move.occurred_at).getTime()).toBeLessThanOrEqual(enteredTo.getTime());
+    expect(await db("hauls").where({ drive_id: g.driveId }).pluck("bags")).toEqual([3]);
+    await context.close();
+  });
+});
+
 describe("a shared phone", () => {
   it("after sign-out and someone else signing in, shows none of the first person's data with no connection", async () => {
-    const { g, runId, volId } = await setUp();
+    const { g, runId, volId, volKey } = await setUp();
     const { context } = await newPage(browser(), PHONE);
-    const online = await visitOnline(context, g.emails.volunteer, volId, runId);
+    const online = await visitOnline(context, g.emails.volunteer, volKey, runId);
     await online.getByRole("button", { name: "Sign out" }).click();
     await online.waitForURL(/\/signin/);
     const after = await kept(online, "");
@@ -194,7 +260,7 @@ describe("a shared phone", () => {
     const otherId = await other.locator("[data-cantrove-person]").getAttribute("data-cantrove-person");
     expect(otherId).not.toBe(volId);
     await other.waitForFunction(() => navigator.serviceWorker.controller !== null, undefined, { timeout: 30_000 });
-    await expect.poll(async () => (await kept(other, `cantrove-person-${otherId}`)).paths, { timeout: 30_000 }).toContain("/log");
+    await expect.poll(async () => (await kept(other, `cantrove-person-${otherId}.${g.groupId}`)).paths, { timeout: 30_000 }).toContain("/log");
     for (const p of context.pages()) await p.close();
 
     await context.setOffline(true);
@@ -301,7 +367,7 @@ describe("installable", () => {
       await signInAs(page, g.emails.volunteer);
       await page.waitForFunction(() => navigator.serviceWorker.controller !== null, undefined, { timeout: 30_000 });
       const personId = await page.locator("[data-cantrove-person]").getAttribute("data-cantrove-person");
-      await expect.poll(async () => (await kept(page, `cantrove-person-${personId}`)).paths, { timeout: 30_000 }).toContain("/log");
+      await expect.poll(async () => (await kept(page, `cantrove-person-${personId}.${g.groupId}`)).paths, { timeout: 30_000 }).toContain("/log");
       const cdp = await context.newCDPSession(page);
       const manifest = (await cdp.send("Page.getAppManifest")) as { errors: unknown[]; data?: string };
       expect(manifest.errors).toEqual([]);

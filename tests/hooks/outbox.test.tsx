@@ -37,12 +37,12 @@ mockApi([
   asks = false;
   refuseWith = null;
 });
-const wrapper = (person = "u1") => {
+const wrapper = (person = "u1", group = "g1") => {
   const Query = testQueryClient().wrapper;
   function SignedIn({ children }: { children: ReactNode }) {
     return (
       <Query>
-        <PersonProvider value={person}>{children}</PersonProvider>
+        <PersonProvider value={{ id: person, group }}>{children}</PersonProvider>
       </Query>
     );
   }
@@ -117,6 +117,29 @@ describe("the outbox", () => {
     expect(result.current.items).toEqual([]);
     expect(seen).toEqual([]);
     expect(await entriesOf("u2")).toHaveLength(1);
+  });
+
+  it("shows and sends a person's entry only in the group it was entered in, and sends it once they are back in it", async () => {
+    const inA = renderHook(() => useOutbox(), { wrapper: wrapper("u1", "g1") });
+    await waitFor(() => expect(inA.result.current.ready).toBe(true));
+    await act(async () => {
+      await inA.result.current.submit(URL, { dropPointId: "p1", bags: 4 }, "Haul: 4 bags");
+    });
+    inA.unmount();
+    online = true;
+    // Switched to another group: the entry is neither listed nor sent there.
+    const inB = renderHook(() => useOutbox(), { wrapper: wrapper("u1", "g2") });
+    await waitFor(() => expect(inB.result.current.ready).toBe(true));
+    await act(async () => {
+      await inB.result.current.retryNow();
+    });
+    expect(inB.result.current.items).toEqual([]);
+    expect(seen).toEqual([]);
+    inB.unmount();
+    const back = renderHook(() => useOutbox(), { wrapper: wrapper("u1", "g1") });
+    await waitFor(() => expect(seen).toHaveLength(1));
+    expect(seen[0]!.body.bags).toBe(4);
+    await waitFor(() => expect(back.result.current.items).toEqual([]));
   });
 
   it("keeps an entry the server refused after it waited, with the server's reason, until it is dropped", async () => {

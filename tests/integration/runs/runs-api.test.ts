@@ -12,7 +12,7 @@ interface Run {
   distanceKm: number;
   logged: number;
   skipped: number;
-  stopList: { id: string; position: number; status: string; skipReason: string | null; dropPoint: { id: string; name: string; hours: string; hostPhone: string | null } }[];
+  stopList: { id: string; position: number; status: string; skipReason: string | null; resolvedAt: string | null; dropPoint: { id: string; name: string; hours: string; hostPhone: string | null } }[];
 }
 
 const f = demoFixtureForFile();
@@ -124,6 +124,25 @@ describe("following a run", () => {
     expect(two.body.skipped).toBe(2);
     const stored = await testDb()("pickup_runs").where({ id: run.id }).first();
     expect(stored.finished_at).not.toBeNull();
+  });
+
+  it("records a skip at the time it was entered (sent later from a phone with no signal), never ahead of the clock", async () => {
+    const res = await planRun([points[0]!.id, points[1]!.id]);
+    const run = (await volunteer.json<Run>("GET", `/api/runs/${res.body.id}`)).body;
+    const [first, second] = run.stopList;
+    const ahead = new Date(Date.now() + 3 * 3_600_000).toISOString();
+    const refused = await volunteer.json<{ error: { fields: Record<string, string> } }>("POST", `/api/runs/${run.id}/stops/${first!.id}/skip`, { reason: "Gate locked", happenedAt: ahead });
+    expect(refused.status).toBe(422);
+    expect(Object.keys(refused.body.error.fields)).toEqual(["happenedAt"]);
+    const entered = new Date(Date.now() - 40 * 60_000);
+    entered.setMilliseconds(0);
+    const ok = await volunteer.json<Run>("POST", `/api/runs/${run.id}/stops/${first!.id}/skip`, { reason: "Gate locked", happenedAt: entered.toISOString() });
+    expect(ok.status).toBe(200);
+    expect(ok.body.stopList.find((s) => s.id === first!.id)!.resolvedAt).toBe(entered.toISOString());
+    // Without a time, the time it arrived.
+    const before = Date.now();
+    const now = await volunteer.json<Run>("POST", `/api/runs/${run.id}/stops/${second!.id}/skip`, { reason: "No parking" });
+    expect(Date.parse(now.body.stopList.find((s) => s.id === second!.id)!.resolvedAt!)).toBeGreaterThanOrEqual(before - 1000);
   });
 
   it("will not mark a stop logged with a haul that does not exist", async () => {

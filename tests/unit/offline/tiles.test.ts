@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { OFFLINE_TILE_BUDGET, OFFLINE_ZOOMS, STOP_ZOOM, offlineTiles, tileUrl } from "@/lib/offline/tiles";
+import { OFFLINE_TILE_BUDGET, OFFLINE_ZOOMS, STOP_ZOOM, offlineTiles, tileUrl, tilesOverBudget } from "@/lib/offline/tiles";
 
 // Tile numbers by the OpenStreetMap wiki's "Slippy map tilenames" formula
 // (https://wiki.openstreetmap.org/wiki/Slippy_map_tilenames), computed here
@@ -39,5 +39,30 @@ describe("offline map tiles", () => {
 
   it("fills the map's URL template", () => {
     expect(tileUrl("/tiles/{z}/{x}/{y}.png", { z: 16, x: 31305, y: 22851 })).toBe("/tiles/16/31305/22851.png");
+  });
+});
+
+describe("the tile budget over everything kept", () => {
+  const urls = (prefix: string, n: number) => Array.from({ length: n }, (_, i) => `/tiles/${prefix}/${i}.png`);
+
+  it("drops nothing within the budget", () => {
+    expect(tilesOverBudget(urls("a", 10), new Set(), 10)).toEqual([]);
+  });
+
+  it("keeps the run's chosen tiles first, then the newest others, and never more than the budget", () => {
+    const browsed = urls("map", 8); // kept first, by looking at the map
+    const chosen = urls("run", 5); // kept by the warm-up, after
+    const kept = [...browsed, ...chosen];
+    const drop = tilesOverBudget(kept, new Set(chosen), 7);
+    expect(kept.length - drop.length).toBe(7);
+    const stay = kept.filter((u) => !drop.includes(u));
+    expect(stay).toEqual(expect.arrayContaining(chosen));
+    // The two newest browsed tiles stay beside them; the six oldest go.
+    expect(stay.filter((u) => u.includes("/map/"))).toEqual([browsed[6], browsed[7]]);
+  });
+
+  it("keeps only part of the chosen tiles when they alone pass the budget", () => {
+    const chosen = urls("run", 6);
+    expect(tilesOverBudget(chosen, new Set(chosen), 4)).toEqual(chosen.slice(4));
   });
 });
