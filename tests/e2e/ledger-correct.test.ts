@@ -80,6 +80,15 @@ describe("organiser corrections on /ledger", () => {
     await page.getByRole("button", { name: "Load more" }).click();
     await expect.poll(() => lines.count(), { timeout: 10_000 }).toBe(100);
     expect(await page.getByTestId("ledger-count").innerText()).toBe("Showing 100 of more than 1,000 lines");
+    // Four-digit line numbers stay on one line at 390 px (they broke as "100 / 9").
+    const lineBoxes = await lines.first().locator("td").first().evaluate((td) => {
+      const range = document.createRange();
+      range.selectNodeContents(td);
+      return range.getClientRects().length;
+    });
+    expect(lineBoxes).toBe(1);
+    await page.getByTestId("ledger-count").scrollIntoViewIfNeeded();
+    await page.screenshot({ path: ".test-results/ledger-paging-390.png" });
     const numbers = await lines.evaluateAll((rows) => rows.map((r) => Number(r.getAttribute("data-line"))));
     expect(new Set(numbers).size).toBe(100);
     // Newest first: the 250 of the 4th of November, highest line first.
