@@ -17,6 +17,7 @@ import { serverCommand, stopServer } from "./lib/serve";
 import { generateOtherGroups, type OtherGroups } from "./bench/groups";
 import { compare, printComparison, startAppServer, startBalancer, type Comparison } from "./bench/compare";
 import { ensureClusterTools } from "./lib/cluster";
+import { LEDGER_SCREEN_PAGE } from "../lib/ledger/ledger-page";
 
 // `npm run bench`: a throwaway PostgreSQL with a big group, the production
 // build against it, autocannon over loopback, chromium for the page; then
@@ -39,7 +40,8 @@ const opts = {
   totalLines: num("BENCH_TOTAL_LINES", 10_000_000),
   servers: num("BENCH_SERVERS", 2),
   compareRounds: num("BENCH_COMPARE_ROUNDS", 6),
-  compareSeconds: num("BENCH_COMPARE_SECONDS", 3),
+  /** One run of a round (a round is four: A B B A). */
+  compareSeconds: num("BENCH_COMPARE_SECONDS", 2),
 };
 const ports = { app: num("BENCH_PORT", 4106), pg: num("BENCH_PGPORT", 25506), smtp: num("BENCH_SMTP_PORT", 2706), mailApi: num("BENCH_MAIL_API_PORT", 8206), upload: num("BENCH_UPLOAD_PORT", 8256) };
 const dir = path.join(root, ".bench");
@@ -151,9 +153,10 @@ async function main() {
     { name: "GET public drive page (HTML)", method: "GET", path: `/drives/${slug}` },
     { name: "GET public drop-points + tallies", method: "GET", path: `/api/public/drives/${slug}/drop-points` },
     { name: "GET stock (signed in)", method: "GET", path: `/api/drives/${driveId}/stock`, headers: { cookie } },
-    { name: "GET ledger list, first page", method: "GET", path: `/api/ledger?driveId=${driveId}`, headers: { cookie } },
+    // As the ledger screen asks for it: a screen's worth of lines and the bounded count.
+    { name: "GET ledger list, first page", method: "GET", path: `/api/ledger?driveId=${driveId}&limit=${LEDGER_SCREEN_PAGE}`, headers: { cookie } },
   ];
-  const cmp = { rounds: opts.compareRounds, seconds: opts.compareSeconds, warmup: 1, connections: opts.connections, log };
+  const cmp = { rounds: opts.compareRounds, seconds: opts.compareSeconds, warmup: 2, connections: opts.connections, log };
   let servers: Comparison | null = null;
   if (opts.servers >= 2) {
     ensureClusterTools(log);
@@ -166,7 +169,7 @@ async function main() {
     servers = await compare(
       { label: "1 server", base: `http://127.0.0.1:${lb.one}`, targets: sideTargets(cookie) },
       { label: "2 servers", base: `http://127.0.0.1:${lb.two}`, targets: sideTargets(cookie) },
-      cmp,
+      { ...cmp, settle: () => settleDatabases([stack!.env.DATABASE_URL]) },
     );
     while (extra.length) await stopServer(extra.pop()!, 5_000, true);
   }
@@ -181,10 +184,12 @@ async function main() {
     extra.push(await startAppServer(root, ports.app + 4, { ...noCache, DATABASE_URL: many.databaseUrl }, log));
     const [oneBase, manyBase] = [`http://127.0.0.1:${ports.app + 1}`, `http://127.0.0.1:${ports.app + 4}`];
     const [oneCookie, manyCookie] = [await signIn(oneBase, "organiser@cantrove.test", DEMO_PASSWORD), await signIn(manyBase, "organiser@cantrove.test", DEMO_PASSWORD)];
+    // Both databases in the same state before the first run: the one-group database has just taken the
+    // processing writes (dead row versions in the running totals), the other was written long before.
     groups = await compare(
       { label: "1 group", base: oneBase, targets: sideTargets(oneCookie) },
       { label: `${opts.groups} groups`, base: manyBase, targets: sideTargets(manyCookie) },
-      cmp,
+      { ...cmp, settle: () => settleDatabases([stack!.env.DATABASE_URL, many!.databaseUrl]) },
     );
     while (extra.length) await stopServer(extra.pop()!, 5_000, true);
   }
@@ -194,11 +199,11 @@ async function main() {
   if (groups) {
     for (const name of ["GET public drive (progress)", "GET public drive page (HTML)", "GET stock (signed in)"]) {
       const e = ratioOf(groups, name);
-      report.targets.push({ name: `${name}: ${opts.groups} groups vs 1`, limit: ">= 0.9", measured: `${e.ratio} (÷ floor ${e.ratioVsFloor})`, met: e.ratio >= 0.9 && e.b.non2xx === 0 });
+      report.targets.push({ name: `${name}: ${opts.groups} groups vs 1`, limit: ">= 0.9", measured: `${e.ratio} (rounds ${e.spread[0]}–${e.spread[1]}; ÷ floor ${e.ratioVsFloor})`, met: e.ratio >= 0.9 && e.b.non2xx === 0 });
     }
   }
-    for (const t of report.targets.slice(-3)) console.log(`${t.met ? "MET    " : "NOT MET"}  ${t.name}: ${t.measured} (target ${t.limit})`);
-    console.log("");
+  if (groups) for (const t of report.targets.slice(-3)) console.log(`${t.met ? "MET    " : "NOT MET"}  ${t.name}: ${t.measured} (target ${t.limit})`);
+  console.log("");
   const out = {
     when: new Date().toISOString(),
     machine: { cpus: os.cpus().length, loadAverage: os.loadavg().map((x) => Math.round(x * 10) / 10), cpuModel: os.cpus()[0]?.model, memoryGb: Math.round(os.totalmem() / 2 ** 30), node: process.version },
@@ -218,6 +223,37 @@ async function main() {
   writeFileSync(path.join(root, "bench/results.json"), JSON.stringify(out, null, 2) + "\n");
   log(`Wrote bench/results.json (total ${out.totalSeconds} s).`);
   return out.allTargetsMet ? 0 : 1;
+}
+
+/**
+ * The compared databases brought to the same state, so neither side pays for
+ * the other's housekeeping: VACUUM ANALYZE each (dead row versions gone,
+ * visibility maps set for index-only scans, fresh statistics), one CHECKPOINT
+ * (no flush of the writes' dirty pages during a run), then a wait of up to
+ * two minutes for any autovacuum worker still running.
+ */
+async function settleDatabases(urls: string[]) {
+  const t = Date.now();
+  for (const url of urls) {
+    const sdb = knex(knexConfig(url));
+    try {
+      await sdb.raw("vacuum analyze");
+    } finally {
+      await sdb.destroy();
+    }
+  }
+  const admin = knex(knexConfig(stack!.cluster!.url("postgres")));
+  try {
+    await admin.raw("checkpoint");
+    for (let waited = 0; waited < 120_000; waited += 1_000) {
+      const busy = Number((await admin.raw("select count(*) as n from pg_stat_activity where backend_type = 'autovacuum worker'")).rows[0].n);
+      if (busy === 0) break;
+      await new Promise((r) => setTimeout(r, 1_000));
+    }
+  } finally {
+    await admin.destroy();
+  }
+  log(`Databases settled (VACUUM ANALYZE, CHECKPOINT, no autovacuum running) in ${((Date.now() - t) / 1000).toFixed(0)} s.`);
 }
 
 async function cleanup() {

@@ -4,13 +4,13 @@ import path from "node:path";
 import { startAppCluster, type AppCluster } from "./lib/cluster";
 import { buildIfStale } from "./lib/build";
 import {
-  drillContext, drillFailOver, drillFreshAcrossServers, drillKillOneServer, drillReadsOnStandby, drillReplicaDown,
+  drillContext, drillFailOver, drillFreshAcrossServers, drillKillOneServer, drillReadsOnStandby, drillReplicaDown, drillVerdicts, type DrillResults,
 } from "./lib/cluster-drills";
 
 // `npm run cluster [-- --drill]`: PostgreSQL primary + hot standby, PgBouncer,
 // two app servers and HAProxy on this machine (scripts/lib/cluster.ts); prints
 // the URL and runs until Ctrl+C. With --drill, runs the drills full size, prints
-// what they measured and stops. Ports: CLUSTER_PORT (the balancer, default 3010;
+// what they measured and whether each passed, and stops (exit 1 when one failed). Ports: CLUSTER_PORT (the balancer, default 3010;
 // the apps take the next two) and CLUSTER_PGPORT (primary, default 25532; the
 // standby, PgBouncer, the mail and upload fakes take the next five).
 const root = path.resolve(import.meta.dirname, "..");
@@ -42,7 +42,7 @@ try {
     console.log("Ctrl+C stops everything.");
   } else {
     const ctx = await drillContext(cluster);
-    const results = {
+    const results: DrillResults = {
       freshAcrossServers: await drillFreshAcrossServers(ctx, 30),
       readsOnStandby: await drillReadsOnStandby(ctx, 40),
       killOneServer: await drillKillOneServer(ctx, 30, 8),
@@ -50,7 +50,11 @@ try {
       failOver: await drillFailOver(ctx),
     };
     console.log(JSON.stringify(results, null, 2));
-    await stop(0);
+    const verdicts = drillVerdicts(results);
+    for (const v of verdicts) console.log(`${v.passed ? "PASS" : "FAIL"}  ${v.drill}: ${v.measured}`);
+    const failed = verdicts.filter((v) => !v.passed).length;
+    console.log(`${verdicts.length - failed} passed, ${failed} failed`);
+    await stop(failed ? 1 : 0);
   }
 } catch (error) {
   console.error(`The cluster could not start or a drill broke: ${(error as Error).stack ?? error}`);

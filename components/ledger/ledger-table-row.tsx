@@ -19,7 +19,7 @@ export function LedgerLine({ r, siblings, showDrive }: { r: LedgerRow; siblings:
   return (
     <>
       <tr className={r.reversesId ? "bg-paper-deep" : ""} data-line={r.id}>
-        <td className={`${cell} tabular-nums font-semibold`}>{r.id}</td>
+        <td className={`${cell} whitespace-nowrap tabular-nums font-semibold`}>{r.id}</td>
         <td className={`${cell} whitespace-nowrap`}>
           {f.moment(r.occurredAt)}
           {/* An entry kept offline is shown at when it happened, and when it reached the server. */}

@@ -11,12 +11,20 @@ import { LedgerLine } from "./ledger-table-row";
 import { useLedgerFilters } from "./ledger-table-url";
 import { useFormat } from "@/hooks/use-look";
 
+/** "Showing 50 of 600 lines"; past the count's cap "Showing 50 of more than 1,000 lines". */
+function shownOf(shown: number, total: number | null, over: boolean, f: ReturnType<typeof useFormat>): string {
+  if (total === null) return `Showing ${f.count(shown, "line")}`;
+  // Lines logged since the first page can make the pages hold more than it counted.
+  if (over) return `Showing ${f.number(shown)} of more than ${f.count(Math.max(total, shown), "line")}`;
+  return `Showing ${f.number(shown)} of ${f.count(Math.max(total, shown), "line")}`;
+}
+
 export function LedgerTable({ drives, people, initialDriveId }: { drives: LogDrive[]; people: { id: string; name: string }[]; initialDriveId: string }) {
   const f = useFormat();
   const { filters, set, query } = useLedgerFilters(initialDriveId);
   const pages = useInfiniteQuery(ledgerQueries.list(filters as Record<string, string>, query));
   const rows = useMemo(() => pages.data?.pages.flatMap((p) => p.rows) ?? [], [pages.data]);
-  const total = pages.data?.pages[0]?.total ?? 0;
+  const first = pages.data?.pages[0];
   // The lines of one movement are undone together; the confirmation names them all.
   const byMovement = useMemo(() => {
     const m = new Map<string, string[]>();
@@ -58,9 +66,7 @@ export function LedgerTable({ drives, people, initialDriveId }: { drives: LogDri
             </table>
           </div>
           <p role="status" className="flex flex-wrap items-center gap-3 text-sm">
-            <span data-testid="ledger-count">
-              Showing {f.number(rows.length)} of {f.count(total, "line")}
-            </span>
+            <span data-testid="ledger-count">{shownOf(rows.length, first?.total ?? null, first?.totalOver ?? false, f)}</span>
             {pages.hasNextPage ? (
               <Button variant="secondary" onClick={() => pages.fetchNextPage()} disabled={pages.isFetchingNextPage}>
                 {pages.isFetchingNextPage ? "Loading…" : "Load more"}

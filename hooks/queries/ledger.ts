@@ -4,7 +4,7 @@ import { infiniteQueryOptions, queryOptions, useMutation, useQueryClient } from 
 import { ledgerKeys } from "./keys";
 import { useCallback } from "react";
 import { fetchJson, fetchJsonWithHeaders } from "@/lib/api/client";
-import { LEDGER_SCREEN_PAGE, NEXT_CURSOR_HEADER, TOTAL_HEADER } from "@/lib/ledger/ledger-page";
+import { LEDGER_SCREEN_PAGE, NEXT_CURSOR_HEADER, TOTAL_HEADER, TOTAL_OVER_HEADER } from "@/lib/ledger/ledger-page";
 import type { DriveStock, LedgerPage, LedgerRow, MyEntry, OpenHaul, PostedStockCount } from "@/lib/ledger/types";
 
 export type { MyEntry, OpenHaul };
@@ -18,7 +18,10 @@ async function fetchPage(query: string, cursor: string | null): Promise<LedgerPa
   // A screen's worth at a time; the CSV export (built from the same filters) has no limit.
   const qs = [query, `limit=${LEDGER_SCREEN_PAGE}`, cursor ? `cursor=${cursor}` : ""].filter(Boolean).join("&");
   const { body, headers } = await fetchJsonWithHeaders<LedgerRow[]>(`/api/ledger?${qs}`);
-  return { rows: body, total: Number(headers.get(TOTAL_HEADER) ?? body.length), nextCursor: headers.get(NEXT_CURSOR_HEADER) };
+  // The first page carries the count (exact, or "over" the cap); the pages after it none.
+  const [exact, over] = [headers.get(TOTAL_HEADER), headers.get(TOTAL_OVER_HEADER)];
+  const total = exact !== null ? Number(exact) : over !== null ? Number(over) : null;
+  return { rows: body, total, totalOver: exact === null && over !== null, nextCursor: headers.get(NEXT_CURSOR_HEADER) };
 }
 
 export const ledgerQueries = {

@@ -9,7 +9,7 @@ import type { LedgerFilter } from "./schemas";
 export async function exportLedger(groupId: string, f: LedgerFilter) {
   const [look, drive] = await Promise.all([groupLook(groupId), exportDrive(groupId, f.driveId)]);
   const zone = look.timeZone;
-  const { rows } = await listLedgerPage(groupId, { ...f, limit: undefined }, 100_000, zone);
+  const { rows } = await listLedgerPage(groupId, { ...f, limit: undefined }, 100_000, zone, { count: false });
   // The range is the one asked for; where open, the lines' own first and last local day.
   const day = (iso: string) => localDay(iso, zone);
   const from = f.from ?? (rows.length ? day(rows[rows.length - 1].occurredAt) : drive?.startsOn ?? day(new Date().toISOString()));

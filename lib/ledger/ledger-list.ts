@@ -3,12 +3,16 @@ import { groupTimeZone } from "@/lib/format/group-look-queries";
 import type { Tables } from "knex/types/tables";
 import type { Knex } from "knex";
 import { db } from "@/lib/db";
-import type { LedgerListQuery, LedgerPage, LedgerRow } from "./ledger-row";
+import { LEDGER_COUNT_CAP, type LedgerListQuery, type LedgerPage, type LedgerRow } from "./ledger-row";
 
 // The organiser's ledger: newest first by when it happened, then by line, so
 // an entry logged late still sits at its real place. Paged by a cursor (the
-// last line shown), so "Load more" neither skips nor repeats a line while
-// others keep logging.
+// last line shown: keyset paging on (group_id, drive_id, occurred_at desc,
+// id desc) or (group_id, occurred_at desc, id desc)), so "Load more" neither
+// skips nor repeats a line while others keep logging, and a page costs the
+// same at the end of a million lines as at their start. The first page also
+// counts the matching lines, but only up to LEDGER_COUNT_CAP: an exact count
+// read every line of a busy drive on every view.
 
 type Filter = LedgerListQuery & { personId?: string };
 
@@ -27,9 +31,24 @@ function filtered(groupId: string, f: Filter, timeZone: string): Knex.QueryBuild
     });
 }
 
-export async function listLedgerPage(groupId: string, f: Filter, pageSize: number, timeZone?: string): Promise<LedgerPage> {
+/**
+ * How many lines match, up to `cap` + 1 and no further: the inner LIMIT stops
+ * the index scan there, so a busy drive costs what a small one does.
+ */
+async function boundedCount(groupId: string, f: Filter, zone: string, cap: number): Promise<number> {
+  const inner = filtered(groupId, f, zone).select(db.raw("1")).limit(cap + 1);
+  const [row] = await db.from(inner.as("matching")).count<{ n: number }[]>({ n: "*" });
+  return row?.n ?? 0;
+}
+
+/**
+ * A page of the ledger after `f.cursor` (or the first). `count: false` (the
+ * CSV) skips the count; it is done on the first page only in any case.
+ */
+export async function listLedgerPage(groupId: string, f: Filter, pageSize: number, timeZone?: string, o: { count?: boolean } = {}): Promise<LedgerPage> {
   const zone = timeZone ?? (await groupTimeZone(groupId));
   const limit = Math.min(f.limit ?? pageSize, 100_000);
+  const counting = o.count !== false && !f.cursor;
   const [rows, count] = await Promise.all([
     filtered(groupId, f, zone)
       .join("movements as m", "m.id", "l.movement_id")
@@ -54,12 +73,13 @@ export async function listLedgerPage(groupId: string, f: Filter, pageSize: numbe
       })
       .orderBy([{ column: "l.occurred_at", order: "desc" }, { column: "l.id", order: "desc" }])
       .limit(limit + 1),
-    filtered(groupId, f, zone).count<{ n: number }[]>({ n: "*" }),
+    counting ? boundedCount(groupId, f, zone, LEDGER_COUNT_CAP) : null,
   ]);
   const lines: ListedLine[] = rows; // a join: the row type is said here
   const more = lines.length > limit;
   const page = (more ? lines.slice(0, limit) : lines).map(toRow);
-  return { rows: page, total: count[0]?.n ?? 0, nextCursor: more ? page[page.length - 1].id : null };
+  const over = count !== null && count > LEDGER_COUNT_CAP;
+  return { rows: page, total: count === null ? null : Math.min(count, LEDGER_COUNT_CAP), totalOver: over, nextCursor: more ? page[page.length - 1].id : null };
 }
 
 type Line = Tables["ledger_lines"];
@@ -102,7 +122,7 @@ function toRow(r: ListedLine): LedgerRow {
 
 /** Ledger lines of the group, newest first (as the page lists them), up to `limit`. */
 export async function listLedger(groupId: string, f: Filter, limit = 500): Promise<LedgerRow[]> {
-  return (await listLedgerPage(groupId, f, limit)).rows;
+  return (await listLedgerPage(groupId, f, limit, undefined, { count: false })).rows;
 }
 
 /** The drive's slug and dates, for the export's file name; null for another group's drive (its rows are filtered out anyway). */

@@ -29,11 +29,18 @@ export interface LedgerRow {
 /** A page of the ledger: GET /api/ledger sends the rows as its body and these in headers. */
 export interface LedgerPage {
   rows: LedgerRow[];
-  total: number;
+  /**
+   * How many lines match the filters, counted on the first page only (null on
+   * the pages after it): exact up to LEDGER_COUNT_CAP; past it the cap itself,
+   * with `totalOver` set.
+   */
+  total: number | null;
+  /** More than `total` lines match (the count stopped at the cap). */
+  totalOver: boolean;
   nextCursor: string | null;
 }
 
-export { LEDGER_PAGE, NEXT_CURSOR_HEADER, TOTAL_HEADER } from "./ledger-page";
+export { LEDGER_COUNT_CAP, LEDGER_PAGE, NEXT_CURSOR_HEADER, TOTAL_HEADER, TOTAL_OVER_HEADER } from "./ledger-page";
 
 /** The ledger list's query: the shared filters plus the cursor of "Load more" (the last line shown). */
 export const ledgerListQuerySchema = ledgerFilterSchema.extend({

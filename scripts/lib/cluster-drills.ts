@@ -3,7 +3,8 @@ import type { AppCluster } from "./cluster";
 
 // The drills of README "How it scales", run against a started AppCluster by
 // `npm run cluster -- --drill` (full size) and tests/integration/cluster-drills.test.ts (small).
-// Each returns what it measured; the caller decides pass or fail.
+// Each returns what it measured; the test asserts on it, and drillVerdicts
+// (below) judges it by the same rules for the command line.
 
 const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
@@ -178,4 +179,40 @@ export async function drillFailOver(ctx: DrillContext) {
   const [role] = await query<{ standby: boolean }>(ctx.cluster.standbyUrl, "select pg_is_in_recovery() as standby");
   const after = await haul(ctx, ctx.cluster.url);
   return { acknowledged: ids.length, foundOnPromoted: found.n, missing, promotedIsPrimary: !role.standby, writeAfterFailOver: after.status };
+}
+
+export interface DrillResults {
+  freshAcrossServers: Awaited<ReturnType<typeof drillFreshAcrossServers>>;
+  readsOnStandby: Awaited<ReturnType<typeof drillReadsOnStandby>>;
+  killOneServer: Awaited<ReturnType<typeof drillKillOneServer>>;
+  replicaDown: Awaited<ReturnType<typeof drillReplicaDown>>;
+  failOver: Awaited<ReturnType<typeof drillFailOver>>;
+}
+
+/**
+ * Each drill's pass or fail, by the same rules as tests/integration/cluster-drills.test.ts,
+ * so `npm run cluster -- --drill` says whether the cluster passed and not only what it measured.
+ */
+export function drillVerdicts(r: DrillResults): { drill: string; passed: boolean; measured: string }[] {
+  const k = r.killOneServer;
+  const f = r.failOver;
+  return [
+    { drill: "(1) a write through A is on B's next read", passed: r.freshAcrossServers.stale === 0, measured: `${r.freshAcrossServers.rounds - r.freshAcrossServers.stale} of ${r.freshAcrossServers.rounds} reads fresh` },
+    {
+      drill: "(2) public reads on the standby",
+      passed: r.readsOnStandby.standbyIsInRecovery && r.readsOnStandby.standbySessionsThatRanPublicReads > 0,
+      measured: `${r.readsOnStandby.standbySessionsThatRanPublicReads} standby session(s) ran them; standby in recovery: ${r.readsOnStandby.standbyIsInRecovery}`,
+    },
+    {
+      drill: "(3) one app server killed mid-load",
+      passed: k.errorRate < 0.01 && k.acknowledged > 5 && k.acknowledgedFound === k.acknowledged,
+      measured: `${k.errors} errors in ${k.requests} requests (${(k.errorRate * 100).toFixed(2)} %), ${k.acknowledgedFound} of ${k.acknowledged} acknowledged hauls found`,
+    },
+    { drill: "(5) standby down: public pages answer", passed: r.replicaDown.ok === r.replicaDown.reads, measured: `${r.replicaDown.ok} of ${r.replicaDown.reads} answered` },
+    {
+      drill: "(4) primary stopped, standby promoted",
+      passed: f.promotedIsPrimary && f.foundOnPromoted === f.acknowledged && f.writeAfterFailOver === 201,
+      measured: `${f.foundOnPromoted} of ${f.acknowledged} acknowledged hauls on the promoted standby; a write after: ${f.writeAfterFailOver}`,
+    },
+  ];
 }

@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { browserForFile, signedInPage } from "@/tests/support/browser";
 import { freshGroup } from "@/tests/support/ledger";
+import { testDb } from "@/tests/support/db";
 
 // The ledger screen (issue 13): an organiser undoes a volunteer's wrong entry
 // with a confirmation and a reason; line numbers show where lines are named;
@@ -58,6 +59,43 @@ describe("organiser corrections on /ledger", () => {
     expect(await page.getByLabel("Drop point").inputValue()).toBe("");
     await page.goForward();
     await expect.poll(() => page.getByLabel("Drop point").inputValue()).toBe(g.dropPointIds[0]);
+    await context.close();
+  });
+
+  it("a drive with more than 1,000 lines: 50 at a time, 'more than 1,000', Load more adds the next 50 without repeats", async () => {
+    const g = await freshGroup("e2e-paging");
+    const actorId = (await testDb()("users").where({ email: g.emails.volunteer }).first()).id;
+    // 1,050 one-can lines in three movements, through the ledger's own posting function.
+    for (const [i, n] of [400, 400, 250].entries()) {
+      const occurredAt = `2026-11-0${i + 2}T10:00:00.000Z`;
+      const lines = Array.from({ length: n }, () => ({ from: null, to: "hauled", quantity: 1, dropPointId: g.dropPointIds[0], isEstimate: true, note: "" }));
+      const p = { groupId: g.groupId, driveId: g.driveId, actorId, kind: "haul", occurredAt, day: occurredAt.slice(0, 10), details: {}, lines };
+      await testDb().raw("select ledger_post(?::jsonb)", [JSON.stringify(p)]);
+    }
+    const { context, page } = await signedInPage(browser(), g.emails.organiser, { viewport: { width: 390, height: 844 } });
+    await page.goto(`/ledger?driveId=${g.driveId}`);
+    const lines = page.locator("tr[data-line]");
+    await expect.poll(() => lines.count(), { timeout: 15_000 }).toBe(50);
+    expect(await page.getByTestId("ledger-count").innerText()).toBe("Showing 50 of more than 1,000 lines");
+    await page.getByRole("button", { name: "Load more" }).click();
+    await expect.poll(() => lines.count(), { timeout: 10_000 }).toBe(100);
+    expect(await page.getByTestId("ledger-count").innerText()).toBe("Showing 100 of more than 1,000 lines");
+    // Four-digit line numbers stay on one line at 390 px (they broke as "100 / 9").
+    const lineBoxes = await lines.first().locator("td").first().evaluate((td) => {
+      const range = document.createRange();
+      range.selectNodeContents(td);
+      return range.getClientRects().length;
+    });
+    expect(lineBoxes).toBe(1);
+    await page.getByTestId("ledger-count").scrollIntoViewIfNeeded();
+    await page.screenshot({ path: ".test-results/ledger-paging-390.png" });
+    const numbers = await lines.evaluateAll((rows) => rows.map((r) => Number(r.getAttribute("data-line"))));
+    expect(new Set(numbers).size).toBe(100);
+    // Newest first: the 250 of the 4th of November, highest line first.
+    expect(numbers).toEqual([...numbers].sort((a, b) => b - a));
+    // A filter that matches fewer than 1,000 gives the exact count again.
+    await page.goto(`/ledger?driveId=${g.driveId}&from=2026-11-04&to=2026-11-04`);
+    await expect.poll(() => page.getByTestId("ledger-count").innerText(), { timeout: 15_000 }).toBe("Showing 50 of 250 lines");
     await context.close();
   });
 });

@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { knexConfig } from "@/knexfile";
 import { generateDataset } from "@/scripts/bench/dataset";
 import { generateOtherGroups } from "@/scripts/bench/groups";
+import { LEDGER_COUNT_CAP } from "@/lib/ledger/ledger-page";
 
 // Every group-filtered hot query, EXPLAINed exactly as the app sends it: the
 // real query functions run against a database of their own with many groups
@@ -22,6 +23,10 @@ import { generateOtherGroups } from "@/scripts/bench/groups";
 //  2. with enable_seqscan = off: no sequential scan of any table at all, which
 //     shows an index serves every filter (a table small here may hold a
 //     hundred times more rows in a hosted Cantrove).
+// 3. the ledger list's pages (issue 18) read a bounded number of ledger lines,
+//    whatever the group's size: keyset paging in the index's order, and a
+//    count that stops at LEDGER_COUNT_CAP (an exact count read every line of
+//    a busy drive on every view).
 // The plans are written down in DEVELOPERS.md ("Plans of the hot queries").
 // HOT_PLANS_URL runs the same checks against a database already generated
 // (the bench's 1,000 groups: `BENCH_KEEP=1 npm run bench -- --groups`, then
@@ -61,7 +66,7 @@ let appDb: Knex;
 let lib: Lib;
 let client: pg.Client;
 let rows: Record<string, number> = {};
-const ids = { busy: { group: "", drive: "", slug: "", point: "" }, small: { group: "", drive: "", slug: "", point: "" } };
+const ids = { busy: { group: "", drive: "", slug: "", point: "", middle: "", lines: 0 }, small: { group: "", drive: "", slug: "", point: "", middle: "", lines: 0 } };
 
 /** The app's query modules, loaded against the plans database (lib/db.ts builds its one Knex from DATABASE_URL on first import). */
 async function loadLib() {
@@ -98,7 +103,10 @@ beforeAll(async () => {
     const drive = async (slug: string) => {
       const { rows: found } = await db.raw(`select d.id, d.group_id, d.slug, (select p.id from drop_points p where p.drive_id = d.id order by p.name limit 1) as point from drives d where d.slug = ?`, [slug]);
       if (!found[0]) throw new Error(`the plans database has no drive ${slug}`);
-      return { group: found[0].group_id as string, drive: found[0].id as string, slug, point: found[0].point as string };
+      // A line halfway down the drive's list: the cursor of a later page.
+      const lines = Number((await db("ledger_lines").where({ drive_id: found[0].id }).count({ n: "*" }))[0].n);
+      const middle = await db("ledger_lines").where({ drive_id: found[0].id }).orderBy([{ column: "occurred_at", order: "desc" }, { column: "id", order: "desc" }]).offset(Math.floor(lines / 2)).first("id");
+      return { group: found[0].group_id as string, drive: found[0].id as string, slug, point: found[0].point as string, middle: String(middle?.id ?? ""), lines };
     };
     ids.busy = await drive("bench-drive-1");
     ids.small = await drive("bench-group-7-drive");
@@ -194,6 +202,7 @@ const HOT: Record<string, (w: (typeof ids)[Who]) => Promise<unknown>> = {
   "ledger list, first page": (w) => lib.ledgerList.listLedgerPage(w.group, { driveId: w.drive }, 50, "Europe/London"),
   "ledger list, whole group": (w) => lib.ledgerList.listLedgerPage(w.group, {}, 50, "Europe/London"),
   "ledger list, one drop point": (w) => lib.ledgerList.listLedgerPage(w.group, { dropPointId: w.point }, 50, "Europe/London"),
+  "ledger list, a later page": (w) => lib.ledgerList.listLedgerPage(w.group, { driveId: w.drive, cursor: w.middle }, 50, "Europe/London"),
   "open hauls": (w) => lib.ledger.listHauls(w.group, w.drive, { open: true }),
   "drive chart": (w) => lib.ledger.driveChartBasics(w.group, w.drive),
   "search": (w) => lib.search.searchGroup(w.group, "bench"),
@@ -218,6 +227,30 @@ describe.each(["busy", "small"] as const)("hot queries of the %s group", (who) =
     }
     expect(problems).toEqual([]);
   });
+});
+
+/** Ledger lines read by a plan: every scan of ledger_lines, its rows times its loops (EXPLAIN ANALYZE's actual counts). */
+function ledgerLinesRead(node: PlanNode): number {
+  const own = node["Relation Name"] === "ledger_lines" && /Scan/.test(node["Node Type"]) ? (node["Actual Rows"] ?? 0) * (node["Actual Loops"] ?? 1) : 0;
+  return own + (node.Plans ?? []).reduce((sum, child) => sum + ledgerLinesRead(child), 0);
+}
+
+// A page of 50 (+1 to know there is more) through the index, each line's undo looked up, and the count's 1,001.
+const LEDGER_READ_BOUND = LEDGER_COUNT_CAP + 1 + 3 * 51;
+const LEDGER_LIST = ["ledger list, first page", "ledger list, whole group", "ledger list, a later page"];
+
+describe.each(["busy", "small"] as const)("the ledger list of the %s group", (who) => {
+  it.each(LEDGER_LIST)(`%s reads at most ${LEDGER_READ_BOUND} ledger lines, however many the group has`, async (label) => {
+    const statements = await recorded(() => HOT[label](ids[who]));
+    let read = 0;
+    for (const s of statements) read += ledgerLinesRead(await plan(s, true));
+    expect(read).toBeGreaterThan(0);
+    expect(read, `ledger lines read for one page (the drive has ${ids[who].lines})`).toBeLessThanOrEqual(LEDGER_READ_BOUND);
+  });
+});
+
+it("the busy drive has far more lines than a page and its count may read, so a full count would show", () => {
+  expect(ids.busy.lines).toBeGreaterThan(5 * LEDGER_READ_BOUND);
 });
 
 it("the check itself flags a filter no index serves and a big table read whole", async () => {

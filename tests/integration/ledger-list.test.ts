@@ -3,7 +3,8 @@ import { closeTestDb, testDb } from "@/tests/support/db";
 import { freshGroup, type FreshGroup } from "@/tests/support/ledger";
 
 // The ledger screen's list (issue 13): ordered by when it happened, then by
-// line; 500 a page with a cursor and a total; undo links both ways.
+// line; 500 a page with a cursor; the first page counts the lines up to 1,000
+// (issue 18: no exact recount on every view); undo links both ways.
 let g: FreshGroup;
 let actorId: string;
 beforeAll(async () => {
@@ -22,7 +23,7 @@ async function postLines(n: number, occurredAt: string) {
 type Row = { id: string; occurredAt: string; reversesId: string | null; reversedById: string | null; reversalReason: string | null; note: string; movementId: string };
 
 describe("GET /api/ledger", () => {
-  it("orders by when it happened, then line, and pages past 500 with a cursor and a total", async () => {
+  it("orders by when it happened, then line, and pages past 500 with a cursor; the first page has the total", async () => {
     await postLines(300, "2026-11-10T10:00:00.000Z");
     // Logged afterwards (higher line numbers) but happened earlier: must come after the first 300.
     await postLines(300, "2026-11-05T10:00:00.000Z");
@@ -35,7 +36,9 @@ describe("GET /api/ledger", () => {
     const cursor = first.headers.get("x-next-cursor");
     expect(cursor).toBe(page1[499].id);
     const second = await org.get(`/api/ledger?driveId=${g.driveId}&cursor=${cursor}`);
-    expect(second.headers.get("x-total-count")).toBe("600");
+    // Later pages count nothing: the screen keeps the first page's count.
+    expect(second.headers.get("x-total-count")).toBeNull();
+    expect(second.headers.get("x-total-over")).toBeNull();
     expect(second.headers.get("x-next-cursor")).toBeNull();
     const page2 = (await second.json()) as Row[];
     expect(page2).toHaveLength(100);
@@ -51,6 +54,27 @@ describe("GET /api/ledger", () => {
     // The body is still the contract's array; filters and the day range still apply.
     const day = await org.get(`/api/ledger?driveId=${g.driveId}&from=2026-11-05&to=2026-11-05`);
     expect(day.headers.get("x-total-count")).toBe("300");
+    expect(day.headers.get("x-total-over")).toBeNull();
+  });
+
+  it("past 1,000 matching lines the first page says 'more than 1,000', not an exact count; exactly 1,000 is exact", async () => {
+    // With the 600 lines of the test above: 1,300 on the drive, 1,000 from the 1st to the 5th of November.
+    await postLines(350, "2026-11-01T10:00:00.000Z");
+    await postLines(350, "2026-11-01T11:00:00.000Z");
+    const org = await g.client("organiser");
+    const first = await org.get(`/api/ledger?driveId=${g.driveId}&limit=50`);
+    expect(first.status).toBe(200);
+    expect(first.headers.get("x-total-count")).toBeNull();
+    expect(first.headers.get("x-total-over")).toBe("1000");
+    expect((await first.json()) as Row[]).toHaveLength(50);
+    expect(first.headers.get("x-next-cursor")).not.toBeNull();
+    // Filters narrow the count back under the cap, and it is exact again.
+    const day = await org.get(`/api/ledger?driveId=${g.driveId}&from=2026-11-01&to=2026-11-01&limit=50`);
+    expect(day.headers.get("x-total-count")).toBe("700");
+    expect(day.headers.get("x-total-over")).toBeNull();
+    const atCap = await org.get(`/api/ledger?driveId=${g.driveId}&to=2026-11-05&limit=50`);
+    expect(atCap.headers.get("x-total-count")).toBe("1000");
+    expect(atCap.headers.get("x-total-over")).toBeNull();
   });
 
   it("an organiser undoes a volunteer's entry with a reason; both lines name each other; no body still works", async () => {
