@@ -6,7 +6,8 @@ import { UUID } from "@/lib/api/path";
 import { heaterClaims } from "@/lib/ledger/balances";
 import { computeCanGrid } from "./can-grid";
 import { unitNeed } from "./need";
-import { fromMm, toMm, type CanGridInput, type LengthUnit } from "./schemas";
+import { planColumns } from "./plan-columns";
+import { fromMm, toMm, type LengthUnit, type ResolvedCanGridInput } from "./schemas";
 import type { HeaterState } from "./unit-schemas";
 import type { HeaterSummary, SavedHeater } from "./types";
 
@@ -27,13 +28,15 @@ export interface HeaterUnitRow extends SavedHeater {
   coverage: "chamber" | "full";
   glazingWidth: number;
   glazingHeight: number;
-  manifoldHeight: number | null;
-  canDiameter: number | null;
-  canLength: number | null;
-  edgeClearance: number | null;
+  // The plan as saved, every length resolved when it was written (migration 20261218010000):
+  // no default is filled in on reading, so a later change of a default leaves saved units alone.
+  manifoldHeight: number;
+  canDiameter: number;
+  canLength: number;
+  edgeClearance: number;
   holesPerCan: number;
-  frameAllowanceWidth: number | null;
-  frameAllowanceHeight: number | null;
+  frameAllowanceWidth: number;
+  frameAllowanceHeight: number;
   columns: number;
   rows: number;
   cans: number;
@@ -100,26 +103,25 @@ export async function getHeaterUnit(groupId: string, id: string): Promise<Heater
   return row;
 }
 
-/** The plan as the can-grid computation takes it, nulls left to the defaults. */
 /**
- * The unit's plan, in `unit` when given (the group's units on its pages and
- * sheets: a plan saved in inches reads in millimetres for a metric group), else as saved.
+ * The unit's plan as saved, in `unit` when given (the group's units on its pages and
+ * sheets: a plan saved in inches reads in millimetres for a metric group). Every value
+ * is the stored one; none is defaulted here.
  */
-export function planOf(u: HeaterUnitRow, unit: LengthUnit = u.unit): CanGridInput {
+export function planOf(u: Pick<HeaterUnitRow, keyof ResolvedCanGridInput>, unit: LengthUnit = u.unit): ResolvedCanGridInput {
   const len = (v: number) => (unit === u.unit ? v : fromMm(toMm(v, u.unit), unit));
-  const opt = (v: number | null) => (v === null ? undefined : len(v));
   return {
     glazingWidth: len(u.glazingWidth),
     glazingHeight: len(u.glazingHeight),
     unit,
     coverage: u.coverage,
-    manifoldHeight: opt(u.manifoldHeight),
-    canDiameter: opt(u.canDiameter),
-    canLength: opt(u.canLength),
-    edgeClearance: opt(u.edgeClearance),
+    manifoldHeight: len(u.manifoldHeight),
+    canDiameter: len(u.canDiameter),
+    canLength: len(u.canLength),
+    edgeClearance: len(u.edgeClearance),
     holesPerCan: u.holesPerCan,
-    frameAllowanceWidth: opt(u.frameAllowanceWidth),
-    frameAllowanceHeight: opt(u.frameAllowanceHeight),
+    frameAllowanceWidth: len(u.frameAllowanceWidth),
+    frameAllowanceHeight: len(u.frameAllowanceHeight),
   };
 }
 
@@ -140,7 +142,7 @@ export async function listGroupDrives(groupId: string) {
 
 export async function createHeaterUnit(
   actor: { groupId: string; userId: string },
-  input: { name: string; driveId: string; notes?: string; plan: Required<CanGridInput> },
+  input: { name: string; driveId: string; notes?: string; plan: ResolvedCanGridInput },
 ) {
   const drive = await db("drives").select("id").where({ id: input.driveId, group_id: actor.groupId }).first();
   if (!drive) {
@@ -148,26 +150,16 @@ export async function createHeaterUnit(
       fields: { driveId: "Choose one of your group's drives" },
     });
   }
-  // The counts are computed here, never taken from the client.
+  // The counts are computed here, never taken from the client; the plan is stored
+  // resolved (the schema filled in every blank), so reading it needs no default.
   const grid = computeCanGrid(input.plan);
-  const p = input.plan;
   const [row] = await db("heater_units")
     .insert({
       group_id: actor.groupId,
       drive_id: drive.id,
       builder_id: actor.userId,
       name: input.name,
-      unit: p.unit,
-      coverage: p.coverage,
-      glazing_width: p.glazingWidth,
-      glazing_height: p.glazingHeight,
-      manifold_height: p.manifoldHeight,
-      can_diameter: p.canDiameter,
-      can_length: p.canLength,
-      edge_clearance: p.edgeClearance,
-      holes_per_can: p.holesPerCan,
-      frame_allowance_width: p.frameAllowanceWidth,
-      frame_allowance_height: p.frameAllowanceHeight,
+      ...planColumns(input.plan),
       columns: grid.columns,
       rows: grid.rows,
       cans: grid.cans,

@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeTestDb, testDb } from "@/tests/support/db";
 import { freshGroup, haulAndSort, type FreshGroup } from "@/tests/support/ledger";
 import type { ApiClient } from "@/tests/support/http";
+import { planColumns } from "@/lib/heaters/plan-columns";
 
 // A unit's claims (claimed + built in) never pass its need: its cans plus its
 // share of the drive's spare, ⌈cans × 5 %⌉ (PRODUCT.md: target = Σ cans +
@@ -32,7 +33,7 @@ beforeAll(async () => {
 afterAll(closeTestDb);
 
 function unitRow(name: string) {
-  return { group_id: g.groupId, drive_id: g.driveId, name, glazing_width: 30, glazing_height: 60, unit: "in", columns: 11, rows: 12, cans: 132 };
+  return { group_id: g.groupId, drive_id: g.driveId, name, ...planColumns({ glazingWidth: 30, glazingHeight: 60, unit: "in", coverage: "chamber" }), columns: 11, rows: 12, cans: 132 };
 }
 
 const claim = (c: ApiClient, id: string, quantity: number) => c.json<Refusal>("POST", `/api/heaters/${id}/claims`, { quantity }, { "Idempotency-Key": randomUUID() });
