@@ -7,6 +7,7 @@ import { useLedgerChanged } from "@/hooks/queries/ledger";
 import { usePersonId } from "@/components/offline/person-context";
 import { deleteEntry, entriesOf, putEntry, type QueuedEntry } from "@/lib/offline/store";
 import { flushOwner, sendEntry, settle, SYNC_TAG } from "@/lib/offline/send";
+import { newKey } from "@/lib/api/idempotency-key";
 
 export type SubmitResult =
   | { kind: "done"; body: unknown }
@@ -144,7 +145,7 @@ export function useOutbox() {
         changed();
         if (outcome.kind === "refused") {
           const { message, fields, question } = outcome;
-          return { kind: "refused", message, fields, question, ...(question ? { confirm: () => attempt(confirmedCopy(item, crypto.randomUUID())) } : {}) };
+          return { kind: "refused", message, fields, question, ...(question ? { confirm: () => attempt(confirmedCopy(item, newKey())) } : {}) };
         }
         return { kind: "done", body: outcome.body };
       };
@@ -154,7 +155,7 @@ export function useOutbox() {
   );
 
   const submit = useCallback(
-    (url: string, body: unknown, label: string, stopId?: string, key: string = crypto.randomUUID()) => sendNow(newOutboxItem(url, body, label, new Date(), key), stopId),
+    (url: string, body: unknown, label: string, stopId?: string, key: string = newKey()) => sendNow(newOutboxItem(url, body, label, new Date(), key), stopId),
     [sendNow],
   );
 
@@ -164,7 +165,7 @@ export function useOutbox() {
       const entry = entries.find((e) => e.key === key);
       if (!entry) return;
       await deleteEntry(key);
-      const copy = confirmedCopy(entry, crypto.randomUUID());
+      const copy = confirmedCopy(entry, newKey());
       await putEntry({ ...entry, ...copy, state: "waiting", refusal: undefined, seq: entry.seq });
       await reload();
       void flush();
