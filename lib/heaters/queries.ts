@@ -22,8 +22,8 @@ export interface HeaterUnitRow extends SavedHeater {
   driveSlug: string | null;
   builderId: string | null;
   builderName: string | null;
-  /** The drive's spare allowance in percent (0 when the unit has no drive). */
-  sparePercent: number;
+  /** The unit's share of its drive's spare allowance in cans, 0 without a drive (db/functions/unit_need.sql: unit_spare). */
+  spare: number;
   unit: LengthUnit;
   coverage: "chamber" | "full";
   glazingWidth: number;
@@ -62,7 +62,7 @@ function unitColumns(q: Knex.QueryBuilder) {
       "d.slug as driveSlug",
       "h.builder_id as builderId",
       "u.name as builderName",
-      db.raw('coalesce(d.spare_percent, 0)::float as "sparePercent"'),
+      db.raw('unit_spare(h.cans, d.spare_percent)::int as "spare"'),
       "h.unit",
       "h.coverage",
       "h.glazing_width as glazingWidth",
@@ -183,7 +183,8 @@ export async function listHeatersWithClaims(groupId: string, which: "active" | "
       .leftJoin("drives as d", function () {
         this.on("d.id", "=", "h.drive_id").andOn("d.group_id", "=", "h.group_id");
       })
-      .select("h.id", "h.name", "h.drive_id", "h.builder_id", "h.cans", "h.state", "h.archived_at", db.raw("coalesce(d.spare_percent, 0) as spare_percent"))
+      // The unit's spare share from the rule the claim trigger enforces (db/functions/unit_need.sql).
+      .select("h.id", "h.name", "h.drive_id", "h.builder_id", "h.cans", "h.state", "h.archived_at", db.raw("unit_spare(h.cans, d.spare_percent)::int as spare"))
       .where("h.group_id", groupId)
       .whereRaw(ARCHIVED_FILTER[which])
       .orderBy("h.created_at"),
@@ -192,7 +193,7 @@ export async function listHeatersWithClaims(groupId: string, which: "active" | "
   return units.map((u) => {
     const claimed = claims[u.id]?.claimed ?? 0;
     const builtIn = claims[u.id]?.builtIn ?? 0;
-    const n = unitNeed(u.cans as number, u.spare_percent as number, claimed, builtIn);
+    const n = unitNeed(u.cans as number, u.spare as number, claimed, builtIn);
     return {
       id: u.id as string,
       name: u.name as string,

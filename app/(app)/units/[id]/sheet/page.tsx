@@ -39,7 +39,7 @@ export default async function BuildSheetPage({ params }: Props) {
   const steps = buildSteps({ ...grid, holesPerCan: plan.holesPerCan });
   // The same figures as the unit page, as they stand when the sheet is printed.
   const summary = (await listHeatersWithClaims(actor.group.id)).find((u) => u.id === unit.id);
-  const counts = summary ?? { ...unitNeed(unit.cans, unit.sparePercent, 0, 0), claimed: 0, builtIn: 0 };
+  const counts = summary ?? { ...unitNeed(unit.cans, unit.spare, 0, 0), claimed: 0, builtIn: 0 };
   const printedAt = formatMoment(new Date(), look);
   return (
     <main className="build-sheet flex flex-col gap-5 print:gap-3">
