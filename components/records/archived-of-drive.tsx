@@ -44,7 +44,8 @@ function shelves(archived: ArchivedOfDrive, look: Look): { kind: RecordKind; tit
       total: archived.totals.photos,
       items: archived.photos.map((p, i) => {
         const of = p.of === "fillReport" ? `a fill report at ${p.dropPointName}` : `the bin at ${p.dropPointName}`;
-        return { id: p.id, text: p.dropPointName, name: `archived photo ${i + 1}, of ${of}`, photo: { url: p.url, alt: `Archived photo of ${of}` } };
+        const text = p.of === "fillReport" ? `Fill report photo · ${p.dropPointName}` : p.dropPointName;
+        return { id: p.id, text, name: `archived photo ${i + 1}, of ${of}`, photo: { url: p.url, alt: `Archived photo of ${of}` } };
       }),
     },
   ].filter((s) => s.total > 0);
@@ -77,8 +78,11 @@ export function ArchivedOfDriveCard({ archived, look }: { archived: ArchivedOfDr
                 {s.items.map((item) => (
                   <li key={item.id} className="py-2">
                     {item.photo ? (
-                      // eslint-disable-next-line @next/next/no-img-element -- photos come from the upload host at their own size; next/image would proxy them through the app
-                      <img src={item.photo.url} alt={item.photo.alt} className="h-24 w-auto rounded-lg border border-paper-edge" />
+                      <figure className="flex flex-col gap-1">
+                        {/* eslint-disable-next-line @next/next/no-img-element -- photos come from the upload host at their own size; next/image would proxy them through the app */}
+                        <img src={item.photo.url} alt={item.photo.alt} className="h-24 w-fit rounded-lg border border-paper-edge" />
+                        <figcaption className="text-sm text-ink-soft">{item.text}</figcaption>
+                      </figure>
                     ) : (
                       <span>{item.text}</span>
                     )}

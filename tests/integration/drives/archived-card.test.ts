@@ -51,6 +51,7 @@ describe("the drive's Archived card", () => {
     const html = await card();
     expect(html).toContain("Archived photo of a fill report at Archived card drive porch");
     expect(html).toContain("Archived photo of the bin at Archived card drive porch");
+    expect(html).toContain("Fill report photo · Archived card drive porch");
     expect(html).not.toContain("Showing");
 
     expect((await post(`/api/photos/${reportPhoto}/restore`)).status).toBe(200);
