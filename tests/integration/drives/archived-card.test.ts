@@ -33,16 +33,21 @@ async function photo(purpose: "drop-point-photo" | "fill-report-photo", subjectI
   const [row] = await testDb()("files")
     .insert({ group_id: g.groupId, key, url: `http://127.0.0.1/f/${key}`, name: "bin.png", size: 10, mime: "image/png", purpose, subject_id: subjectId })
     .returning("id");
-  return row.id as string;
+  return { id: row.id as string, url: `http://127.0.0.1/f/${key}` };
 }
 
 describe("the drive's Archived card", () => {
   it("lists an archived photo of a fill report as well as a drop point's, and restores it", async () => {
     const [report] = await testDb()("fill_reports").insert({ group_id: g.groupId, drop_point_id: pointId, level: 50, note: "card test" }).returning("id");
-    const reportPhoto = await photo("fill-report-photo", report.id);
+    const { id: reportPhoto, url: reportPhotoUrl } = await photo("fill-report-photo", report.id);
     await testDb()("fill_reports").where({ id: report.id }).update({ photo_file_id: reportPhoto });
-    const pointPhoto = await photo("drop-point-photo", pointId);
+    const { id: pointPhoto } = await photo("drop-point-photo", pointId);
+    // The drive's fill-report list offers a report's photo as a "See the photo" link.
+    const offered = async () => (await (await org.get(`/organise/drives/${driveId}`)).text()).includes(`href="${reportPhotoUrl}" class="tap">See the photo`);
+    expect(await offered()).toBe(true);
     expect((await post(`/api/photos/${reportPhoto}/archive`)).status).toBe(200);
+    // Archived, it is no longer offered with its report in the drive's list.
+    expect(await offered()).toBe(false);
     expect((await post(`/api/photos/${pointPhoto}/archive`)).status).toBe(200);
 
     const shelf = await archived();
@@ -56,6 +61,7 @@ describe("the drive's Archived card", () => {
 
     expect((await post(`/api/photos/${reportPhoto}/restore`)).status).toBe(200);
     expect((await archived()).photos.map((p) => p.id)).toEqual([pointPhoto]);
+    expect(await offered()).toBe(true);
   });
 
   it("says it shows 100 of N when more fill reports are archived than it lists", async () => {
