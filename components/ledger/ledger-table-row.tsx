@@ -7,6 +7,7 @@ import { useFormat } from "@/hooks/use-look";
 import { entryLabel, kindLabel, lineLabel, moveLabel, reasonLabel } from "@/lib/ledger/labels";
 import { sentLabel } from "@/lib/ledger/entry-time";
 import type { LedgerRow } from "@/lib/ledger/ledger-row";
+import { newKey } from "@/lib/api/idempotency-key";
 
 const cell = "px-2 py-1 align-top";
 
@@ -69,7 +70,7 @@ function UndoForm({ row, lines, onClose }: { row: LedgerRow; lines: string[]; on
       className="flex flex-col gap-2"
       onSubmit={(e) => {
         e.preventDefault();
-        if (reason.trim()) undo.mutate({ movementId: row.movementId, reason, idempotencyKey: crypto.randomUUID() });
+        if (reason.trim()) undo.mutate({ movementId: row.movementId, reason, idempotencyKey: newKey() });
       }}
     >
       <p className="font-semibold">

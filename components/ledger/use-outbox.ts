@@ -8,6 +8,7 @@ import { usePersonGroup, usePersonId } from "@/components/offline/person-context
 import { deleteEntry, entriesOf, putEntry, type QueuedEntry } from "@/lib/offline/store";
 import { flushOwner, sendEntry, settle, SYNC_TAG } from "@/lib/offline/send";
 import { correctedCopy } from "@/lib/offline/fix";
+import { newKey } from "@/lib/api/idempotency-key";
 
 export type SubmitResult =
   | { kind: "done"; body: unknown }
@@ -148,7 +149,7 @@ export function useOutbox() {
         changed();
         if (outcome.kind === "refused") {
           const { message, fields, question } = outcome;
-          return { kind: "refused", message, fields, question, ...(question ? { confirm: () => attempt(confirmedCopy(item, crypto.randomUUID())) } : {}) };
+          return { kind: "refused", message, fields, question, ...(question ? { confirm: () => attempt(confirmedCopy(item, newKey())) } : {}) };
         }
         return { kind: "done", body: outcome.body };
       };
@@ -158,7 +159,7 @@ export function useOutbox() {
   );
 
   const submit = useCallback(
-    (url: string, body: unknown, label: string, stopId?: string, key: string = crypto.randomUUID()) => sendNow(newOutboxItem(url, body, label, new Date(), key), stopId),
+    (url: string, body: unknown, label: string, stopId?: string, key: string = newKey()) => sendNow(newOutboxItem(url, body, label, new Date(), key), stopId),
     [sendNow],
   );
 
@@ -168,7 +169,7 @@ export function useOutbox() {
       const entry = entries.find((e) => e.key === key);
       if (!entry) return;
       await deleteEntry(key);
-      const copy = confirmedCopy(entry, crypto.randomUUID());
+      const copy = confirmedCopy(entry, newKey());
       await putEntry({ ...entry, ...copy, state: "waiting", refusal: undefined, seq: entry.seq });
       await reload();
       void flush();
@@ -181,7 +182,7 @@ export function useOutbox() {
     async (key: string, values: Record<string, number | null>) => {
       const entry = entries.find((e) => e.key === key && e.state === "refused");
       if (!entry) return;
-      const copy = correctedCopy(entry, values, crypto.randomUUID());
+      const copy = correctedCopy(entry, values, newKey());
       await putEntry({ ...entry, ...copy, state: "waiting", refusal: undefined, seq: entry.seq });
       await deleteEntry(key);
       await reload();

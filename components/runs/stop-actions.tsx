@@ -13,12 +13,8 @@ import { NUMBER_SPECS, parseNumberInputs } from "@/lib/forms/number-input";
 import { Notice } from "@/components/ui/notice";
 import { haulDayMismatch } from "@/lib/drives/opening-hours";
 import { formatter } from "@/lib/format";
+import { newKey } from "@/lib/api/idempotency-key";
 
-function newKey(): string {
-  // randomUUID needs a secure context; plain-HTTP previews get a random key of the same strength.
-  if (typeof crypto.randomUUID === "function") return crypto.randomUUID();
-  return Array.from(crypto.getRandomValues(new Uint8Array(16)), (b) => b.toString(16).padStart(2, "0")).join("");
-}
 
 /** The run's offline queue (components/ledger/use-outbox.ts): with no signal, a stop's haul or skip waits there. */
 export type QueueEntry = (url: string, body: unknown, label: string, stopId?: string, key?: string) => Promise<unknown>;

@@ -4,11 +4,8 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { FormError } from "@/components/ui/field";
 import { useUndoStopHaul, useUnskipStop } from "@/hooks/queries/runs";
+import { newKey } from "@/lib/api/idempotency-key";
 
-function newKey(): string {
-  if (typeof crypto.randomUUID === "function") return crypto.randomUUID();
-  return Array.from(crypto.getRandomValues(new Uint8Array(16)), (b) => b.toString(16).padStart(2, "0")).join("");
-}
 
 /** A skipped stop goes back on the run, pending, to be logged or skipped again. */
 export function UnskipStop({ runId, stopId, dropPointName }: { runId: string; stopId: string; dropPointName: string }) {

@@ -28,9 +28,9 @@ $$;
 -- A unit's glazing changes (issue 16): p = { groupId, driveId, unit: { id }, plan: { the heater_units
 -- columns of the plan, columns, rows, cans } }, the counts computed by the caller from the plan
 -- (lib/heaters/can-grid.ts). Under the drive's and the unit's locks it refuses (CT409) an installed
--- unit, and a grid whose need (cans + ⌈cans × spare % / 100⌉, the rule of the need trigger in
--- migration 20261203030000) would fall below what is already claimed and built in, or whose cans
--- would be fewer than are built in. The drive's target follows, being Σ cans of its units.
+-- unit, and a grid whose need (cans + unit_spare, db/functions/unit_need.sql, as the need trigger
+-- counts it) would fall below what is already claimed and built in, or whose cans would be fewer
+-- than are built in. The drive's target follows, being Σ cans of its units.
 create or replace function heater_unit_glazing(p jsonb) returns jsonb language plpgsql as $$
 declare
   v_unit heater_units := heater_unit_lock(p, 'heater_unit_glazing');
@@ -46,7 +46,7 @@ begin
   select coalesce(sum(quantity) filter (where stage = 'claimed'), 0), coalesce(sum(quantity) filter (where stage = 'builtIn'), 0)
     into v_claimed, v_built from stage_balances where heater_unit_id = v_unit.id;
   if v_unit.drive_id is not null then
-    select ceil(v_cans * coalesce(spare_percent, 0) / 100)::bigint into v_spare from drives where id = v_unit.drive_id;
+    select unit_spare(v_cans, spare_percent) into v_spare from drives where id = v_unit.drive_id;
   end if;
   if v_cans + v_spare < v_claimed + v_built or v_cans < v_built then
     raise exception 'heater_unit_glazing: below claims' using errcode = 'CT409',

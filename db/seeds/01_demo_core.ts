@@ -1,5 +1,6 @@
 import type { Knex } from "knex";
 import bcrypt from "bcryptjs";
+import { planColumns } from "../../lib/heaters/plan-columns";
 import {
   DEMO_DRIVES,
   DEMO_DROP_POINTS,
@@ -65,12 +66,15 @@ export async function seed(knex: Knex): Promise<void> {
       drive_id: drives[h.drive].id,
       builder_id: drives[h.drive].group === groups.demo ? builder : users["organiser@elsewhere.test"],
       name: h.name,
-      unit: "in",
-      coverage: h.coverage,
-      glazing_width: h.width,
-      glazing_height: h.height,
-      manifold_height: h.coverage === "full" ? 5 : null,
-      holes_per_can: 4,
+      // Stored resolved, as the app saves a plan: blanks take the defaults once, here.
+      ...planColumns({
+        glazingWidth: h.width,
+        glazingHeight: h.height,
+        unit: "in",
+        coverage: h.coverage,
+        manifoldHeight: h.coverage === "full" ? 5 : undefined,
+        holesPerCan: 4,
+      }),
       columns: h.cols,
       rows: h.rows,
       cans: h.cols * h.rows,

@@ -6,6 +6,7 @@ import type { FullBin } from "@/lib/drives/types";
 import { recordUrl, type RecordKind } from "@/lib/records/kinds";
 import { driveKeys } from "./drives";
 import type { After } from "./ledger";
+import { newKey } from "@/lib/api/idempotency-key";
 
 // The organisers' writes on drives and drop points, apart from ./drives.ts so
 // the public drive page never loads mutation code. Their pages are rendered
@@ -49,7 +50,7 @@ export function useRecordAction(after: After<unknown, RecordActionVars> = {}) {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (v: RecordActionVars) =>
-      fetchJson(recordUrl(v.kind, v.id, v.action), { method: "POST", body: v.action === "delete" ? { confirm: true } : {}, headers: { "Idempotency-Key": crypto.randomUUID() } }),
+      fetchJson(recordUrl(v.kind, v.id, v.action), { method: "POST", body: v.action === "delete" ? { confirm: true } : {}, headers: { "Idempotency-Key": newKey() } }),
     onSuccess: async (data, v) => {
       await client.invalidateQueries({ queryKey: driveKeys.all });
       await after.onSuccess?.(data, v);

@@ -7,6 +7,7 @@ import type { HeaterCreateInput, HeaterState } from "@/lib/heaters/unit-schemas"
 import type { CanGridInput } from "@/lib/heaters/schemas";
 import type { ClaimAction, ClaimResult, HeaterSummary, SavedHeater } from "@/lib/heaters/types";
 import { ledgerKeys, type After } from "./ledger";
+import { newKey } from "@/lib/api/idempotency-key";
 
 export type { ClaimAction, HeaterSummary, SavedHeater };
 
@@ -67,7 +68,7 @@ export function useMoveHeater(id: string, after: After<SavedHeater & { released:
 export function useHeaterMovement(run: (quantity: number, key: string) => Promise<unknown>, after: After<unknown, number> = {}) {
   const refresh = useRefreshUnitsAndStock();
   return useMutation({
-    mutationFn: (quantity: number) => run(quantity, crypto.randomUUID()),
+    mutationFn: (quantity: number) => run(quantity, newKey()),
     onSuccess: async (data, quantity) => {
       await refresh();
       await after.onSuccess?.(data, quantity);
@@ -95,7 +96,7 @@ export function useChangeGlazing(id: string, after: After<SavedHeater & { was: n
   const refresh = useRefreshUnitsAndStock();
   return useMutation({
     mutationFn: (plan: CanGridInput) =>
-      fetchJson<SavedHeater & { was: number }>(`/api/heaters/${id}/glazing`, { method: "POST", json: { plan }, headers: { "Idempotency-Key": crypto.randomUUID() } }),
+      fetchJson<SavedHeater & { was: number }>(`/api/heaters/${id}/glazing`, { method: "POST", json: { plan }, headers: { "Idempotency-Key": newKey() } }),
     onSuccess: async (data, plan) => {
       await refresh();
       await after.onSuccess?.(data, plan);

@@ -6,6 +6,7 @@ import { useCallback } from "react";
 import { fetchJson, fetchJsonWithHeaders } from "@/lib/api/client";
 import { LEDGER_SCREEN_PAGE, NEXT_CURSOR_HEADER, TOTAL_HEADER, TOTAL_OVER_HEADER } from "@/lib/ledger/ledger-page";
 import type { DriveStock, LedgerPage, LedgerRow, MyEntry, OpenHaul, PostedStockCount } from "@/lib/ledger/types";
+import { newKey } from "@/lib/api/idempotency-key";
 
 export type { MyEntry, OpenHaul };
 
@@ -83,7 +84,7 @@ export function useRecordRecycling<TBody extends { quantity: number }>(driveId: 
   const refresh = useLedgerChanged();
   return useMutation({
     mutationFn: (body: TBody) =>
-      fetchJson(`/api/drives/${driveId}/recycling`, { method: "POST", json: body, headers: { "idempotency-key": crypto.randomUUID() } }),
+      fetchJson(`/api/drives/${driveId}/recycling`, { method: "POST", json: body, headers: { "idempotency-key": newKey() } }),
     onSuccess: async (data, body) => {
       await after.onSuccess?.(data, body);
       await refresh();
@@ -97,7 +98,7 @@ export function usePostStockCount(driveId: string, after: After<PostedStockCount
   const refresh = useLedgerChanged();
   return useMutation({
     mutationFn: (body: unknown) =>
-      fetchJson<PostedStockCount>(`/api/drives/${driveId}/stock-counts`, { method: "POST", json: body, headers: { "idempotency-key": crypto.randomUUID() } }),
+      fetchJson<PostedStockCount>(`/api/drives/${driveId}/stock-counts`, { method: "POST", json: body, headers: { "idempotency-key": newKey() } }),
     onSuccess: async (data, body) => {
       await after.onSuccess?.(data, body);
       await refresh();

@@ -7,6 +7,7 @@ import type { RouteInputRaw } from "@/lib/runs/route-schemas";
 import type { EditRunInput } from "@/lib/runs/schemas";
 import type { RouteAnswer, RunDetail, SuggestionRow } from "@/lib/runs/types";
 import type { After } from "./ledger";
+import { newKey } from "@/lib/api/idempotency-key";
 
 export type { RouteAnswer, SuggestionRow };
 
@@ -108,11 +109,6 @@ export function useUndoStopHaul(movementId: string, idempotencyKey: string) {
   });
 }
 
-function newKey(): string {
-  // randomUUID needs a secure context; plain-HTTP previews get a random key of the same strength.
-  if (typeof crypto.randomUUID === "function") return crypto.randomUUID();
-  return Array.from(crypto.getRandomValues(new Uint8Array(16)), (b) => b.toString(16).padStart(2, "0")).join("");
-}
 
 /** Changes a run's day, volunteer or notes (PATCH: the same values again change nothing). */
 /** Changes what is named (the PATCH route's own input type): the day, the volunteer, the notes. */

@@ -122,7 +122,8 @@ export async function listFillReports(groupId: string, driveId: string, limit = 
   return db("fill_reports as f")
     .join("drop_points as p", "p.id", "f.drop_point_id")
     .leftJoin("files as fi", function () {
-      this.on("fi.id", "=", "f.photo_file_id").andOn("fi.group_id", "=", "f.group_id");
+      // An archived photo is not offered with its report; the drive's Archived card lists it instead.
+      this.on("fi.id", "=", "f.photo_file_id").andOn("fi.group_id", "=", "f.group_id").andOnNull("fi.archived_at");
     })
     .select("f.id", "f.level", "f.note", "f.alerted", "f.created_at as createdAt", "p.name as dropPointName", "fi.url as photoUrl")
     .where({ "f.group_id": groupId, "p.drive_id": driveId })

@@ -2,25 +2,12 @@
  * What a heater unit needs: its cans plus its share of the drive's spare
  * allowance (PRODUCT.md: target = Σ cans of the units + spare, default 5 %).
  * Claims (claimed + built in) never go past it; the database refuses it in
- * the same statement that posts the claim (db/migrations/20261203030000_unit_need_check.ts),
+ * the same statement that posts the claim (the trigger in db/functions/unit_need.sql),
  * and the claim form refuses it before sending, with this same message.
  * Pure; safe to import in the client.
  */
 import { formatNumber } from "./format";
 import { plural } from "@/lib/plural";
-
-/**
- * The unit's spare: cans × spare % / 100, rounded UP to a whole can, so a unit
- * never runs one can short of its share. Rounding per unit means the shares of
- * a drive's units may add up to a few cans more than the drive's own spare
- * (rounded once over Σ cans), less than one can per unit. The database rounds
- * the same way: ceil(cans * spare_percent / 100) in exact numeric arithmetic;
- * the tiny tolerance here stops float noise (10000 × 0.07 / 100 = 7.000000000000001)
- * from ever adding a can the exact sum would not.
- */
-export function unitSpare(cans: number, sparePercent: number): number {
-  return Math.max(0, Math.ceil((cans * sparePercent) / 100 - 1e-9));
-}
 
 export interface UnitNeed {
   cans: number;
@@ -31,8 +18,12 @@ export interface UnitNeed {
   remaining: number;
 }
 
-export function unitNeed(cans: number, sparePercent: number, claimed: number, builtIn: number): UnitNeed {
-  const spare = unitSpare(cans, sparePercent);
+/**
+ * The unit's need from its cans and its spare share. The share, ⌈cans × spare % / 100⌉, is worked
+ * out in one place only, the database's unit_spare (db/functions/unit_need.sql), which the claim
+ * trigger enforces; the reads select it (lib/heaters/queries.ts, lib/notify/unit-ready.ts).
+ */
+export function unitNeed(cans: number, spare: number, claimed: number, builtIn: number): UnitNeed {
   const need = cans + spare;
   return { cans, spare, need, remaining: Math.max(0, need - claimed - builtIn) };
 }

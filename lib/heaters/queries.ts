@@ -6,7 +6,8 @@ import { UUID } from "@/lib/api/path";
 import { heaterClaims } from "@/lib/ledger/balances";
 import { computeCanGrid } from "./can-grid";
 import { unitNeed } from "./need";
-import { fromMm, toMm, type CanGridInput, type LengthUnit } from "./schemas";
+import { planColumns } from "./plan-columns";
+import { fromMm, toMm, type LengthUnit, type ResolvedCanGridInput } from "./schemas";
 import type { HeaterState } from "./unit-schemas";
 import type { HeaterSummary, SavedHeater } from "./types";
 
@@ -21,19 +22,21 @@ export interface HeaterUnitRow extends SavedHeater {
   driveSlug: string | null;
   builderId: string | null;
   builderName: string | null;
-  /** The drive's spare allowance in percent (0 when the unit has no drive). */
-  sparePercent: number;
+  /** The unit's share of its drive's spare allowance in cans, 0 without a drive (db/functions/unit_need.sql: unit_spare). */
+  spare: number;
   unit: LengthUnit;
   coverage: "chamber" | "full";
   glazingWidth: number;
   glazingHeight: number;
-  manifoldHeight: number | null;
-  canDiameter: number | null;
-  canLength: number | null;
-  edgeClearance: number | null;
+  // The plan as saved, every length resolved when it was written (migration 20261218010000):
+  // no default is filled in on reading, so a later change of a default leaves saved units alone.
+  manifoldHeight: number;
+  canDiameter: number;
+  canLength: number;
+  edgeClearance: number;
   holesPerCan: number;
-  frameAllowanceWidth: number | null;
-  frameAllowanceHeight: number | null;
+  frameAllowanceWidth: number;
+  frameAllowanceHeight: number;
   columns: number;
   rows: number;
   cans: number;
@@ -59,7 +62,7 @@ function unitColumns(q: Knex.QueryBuilder) {
       "d.slug as driveSlug",
       "h.builder_id as builderId",
       "u.name as builderName",
-      db.raw('coalesce(d.spare_percent, 0)::float as "sparePercent"'),
+      db.raw('unit_spare(h.cans, d.spare_percent)::int as "spare"'),
       "h.unit",
       "h.coverage",
       "h.glazing_width as glazingWidth",
@@ -100,26 +103,25 @@ export async function getHeaterUnit(groupId: string, id: string): Promise<Heater
   return row;
 }
 
-/** The plan as the can-grid computation takes it, nulls left to the defaults. */
 /**
- * The unit's plan, in `unit` when given (the group's units on its pages and
- * sheets: a plan saved in inches reads in millimetres for a metric group), else as saved.
+ * The unit's plan as saved, in `unit` when given (the group's units on its pages and
+ * sheets: a plan saved in inches reads in millimetres for a metric group). Every value
+ * is the stored one; none is defaulted here.
  */
-export function planOf(u: HeaterUnitRow, unit: LengthUnit = u.unit): CanGridInput {
+export function planOf(u: Pick<HeaterUnitRow, keyof ResolvedCanGridInput>, unit: LengthUnit = u.unit): ResolvedCanGridInput {
   const len = (v: number) => (unit === u.unit ? v : fromMm(toMm(v, u.unit), unit));
-  const opt = (v: number | null) => (v === null ? undefined : len(v));
   return {
     glazingWidth: len(u.glazingWidth),
     glazingHeight: len(u.glazingHeight),
     unit,
     coverage: u.coverage,
-    manifoldHeight: opt(u.manifoldHeight),
-    canDiameter: opt(u.canDiameter),
-    canLength: opt(u.canLength),
-    edgeClearance: opt(u.edgeClearance),
+    manifoldHeight: len(u.manifoldHeight),
+    canDiameter: len(u.canDiameter),
+    canLength: len(u.canLength),
+    edgeClearance: len(u.edgeClearance),
     holesPerCan: u.holesPerCan,
-    frameAllowanceWidth: opt(u.frameAllowanceWidth),
-    frameAllowanceHeight: opt(u.frameAllowanceHeight),
+    frameAllowanceWidth: len(u.frameAllowanceWidth),
+    frameAllowanceHeight: len(u.frameAllowanceHeight),
   };
 }
 
@@ -140,7 +142,7 @@ export async function listGroupDrives(groupId: string) {
 
 export async function createHeaterUnit(
   actor: { groupId: string; userId: string },
-  input: { name: string; driveId: string; notes?: string; plan: Required<CanGridInput> },
+  input: { name: string; driveId: string; notes?: string; plan: ResolvedCanGridInput },
 ) {
   const drive = await db("drives").select("id").where({ id: input.driveId, group_id: actor.groupId }).first();
   if (!drive) {
@@ -148,26 +150,16 @@ export async function createHeaterUnit(
       fields: { driveId: "Choose one of your group's drives" },
     });
   }
-  // The counts are computed here, never taken from the client.
+  // The counts are computed here, never taken from the client; the plan is stored
+  // resolved (the schema filled in every blank), so reading it needs no default.
   const grid = computeCanGrid(input.plan);
-  const p = input.plan;
   const [row] = await db("heater_units")
     .insert({
       group_id: actor.groupId,
       drive_id: drive.id,
       builder_id: actor.userId,
       name: input.name,
-      unit: p.unit,
-      coverage: p.coverage,
-      glazing_width: p.glazingWidth,
-      glazing_height: p.glazingHeight,
-      manifold_height: p.manifoldHeight,
-      can_diameter: p.canDiameter,
-      can_length: p.canLength,
-      edge_clearance: p.edgeClearance,
-      holes_per_can: p.holesPerCan,
-      frame_allowance_width: p.frameAllowanceWidth,
-      frame_allowance_height: p.frameAllowanceHeight,
+      ...planColumns(input.plan),
       columns: grid.columns,
       rows: grid.rows,
       cans: grid.cans,
@@ -191,7 +183,8 @@ export async function listHeatersWithClaims(groupId: string, which: "active" | "
       .leftJoin("drives as d", function () {
         this.on("d.id", "=", "h.drive_id").andOn("d.group_id", "=", "h.group_id");
       })
-      .select("h.id", "h.name", "h.drive_id", "h.builder_id", "h.cans", "h.state", "h.archived_at", db.raw("coalesce(d.spare_percent, 0) as spare_percent"))
+      // The unit's spare share from the rule the claim trigger enforces (db/functions/unit_need.sql).
+      .select("h.id", "h.name", "h.drive_id", "h.builder_id", "h.cans", "h.state", "h.archived_at", db.raw("unit_spare(h.cans, d.spare_percent)::int as spare"))
       .where("h.group_id", groupId)
       .whereRaw(ARCHIVED_FILTER[which])
       .orderBy("h.created_at"),
@@ -200,7 +193,7 @@ export async function listHeatersWithClaims(groupId: string, which: "active" | "
   return units.map((u) => {
     const claimed = claims[u.id]?.claimed ?? 0;
     const builtIn = claims[u.id]?.builtIn ?? 0;
-    const n = unitNeed(u.cans as number, u.spare_percent as number, claimed, builtIn);
+    const n = unitNeed(u.cans as number, u.spare as number, claimed, builtIn);
     return {
       id: u.id as string,
       name: u.name as string,

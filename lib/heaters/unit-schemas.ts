@@ -54,11 +54,8 @@ export const claimMoveInputSchema = z.object(
 );
 export type ClaimMoveInput = z.infer<typeof claimMoveInputSchema>;
 
-/** Archiving or restoring a unit takes no fields; anything sent is refused so a typo is not taken as a choice. */
-export const heaterArchiveInputSchema = z.object({}).strict();
-
-/** GET /api/heaters: `archived=1` lists the archived units only; without it, the active ones. */
-export const heaterListQuerySchema = z.object({ archived: z.enum(["0", "1"], { error: "archived is 0 or 1" }).optional() });
+// Archiving or restoring a unit, and GET /api/heaters?archived=1, take the inputs every record
+// does (lib/records/schemas.ts: recordArchiveInput, shelfQuery).
 
 /** POST /api/heaters/{id}/glazing: the unit's new plan (issue 16); its cans are recomputed from it on the server. */
 export const heaterGlazingInputSchema = z.object({ plan: canGridInputSchema }, { error: "Send the unit's new plan" }).strict();

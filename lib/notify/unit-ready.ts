@@ -11,7 +11,8 @@ interface Candidate {
   groupId: string;
   unitName: string;
   cans: number;
-  sparePercent: number;
+  /** The unit's spare share in cans (unit_spare, db/functions/unit_need.sql). */
+  spare: number;
   driveName: string;
   userId: string;
   email: string;
@@ -30,7 +31,7 @@ interface Candidate {
  */
 async function candidates(groupIds?: readonly string[]): Promise<Candidate[]> {
   const { rows } = await db.raw(
-    `select h.id as "unitId", h.group_id as "groupId", h.name as "unitName", h.cans, d.spare_percent as "sparePercent",
+    `select h.id as "unitId", h.group_id as "groupId", h.name as "unitName", h.cans, unit_spare(h.cans, d.spare_percent)::int as spare,
             d.name as "driveName", u.id as "userId", u.email::text as email, u.name as "userName",
             coalesce((select sum(b.quantity) from stage_balances b where b.heater_unit_id = h.id and b.stage = 'claimed'), 0)::int as "unitClaimed",
             coalesce((select sum(b.quantity) from stage_balances b where b.heater_unit_id = h.id and b.stage = 'builtIn'), 0)::int as "unitBuiltIn",
@@ -64,7 +65,7 @@ export function readyPunched(punched: number, driveClaimed: number): number {
 export async function sendUnitReadyNotes(groupIds?: readonly string[]): Promise<number> {
   let sent = 0;
   for (const c of await candidates(groupIds)) {
-    const { remaining } = unitNeed(c.cans, c.sparePercent, c.unitClaimed, c.unitBuiltIn);
+    const { remaining } = unitNeed(c.cans, c.spare, c.unitClaimed, c.unitBuiltIn);
     const ready = readyPunched(c.punched, c.driveClaimed);
     if (remaining <= 0 || ready < remaining) continue;
     const mail = unitReadyMail({

@@ -7,6 +7,7 @@ import { testDb } from "@/tests/support/db";
 import { DEMO } from "@/tests/support/env";
 import { demoFixtureForFile } from "@/tests/support/fixtures";
 import { signedIn, type ApiClient } from "@/tests/support/http";
+import { planColumns } from "@/lib/heaters/plan-columns";
 
 // Issue 16 in the browser: an organiser archives a drop point (it leaves the
 // drive's list and the public map), restores it from the drive's "Archived"
@@ -28,7 +29,7 @@ beforeAll(async () => {
   const [point] = await testDb()("drop_points").insert({ group_id: f.demoGroupId, drive_id: f.demoDriveId, name: POINT, address: "Nowhere Lane 1", lat: 47.21, lng: -8.01 }).returning("id");
   pointId = point.id;
   const [unit] = await testDb()("heater_units")
-    .insert({ group_id: f.demoGroupId, drive_id: f.demoDriveId, builder_id: organiser.id, name: "Glazing test unit", glazing_width: 30, glazing_height: 60, unit: "in", columns: 11, rows: 12, cans: 132 })
+    .insert({ group_id: f.demoGroupId, drive_id: f.demoDriveId, builder_id: organiser.id, name: "Glazing test unit", ...planColumns({ glazingWidth: 30, glazingHeight: 60, unit: "in", coverage: "chamber" }), columns: 11, rows: 12, cans: 132 })
     .returning("id");
   unitId = unit.id;
   const claim = await api.json("POST", `/api/heaters/${unitId}/claims`, { quantity: 100 }, { "Idempotency-Key": randomUUID() });

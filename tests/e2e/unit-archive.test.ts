@@ -4,6 +4,7 @@ import { newPage, signInAs, browserForFile } from "@/tests/support/browser";
 import { DEMO } from "@/tests/support/env";
 import { demoFixtureForFile } from "@/tests/support/fixtures";
 import { testDb } from "@/tests/support/db";
+import { planColumns } from "@/lib/heaters/plan-columns";
 
 // Issue 16: a throwaway test unit raised the drive's target for good. An
 // organiser archives it from its page (with a confirmation) and sees the
@@ -36,7 +37,7 @@ describe("an organiser archives a test unit", () => {
     const before = await driveTarget();
     const organiser = await testDb()("users").where({ email: DEMO.organiser }).first("id");
     const [row] = await testDb()("heater_units")
-      .insert({ group_id: f.demoGroupId, drive_id: f.demoDriveId, builder_id: organiser.id, name: "Throwaway test unit", glazing_width: 30, glazing_height: 60, unit: "in", columns: 11, rows: 12, cans: 132 })
+      .insert({ group_id: f.demoGroupId, drive_id: f.demoDriveId, builder_id: organiser.id, name: "Throwaway test unit", ...planColumns({ glazingWidth: 30, glazingHeight: 60, unit: "in", coverage: "chamber" }), columns: 11, rows: 12, cans: 132 })
       .returning("id");
     unitId = row.id;
     const raised = await driveTarget();

@@ -5,6 +5,7 @@ import pg from "pg";
 import knex from "knex";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { knexConfig } from "@/knexfile";
+import { adminQuery, databaseUrl } from "@/tests/support/db";
 
 // npm run backup, then npm run restore into a fresh database: every table's
 // rows must come back identical (ledger lines and running totals included).
@@ -12,24 +13,13 @@ const root = path.resolve(import.meta.dirname, "../..");
 const dir = mkdtempSync(path.join(process.env.CANTROVE_RUN_DIR ?? "/tmp", "backup-"));
 // A database of its own (migrated and seeded here), so tests writing to the
 // shared test database in parallel cannot change it between dump and compare.
-const shared = process.env.DATABASE_URL!;
 const sourceName = `backup_src_${Date.now()}`;
 const targetName = `restore_${Date.now()}`;
-const source = shared.replace(/\/[^/]+$/, `/${sourceName}`);
-const target = shared.replace(/\/[^/]+$/, `/${targetName}`);
-
-async function admin(sql: string) {
-  const client = new pg.Client({ connectionString: shared.replace(/\/[^/]+$/, "/postgres") });
-  await client.connect();
-  try {
-    await client.query(sql);
-  } finally {
-    await client.end();
-  }
-}
+const source = databaseUrl(sourceName);
+const target = databaseUrl(targetName);
 
 beforeAll(async () => {
-  await admin(`create database "${sourceName}"`);
+  await adminQuery(`create database "${sourceName}"`);
   const db = knex(knexConfig(source));
   try {
     await db.migrate.latest({ directory: path.join(root, "db/migrations") });
@@ -60,8 +50,8 @@ async function tableDigests(url: string): Promise<Record<string, string>> {
 }
 
 afterAll(async () => {
-  await admin(`drop database if exists "${targetName}"`);
-  await admin(`drop database if exists "${sourceName}"`);
+  await adminQuery(`drop database if exists "${targetName}"`);
+  await adminQuery(`drop database if exists "${sourceName}"`);
   rmSync(dir, { recursive: true, force: true });
 });
 
@@ -76,7 +66,7 @@ describe("backup and restore", () => {
     });
     expect(backup.status, backup.stderr).toBe(0);
 
-    await admin(`create database "${targetName}"`);
+    await adminQuery(`create database "${targetName}"`);
 
     const restore = spawnSync("node", ["--import", "tsx", "scripts/restore.ts", file], {
       cwd: root,

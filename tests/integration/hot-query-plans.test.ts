@@ -4,6 +4,7 @@ import pg from "pg";
 import knex, { type Knex } from "knex";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { knexConfig } from "@/knexfile";
+import { adminQuery, databaseUrl } from "@/tests/support/db";
 import { generateDataset } from "@/scripts/bench/dataset";
 import { generateOtherGroups } from "@/scripts/bench/groups";
 import { LEDGER_COUNT_CAP } from "@/lib/ledger/ledger-page";
@@ -32,22 +33,11 @@ import { LEDGER_COUNT_CAP } from "@/lib/ledger/ledger-page";
 // (the bench's 1,000 groups: `BENCH_KEEP=1 npm run bench -- --groups`, then
 // its cantrove_bench_many); HOT_PLANS_OUT writes every plan to that file.
 const root = path.resolve(import.meta.dirname, "../..");
-const shared = process.env.DATABASE_URL!;
 const given = process.env.HOT_PLANS_URL;
 const name = `plans_${Date.now()}`;
-const url = given ?? shared.replace(/\/[^/]+$/, `/${name}`);
+const url = given ?? databaseUrl(name);
 const dump: { who: string; label: string; sql: string; plan: string }[] = [];
 const BIG_ROWS = 10_000;
-
-async function admin(sql: string) {
-  const client = new pg.Client({ connectionString: shared.replace(/\/[^/]+$/, "/postgres") });
-  await client.connect();
-  try {
-    await client.query(sql);
-  } finally {
-    await client.end();
-  }
-}
 
 type Recorded = { sql: string; bindings: unknown[] };
 type PlanNode = {
@@ -91,7 +81,7 @@ async function loadLib() {
 }
 
 beforeAll(async () => {
-  if (!given) await admin(`create database "${name}"`);
+  if (!given) await adminQuery(`create database "${name}"`);
   const db = knex(knexConfig(url));
   try {
     if (!given) {
@@ -126,7 +116,7 @@ afterAll(async () => {
   await appDb?.destroy();
   for (const [k, v] of Object.entries(saved)) if (v === undefined) delete process.env[k];
   else process.env[k] = v;
-  if (!given) await admin(`drop database if exists "${name}" with (force)`);
+  if (!given) await adminQuery(`drop database if exists "${name}" with (force)`);
   if (process.env.HOT_PLANS_OUT) writeFileSync(process.env.HOT_PLANS_OUT, dump.map((d) => `## ${d.who}: ${d.label}\n${d.sql}\n${d.plan}\n`).join("\n"));
 }, 60_000);
 

@@ -1,4 +1,5 @@
 import knex, { type Knex } from "knex";
+import pg from "pg";
 import { afterAll, beforeAll } from "vitest";
 
 // Direct database access for fixtures and assertions in integration tests.
@@ -35,4 +36,20 @@ export function forTheFile<T extends object>(make: () => Promise<T>): T {
   });
   afterAll(closeTestDb);
   return shared;
+}
+
+/** Runs one statement on the test server's `postgres` database (creating or dropping a database of a test's own). */
+export async function adminQuery(sql: string): Promise<void> {
+  const client = new pg.Client({ connectionString: process.env.DATABASE_URL!.replace(/\/[^/]+$/, "/postgres") });
+  await client.connect();
+  try {
+    await client.query(sql);
+  } finally {
+    await client.end();
+  }
+}
+
+/** The address of database `name` on the test server. */
+export function databaseUrl(name: string): string {
+  return process.env.DATABASE_URL!.replace(/\/[^/]+$/, `/${name}`);
 }

@@ -1,6 +1,7 @@
 import { randomUUID } from "node:crypto";
 import { forTheFile, testDb } from "./db";
 import { signedIn, type ApiClient } from "./http";
+import { planColumns } from "@/lib/heaters/plan-columns";
 
 // A group of its own for a ledger test: its balances and calibration start at
 // zero, whatever the demo or other test files have written.
@@ -43,7 +44,7 @@ export async function freshGroup(label = "ledger"): Promise<FreshGroup> {
   const heaterIds: string[] = [];
   for (const name of ["Test unit A", "Test unit B"]) {
     const [h] = await db("heater_units")
-      .insert({ group_id: group.id, drive_id: drive.id, builder_id: userIds.builder, name, glazing_width: 30, glazing_height: 60, unit: "in", columns: 11, rows: 12, cans: 132, holes_per_can: 4 })
+      .insert({ group_id: group.id, drive_id: drive.id, builder_id: userIds.builder, name, ...planColumns({ glazingWidth: 30, glazingHeight: 60, unit: "in", coverage: "chamber" }), columns: 11, rows: 12, cans: 132 })
       .returning("id");
     heaterIds.push(h.id);
   }

@@ -2,6 +2,7 @@ import { randomBytes } from "node:crypto";
 import bcrypt from "bcryptjs";
 import type { TestDb } from "./db";
 import { DEMO_PASSWORD } from "./env";
+import { planColumns } from "@/lib/heaters/plan-columns";
 
 // A group of its own for a test that must see its ledger untouched by the
 // other test files running at the same time against the same database.
@@ -32,7 +33,7 @@ export async function createOwnGroup(db: TestDb, label: string, names: { drive?:
     .insert({ group_id: group.id, drive_id: drive.id, name: names.dropPoint ?? `${label} porch`, lat: 52.0, lng: -1.6, hours: "Daily 8-20" })
     .returning("id");
   const [heater] = await db("heater_units")
-    .insert({ group_id: group.id, drive_id: drive.id, builder_id: ids.builder, name: names.heater ?? `${label} heater`, glazing_width: 900, glazing_height: 1800, columns: 13, rows: 14, cans: 182 })
+    .insert({ group_id: group.id, drive_id: drive.id, builder_id: ids.builder, name: names.heater ?? `${label} heater`, ...planColumns({ glazingWidth: 900, glazingHeight: 1800, unit: "mm", coverage: "chamber" }), columns: 13, rows: 14, cans: 182 })
     .returning("id");
   return { groupId: group.id, driveId: drive.id, driveSlug: drive.slug, dropPointId: point.id, heaterId: heater.id, emails };
 }

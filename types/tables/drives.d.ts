@@ -87,18 +87,19 @@ declare module "knex/types/tables" {
     coverage: string;
     glazing_width: number;
     glazing_height: number;
-    manifold_height: number | null;
-    can_diameter: number | null;
-    can_length: number | null;
-    edge_clearance: number | null;
+    /** The plan's lengths are stored resolved, never NULL (migration 20261218010000). */
+    manifold_height: number;
+    can_diameter: number;
+    can_length: number;
+    edge_clearance: number;
     holes_per_can: number;
     columns: number;
     rows: number;
     cans: number;
     state: HeaterState;
     created_at: Date;
-    frame_allowance_width: number | null;
-    frame_allowance_height: number | null;
+    frame_allowance_width: number;
+    frame_allowance_height: number;
     notes: string;
     state_changed_at: Date;
     /** Set while archived (migration 20261207010000). */

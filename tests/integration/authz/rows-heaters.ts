@@ -1,6 +1,7 @@
 import { testDb } from "@/tests/support/db";
 import { everyone, expects, row } from "./row";
 import type { AuthzRow } from "./types";
+import { planColumns } from "@/lib/heaters/plan-columns";
 
 // A unit the demo organiser builds, counted against no drive so no target or
 // balance moves: the demo builder may not act on it (403 before the body is
@@ -13,7 +14,7 @@ async function organisersUnitId(): Promise<string> {
   const organiser = await db("users").where({ email: "organiser@cantrove.test" }).first("id");
   const group = await db("groups").where({ slug: "larkhollow-warm-rooms" }).first("id");
   const [row] = await db("heater_units")
-    .insert({ group_id: group.id, drive_id: null, builder_id: organiser.id, name, glazing_width: 30, glazing_height: 60, unit: "in", columns: 11, rows: 12, cans: 132 })
+    .insert({ group_id: group.id, drive_id: null, builder_id: organiser.id, name, ...planColumns({ glazingWidth: 30, glazingHeight: 60, unit: "in", coverage: "chamber" }), columns: 11, rows: 12, cans: 132 })
     .returning("id");
   return row.id;
 }

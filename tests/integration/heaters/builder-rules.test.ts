@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeTestDb, testDb } from "@/tests/support/db";
 import { freshGroup, haulAndSort, type FreshGroup } from "@/tests/support/ledger";
 import type { ApiClient } from "@/tests/support/http";
+import { planColumns } from "@/lib/heaters/plan-columns";
 
 // Builders act only on the units they build; organisers keep every power.
 // (Issue 12 finding 7: a builder released cans from the organiser's unit,
@@ -86,7 +87,7 @@ describe("an organiser", () => {
 
   it("and a unit whose builder left is the organisers' alone", async () => {
     const [orphan] = await testDb()("heater_units")
-      .insert({ group_id: g.groupId, drive_id: g.driveId, builder_id: null, name: "Orphan unit", glazing_width: 30, glazing_height: 60, unit: "in", columns: 11, rows: 12, cans: 132 })
+      .insert({ group_id: g.groupId, drive_id: g.driveId, builder_id: null, name: "Orphan unit", ...planColumns({ glazingWidth: 30, glazingHeight: 60, unit: "in", coverage: "chamber" }), columns: 11, rows: 12, cans: 132 })
       .returning("id");
     const refused = await bld.json<Err>("POST", `/api/heaters/${orphan.id}/claims`, { quantity: 1 });
     expect(refused.status).toBe(403);

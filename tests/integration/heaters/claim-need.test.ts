@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeTestDb, testDb } from "@/tests/support/db";
 import { freshGroup, haulAndSort, type FreshGroup } from "@/tests/support/ledger";
 import type { ApiClient } from "@/tests/support/http";
+import { planColumns } from "@/lib/heaters/plan-columns";
 
 // A unit's claims (claimed + built in) never pass its need: its cans plus its
 // share of the drive's spare, ⌈cans × 5 %⌉ (PRODUCT.md: target = Σ cans +
@@ -13,7 +14,7 @@ let org: ApiClient;
 let units: string[];
 
 type Refusal = { error: { code: string; message: string; remaining: number } };
-type Heater = { id: string; cans: number; claimed: number; builtIn: number; state: string; need: number; remaining: number };
+type Heater = { id: string; cans: number; claimed: number; builtIn: number; state: string; spare: number; need: number; remaining: number };
 type Stock = { claimed: number; unclaimed: number };
 
 beforeAll(async () => {
@@ -32,7 +33,7 @@ beforeAll(async () => {
 afterAll(closeTestDb);
 
 function unitRow(name: string) {
-  return { group_id: g.groupId, drive_id: g.driveId, name, glazing_width: 30, glazing_height: 60, unit: "in", columns: 11, rows: 12, cans: 132 };
+  return { group_id: g.groupId, drive_id: g.driveId, name, ...planColumns({ glazingWidth: 30, glazingHeight: 60, unit: "in", coverage: "chamber" }), columns: 11, rows: 12, cans: 132 };
 }
 
 const claim = (c: ApiClient, id: string, quantity: number) => c.json<Refusal>("POST", `/api/heaters/${id}/claims`, { quantity }, { "Idempotency-Key": randomUUID() });
@@ -59,6 +60,24 @@ async function balancesMatchLines(): Promise<void> {
   expect(rows.length).toBeGreaterThan(5);
   for (const r of rows) expect(Number(r.balance), `${r.hu ?? "drive"} ${r.stage}`).toBe(Number(r.lines));
 }
+
+describe("a unit's spare share (unit_spare, db/functions/unit_need.sql)", () => {
+  it("rounds cans × spare % / 100 up to a whole can, in exact arithmetic, and the list shows that figure", async () => {
+    const spare = async (cans: number, percent: number | null) =>
+      (await testDb().raw("select unit_spare(?::bigint, ?::numeric)::int as s", [cans, percent])).rows[0].s as number;
+    // 132 × 5 % = 6.6 → 7; 81 × 5 % = 4.05 → 5 (arithmetic, PRODUCT.md's 5 % default).
+    expect(await spare(132, 5)).toBe(7);
+    expect(await spare(81, 5)).toBe(5);
+    // An exact share is not rounded past itself (in floats 10000 × 0.07 / 100 is 7.000000000000001).
+    expect(await spare(100, 5)).toBe(5);
+    expect(await spare(10000, 0.07)).toBe(7);
+    expect(await spare(120, 0)).toBe(0);
+    // A unit with no drive has no share.
+    expect(await spare(132, null)).toBe(0);
+    // What GET /api/heaters answers is that figure: 132 cans at the drive's 5 % → 7 spare, 139 needed.
+    expect(await heater(units[3])).toMatchObject({ cans: 132, spare: 7, need: 139 });
+  });
+});
 
 describe("claims past a unit's need", () => {
   it("are refused with what is left: 409 {code, message, remaining}", async () => {

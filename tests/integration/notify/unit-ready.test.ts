@@ -31,8 +31,9 @@ describe("the unit-ready note", () => {
     const sentFor = async (unitId: string) => testDb()("notification_sends").where({ kind: "unitReady", key: unitId }).first();
     const subject = (name: string) => (m: { subject: string }) => m.subject === `Cans ready to claim for ${name}`;
 
-    // Each unit: 132 cans plus 5 % spare, rounded up per unit (lib/heaters/need.ts) = 139.
-    expect(unitNeed(132, 5, 0, 0).need).toBe(139);
+    // Each unit: 132 cans plus 5 % spare, rounded up per unit (unit_spare, db/functions/unit_need.sql) = 139.
+    const { spare } = (await testDb().raw("select unit_spare(132, 5)::int as spare")).rows[0];
+    expect(unitNeed(132, spare, 0, 0).need).toBe(139);
     await haulAndSort(volunteer, g.driveId, g.dropPointIds[0], 150);
     await process(volunteer, g.driveId, "good", "washed", 150);
     await process(volunteer, g.driveId, "washed", "opened", 150);

@@ -1,20 +1,14 @@
 import { describe, expect, it } from "vitest";
-import { needRefusalMessage, unitNeed, unitSpare } from "@/lib/heaters/need";
+import { needRefusalMessage, unitNeed } from "@/lib/heaters/need";
 import { mayActOnUnit, unitRefusal } from "@/lib/heaters/builder-rule";
 
 // A unit's need is its cans plus its share of the drive's spare allowance
-// (PRODUCT.md: target = Σ cans + spare, default 5 %), rounded up per unit.
+// (PRODUCT.md: target = Σ cans + spare, default 5 %). The share itself is the
+// database's unit_spare (tests/integration/heaters/claim-need.test.ts).
 describe("a unit's need", () => {
-  it("adds the spare share, rounded up to a whole can", () => {
-    // 132 × 5 % = 6.6 → 7; 81 × 5 % = 4.05 → 5 (arithmetic, PRODUCT.md's 5 % default).
-    expect(unitSpare(132, 5)).toBe(7);
-    expect(unitSpare(81, 5)).toBe(5);
-    // Exact shares are not rounded past themselves, even where floats drift (10000 × 0.07 / 100 = 7.000000000000001).
-    expect(unitSpare(100, 5)).toBe(5);
-    expect(unitSpare(10000, 0.07)).toBe(7);
-    expect(unitSpare(120, 0)).toBe(0);
-    expect(unitNeed(132, 5, 100, 20)).toEqual({ cans: 132, spare: 7, need: 139, remaining: 19 });
-    expect(unitNeed(132, 5, 130, 20).remaining).toBe(0);
+  it("adds the spare share and never goes below nothing left", () => {
+    expect(unitNeed(132, 7, 100, 20)).toEqual({ cans: 132, spare: 7, need: 139, remaining: 19 });
+    expect(unitNeed(132, 7, 130, 20).remaining).toBe(0);
   });
 
   it("says what is left in one message for the server and the form", () => {

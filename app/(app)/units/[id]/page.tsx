@@ -24,7 +24,6 @@ import { getHeaterUnit, listHeaterUnits, planOf } from "@/lib/heaters/queries";
 import { driveStock } from "@/lib/ledger/balances";
 import { listHeatersWithClaims } from "@/lib/heaters/queries";
 import { unitRefusal } from "@/lib/heaters/builder-rule";
-import { resolveCanGridInput } from "@/lib/heaters/schemas";
 import { allowedMoves } from "@/lib/heaters/states";
 
 export const metadata: Metadata = { title: "Heater unit" };
@@ -125,7 +124,7 @@ export default async function UnitPage({ params }: Props) {
         </p>
         <div className="grid gap-4 md:grid-cols-[1fr_18rem]">
           <GridFigures grid={grid} />
-          <GridPreview plan={resolveCanGridInput(plan)} grid={grid} title={`${unit.name}: ${grid.columns} by ${grid.rows} cans`} />
+          <GridPreview plan={plan} grid={grid} title={`${unit.name}: ${grid.columns} by ${grid.rows} cans`} />
         </div>
       </Card>
 

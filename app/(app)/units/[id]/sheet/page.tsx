@@ -15,7 +15,6 @@ import { groupLook } from "@/lib/format/group-look-queries";
 import { lengthUnitOf } from "@/lib/format/measures";
 import { computeMaterials } from "@/lib/heaters/materials";
 import { getHeaterUnit, planOf } from "@/lib/heaters/queries";
-import { resolveCanGridInput } from "@/lib/heaters/schemas";
 import { HEATER_STATE_LABEL } from "@/lib/heaters/unit-schemas";
 import { unitNeed } from "@/lib/heaters/need";
 import { listHeatersWithClaims } from "@/lib/heaters/queries";
@@ -35,13 +34,12 @@ export default async function BuildSheetPage({ params }: Props) {
   // Lengths in the group's units, whatever unit the plan was saved in; the time on the group's clock.
   const look = await groupLook(actor.group.id);
   const plan = planOf(unit, lengthUnitOf(look.units));
-  const resolved = resolveCanGridInput(plan);
   const grid = computeCanGrid(plan);
   const materials = computeMaterials(plan);
-  const steps = buildSteps({ ...grid, holesPerCan: resolved.holesPerCan });
+  const steps = buildSteps({ ...grid, holesPerCan: plan.holesPerCan });
   // The same figures as the unit page, as they stand when the sheet is printed.
   const summary = (await listHeatersWithClaims(actor.group.id)).find((u) => u.id === unit.id);
-  const counts = summary ?? { ...unitNeed(unit.cans, unit.sparePercent, 0, 0), claimed: 0, builtIn: 0 };
+  const counts = summary ?? { ...unitNeed(unit.cans, unit.spare, 0, 0), claimed: 0, builtIn: 0 };
   const printedAt = formatMoment(new Date(), look);
   return (
     <main className="build-sheet flex flex-col gap-5 print:gap-3">
@@ -70,7 +68,7 @@ export default async function BuildSheetPage({ params }: Props) {
             <UnitFigures c={counts} printedAt={printedAt} />
           </section>
         </div>
-        <GridDimensions plan={resolved} grid={grid} />
+        <GridDimensions plan={plan} grid={grid} />
       </div>
 
       <section className="break-inside-avoid">

@@ -2,7 +2,7 @@ import { endpoint } from "@/lib/api/endpoint";
 import { idPath } from "@/lib/api/path";
 import { setUnitArchived } from "@/lib/heaters/archive-unit";
 import { unitFor } from "@/lib/heaters/resource";
-import { heaterArchiveInputSchema } from "@/lib/heaters/unit-schemas";
+import { recordArchiveInput } from "@/lib/records/schemas";
 
 export const dynamic = "force-dynamic";
 
@@ -10,6 +10,6 @@ export const dynamic = "force-dynamic";
 // unbuilt claims given back through the ledger. 409 when cans are built into it.
 // Another group's unit is 404, another builder's 403, before the body is read.
 export const POST = endpoint(
-  { who: ["builder", "organiser"], params: idPath("That heater unit"), resource: unitFor("state"), body: heaterArchiveInputSchema },
+  { who: ["builder", "organiser"], params: idPath("That heater unit"), resource: unitFor("state"), body: recordArchiveInput },
   async ({ actor, params }) => setUnitArchived(actor, params.id, true),
 );
