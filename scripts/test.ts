@@ -31,21 +31,13 @@ async function cleanup() {
   rmSync(runDir, { recursive: true, force: true });
 }
 
-const REPORTS = [".test-results/vitest.json", ".test-results/lighthouse.json"];
-
-function summary(reports: string[]): { passed: number; failed: number } {
-  let passed = 0;
-  let failed = 0;
-  for (const file of reports) {
-    try {
-      const report = JSON.parse(readFileSync(path.join(root, file), "utf8"));
-      passed += report.numPassedTests ?? 0;
-      failed += (report.numFailedTests ?? 0) + (report.numRuntimeErrors ?? 0);
-    } catch {
-      failed += 1;
-    }
+function summary(): { passed: number; failed: number } {
+  try {
+    const report = JSON.parse(readFileSync(path.join(root, ".test-results/vitest.json"), "utf8"));
+    return { passed: report.numPassedTests ?? 0, failed: (report.numFailedTests ?? 0) + (report.numRuntimeErrors ?? 0) };
+  } catch {
+    return { passed: 0, failed: 1 };
   }
-  return { passed, failed };
 }
 
 async function main(): Promise<number> {
@@ -78,34 +70,25 @@ async function main(): Promise<number> {
   mkdirSync(path.join(root, ".test-results"), { recursive: true });
   // Asynchronous on purpose: the mail and upload fakes live in this process
   // and must keep answering while vitest runs.
-  const vitestEnv: NodeJS.ProcessEnv = {
-    ...env,
-    NODE_ENV: "test" as const,
-    // Knex loads the TypeScript migrations with Node's own import().
-    NODE_OPTIONS: `${process.env.NODE_OPTIONS ?? ""} --import tsx`.trim(),
-    CANTROVE_APP_URL: `http://127.0.0.1:${ports.app}`,
-    CANTROVE_RUN_DIR: runDir,
-    CANTROVE_TEST_PORTS: JSON.stringify(ports),
-  };
-  const vitest = (args: string[], report: string, extra: Record<string, string> = {}) =>
-    new Promise<number | null>((resolve) =>
-      spawn(path.join(root, "node_modules/.bin/vitest"), ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${report}`, ...args], {
-        cwd: root,
-        stdio: "inherit",
-        env: { ...vitestEnv, ...extra },
-      }).once("exit", (code) => resolve(code)),
-    );
-  rmSync(path.join(root, REPORTS[1]), { force: true });
-  const whole = process.argv.length <= 2;
-  let status = await vitest(process.argv.slice(2), REPORTS[0]);
-  // The whole suite ends with the Lighthouse budget (tests/e2e/lighthouse.test.ts), run alone once
-  // every other test is done: its blocking-time figures are only fair with nothing else on the CPU.
-  if (whole) {
-    console.log("\nLighthouse on a mid-range phone, with nothing else running…");
-    const lighthouse = await vitest(["tests/e2e/lighthouse.test.ts"], REPORTS[1], { LIGHTHOUSE: "1" });
-    status = status === 0 ? lighthouse : status;
-  }
-  const { passed, failed } = summary(whole ? REPORTS : REPORTS.slice(0, 1));
+  const vitest = spawn(
+    path.join(root, "node_modules/.bin/vitest"),
+    ["run", "--reporter=default", "--reporter=json", "--outputFile.json=.test-results/vitest.json", ...process.argv.slice(2)],
+    {
+      cwd: root,
+      stdio: "inherit",
+      env: {
+        ...env,
+        NODE_ENV: "test" as const,
+        // Knex loads the TypeScript migrations with Node's own import().
+        NODE_OPTIONS: `${process.env.NODE_OPTIONS ?? ""} --import tsx`.trim(),
+        CANTROVE_APP_URL: `http://127.0.0.1:${ports.app}`,
+        CANTROVE_RUN_DIR: runDir,
+        CANTROVE_TEST_PORTS: JSON.stringify(ports),
+      },
+    },
+  );
+  const status = await new Promise<number | null>((resolve) => vitest.once("exit", (code) => resolve(code)));
+  const { passed, failed } = summary();
   console.log(`\nTotal time ${((Date.now() - started) / 1000).toFixed(0)} s`);
   console.log(`${passed} passed, ${failed} failed`);
   return status === 0 && failed === 0 ? 0 : 1;
