@@ -40,7 +40,7 @@ export function LeaveGroup({ groupName, onlyOrganiser }: { groupName: string; on
             {unsent === 1 ? "it" : "them"} send first (or drop what was refused), unless you mean to lose {unsent === 1 ? "it" : "them"}.
           </p>
           <p className="mt-1">
-            <Link href="/log">See what is waiting</Link>
+            <Link href="/log" className="tap">See what is waiting</Link>
           </p>
         </Notice>
       ) : null}
