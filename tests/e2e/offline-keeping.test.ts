@@ -1,6 +1,7 @@
 import http from "node:http";
 import type { AddressInfo } from "node:net";
 import { describe, expect, it } from "vitest";
+import { kept } from "@/tests/support/offline-caches";
 import type { BrowserContext, Page } from "playwright-core";
 import { PHONE, browserForFile, newPage, signInAs } from "@/tests/support/browser";
 import { APP_URL } from "@/tests/support/env";
@@ -15,14 +16,6 @@ import { OFFLINE_TILE_BUDGET } from "@/lib/offline/tiles";
 // corrected in place; leaving a group warns about entries not yet sent.
 const browser = browserForFile();
 
-/** Cache names on this phone, and the paths in one of them. */
-async function kept(page: Page, cacheName: string) {
-  return page.evaluate(async (name) => {
-    const names = await caches.keys();
-    const paths = names.includes(name) ? (await (await caches.open(name)).keys()).map((r) => new URL(r.url).pathname) : [];
-    return { names, paths };
-  }, cacheName);
-}
 
 async function idOf(g: FreshGroup, who: "volunteer" | "volunteer2"): Promise<string> {
   return (await (await g.client(who)).json<{ user: { id: string } }>("GET", "/api/me")).body.user.id;

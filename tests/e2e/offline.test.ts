@@ -4,6 +4,7 @@ import type { AddressInfo } from "node:net";
 import os from "node:os";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
+import { kept } from "@/tests/support/offline-caches";
 import { chromium, type BrowserContext, type Page } from "playwright-core";
 import { CHROMIUM_FLAGS, PHONE, browserForFile, newPage, signInAs } from "@/tests/support/browser";
 import { APP_URL } from "@/tests/support/env";
@@ -36,14 +37,6 @@ async function setUp(): Promise<{ g: FreshGroup; runId: string; volId: string; v
   return { g, runId: run.body.id, volId, volKey: `${volId}.${g.groupId}` };
 }
 
-/** What the phone keeps, read in the page: its cache names and the paths in one person's cache. */
-async function kept(page: Page, cacheName: string) {
-  return page.evaluate(async (name) => {
-    const names = await caches.keys();
-    const paths = names.includes(name) ? (await (await caches.open(name)).keys()).map((r) => new URL(r.url).pathname) : [];
-    return { names, paths };
-  }, cacheName);
-}
 
 /** The online visit: signed in, the worker installed and in control, and the person's run and tiles kept. */
 async function visitOnline(context: BrowserContext, email: string, personKey: string, runId: string): Promise<Page> {
