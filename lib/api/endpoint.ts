@@ -134,16 +134,15 @@ function assertEnteredBy(request: Request, actor: Actor | null): void {
 export const ANSWER_FOR_HEADER = "x-cantrove-for";
 export const ANSWER_GROUP_HEADER = "x-cantrove-group";
 function markedFor(response: Response, actor: Actor): Response {
+  const mark = (r: Response) => {
+    r.headers.set(ANSWER_FOR_HEADER, actor.user.id);
+    r.headers.set(ANSWER_GROUP_HEADER, actor.group.id);
+    return r;
+  };
   try {
-    response.headers.set(ANSWER_FOR_HEADER, actor.user.id);
-    response.headers.set(ANSWER_GROUP_HEADER, actor.group.id);
-    return response;
+    return mark(response);
   } catch {
-    // headers that cannot be changed (a fetched answer passed through): a copy that can
-    const copy = new Response(response.body, response);
-    copy.headers.set(ANSWER_FOR_HEADER, actor.user.id);
-    copy.headers.set(ANSWER_GROUP_HEADER, actor.group.id);
-    return copy;
+    return mark(new Response(response.body, response)); // headers that cannot be changed (a fetched answer passed through): a copy that can
   }
 }
 
