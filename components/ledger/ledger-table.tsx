@@ -15,8 +15,7 @@ import { useFormat } from "@/hooks/use-look";
 function shownOf(shown: number, total: number | null, over: boolean, f: ReturnType<typeof useFormat>): string {
   if (total === null) return `Showing ${f.count(shown, "line")}`;
   // Lines logged since the first page can make the pages hold more than it counted.
-  if (over) return `Showing ${f.number(shown)} of more than ${f.count(Math.max(total, shown), "line")}`;
-  return `Showing ${f.number(shown)} of ${f.count(Math.max(total, shown), "line")}`;
+  return `Showing ${f.number(shown)} of ${over ? "more than " : ""}${f.count(Math.max(total, shown), "line")}`;
 }
 
 export function LedgerTable({ drives, people, initialDriveId }: { drives: LogDrive[]; people: { id: string; name: string }[]; initialDriveId: string }) {
