@@ -6,7 +6,7 @@ import type { BrowserContext, Page } from "playwright-core";
 import { PHONE, browserForFile, newPage, signInAs } from "@/tests/support/browser";
 import { APP_URL } from "@/tests/support/env";
 import { testDb } from "@/tests/support/db";
-import { freshGroup, type FreshGroup } from "@/tests/support/ledger";
+import { freshGroup, volunteerInTwoGroups, type FreshGroup } from "@/tests/support/ledger";
 import { OFFLINE_TILE_BUDGET } from "@/lib/offline/tiles";
 
 // What the service worker (app/sw.ts) keeps, and for whom: an answer still on its
@@ -185,22 +185,16 @@ describe("answers on their way when the person on the phone changes", () => {
 
 describe("a person in two groups", () => {
   it("after switching group, the phone keeps none of the other group's pages", async () => {
-    const a = await freshGroup("keep-group-a");
-    const b = await freshGroup("keep-group-b");
-    const db = testDb();
-    const user = await db("users").where({ email: a.emails.volunteer }).first();
-    await db("memberships").insert({ group_id: b.groupId, user_id: user.id, role: "volunteer" });
-    const groupA = (await db("groups").where({ id: a.groupId }).first()).name as string;
-    const groupB = (await db("groups").where({ id: b.groupId }).first()).name as string;
-    const runA = await runFor(a, user.id);
+    const { a, b, userId, nameA: groupA, nameB: groupB } = await volunteerInTwoGroups("keep-group", "volunteer");
+    const runA = await runFor(a, userId);
     const { context, page } = await newPage(browser(), PHONE);
     try {
       await signInAs(page, a.emails.volunteer);
       await inControl(page);
-      await expect.poll(async () => (await kept(page, `cantrove-person-${user.id}.${a.groupId}`)).paths, { timeout: 30_000 }).toContain(`/runs/${runA}`);
+      await expect.poll(async () => (await kept(page, `cantrove-person-${userId}.${a.groupId}`)).paths, { timeout: 30_000 }).toContain(`/runs/${runA}`);
       await page.getByLabel("Active group").selectOption({ label: `${groupB} (volunteer)` });
       await page.getByRole("banner").getByText(groupB, { exact: true }).waitFor({ timeout: 15_000 });
-      await expect.poll(async () => (await kept(page, `cantrove-person-${user.id}.${b.groupId}`)).paths, { timeout: 30_000 }).toContain("/log");
+      await expect.poll(async () => (await kept(page, `cantrove-person-${userId}.${b.groupId}`)).paths, { timeout: 30_000 }).toContain("/log");
       await expect.poll(async () => (await kept(page, "")).names.filter((n) => n.includes(a.groupId)), { timeout: 15_000 }).toEqual([]);
       for (const p of context.pages()) await p.close();
 

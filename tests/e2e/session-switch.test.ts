@@ -1,7 +1,6 @@
 import { describe, it } from "vitest";
 import { browserForFile, signedInPage } from "@/tests/support/browser";
-import { testDb } from "@/tests/support/db";
-import { freshGroup } from "@/tests/support/ledger";
+import { volunteerInTwoGroups } from "@/tests/support/ledger";
 
 // Signed-in pages carry no next-auth provider (components/auth/session-client.ts):
 // switching the active group rewrites the session through next-auth's own update
@@ -10,12 +9,7 @@ const browser = browserForFile();
 
 describe("the session without a provider on the page", () => {
   it("switches a person in two groups to the other group's home, which stays after a reload; then signs out", async () => {
-    const a = await freshGroup("switch-a");
-    const b = await freshGroup("switch-b");
-    const db = testDb();
-    const user = await db("users").where({ email: a.emails.volunteer }).first();
-    await db("memberships").insert({ group_id: b.groupId, user_id: user.id, role: "organiser" });
-    const groupB = (await db("groups").where({ id: b.groupId }).first()).name as string;
+    const { a, nameB: groupB } = await volunteerInTwoGroups("switch", "organiser");
     const { context, page } = await signedInPage(browser(), a.emails.volunteer, { viewport: { width: 1366, height: 900 } });
     try {
       const switcher = page.getByLabel("Active group");

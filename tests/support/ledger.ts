@@ -92,3 +92,13 @@ export async function addDrive(g: FreshGroup, d: { name: string; startsOn: strin
   if (d.dropPoint !== false) await db("drop_points").insert({ group_id: g.groupId, drive_id: drive.id, name: `${d.name} porch`, lat: 47.3, lng: -8 });
   return drive.id as string;
 }
+
+/** Group A's volunteer, who is also a member of a second fresh group B (as `roleInB`): both groups, the person's id and the groups' names. */
+export async function volunteerInTwoGroups(label: string, roleInB: "organiser" | "volunteer" | "builder") {
+  const [a, b] = [await freshGroup(`${label}-a`), await freshGroup(`${label}-b`)];
+  const db = testDb();
+  const userId = (await db("users").where({ email: a.emails.volunteer }).first()).id as string;
+  await db("memberships").insert({ group_id: b.groupId, user_id: userId, role: roleInB });
+  const nameOf = async (id: string) => (await db("groups").where({ id }).first()).name as string;
+  return { a, b, userId, nameA: await nameOf(a.groupId), nameB: await nameOf(b.groupId) };
+}
