@@ -3,7 +3,8 @@
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { NumberField } from "@/components/ui/number-field";
-import { FIXABLE, fixableFields, parseFix } from "@/lib/offline/fix";
+import { fixBoxes, fixableFields, parseFix } from "@/lib/offline/fix";
+import { useFormat } from "@/hooks/use-look";
 import type { Refusal } from "./use-outbox";
 
 /** How the server's field names read to a volunteer (the numbers' own labels are in FIXABLE). */
@@ -14,10 +15,13 @@ const OTHER_FIELDS: Record<string, string> = { happenedAt: "Time entered", dropP
  * (those the server named first, with its words), sent again with the time it was entered.
  */
 export function RefusalFix({ refusal, onFix }: { refusal: Refusal; onFix: (key: string, values: Record<string, number | null>) => Promise<void> }) {
+  const { units } = useFormat().look;
+  const boxes = fixBoxes(units);
   const keys = fixableFields(refusal.item.body, refusal.fields);
   const body = (refusal.item.body ?? {}) as Record<string, unknown>;
   const [open, setOpen] = useState(false);
-  const [raw, setRaw] = useState<Record<string, string>>(() => Object.fromEntries(keys.map((k) => [k, body[k] === null || body[k] === undefined ? "" : String(body[k])])));
+  // Each box shows the entry's number in the group's units (a weight in lb where the group weighs in pounds).
+  const [raw, setRaw] = useState<Record<string, string>>(() => Object.fromEntries(keys.map((k) => [k, typeof body[k] === "number" ? String(boxes[k]!.shown(body[k])) : ""])));
   const [errors, setErrors] = useState<Record<string, string>>(refusal.fields ?? {});
   const [sending, setSending] = useState(false);
   const said = Object.entries(refusal.fields ?? {});
@@ -26,7 +30,7 @@ export function RefusalFix({ refusal, onFix }: { refusal: Refusal; onFix: (key: 
     <ul className="w-full list-disc pl-5 text-sm">
       {said.map(([k, why]) => (
         <li key={k}>
-          {FIXABLE[k]?.label ?? OTHER_FIELDS[k] ?? "Entry"}: {why}
+          {boxes[k]?.label ?? OTHER_FIELDS[k] ?? "Entry"}: {why}
         </li>
       ))}
     </ul>
@@ -49,7 +53,7 @@ export function RefusalFix({ refusal, onFix }: { refusal: Refusal; onFix: (key: 
       noValidate
       onSubmit={(e) => {
         e.preventDefault();
-        const parsed = parseFix(raw);
+        const parsed = parseFix(raw, units);
         if (!parsed.ok) return setErrors(parsed.errors);
         setSending(true);
         void onFix(refusal.key, parsed.values).finally(() => setSending(false));
@@ -60,8 +64,8 @@ export function RefusalFix({ refusal, onFix }: { refusal: Refusal; onFix: (key: 
         <NumberField
           key={k}
           id={`fix-${refusal.key}-${k}`}
-          label={FIXABLE[k]!.label}
-          spec={FIXABLE[k]!.spec}
+          label={boxes[k]!.label}
+          spec={boxes[k]!.spec}
           value={raw[k] ?? ""}
           error={errors[k]}
           onChange={(v) => {

@@ -12,6 +12,8 @@ export interface WeightEntry {
   unit: "kg" | "lb";
   spec: NumberSpec;
   toKg: (typed: number | null) => number | null;
+  /** A stored weight in kg as the box shows it (pounds to the hundredth in an imperial group). */
+  fromKg: (kg: number) => number;
 }
 
 const MAX_KG = NUMBER_SPECS.haulWeightKg.max ?? 5_000;
@@ -23,7 +25,8 @@ export function weightEntry(units: Units): WeightEntry {
       spec: { noun: noun("lb", "lb"), decimal: true, min: 0, max: Math.floor(MAX_KG / KG_PER_POUND) },
       // To the gram: finer than any scale a volunteer carries, and what the kg box takes.
       toKg: (typed) => (typed === null ? null : Math.round(typed * KG_PER_POUND * 1000) / 1000),
+      fromKg: (kg) => Math.round((kg / KG_PER_POUND) * 100) / 100,
     };
   }
-  return { unit: "kg", spec: NUMBER_SPECS.haulWeightKg, toKg: (typed) => typed };
+  return { unit: "kg", spec: NUMBER_SPECS.haulWeightKg, toKg: (typed) => typed, fromKg: (kg) => kg };
 }

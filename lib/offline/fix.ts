@@ -7,6 +7,8 @@
 
 import { NUMBER_SPECS, parseNumberInput, type NumberSpec } from "@/lib/forms/number-input";
 import type { OutboxItem } from "@/lib/ledger/browser-queue";
+import type { Units } from "@/lib/format/look";
+import { weightEntry } from "@/lib/format/weight-entry";
 
 /** The numbers of the ledger's entries a volunteer may correct, with the box each gets. */
 export const FIXABLE: Record<string, { label: string; spec: NumberSpec }> = {
@@ -16,26 +18,51 @@ export const FIXABLE: Record<string, { label: string; spec: NumberSpec }> = {
   quantity: { label: "Cans", spec: NUMBER_SPECS.batchCans },
 };
 
-/** The fields of a refused entry that can be corrected: those the server named, else every number it carries. */
+export interface FixBox {
+  label: string;
+  spec: NumberSpec;
+  /** The entry's stored value as the box shows it. */
+  shown: (stored: number) => number;
+  /** What was typed, as the entry stores it. */
+  stored: (typed: number | null) => number | null;
+}
+
+/**
+ * The boxes in the group's units: the weight is typed in pounds in an imperial group, as
+ * in the haul form (lib/format/weight-entry.ts), and stored in kg like every entry.
+ */
+export function fixBoxes(units: Units): Record<string, FixBox> {
+  const same = { shown: (v: number) => v, stored: (v: number | null) => v };
+  const weighed = weightEntry(units);
+  const boxes: Record<string, FixBox> = Object.fromEntries(Object.entries(FIXABLE).map(([k, box]) => [k, { ...box, ...same }]));
+  boxes.weightKg = { label: `Weight (${weighed.unit})`, spec: weighed.spec, shown: weighed.fromKg, stored: weighed.toKg };
+  return boxes;
+}
+
+/**
+ * The fields of a refused entry that can be corrected: those the server named; when it named
+ * none, every number the entry carries; when it named only fields no box can correct, none.
+ */
 export function fixableFields(body: unknown, named?: Record<string, string>): string[] {
   if (!body || typeof body !== "object" || Array.isArray(body)) return [];
   const b = body as Record<string, unknown>;
   const present = Object.keys(FIXABLE).filter((k) => typeof b[k] === "number" || (k === "weightKg" && b[k] === null));
-  const pointed = present.filter((k) => named && k in named);
-  return pointed.length ? pointed : present;
+  if (!named || Object.keys(named).length === 0) return present;
+  return present.filter((k) => k in named);
 }
 
 export type FixParse = { ok: true; values: Record<string, number | null> } | { ok: false; errors: Record<string, string> };
 
-/** The boxes' text read as numbers, each by its own box's rules. */
-export function parseFix(raw: Record<string, string>): FixParse {
+/** The boxes' text read as numbers, each by its own box's rules, in the units the entry stores. */
+export function parseFix(raw: Record<string, string>, units: Units = "metric"): FixParse {
+  const boxes = fixBoxes(units);
   const values: Record<string, number | null> = {};
   const errors: Record<string, string> = {};
   for (const [k, text] of Object.entries(raw)) {
-    const spec = FIXABLE[k]?.spec;
-    if (!spec) continue;
-    const parsed = parseNumberInput(text, spec);
-    if (parsed.ok) values[k] = parsed.value;
+    const box = boxes[k];
+    if (!box) continue;
+    const parsed = parseNumberInput(text, box.spec);
+    if (parsed.ok) values[k] = box.stored(parsed.value);
     else errors[k] = parsed.error;
   }
   return Object.keys(errors).length ? { ok: false, errors } : { ok: true, values };

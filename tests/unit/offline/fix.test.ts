@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { correctedCopy, fixableFields, parseFix } from "@/lib/offline/fix";
+import { correctedCopy, fixBoxes, fixableFields, parseFix } from "@/lib/offline/fix";
 import { newOutboxItem } from "@/lib/ledger/browser-queue";
 
 const entered = new Date("2026-12-04T10:42:00.000Z");
@@ -10,6 +10,18 @@ describe("fixing a refused entry in place", () => {
     expect(fixableFields(haul.body, { bags: "That is more bags than one pickup holds." })).toEqual(["bags"]);
     expect(fixableFields(haul.body, undefined)).toEqual(["bags", "weightKg"]);
     expect(fixableFields({ reason: "closed" }, { reason: "too short" })).toEqual([]);
+    // The server named only a field no box corrects (a sort's rejected cans): no box for another number.
+    expect(fixableFields({ haulIds: ["h"], good: 40, rejected: { dented: 900 } }, { rejected: "More rejected cans than the hauls held." })).toEqual([]);
+  });
+
+  it("speaks the group's units: an imperial group's weight box takes pounds and stores kilograms", () => {
+    // 1 lb = 0.45359237 kg exactly (international yard and pound agreement, 1959; NIST SP 811 appendix B).
+    expect(parseFix({ weightKg: "22" }, "imperial")).toEqual({ ok: true, values: { weightKg: 9.979 } });
+    expect(parseFix({ weightKg: "22" }, "metric")).toEqual({ ok: true, values: { weightKg: 22 } });
+    const lb = fixBoxes("imperial").weightKg!;
+    expect(lb.label).toBe("Weight (lb)");
+    expect(lb.shown(9.979)).toBe(22);
+    expect(fixBoxes("metric").weightKg!.label).toBe("Weight (kg)");
   });
 
   it("reads each box by its own rules and refuses what is not a number", () => {
