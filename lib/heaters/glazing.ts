@@ -7,7 +7,7 @@ import { countOf } from "@/lib/plural";
 import { computeCanGrid } from "./can-grid";
 import type { CanGridInput } from "./schemas";
 import { formatNumber } from "./format";
-import { getHeaterUnit, type HeaterUnitRow } from "./queries";
+import { getHeaterUnit, planOf, type HeaterUnitRow } from "./queries";
 
 const cans = (n: number) => countOf(n, "can", formatNumber);
 
@@ -31,7 +31,10 @@ const REFUSALS: OwnRefusals = {
  * refuses (409) a grid whose need falls below what is claimed and built in, or an installed unit. The
  * drive's target is Σ cans of its units, so it follows at once.
  */
-export async function changeGlazing(actor: Actor, unit: HeaterUnitRow, plan: Required<CanGridInput>): Promise<HeaterUnitRow & { was: number }> {
+export async function changeGlazing(actor: Actor, unit: HeaterUnitRow, given: CanGridInput): Promise<HeaterUnitRow & { was: number }> {
+  // What the new plan leaves out keeps the unit's own saved value (in the unit the plan is sent in).
+  const sent = Object.fromEntries(Object.entries(given).filter(([, v]) => v !== undefined));
+  const plan: Required<CanGridInput> = { ...planOf(unit, given.unit), ...sent };
   const grid = computeCanGrid(plan);
   if (grid.cans < 1) {
     const why = "This sheet is too small to hold one column and one row of cans.";

@@ -84,8 +84,8 @@ const canGridObject = z.object(
 type Same<A, B> = [A] extends [B] ? ([B] extends [A] ? true : false) : false;
 export const CAN_GRID_INPUT_TYPE_MATCHES: Same<z.input<typeof canGridObject>, CanGridInput> = true;
 
-export const canGridInputSchema = canGridObject
-  .superRefine((input, ctx) => {
+/** The plan as sent, its limits checked, with what was left out still missing (no default filled in). */
+export const canGridGivenSchema = canGridObject.superRefine((input, ctx) => {
     // Limits depend on the unit, so they are checked once the unit is known.
     for (const field of Object.keys(LIMITS_MM) as LengthField[]) {
       const value = input[field];
@@ -98,8 +98,9 @@ export const canGridInputSchema = canGridObject
         ctx.addIssue({ code: "custom", path: [field], message: `${label} must be at least ${formatLimit(min, input.unit)}` });
       }
     }
-  })
-  .transform(resolveCanGridInput);
+});
+
+export const canGridInputSchema = canGridGivenSchema.transform(resolveCanGridInput);
 
 // A true minus sign reads better than a hyphen in "at least −60 °C".
 const signed = (n: number) => (n < 0 ? `−${-n}` : `${n}`);

@@ -3,7 +3,7 @@
  * by the planner's save form and the handlers. Safe to import in the client.
  */
 import { z } from "zod";
-import { canGridInputSchema } from "./schemas";
+import { canGridGivenSchema, canGridInputSchema } from "./schemas";
 
 export const HEATER_STATES = ["planned", "claiming", "building", "installed"] as const;
 export type HeaterState = (typeof HEATER_STATES)[number];
@@ -57,6 +57,9 @@ export type ClaimMoveInput = z.infer<typeof claimMoveInputSchema>;
 // Archiving or restoring a unit, and GET /api/heaters?archived=1, take the inputs every record
 // does (lib/records/schemas.ts: recordArchiveInput, shelfQuery).
 
-/** POST /api/heaters/{id}/glazing: the unit's new plan (issue 16); its cans are recomputed from it on the server. */
-export const heaterGlazingInputSchema = z.object({ plan: canGridInputSchema }, { error: "Send the unit's new plan" }).strict();
+/**
+ * POST /api/heaters/{id}/glazing: the unit's new plan (issue 16); its cans are recomputed from it on the
+ * server. What the plan leaves out keeps the unit's own saved value (changeGlazing), never a default.
+ */
+export const heaterGlazingInputSchema = z.object({ plan: canGridGivenSchema }, { error: "Send the unit's new plan" }).strict();
 export type HeaterGlazingInput = z.input<typeof heaterGlazingInputSchema>;

@@ -74,3 +74,23 @@ describe("changing a unit's glazing", () => {
     expect((await unitRow(b))?.cans).toBe(132);
   });
 });
+
+describe("a new glazing that leaves out the unit's other sizes", () => {
+  it("keeps the unit's own saved can size, not the default, in mm or in inches", async () => {
+    const [, b] = g.heaterIds;
+    // This unit was planned for 70 mm wide cans (not the 66 mm default), stored in the unit's own length unit.
+    const { unit } = await testDb()("heater_units").where({ id: b }).first("unit");
+    await testDb()("heater_units").where({ id: b }).update({ can_diameter: unit === "in" ? 70 / 25.4 : 70 });
+    // 860 mm wide with 70 mm cans → floor(860 / 70) = 12 columns; 1500 mm high with 122 mm cans → 12 rows: 144.
+    const changed = await glaze(org, b, WIDER);
+    expect(changed.status).toBe(200);
+    expect(changed.body.cans).toBe(12 * 12);
+    const saved = await testDb()("heater_units").where({ id: b }).first("unit", "can_diameter", "columns", "rows");
+    expect(saved).toMatchObject({ unit: "mm", columns: 12, rows: 12 });
+    expect(saved.can_diameter).toBeCloseTo(70, 6);
+    // Sent in inches (33.86 in = 860 mm, 59.06 in = 1500 mm; 25.4 mm per inch exactly, NIST SP 811 B.8): the same grid.
+    const inches = await glaze(org, b, { glazingWidth: 33.86, glazingHeight: 59.06, unit: "in", coverage: "chamber" });
+    expect(inches.status).toBe(200);
+    expect(inches.body.cans).toBe(12 * 12);
+  });
+});
