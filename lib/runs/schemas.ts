@@ -112,8 +112,6 @@ export const cancelRunInputSchema = z.object(
       .trim()
       .min(3, { error: "Say why the run is cancelled (a few words)" })
       .max(300, { error: "Keep the reason under 300 characters" }),
-    /** When the stop was skipped, as the phone says (a skip entered with no signal is sent later); checked against the drive and the clock. */
-    happenedAt: moment("Use a date and time like 2026-12-02T09:30:00Z.").optional(),
   },
   { error: "Send a reason" },
 );
