@@ -1,4 +1,5 @@
 import "server-only";
+import { ANSWER_FOR_HEADER, ANSWER_GROUP_HEADER } from "@/lib/offline/marker";
 import { NextResponse, type NextRequest } from "next/server";
 import type { Knex } from "knex";
 import type { ZodType } from "zod";
@@ -131,8 +132,6 @@ function assertEnteredBy(request: Request, actor: Actor | null): void {
  * group it names, and only while they are still the ones signed in on the phone, so an answer
  * still on its way when someone signs out or switches cannot land in another person's copies.
  */
-export const ANSWER_FOR_HEADER = "x-cantrove-for";
-export const ANSWER_GROUP_HEADER = "x-cantrove-group";
 function markedFor(response: Response, actor: Actor): Response {
   const mark = (r: Response) => {
     r.headers.set(ANSWER_FOR_HEADER, actor.user.id);

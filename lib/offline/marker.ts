@@ -2,6 +2,13 @@
 // page it is, their home and when it was made. The service worker reads it to
 // keep the page in that person's own cache; the offline notice reads the time.
 
+/**
+ * The headers naming whose answer an /api read is (set by lib/api/endpoint.ts on every signed-in
+ * read; the worker keeps an answer only for the person and group they name: lib/offline/worker-keep.ts).
+ */
+export const ANSWER_FOR_HEADER = "x-cantrove-for";
+export const ANSWER_GROUP_HEADER = "x-cantrove-group";
+
 const ID = /^[0-9a-f-]{36}$/;
 const HOME = /^\/[a-z]+$/;
 const MARKER = /data-cantrove-person="([0-9a-f-]{36})" data-cantrove-group="([0-9a-f-]{36})" data-cantrove-home="(\/[a-z]+)" data-rendered-at="([0-9T:.Z-]+)"/;

@@ -9,15 +9,13 @@
 import { CacheFirst, ExpirationPlugin, NetworkFirst, type SerwistPlugin } from "serwist";
 import { currentPerson, isPersonalCache, personCache, personKey, samePerson, setLastWarmed, setPerson, setWantedTiles, tileCache, wantedTiles, type Person } from "./store";
 import { OFFLINE_TILE_BUDGET, tilesOverBudget } from "./tiles";
-import { personMarker } from "./marker";
+import { ANSWER_FOR_HEADER, ANSWER_GROUP_HEADER, personMarker } from "./marker";
 
 /** Answers from /api kept per person (the oldest go first past this). */
 const API_ENTRIES = 150;
 /** Pages kept per person. */
 const PAGE_ENTRIES = 60;
 /** The server's mark on every signed-in read: whose answer it is (lib/api/endpoint.ts). */
-const FOR_HEADER = "x-cantrove-for";
-const GROUP_HEADER = "x-cantrove-group";
 /** When this phone kept a page (the worker's own mark on its copy). */
 export const KEPT_AT_HEADER = "x-cantrove-kept-at";
 
@@ -39,7 +37,7 @@ export async function stillCurrent(person: Person, gen: number): Promise<boolean
 
 /** An answer the server marked as this person's in this group (a page's marker says the same for pages). */
 export function answerIsFor(response: Response, person: Person): boolean {
-  return response.headers.get(FOR_HEADER) === person.id && response.headers.get(GROUP_HEADER) === person.group;
+  return response.headers.get(ANSWER_FOR_HEADER) === person.id && response.headers.get(ANSWER_GROUP_HEADER) === person.group;
 }
 
 /** Cache writes of one person's answers: only theirs, and only while they are still the one signed in. */
