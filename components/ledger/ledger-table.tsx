@@ -12,8 +12,9 @@ import { useLedgerFilters } from "./ledger-table-url";
 import { useFormat } from "@/hooks/use-look";
 
 /** "Showing 50 of 600 lines"; past the count's cap "Showing 50 of more than 1,000 lines". */
-function shownOf(shown: number, total: number | null, over: boolean, f: ReturnType<typeof useFormat>): string {
-  if (total === null) return `Showing ${f.count(shown, "line")}`;
+function shownOf(shown: number, total: number | null, over: boolean, more: boolean, f: ReturnType<typeof useFormat>): string {
+  // Every page loaded: what is shown is all there is, whatever the first page counted.
+  if (total === null || (over && !more)) return `Showing ${f.count(shown, "line")}`;
   // Lines logged since the first page can make the pages hold more than it counted.
   return `Showing ${f.number(shown)} of ${over ? "more than " : ""}${f.count(Math.max(total, shown), "line")}`;
 }
@@ -65,7 +66,7 @@ export function LedgerTable({ drives, people, initialDriveId }: { drives: LogDri
             </table>
           </div>
           <p role="status" className="flex flex-wrap items-center gap-3 text-sm">
-            <span data-testid="ledger-count">{shownOf(rows.length, first?.total ?? null, first?.totalOver ?? false, f)}</span>
+            <span data-testid="ledger-count">{shownOf(rows.length, first?.total ?? null, first?.totalOver ?? false, pages.hasNextPage, f)}</span>
             {pages.hasNextPage ? (
               <Button variant="secondary" onClick={() => pages.fetchNextPage()} disabled={pages.isFetchingNextPage}>
                 {pages.isFetchingNextPage ? "Loading…" : "Load more"}

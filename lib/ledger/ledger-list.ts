@@ -120,11 +120,6 @@ function toRow(r: ListedLine): LedgerRow {
   };
 }
 
-/** Ledger lines of the group, newest first (as the page lists them), up to `limit`. */
-export async function listLedger(groupId: string, f: Filter, limit = 500): Promise<LedgerRow[]> {
-  return (await listLedgerPage(groupId, f, limit, undefined, { count: false })).rows;
-}
-
 /** The drive's slug and dates, for the export's file name; null for another group's drive (its rows are filtered out anyway). */
 export async function exportDrive(groupId: string, driveId: string | undefined) {
   if (!driveId) return null;

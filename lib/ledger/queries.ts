@@ -37,7 +37,6 @@ export async function listHauls(groupId: string, driveId: string, opts: { open?:
   }));
 }
 
-export { listLedger } from "./ledger-list";
 export type { LedgerRow } from "./ledger-row";
 
 /** A person's own recent entries, each with whether it was undone (for the volunteer's "undo"). */
