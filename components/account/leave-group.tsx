@@ -9,6 +9,7 @@ import { FormError } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { countOf, noun } from "@/lib/plural";
 import { useLeaveGroup } from "@/hooks/queries/members";
+import { usePersonGroup } from "@/components/offline/person-context";
 
 /**
  * Leaving the active group, asked twice. The only organiser is told to hand
@@ -18,7 +19,8 @@ export function LeaveGroup({ groupName, onlyOrganiser }: { groupName: string; on
   const leave = useLeaveGroup();
   const [asking, setAsking] = useState(false);
   /** Entries on this phone not yet on the server: leaving deletes them with everything else kept here. */
-  const [unsent, setUnsent] = useState(0);
+  const group = usePersonGroup();
+  const [{ all: unsent, here }, setUnsent] = useState({ all: 0, here: 0 });
   if (onlyOrganiser) {
     return (
       <p className="text-ink-soft">
@@ -39,6 +41,12 @@ export function LeaveGroup({ groupName, onlyOrganiser }: { groupName: string; on
             Leaving deletes {unsent === 1 ? "it" : "them"} from this phone with everything else kept here for you. Go to Log while you have a signal and let{" "}
             {unsent === 1 ? "it" : "them"} send first (or drop what was refused), unless you mean to lose {unsent === 1 ? "it" : "them"}.
           </p>
+          {unsent > here ? (
+            <p className="mt-1">
+              {countOf(unsent - here, noun("of them is", "of them are"))} for another of your groups: switch to it and open Log there to send{" "}
+              {unsent - here === 1 ? "it" : "them"}.
+            </p>
+          ) : null}
           <p className="mt-1">
             <Link href="/log" className="tap">See what is waiting</Link>
           </p>
@@ -63,7 +71,7 @@ export function LeaveGroup({ groupName, onlyOrganiser }: { groupName: string; on
             variant="secondary"
             onClick={() => {
               // Asked before the second question, so the warning is there before "Yes, leave".
-              void unsentCount().then((n) => {
+              void unsentCount(group).then((n) => {
                 setUnsent(n);
                 setAsking(true);
               });

@@ -2,13 +2,19 @@
 // data goes before the session does (sign-out button, leaving a group, handing over).
 import { entriesOf, forgetPersonEntries, isPersonalCache, setPerson, storedPersonId } from "./store";
 
-/** How many of the signed-in person's entries have not reached the server (asked about before signing out). */
-export async function unsentCount(): Promise<number> {
+/**
+ * How many of the signed-in person's entries have not reached the server (asked about before
+ * signing out): in all, and of those how many belong to `group` (the others show on Log only
+ * in their own group, and are deleted with the rest).
+ */
+export async function unsentCount(group?: string | null): Promise<{ all: number; here: number }> {
   try {
     const id = await storedPersonId();
-    return id ? (await entriesOf(id)).length : 0;
+    if (!id) return { all: 0, here: 0 };
+    const [all, here] = await Promise.all([entriesOf(id), group ? entriesOf(id, group) : entriesOf(id)]);
+    return { all: all.length, here: here.length };
   } catch {
-    return 0;
+    return { all: 0, here: 0 };
   }
 }
 
@@ -42,7 +48,7 @@ export async function signOutClearing(signOut: () => Promise<unknown>): Promise<
     window.alert("You are offline. Connect to sign out, so that nobody else is signed in as you on this phone.");
     return;
   }
-  const unsent = await unsentCount();
+  const { all: unsent } = await unsentCount();
   if (unsent > 0 && !window.confirm(`${unsent === 1 ? "1 entry has" : `${unsent} entries have`} not been sent yet and will be deleted from this phone. Sign out anyway?`)) return;
   await forgetThisPhone();
   await signOut();
