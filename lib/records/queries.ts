@@ -35,7 +35,7 @@ async function countArchivedFillReports(groupId: string, driveId: string): Promi
  * `totals` says how many there are in all.
  */
 export async function listArchivedOfDrive(groupId: string, driveId: string): Promise<ArchivedOfDrive> {
-  const [dropPoints, pledges, fillReports, photos, fillReportCount, photoCount] = await Promise.all([
+  const [dropPoints, pledges, fillReports, photos] = await Promise.all([
     listDropPoints(groupId, driveId, "archived"),
     listPledges(groupId, driveId, "archived"),
     listFillReports(groupId, driveId, ARCHIVED_SHOWN, "archived"),
@@ -50,14 +50,17 @@ export async function listArchivedOfDrive(groupId: string, driveId: string): Pro
       )
       .orderBy([{ column: "f.created_at", order: "desc" }, { column: "f.id" }])
       .limit(ARCHIVED_SHOWN) as Promise<ArchivedPhoto[]>,
-    countArchivedFillReports(groupId, driveId),
-    archivedPhotos(groupId, driveId).first<{ n: number }>(db.raw("count(*)::int as n")),
+  ]);
+  // Counted only when a list stopped at its limit; a shorter list is all there is.
+  const [fillReportCount, photoCount] = await Promise.all([
+    fillReports.length < ARCHIVED_SHOWN ? fillReports.length : countArchivedFillReports(groupId, driveId),
+    photos.length < ARCHIVED_SHOWN ? photos.length : archivedPhotos(groupId, driveId).first<{ n: number }>(db.raw("count(*)::int as n")).then((r) => r?.n ?? 0),
   ]);
   return {
     dropPoints,
     pledges,
     fillReports,
     photos,
-    totals: { dropPoints: dropPoints.length, pledges: pledges.length, fillReports: fillReportCount, photos: photoCount?.n ?? 0 },
+    totals: { dropPoints: dropPoints.length, pledges: pledges.length, fillReports: fillReportCount, photos: photoCount },
   };
 }
