@@ -33,7 +33,10 @@ function filtered(groupId: string, f: Filter, timeZone: string): Knex.QueryBuild
 
 /**
  * How many lines match, up to `cap` + 1 and no further: the inner LIMIT stops
- * the index scan there, so a busy drive costs what a small one does.
+ * the index scan there, so a busy drive costs what a small one does. A filter the
+ * index does not hold (a person, a stage, a drop point) that matches few of a big
+ * drive's lines still walks the drive's index until it has found cap + 1 or run out,
+ * as the page itself does until it has found its 51.
  */
 async function boundedCount(groupId: string, f: Filter, zone: string, cap: number): Promise<number> {
   const inner = filtered(groupId, f, zone).select(db.raw("1")).limit(cap + 1);
